@@ -1,0 +1,63 @@
+/** Engineering-notation formatting shared by steps (LaTeX) and the UI (plain text). */
+
+const PREFIX_STEPS: { exp: number; symbol: string; tex: string }[] = [
+  { exp: 9, symbol: "G", tex: "G" },
+  { exp: 6, symbol: "M", tex: "M" },
+  { exp: 3, symbol: "k", tex: "k" },
+  { exp: 0, symbol: "", tex: "" },
+  { exp: -3, symbol: "m", tex: "m" },
+  { exp: -6, symbol: "µ", tex: "\\mu " },
+  { exp: -9, symbol: "n", tex: "n" },
+  { exp: -12, symbol: "p", tex: "p" },
+];
+
+/** Units that take no engineering prefix when shown. */
+const NO_PREFIX = new Set(["", "%", "K", "Pa", "×", "dB"]);
+
+export interface Engineering {
+  mantissa: string;
+  prefix: string;
+  texPrefix: string;
+}
+
+/** Split a value into a mantissa with `sig` significant figures and an SI prefix. */
+export function toEngineering(value: number, unit: string, sig = 3): Engineering {
+  if (!Number.isFinite(value)) return { mantissa: String(value), prefix: "", texPrefix: "" };
+  if (value === 0 || NO_PREFIX.has(unit)) return { mantissa: trim(value.toPrecision(sig)), prefix: "", texPrefix: "" };
+  const exp = Math.floor(Math.log10(Math.abs(value)));
+  let step = PREFIX_STEPS.find((s) => exp >= s.exp) ?? PREFIX_STEPS[PREFIX_STEPS.length - 1];
+  let scaled = value / 10 ** step.exp;
+  // 999.96 rounds to "1.00e+3": move up a prefix instead.
+  if (Math.abs(Number(scaled.toPrecision(sig))) >= 1000) {
+    const up = PREFIX_STEPS[PREFIX_STEPS.indexOf(step) - 1];
+    if (up) {
+      step = up;
+      scaled = value / 10 ** step.exp;
+    }
+  }
+  return { mantissa: trim(scaled.toPrecision(sig)), prefix: step.symbol, texPrefix: step.tex };
+}
+
+function trim(s: string): string {
+  if (s.includes("e")) return String(Number(s));
+  return s.includes(".") ? s.replace(/\.?0+$/, "") : s;
+}
+
+/** "4.7 kΩ", "1.25 mA", "0.5 W". */
+export function formatQuantity(value: number, unit: string, sig = 3): string {
+  const e = toEngineering(value, unit, sig);
+  return unit || e.prefix ? `${e.mantissa} ${e.prefix}${unit}` : e.mantissa;
+}
+
+const TEX_UNIT: Record<string, string> = { "Ω": "\\Omega", "µ": "\\mu ", "%": "\\%", "×": "\\times" };
+
+function texUnit(unit: string): string {
+  return unit.replace(/[Ωµ%×]/g, (c) => TEX_UNIT[c]);
+}
+
+/** LaTeX for a quantity: `4.7\,\mathrm{k\Omega}`. */
+export function texQuantity(value: number, unit: string, sig = 3): string {
+  const e = toEngineering(value, unit, sig);
+  const u = `${e.texPrefix}${texUnit(unit)}`;
+  return u ? `${e.mantissa}\\,\\mathrm{${u}}` : e.mantissa;
+}

@@ -1,0 +1,49 @@
+import type { Calculator } from "./types";
+import { calculator as arcClearance } from "./arc-clearance";
+import { calculator as bleeder } from "./bleeder";
+import { calculator as cathodeBias } from "./cathode-bias";
+import { calculator as colourCode } from "./colour-code";
+import { calculator as droppingResistor } from "./dropping-resistor";
+import { calculator as heaterString } from "./heater-string";
+import { calculator as ohmsLaw } from "./ohms-law";
+import { calculator as preferredValue } from "./preferred-value";
+import { calculator as reactance } from "./reactance";
+import { calculator as resistorDrift } from "./resistor-drift";
+import { calculator as supplyRipple } from "./supply-ripple";
+import { calculator as timeConstant } from "./time-constant";
+import { calculator as triodeStage } from "./triode-stage";
+
+/** Every calculator of the Bench, in the order the index shows them. */
+export const calculators: readonly Calculator[] = [
+  cathodeBias,
+  triodeStage,
+  droppingResistor,
+  heaterString,
+  supplyRipple,
+  timeConstant,
+  bleeder,
+  arcClearance,
+  resistorDrift,
+  preferredValue,
+  colourCode,
+  ohmsLaw,
+  reactance,
+] as unknown as readonly Calculator[];
+
+const bySlug = new Map(calculators.map((c) => [c.slug, c]));
+
+export function getCalculator(slug: string): Calculator | undefined {
+  return bySlug.get(slug);
+}
+
+/** GET /api/calculators metadata, as PRODUCT.md gives it. */
+export function describeCalculators() {
+  return calculators.map((c) => ({
+    slug: c.slug,
+    title: c.title,
+    group: c.group,
+    purpose: c.purpose,
+    inputs: c.inputs.map(({ name, unit, required, default: d }) => ({ name, unit, required, default: d ?? null })),
+    outputs: c.outputs.map(({ name, unit }) => ({ name, unit })),
+  }));
+}

@@ -1,0 +1,79 @@
+import type { z } from "zod";
+import type { QuantityKind } from "./units";
+
+/** Shared shapes of every calculator in lib/calc. PRODUCT.md's HTTP contract is built from these. */
+
+export type WarningLevel = "danger" | "caution" | "info";
+
+export interface Step {
+  label: string;
+  latex: string;
+}
+
+export interface Warning {
+  level: WarningLevel;
+  message: string;
+}
+
+export interface Reference {
+  title: string;
+  /** Section, table, page or equation of the source. */
+  detail: string;
+}
+
+export type OutputValue = number | boolean | string | null | OutputValue[] | { [key: string]: OutputValue };
+
+/** Bench-task groups used by the /bench index. */
+export type CalculatorGroup = "stages" | "supplies" | "safety" | "parts";
+
+export interface InputMeta {
+  name: string;
+  /** Plain-words label for the form. */
+  label: string;
+  /** SI unit symbol shown beside the field ("" for none). */
+  unit: string;
+  required: boolean;
+  default?: unknown;
+  /** How the form renders it; "quantity" is a text box that takes engineering notation. */
+  control: "quantity" | "select" | "boolean" | "list" | "text";
+  quantity?: QuantityKind;
+  options?: readonly string[];
+  help?: string;
+}
+
+export interface OutputMeta {
+  name: string;
+  label: string;
+  unit: string;
+}
+
+export interface CalcResult<O extends Record<string, OutputValue>> {
+  outputs: O;
+  steps: Step[];
+  warnings: Warning[];
+}
+
+export interface Calculator<S extends z.ZodType = z.ZodType, O extends Record<string, OutputValue> = Record<string, OutputValue>> {
+  slug: string;
+  title: string;
+  /** One line: what bench task it answers. */
+  purpose: string;
+  group: CalculatorGroup;
+  inputs: readonly InputMeta[];
+  outputs: readonly OutputMeta[];
+  /** Parses raw inputs (numbers or engineering text) into normalised SI values. */
+  schema: S;
+  /** The general formulas, shown before the substituted steps. */
+  formulas: readonly Step[];
+  references: readonly Reference[];
+  /** A short paragraph on why the number matters at the bench. */
+  whyItMatters: string;
+  compute(input: z.output<S>): CalcResult<O>;
+}
+
+/** Identity helper that keeps the schema's output type flowing into compute. */
+export function defineCalculator<S extends z.ZodType, O extends Record<string, OutputValue>>(
+  c: Calculator<S, O>,
+): Calculator<S, O> {
+  return c;
+}

@@ -1,0 +1,195 @@
+import { unit as mathUnit, type Unit } from "mathjs";
+import { z } from "zod";
+
+/**
+ * Engineering-notation parsing for calculator inputs, built on mathjs units.
+ * Accepts SI numbers, "4.7k", "4k7" (the RKM code of IEC 60062), "47 uF", "2.2 MΩ", "250 V".
+ */
+
+export type QuantityKind =
+  | "voltage"
+  | "current"
+  | "resistance"
+  | "capacitance"
+  | "inductance"
+  | "frequency"
+  | "time"
+  | "length"
+  | "pressure"
+  | "temperature"
+  | "power"
+  | "conductance"
+  | "ratio";
+
+interface KindInfo {
+  /** SI unit symbol, as mathjs spells it (null for dimensionless). */
+  base: string | null;
+  /** What a person calls it, for messages: "expected a capacitance". */
+  noun: string;
+  /** Plural of the unit, for "got volts". */
+  unitName: string;
+  /** Symbol shown beside a field. */
+  symbol: string;
+}
+
+export const QUANTITY_KINDS: Record<QuantityKind, KindInfo> = {
+  voltage: { base: "V", noun: "a voltage", unitName: "volts", symbol: "V" },
+  current: { base: "A", noun: "a current", unitName: "amperes", symbol: "A" },
+  resistance: { base: "ohm", noun: "a resistance", unitName: "ohms", symbol: "Ω" },
+  capacitance: { base: "F", noun: "a capacitance", unitName: "farads", symbol: "F" },
+  inductance: { base: "H", noun: "an inductance", unitName: "henries", symbol: "H" },
+  frequency: { base: "Hz", noun: "a frequency", unitName: "hertz", symbol: "Hz" },
+  time: { base: "s", noun: "a time", unitName: "seconds", symbol: "s" },
+  length: { base: "m", noun: "a length", unitName: "metres", symbol: "m" },
+  pressure: { base: "Pa", noun: "a pressure", unitName: "pascals", symbol: "Pa" },
+  temperature: { base: "K", noun: "a temperature", unitName: "kelvin", symbol: "K" },
+  power: { base: "W", noun: "a power", unitName: "watts", symbol: "W" },
+  conductance: { base: "S", noun: "a conductance", unitName: "siemens", symbol: "S" },
+  ratio: { base: null, noun: "a plain number", unitName: "", symbol: "" },
+};
+
+const PREFIXES: Record<string, number> = {
+  p: 1e-12,
+  n: 1e-9,
+  u: 1e-6,
+  µ: 1e-6,
+  μ: 1e-6,
+  m: 1e-3,
+  k: 1e3,
+  K: 1e3,
+  M: 1e6,
+  meg: 1e6,
+  G: 1e9,
+};
+
+const NUMBER = String.raw`[+-]?(?:\d+\.?\d*|\.\d+)(?:[eE][+-]?\d+)?`;
+const PLAIN = new RegExp(`^(${NUMBER})\\s*(meg|[pnuµμmkKMG])?$`);
+// RKM code: 4k7, 2R2, 1M5, 470R (IEC 60062 letter-and-digit code)
+const RKM = /^(\d+)([pnuµμmkKMGR])(\d+)$/;
+const WITH_UNIT = new RegExp(`^(${NUMBER})\\s*(.+)$`);
+
+/** Round away binary noise from prefix scaling (470e-9 rather than 4.7000000000000005e-7). */
+export function tidy(value: number): number {
+  return Number.isFinite(value) && value !== 0 ? Number(value.toPrecision(15)) : value;
+}
+
+export type ParseResult = { ok: true; value: number } | { ok: false; message: string };
+
+function normaliseUnitText(text: string): string {
+  return text
+    .replace(/[µμ]/g, "u")
+    .replace(/[ΩΩ]/g, "ohm")
+    .replace(/^meg(ohm)?/i, "Mohm")
+    .replace(/^([pnumkMG]?)ohms?$/i, (_, p: string) => `${p}ohm`)
+    .replace(/^(k|M)$/, "$1") // bare prefix handled elsewhere
+    .replace(/°C$/, "degC")
+    .replace(/°F$/, "degF")
+    .trim();
+}
+
+function describeUnit(u: Unit): string {
+  for (const info of Object.values(QUANTITY_KINDS)) {
+    if (info.base && u.equalBase(mathUnit(info.base))) return info.unitName;
+  }
+  return `"${u.formatUnits()}"`;
+}
+
+/** Parse one value of the given kind into SI. Never throws. */
+export function parseQuantity(raw: unknown, kind: QuantityKind): ParseResult {
+  const info = QUANTITY_KINDS[kind];
+  if (typeof raw === "number") {
+    return Number.isFinite(raw) ? { ok: true, value: raw } : { ok: false, message: "must be a finite number" };
+  }
+  if (typeof raw !== "string") return { ok: false, message: `expected ${info.noun} as a number or text like "4.7k"` };
+  const text = raw.trim();
+  if (text === "") return { ok: false, message: "is required" };
+
+  const plain = PLAIN.exec(text);
+  if (plain) {
+    const scale = plain[2] ? PREFIXES[plain[2]] : 1;
+    if (kind === "ratio" && plain[2]) return { ok: false, message: "expected a plain number without a prefix" };
+    return finite(tidy(Number(plain[1]) * scale));
+  }
+  const rkm = RKM.exec(text);
+  if (rkm && kind !== "ratio") {
+    const scale = rkm[2] === "R" ? 1 : PREFIXES[rkm[2]];
+    return finite(tidy(Number(`${rkm[1]}.${rkm[3]}`) * scale));
+  }
+  const withUnit = WITH_UNIT.exec(text);
+  if (!withUnit) return { ok: false, message: `could not read "${raw}" as ${info.noun}` };
+  if (!info.base) return { ok: false, message: "expected a plain number without a unit" };
+
+  let parsed: Unit;
+  try {
+    parsed = mathUnit(`${withUnit[1]} ${normaliseUnitText(withUnit[2])}`);
+  } catch {
+    return { ok: false, message: `unknown unit "${withUnit[2].trim()}"; expected ${info.noun} in ${info.symbol}` };
+  }
+  if (!parsed.equalBase(mathUnit(info.base))) {
+    return { ok: false, message: `expected ${info.noun}, got ${describeUnit(parsed)}` };
+  }
+  return finite(tidy(parsed.toNumber(info.base)));
+}
+
+function finite(value: number): ParseResult {
+  return Number.isFinite(value) ? { ok: true, value } : { ok: false, message: "must be a finite number" };
+}
+
+export interface QuantityOptions {
+  /** Value must be > 0 (the default for most physical magnitudes). */
+  positive?: boolean;
+  /** Value must be ≥ 0. */
+  nonNegative?: boolean;
+  min?: number;
+  max?: number;
+  /** Plain-words name for messages, e.g. "Plate current". */
+  label?: string;
+}
+
+function rangeMessage(value: number, o: QuantityOptions): string | null {
+  if (o.positive && !(value > 0)) return "must be greater than zero";
+  if (o.nonNegative && value < 0) return "cannot be negative";
+  if (o.min !== undefined && value < o.min) return `must be at least ${o.min}`;
+  if (o.max !== undefined && value > o.max) return `must be at most ${o.max}`;
+  return null;
+}
+
+function check(raw: unknown, kind: QuantityKind, o: QuantityOptions, ctx: z.RefinementCtx): number {
+  const parsed = parseQuantity(raw, kind);
+  const prefix = o.label ? `${o.label} ` : "";
+  if (!parsed.ok) {
+    ctx.addIssue({ code: "custom", message: `${prefix}${parsed.message}` });
+    return z.NEVER;
+  }
+  const bad = rangeMessage(parsed.value, o);
+  if (bad) {
+    ctx.addIssue({ code: "custom", message: `${prefix}${bad}` });
+    return z.NEVER;
+  }
+  return parsed.value;
+}
+
+const isBlank = (v: unknown) => v === undefined || v === null || (typeof v === "string" && v.trim() === "");
+
+/** A required quantity: number or engineering text in, SI number out. */
+export function quantity(kind: QuantityKind, o: QuantityOptions = { positive: true }) {
+  return z.unknown().transform((raw, ctx) => {
+    if (isBlank(raw)) {
+      ctx.addIssue({ code: "custom", message: `${o.label ? `${o.label} ` : ""}is required` });
+      return z.NEVER;
+    }
+    return check(raw, kind, o, ctx);
+  });
+}
+
+/** An optional quantity: blank gives undefined. */
+export function optionalQuantity(kind: QuantityKind, o: QuantityOptions = { positive: true }) {
+  return z
+    .unknown()
+    .transform((raw, ctx): number | undefined => (isBlank(raw) ? undefined : check(raw, kind, o, ctx)));
+}
+
+/** A quantity with a default used when the field is blank or absent. */
+export function quantityWithDefault(kind: QuantityKind, fallback: number, o: QuantityOptions = { positive: true }) {
+  return z.unknown().transform((raw, ctx): number => (isBlank(raw) ? fallback : check(raw, kind, o, ctx)));
+}
