@@ -61,7 +61,7 @@ describe("IEC 60063 series", () => {
 
   it("members lie near 10^(k/n), within the standard's rounding", () => {
     // Historic E6–E24 values stray up to about 5 % from the geometric ideal (3.3 vs 3.16);
-    // E48/E96 are the ideal rounded to three figures (a few, such as E96 9.20 in E192, differ by one count).
+    // E48/E96 are the ideal rounded to three figures.
     for (const name of SERIES_NAMES) {
       const s = SERIES[name];
       const slack = s.length <= 24 ? 0.05 : 0.006;
