@@ -6,6 +6,9 @@ export default defineConfig({
   test: {
     include: ["tests/**/*.test.ts", "lib/**/*.test.ts", "db/**/*.test.ts"],
     environment: "node",
+    globalSetup: ["tests/helpers/global-setup.ts"],
+    // One shared server and one browser per file: keep files from fighting over two cores.
+    fileParallelism: !process.env.CI,
     testTimeout: 30_000,
     hookTimeout: 240_000,
   },

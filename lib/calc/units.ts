@@ -1,10 +1,13 @@
-import { unit as mathUnit, type Unit } from "mathjs";
+import { create, unitDependencies, type Unit } from "mathjs";
 import { z } from "zod";
 
 /**
  * Engineering-notation parsing for calculator inputs, built on mathjs units.
  * Accepts SI numbers, "4.7k", "4k7" (the RKM code of IEC 60062), "47 uF", "2.2 MΩ", "250 V".
  */
+
+// Only the unit machinery, so the browser bundle does not carry all of mathjs.
+const { unit: mathUnit } = create({ unitDependencies });
 
 export type QuantityKind =
   | "voltage"

@@ -1,0 +1,27 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { SignInForm } from "@/components/auth/sign-in-form";
+
+export const metadata: Metadata = { title: "Sign in" };
+
+export default async function SignInPage({ searchParams }: { searchParams: Promise<{ next?: string }> }) {
+  const { next } = await searchParams;
+  return (
+    <>
+      <h1 className="text-title font-bold">Sign in to your workshop</h1>
+      <p className="mb-6 mt-2 text-muted">Pick up where you left the set.</p>
+      <SignInForm next={next} />
+      <p className="mt-6 text-muted">
+        New here?{" "}
+        <Link href="/sign-up" className="font-bold text-signal underline underline-offset-4">
+          Open a workshop
+        </Link>{" "}
+        or{" "}
+        <Link href="/bench" className="font-bold text-signal underline underline-offset-4">
+          use the Bench without an account
+        </Link>
+        .
+      </p>
+    </>
+  );
+}

@@ -1,0 +1,31 @@
+import { NextResponse } from "next/server";
+import { createWorkshopWithOwner, emailTaken } from "@/db/queries/auth";
+import { hashPassword } from "@/lib/auth/password";
+import { signUpSchema } from "@/lib/auth/schemas";
+import { startSession } from "@/lib/auth/session";
+import { HttpError, handle, parseJson } from "@/lib/http/api";
+
+export const POST = handle(async (request: Request) => {
+  const input = await parseJson(request, signUpSchema);
+  if (emailTaken(input.email)) {
+    throw new HttpError(409, "That e-mail already has an account.", { email: "That e-mail already has an account; sign in instead." });
+  }
+  const passwordHash = await hashPassword(input.password);
+  let created;
+  try {
+    created = createWorkshopWithOwner({ ...input, passwordHash });
+  } catch (err) {
+    // Two sign-ups racing for one address: the unique index decides.
+    if (String(err).includes("UNIQUE")) throw new HttpError(409, "That e-mail already has an account.", { email: "That e-mail already has an account; sign in instead." });
+    throw err;
+  }
+  await startSession(created.userId, created.sessionVersion);
+  return NextResponse.json(
+    {
+      user: { id: created.userId, email: input.email, name: input.name },
+      workshop: { id: created.workshopId, name: input.workshopName },
+      role: "owner",
+    },
+    { status: 201 },
+  );
+});

@@ -1,0 +1,26 @@
+import Link from "next/link";
+import type { ComponentProps } from "react";
+
+type Variant = "primary" | "secondary" | "quiet" | "danger";
+
+const styles: Record<Variant, string> = {
+  primary: "bg-glow text-glow-ink hover:brightness-110 shadow-sm",
+  secondary: "bg-panel text-ink border border-rule hover:bg-sunk",
+  quiet: "text-ink hover:bg-sunk",
+  danger: "bg-hazard text-white hover:brightness-110",
+};
+
+const base =
+  "inline-flex items-center justify-center gap-2 rounded-chip px-4 py-2 text-body font-bold transition disabled:opacity-60 disabled:cursor-not-allowed min-h-11";
+
+export function buttonClass(variant: Variant = "primary", extra = "") {
+  return `${base} ${styles[variant]} ${extra}`;
+}
+
+export function Button({ variant = "primary", className = "", ...props }: ComponentProps<"button"> & { variant?: Variant }) {
+  return <button className={buttonClass(variant, className)} {...props} />;
+}
+
+export function ButtonLink({ variant = "primary", className = "", ...props }: ComponentProps<typeof Link> & { variant?: Variant }) {
+  return <Link className={buttonClass(variant, className)} {...props} />;
+}

@@ -1,0 +1,36 @@
+import Database from "better-sqlite3";
+import { drizzle, type BetterSQLite3Database } from "drizzle-orm/better-sqlite3";
+import { migrate } from "drizzle-orm/better-sqlite3/migrator";
+import fs from "node:fs";
+import path from "node:path";
+import * as schema from "./schema";
+
+/** The one database client of the process: opened once, migrated once. */
+
+export type Db = BetterSQLite3Database<typeof schema>;
+
+export function databasePath(): string {
+  return path.resolve(/*turbopackIgnore: true*/ process.env.GLOWBENCH_DB ?? path.join("data", "glowbench.db"));
+}
+
+export const MIGRATIONS_FOLDER = path.join(process.cwd(), "db", "migrations");
+
+export function openDatabase(file = databasePath()): { sqlite: Database.Database; db: Db } {
+  fs.mkdirSync(path.dirname(/*turbopackIgnore: true*/ file), { recursive: true });
+  const sqlite = new Database(file);
+  sqlite.pragma("journal_mode = WAL");
+  sqlite.pragma("foreign_keys = ON");
+  sqlite.pragma("busy_timeout = 5000");
+  sqlite.pragma("synchronous = NORMAL");
+  const db = drizzle(sqlite, { schema });
+  migrate(db, { migrationsFolder: MIGRATIONS_FOLDER });
+  return { sqlite, db };
+}
+
+const globalForDb = globalThis as unknown as { __glowbenchDb?: { sqlite: Database.Database; db: Db } };
+
+/** Lazily opened so that `next build` never touches the database file. */
+export function getDb(): Db {
+  globalForDb.__glowbenchDb ??= openDatabase();
+  return globalForDb.__glowbenchDb.db;
+}

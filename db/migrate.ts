@@ -1,0 +1,6 @@
+import { databasePath, openDatabase } from "./client";
+
+// Opening the database applies every pending migration in db/migrations.
+const { sqlite } = openDatabase();
+console.log(`Database ready at ${databasePath()}`);
+sqlite.close();

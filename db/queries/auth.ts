@@ -1,0 +1,33 @@
+import { eq } from "drizzle-orm";
+import { getDb } from "../client";
+import { auditEvents, memberships, users, workshops } from "../schema";
+
+/** Credentials for the sign-in check only; nothing here leaves the server. */
+export function findCredentials(email: string) {
+  return getDb()
+    .select({ id: users.id, passwordHash: users.passwordHash, sessionVersion: users.sessionVersion })
+    .from(users)
+    .where(eq(users.email, email.toLowerCase()))
+    .get();
+}
+
+export function emailTaken(email: string): boolean {
+  return !!getDb().select({ id: users.id }).from(users).where(eq(users.email, email.toLowerCase())).get();
+}
+
+/** Sign-up: a workshop, its first user and the owner membership, all or nothing. */
+export function createWorkshopWithOwner(input: { workshopName: string; name: string; email: string; passwordHash: string }) {
+  return getDb().transaction((tx) => {
+    const workshop = tx.insert(workshops).values({ name: input.workshopName }).returning({ id: workshops.id }).get();
+    const user = tx
+      .insert(users)
+      .values({ email: input.email.toLowerCase(), name: input.name, passwordHash: input.passwordHash })
+      .returning({ id: users.id, sessionVersion: users.sessionVersion })
+      .get();
+    tx.insert(memberships).values({ workshopId: workshop.id, userId: user.id, role: "owner" }).run();
+    tx.insert(auditEvents)
+      .values({ workshopId: workshop.id, actorUserId: user.id, action: "workshop.created", detail: { name: input.workshopName } })
+      .run();
+    return { userId: user.id, sessionVersion: user.sessionVersion, workshopId: workshop.id };
+  });
+}

@@ -1,0 +1,330 @@
+import { sql } from "drizzle-orm";
+import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
+import { EQUIPMENT_KINDS, JOB_STATUSES, PART_KINDS, PART_STATES, ROLES } from "./enums";
+
+/** Every table of Glowbench. Each row belongs to one workshop, directly or through its job. */
+
+const id = () => integer("id").primaryKey({ autoIncrement: true });
+const createdAt = () =>
+  integer("created_at", { mode: "timestamp_ms" })
+    .notNull()
+    .default(sql`(unixepoch('subsec') * 1000)`);
+
+export const workshops = sqliteTable("workshops", {
+  id: id(),
+  name: text("name").notNull(),
+  contactEmail: text("contact_email"),
+  contactPhone: text("contact_phone"),
+  address: text("address"),
+  /** ISO 4217 code; money is always integer minor units. */
+  currency: text("currency").notNull().default("GBP"),
+  hourlyRateMinor: integer("hourly_rate_minor").notNull().default(0),
+  /** Tax rate in basis points (2000 = 20%). */
+  taxRateBp: integer("tax_rate_bp").notNull().default(0),
+  /** Last invoice number issued; incremented inside the issuing transaction, so numbers have no gaps. */
+  lastInvoiceNumber: integer("last_invoice_number").notNull().default(0),
+  readyMessageTemplate: text("ready_message_template"),
+  createdAt: createdAt(),
+});
+
+export const users = sqliteTable(
+  "users",
+  {
+    id: id(),
+    email: text("email").notNull(),
+    name: text("name").notNull(),
+    passwordHash: text("password_hash").notNull(),
+    /** Bumped on sign-out-everywhere and password change: older cookies stop working. */
+    sessionVersion: integer("session_version").notNull().default(1),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("users_email_unique").on(t.email)],
+);
+
+export const memberships = sqliteTable(
+  "memberships",
+  {
+    id: id(),
+    workshopId: integer("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
+    userId: integer("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    role: text("role", { enum: ROLES }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("memberships_workshop_user").on(t.workshopId, t.userId), index("memberships_user").on(t.userId)],
+);
+
+export const invitations = sqliteTable(
+  "invitations",
+  {
+    id: id(),
+    workshopId: integer("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
+    email: text("email").notNull(),
+    role: text("role", { enum: ROLES }).notNull(),
+    /** SHA-256 of the token; the token itself is only ever in the e-mail. */
+    tokenHash: text("token_hash").notNull(),
+    invitedBy: integer("invited_by").references(() => users.id, { onDelete: "set null" }),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    acceptedAt: integer("accepted_at", { mode: "timestamp_ms" }),
+    revokedAt: integer("revoked_at", { mode: "timestamp_ms" }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("invitations_token").on(t.tokenHash), index("invitations_workshop").on(t.workshopId)],
+);
+
+export const passwordResets = sqliteTable(
+  "password_resets",
+  {
+    id: id(),
+    userId: integer("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    tokenHash: text("token_hash").notNull(),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    usedAt: integer("used_at", { mode: "timestamp_ms" }),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("password_resets_token").on(t.tokenHash)],
+);
+
+export const auditEvents = sqliteTable(
+  "audit_events",
+  {
+    id: id(),
+    workshopId: integer("workshop_id").references(() => workshops.id, { onDelete: "cascade" }),
+    actorUserId: integer("actor_user_id").references(() => users.id, { onDelete: "set null" }),
+    action: text("action").notNull(),
+    detail: text("detail", { mode: "json" }).$type<Record<string, unknown>>(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("audit_workshop_time").on(t.workshopId, t.createdAt)],
+);
+
+export const jobs = sqliteTable(
+  "jobs",
+  {
+    id: id(),
+    workshopId: integer("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
+    title: text("title").notNull(),
+    equipmentKind: text("equipment_kind", { enum: EQUIPMENT_KINDS }).notNull(),
+    maker: text("maker"),
+    model: text("model"),
+    year: integer("year"),
+    customerName: text("customer_name"),
+    customerEmail: text("customer_email"),
+    status: text("status", { enum: JOB_STATUSES }).notNull().default("booked-in"),
+    notes: text("notes"),
+    createdAt: createdAt(),
+    updatedAt: integer("updated_at", { mode: "timestamp_ms" })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
+  },
+  (t) => [
+    index("jobs_workshop_updated").on(t.workshopId, t.updatedAt),
+    index("jobs_workshop_status").on(t.workshopId, t.status),
+    index("jobs_workshop_kind").on(t.workshopId, t.equipmentKind),
+  ],
+);
+
+const jobRef = () =>
+  integer("job_id")
+    .notNull()
+    .references(() => jobs.id, { onDelete: "cascade" });
+const workshopRef = () =>
+  integer("workshop_id")
+    .notNull()
+    .references(() => workshops.id, { onDelete: "cascade" });
+
+export const parts = sqliteTable(
+  "parts",
+  {
+    id: id(),
+    jobId: jobRef(),
+    workshopId: workshopRef(),
+    designator: text("designator").notNull(),
+    kind: text("kind", { enum: PART_KINDS }).notNull(),
+    originalValue: text("original_value"),
+    originalRating: text("original_rating"),
+    replacementValue: text("replacement_value"),
+    replacementRating: text("replacement_rating"),
+    state: text("state", { enum: PART_STATES }).notNull().default("to-order"),
+    /** Unit cost in the workshop's minor currency unit, for estimates. */
+    unitCostMinor: integer("unit_cost_minor"),
+    createdAt: createdAt(),
+  },
+  (t) => [index("parts_job").on(t.jobId)],
+);
+
+export const readings = sqliteTable(
+  "readings",
+  {
+    id: id(),
+    jobId: jobRef(),
+    workshopId: workshopRef(),
+    /** "resistor" survey rows (Ω) or "voltage" test-point rows (V, nominal = expected). */
+    kind: text("kind", { enum: ["resistor", "voltage"] }).notNull().default("resistor"),
+    designator: text("designator").notNull(),
+    nominal: real("nominal").notNull(),
+    /** Null means open circuit / no reading. */
+    measured: real("measured"),
+    tolerance: real("tolerance").notNull().default(0.2),
+    createdAt: createdAt(),
+  },
+  (t) => [index("readings_job").on(t.jobId)],
+);
+
+export const calculations = sqliteTable(
+  "calculations",
+  {
+    id: id(),
+    jobId: jobRef(),
+    workshopId: workshopRef(),
+    slug: text("slug").notNull(),
+    inputs: text("inputs", { mode: "json" }).$type<Record<string, unknown>>().notNull(),
+    outputs: text("outputs", { mode: "json" }).$type<Record<string, unknown>>().notNull(),
+    note: text("note"),
+    authorId: integer("author_id").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("calculations_job").on(t.jobId)],
+);
+
+export const files = sqliteTable(
+  "files",
+  {
+    id: id(),
+    jobId: jobRef(),
+    workshopId: workshopRef(),
+    storedName: text("stored_name").notNull(),
+    originalName: text("original_name").notNull(),
+    type: text("type").notNull(),
+    size: integer("size").notNull(),
+    kind: text("kind", { enum: ["photo", "schematic"] }).notNull().default("photo"),
+    hasThumbnail: integer("has_thumbnail", { mode: "boolean" }).notNull().default(false),
+    uploadedBy: integer("uploaded_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("files_job").on(t.jobId), uniqueIndex("files_stored_name").on(t.storedName)],
+);
+
+export const logEntries = sqliteTable(
+  "log_entries",
+  {
+    id: id(),
+    jobId: jobRef(),
+    workshopId: workshopRef(),
+    authorId: integer("author_id").references(() => users.id, { onDelete: "set null" }),
+    /** "note", "power-up", "status", "estimate", "invoice", "mail". */
+    kind: text("kind").notNull().default("note"),
+    text: text("text").notNull(),
+    data: text("data", { mode: "json" }).$type<Record<string, unknown>>(),
+    createdAt: createdAt(),
+  },
+  (t) => [index("log_job_time").on(t.jobId, t.createdAt)],
+);
+
+export const estimates = sqliteTable(
+  "estimates",
+  {
+    id: id(),
+    jobId: jobRef(),
+    workshopId: workshopRef(),
+    status: text("status", { enum: ["draft", "sent", "approved", "declined"] }).notNull().default("draft"),
+    currency: text("currency").notNull(),
+    taxRateBp: integer("tax_rate_bp").notNull().default(0),
+    approvalTokenHash: text("approval_token_hash"),
+    tokenExpiresAt: integer("token_expires_at", { mode: "timestamp_ms" }),
+    respondedAt: integer("responded_at", { mode: "timestamp_ms" }),
+    createdBy: integer("created_by").references(() => users.id, { onDelete: "set null" }),
+    createdAt: createdAt(),
+  },
+  (t) => [index("estimates_job").on(t.jobId), uniqueIndex("estimates_token").on(t.approvalTokenHash)],
+);
+
+export const estimateLines = sqliteTable(
+  "estimate_lines",
+  {
+    id: id(),
+    estimateId: integer("estimate_id")
+      .notNull()
+      .references(() => estimates.id, { onDelete: "cascade" }),
+    kind: text("kind", { enum: ["labour", "part", "fee"] }).notNull(),
+    description: text("description").notNull(),
+    /** Quantity in thousandths (hours for labour, pieces for parts). */
+    quantityMilli: integer("quantity_milli").notNull(),
+    unitPriceMinor: integer("unit_price_minor").notNull(),
+    partId: integer("part_id").references(() => parts.id, { onDelete: "set null" }),
+    position: integer("position").notNull().default(0),
+  },
+  (t) => [index("estimate_lines_estimate").on(t.estimateId)],
+);
+
+export const invoices = sqliteTable(
+  "invoices",
+  {
+    id: id(),
+    jobId: jobRef(),
+    workshopId: workshopRef(),
+    estimateId: integer("estimate_id").references(() => estimates.id, { onDelete: "set null" }),
+    number: integer("number").notNull(),
+    status: text("status", { enum: ["issued", "paid", "void"] }).notNull().default("issued"),
+    currency: text("currency").notNull(),
+    taxRateBp: integer("tax_rate_bp").notNull(),
+    subtotalMinor: integer("subtotal_minor").notNull(),
+    taxMinor: integer("tax_minor").notNull(),
+    totalMinor: integer("total_minor").notNull(),
+    checkoutSessionId: text("checkout_session_id"),
+    issuedAt: integer("issued_at", { mode: "timestamp_ms" }).notNull(),
+    paidAt: integer("paid_at", { mode: "timestamp_ms" }),
+  },
+  (t) => [uniqueIndex("invoices_workshop_number").on(t.workshopId, t.number), index("invoices_job").on(t.jobId)],
+);
+
+export const invoiceLines = sqliteTable(
+  "invoice_lines",
+  {
+    id: id(),
+    invoiceId: integer("invoice_id")
+      .notNull()
+      .references(() => invoices.id, { onDelete: "cascade" }),
+    kind: text("kind", { enum: ["labour", "part", "fee"] }).notNull(),
+    description: text("description").notNull(),
+    quantityMilli: integer("quantity_milli").notNull(),
+    unitPriceMinor: integer("unit_price_minor").notNull(),
+    amountMinor: integer("amount_minor").notNull(),
+    position: integer("position").notNull().default(0),
+  },
+  (t) => [index("invoice_lines_invoice").on(t.invoiceId)],
+);
+
+/** Payment-service webhook events already applied, so a redelivery changes nothing. */
+export const paymentEvents = sqliteTable("payment_events", {
+  id: text("id").primaryKey(),
+  type: text("type").notNull(),
+  invoiceId: integer("invoice_id").references(() => invoices.id, { onDelete: "set null" }),
+  receivedAt: createdAt(),
+});
+
+export type Workshop = typeof workshops.$inferSelect;
+export type User = typeof users.$inferSelect;
+export type Membership = typeof memberships.$inferSelect;
+export type Job = typeof jobs.$inferSelect;
+export type NewJob = typeof jobs.$inferInsert;
+export type Part = typeof parts.$inferSelect;
+export type Reading = typeof readings.$inferSelect;
+export type Calculation = typeof calculations.$inferSelect;
+export type StoredFile = typeof files.$inferSelect;
+export type LogEntry = typeof logEntries.$inferSelect;
+export type Invitation = typeof invitations.$inferSelect;
+export type AuditEvent = typeof auditEvents.$inferSelect;
+export type Estimate = typeof estimates.$inferSelect;
+export type EstimateLine = typeof estimateLines.$inferSelect;
+export type Invoice = typeof invoices.$inferSelect;
+export type InvoiceLine = typeof invoiceLines.$inferSelect;

@@ -1,0 +1,85 @@
+import { asc, eq, sql } from "drizzle-orm";
+import { cache } from "react";
+import { getDb } from "@/db/client";
+import type { Role } from "@/db/enums";
+import { memberships, users, workshops } from "@/db/schema";
+import { forbidden, notSignedIn } from "./errors";
+import { SESSION_MAX_AGE_SECONDS, getSession } from "./session";
+
+/** The signed-in person as every query function sees them. Never carries the password hash. */
+export interface Member {
+  userId: number;
+  email: string;
+  name: string;
+  workshopId: number;
+  workshopName: string;
+  role: Role;
+}
+
+/** Load the member for a user id, checking nothing else. */
+export function loadMember(userId: number): (Member & { sessionVersion: number }) | null {
+  const row = getDb()
+    .select({
+      userId: users.id,
+      email: users.email,
+      name: users.name,
+      sessionVersion: users.sessionVersion,
+      workshopId: memberships.workshopId,
+      workshopName: workshops.name,
+      role: memberships.role,
+    })
+    .from(users)
+    .innerJoin(memberships, eq(memberships.userId, users.id))
+    .innerJoin(workshops, eq(workshops.id, memberships.workshopId))
+    .where(eq(users.id, userId))
+    .orderBy(asc(memberships.id))
+    .limit(1)
+    .get();
+  return row ?? null;
+}
+
+/** The current member, or null when signed out, expired or signed out everywhere. Cached per request. */
+export const getMember = cache(async (): Promise<Member | null> => {
+  const session = await getSession();
+  if (!session.uid || !session.ver || !session.iat) return null;
+  if (Date.now() - session.iat > SESSION_MAX_AGE_SECONDS * 1000) return null;
+  const member = loadMember(session.uid);
+  if (!member || member.sessionVersion !== session.ver) return null;
+  const { sessionVersion: _v, ...rest } = member;
+  return rest;
+});
+
+export async function requireMember(): Promise<Member> {
+  const member = await getMember();
+  if (!member) throw notSignedIn();
+  return member;
+}
+
+export function assertRole(member: Member, roles: readonly Role[], what?: string): void {
+  if (!roles.includes(member.role)) throw forbidden(what);
+}
+
+export async function requireRole(roles: readonly Role[], what?: string): Promise<Member> {
+  const member = await requireMember();
+  assertRole(member, roles, what);
+  return member;
+}
+
+/** Role capabilities of PRODUCT.md, named so call sites read as the rule they apply. */
+export const can = {
+  editJobs: (m: Member) => m.role === "owner" || m.role === "technician",
+  changeStatus: (m: Member) => m.role === "owner" || m.role === "technician",
+  deleteJobs: (m: Member) => m.role === "owner",
+  manageMembers: (m: Member) => m.role === "owner",
+  seeMoney: (m: Member) => m.role === "owner",
+  prepareEstimates: (m: Member) => m.role === "owner" || m.role === "technician",
+  addNotes: (_m: Member) => true,
+};
+
+export async function bumpSessionVersion(userId: number): Promise<void> {
+  getDb()
+    .update(users)
+    .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, userId))
+    .run();
+}

@@ -1,0 +1,51 @@
+import type { Config } from "tailwindcss";
+
+/**
+ * Glowbench's own palette: warm bench paper and deep ink by day, a dim valve-glow at night.
+ * Colours are CSS variables (app/globals.css) so the dark theme swaps them in one place.
+ * Every text/background pair used in components meets WCAG AA contrast.
+ */
+const v = (name: string) => `rgb(var(--gb-${name}) / <alpha-value>)`;
+
+const config: Config = {
+  content: ["./app/**/*.{ts,tsx}", "./components/**/*.{ts,tsx}"],
+  darkMode: ["selector", '[data-theme="night"]'],
+  theme: {
+    extend: {
+      colors: {
+        paper: v("paper"),
+        panel: v("panel"),
+        sunk: v("sunk"),
+        ink: v("ink"),
+        muted: v("muted"),
+        rule: v("rule"),
+        glow: v("glow"),
+        "glow-ink": v("glow-ink"),
+        signal: v("signal"),
+        hazard: v("hazard"),
+        "hazard-bg": v("hazard-bg"),
+        caution: v("caution"),
+        "caution-bg": v("caution-bg"),
+        ok: v("ok"),
+        "ok-bg": v("ok-bg"),
+      },
+      fontFamily: {
+        sans: ["var(--font-body)", "system-ui", "sans-serif"],
+        mono: ["var(--font-figures)", "ui-monospace", "monospace"],
+      },
+      fontSize: {
+        // A bench-lamp type scale: nothing smaller than 14 px, body at 17 px.
+        note: ["0.875rem", { lineHeight: "1.35rem" }],
+        body: ["1.0625rem", { lineHeight: "1.6rem" }],
+        lead: ["1.25rem", { lineHeight: "1.8rem" }],
+        title: ["1.75rem", { lineHeight: "2.2rem", letterSpacing: "-0.01em" }],
+        display: ["2.5rem", { lineHeight: "2.9rem", letterSpacing: "-0.02em" }],
+        reading: ["2rem", { lineHeight: "2.4rem" }],
+      },
+      borderRadius: { chip: "0.375rem", card: "0.75rem" },
+      boxShadow: { card: "0 1px 0 rgb(var(--gb-rule)), 0 6px 18px -10px rgb(0 0 0 / 0.25)" },
+    },
+  },
+};
+
+export default config;
