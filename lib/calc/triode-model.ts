@@ -103,3 +103,79 @@ export function plateCurves(p: TriodeParams, o: PlateCurveOptions): PlateCurvePo
     return curve;
   });
 }
+
+/**
+ * DC operating point of a cathode-biased common-cathode triode stage. With plate current Ip:
+ *   Vk = Ip·Rk,  Eg = −Vk,  Ep = B+ − Ip·(Ra + Rk).
+ * f(Ip) = model(Ep(Ip), Eg(Ip)) − Ip falls strictly as Ip rises (both Ep and Eg fall), with
+ * f(0) ≥ 0 and f(B+/(Ra+Rk)) < 0, so one root lies in that bracket. Newton's method with the
+ * analytic slope d(model)/dIp = −gp·(Ra + Rk) − gm·Rk, kept inside the bracket and falling back
+ * to bisection, converges in a handful of steps.
+ */
+
+export interface OperatingPoint {
+  ok: true;
+  /** Plate current, A. */
+  ip: number;
+  /** Plate-to-cathode voltage, V. */
+  ep: number;
+  /** Grid-to-cathode voltage, V (−Vk). */
+  eg: number;
+  /** Cathode voltage to ground, V. */
+  vk: number;
+  /** Model current and small-signal parameters at (ep, eg). */
+  point: TriodePoint;
+  iterations: number;
+}
+
+export type SolveResult = OperatingPoint | { ok: false; message: string };
+
+const MAX_ITERATIONS = 200;
+
+export function solveOperatingPoint(p: TriodeParams, supply: number, ra: number, rk: number): SolveResult {
+  const r = ra + rk;
+  const ipMax = supply / r;
+  if (!(supply > 0) || !(ra > 0) || !(rk >= 0) || !Number.isFinite(ipMax)) {
+    return { ok: false, message: "The supply voltage and plate resistor must be above zero and the cathode resistor not negative." };
+  }
+  const at = (ip: number) => {
+    const ep = supply - ip * r;
+    const eg = -ip * rk;
+    return { ep, eg, point: triodePoint(p, ep, eg) };
+  };
+
+  const start = at(0);
+  const f0 = start.point.ip;
+  if (!Number.isFinite(f0) || f0 < 0) {
+    return { ok: false, message: "The model gives no usable current at these values; check the model parameters." };
+  }
+  if (f0 === 0) {
+    // Model current underflows even with no bias: the tube is cut off and Ip = 0 is the root.
+    return { ok: true, ip: 0, ep: supply, eg: 0, vk: 0, point: start.point, iterations: 0 };
+  }
+
+  let lo = 0; // model > Ip here
+  let hi = ipMax; // model < Ip here, since the model gives 0 at Ep = 0
+  // First guess: the current with the full supply on the plate and no bias, clipped to the bracket.
+  let ip = Math.min(f0, 0.5 * ipMax);
+  for (let i = 1; i <= MAX_ITERATIONS; i++) {
+    const s = at(ip);
+    const m = s.point.ip;
+    if (m === ip) return { ok: true, ip, ep: s.ep, eg: s.eg, vk: ip * rk, point: s.point, iterations: i };
+    if (m > ip) lo = ip;
+    else hi = ip;
+    // Newton on g = ln(model) − ln(Ip), which is nearly straight both in the power-law region
+    // and in the exponential tail near cut-off, where Newton on model − Ip crawls.
+    const dm = -s.point.gp * r - s.point.gm * rk; // d(model)/dIp ≤ 0
+    const newton = m > 0 ? ip - Math.log(m / ip) / (dm / m - 1 / ip) : Number.NaN;
+    // Converged: the correction is at rounding level (|model − Ip| ≈ 1e-15·Ip).
+    if (Math.abs(newton - ip) <= 2e-15 * ip) return { ok: true, ip, ep: s.ep, eg: s.eg, vk: ip * rk, point: s.point, iterations: i };
+    // Safeguard: bisect (geometrically once the bracket is off zero) if Newton leaves the bracket.
+    ip = newton > lo && newton < hi ? newton : lo > 0 ? Math.sqrt(lo * hi) : 0.5 * (lo + hi);
+    if (hi - lo <= 1e-15 * hi) {
+      const end = at(ip);
+      return { ok: true, ip, ep: end.ep, eg: end.eg, vk: ip * rk, point: end.point, iterations: i };
+    }
+  }
+  return { ok: false, message: "The operating point did not converge; check the model parameters." };
+}

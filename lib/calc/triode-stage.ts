@@ -1,0 +1,215 @@
+import { z } from "zod";
+import { formatQuantity, texQuantity } from "./format";
+import { highVoltageWarning } from "./safety";
+import { TRIODE_NAMES, findTriode } from "./tables/triodes";
+import { solveOperatingPoint, type TriodeParams } from "./triode-model";
+import { defineCalculator, type CalcResult, type Step, type Warning } from "./types";
+import { optionalQuantity, quantity } from "./units";
+
+export { plateCurves } from "./triode-model";
+
+/**
+ * Common-cathode triode stage with cathode bias: DC operating point from the Koren model
+ * (lib/calc/triode-model.ts) and the load line, then small-signal gain
+ *   bypassed:   A = µ·RL′/(rp + RL′)
+ *   unbypassed: A = µ·RL′/(rp + RL′ + (µ + 1)·Rk)
+ * with RL′ = Ra ∥ RL (Radiotron Designer's Handbook 4th ed., ch. 12).
+ * Rk = 0 is allowed: the grid then sits at 0 V, still solvable (the model ignores grid current).
+ */
+
+const MODEL_KEYS = ["mu", "ex", "kg1", "kp", "kvb"] as const;
+type ModelKey = (typeof MODEL_KEYS)[number];
+
+const tubeField = z
+  .unknown()
+  .transform((raw, ctx): string | undefined => {
+    if (raw === undefined || raw === null || (typeof raw === "string" && raw.trim() === "")) return undefined;
+    const found = typeof raw === "string" ? findTriode(raw) : undefined;
+    if (!found) {
+      ctx.addIssue({ code: "custom", message: `Tube type is not in the built-in table; choose one of ${TRIODE_NAMES.join(", ")}` });
+      return z.NEVER;
+    }
+    return found.name;
+  })
+  .optional();
+
+const bypassField = z
+  .unknown()
+  .transform((raw, ctx): boolean => {
+    if (raw === undefined || raw === null || raw === "") return true;
+    if (raw === true || raw === "true" || raw === "on") return true;
+    if (raw === false || raw === "false" || raw === "off") return false;
+    ctx.addIssue({ code: "custom", message: "Cathode bypassed must be true or false" });
+    return z.NEVER;
+  })
+  .optional();
+
+// Ranges are wide enough for any receiving triode and keep every figure finite.
+const param = (label: string, min: number, max: number) =>
+  optionalQuantity("ratio", { positive: true, min, max, label }).optional();
+
+export const triodeStageSchema = z
+  .object({
+    tube: tubeField,
+    mu: param("µ (mu)", 0.5, 1000),
+    ex: param("EX", 1, 3),
+    kg1: param("KG1", 1, 1e6),
+    kp: param("KP", 1, 1e5),
+    kvb: param("KVB", 1, 1e7),
+    supplyVoltage: quantity("voltage", { positive: true, max: 10_000, label: "Supply voltage" }),
+    plateResistor: quantity("resistance", { positive: true, min: 1, max: 1e9, label: "Plate resistor" }),
+    cathodeResistor: quantity("resistance", { nonNegative: true, max: 1e8, label: "Cathode resistor" }),
+    cathodeBypassed: bypassField,
+    loadResistance: optionalQuantity("resistance", { positive: true, min: 1, max: 1e12, label: "Load resistance" }).optional(),
+  })
+  .superRefine((v, ctx) => {
+    if (v.tube !== undefined) return;
+    const missing = MODEL_KEYS.filter((k) => v[k] === undefined);
+    if (missing.length === MODEL_KEYS.length) {
+      ctx.addIssue({ code: "custom", path: ["tube"], message: "Choose a tube type, or enter all five model parameters (mu, ex, kg1, kp, kvb)" });
+      return;
+    }
+    for (const k of missing) {
+      ctx.addIssue({ code: "custom", path: [k], message: `${k} is required when no tube type is chosen` });
+    }
+  });
+
+export type TriodeStageInput = z.output<typeof triodeStageSchema>;
+
+/** Null only when the operating point cannot be found (no bracket or no convergence). */
+type N = number | null;
+export interface TriodeStageOutputs {
+  [key: string]: N;
+  plateVoltage: N;
+  plateCurrent: N;
+  cathodeVoltage: N;
+  plateDissipation: N;
+  amplificationFactor: N;
+  plateResistance: N;
+  transconductance: N;
+  gain: N;
+}
+
+const tex = (n: number) => String(Number(n.toPrecision(6)));
+
+function modelFor(input: TriodeStageInput): { params: TriodeParams; name: string; rating?: number; overridden: ModelKey[] } {
+  const entry = input.tube ? findTriode(input.tube) : undefined;
+  const overridden = MODEL_KEYS.filter((k) => input[k] !== undefined);
+  const base = entry?.params;
+  const pick = (k: ModelKey) => input[k] ?? base?.[k] ?? Number.NaN; // NaN unreachable: the schema demands all five without a tube
+  const params: TriodeParams = { mu: pick("mu"), ex: pick("ex"), kg1: pick("kg1"), kp: pick("kp"), kvb: pick("kvb") };
+  return { params, name: entry?.name ?? "your model", rating: entry?.maxPlateDissipation, overridden: entry ? overridden : [] };
+}
+
+export const calculator = defineCalculator({
+  slug: "triode-stage",
+  title: "Triode gain stage",
+  purpose: "Operating point, plate dissipation and voltage gain of a cathode-biased triode stage.",
+  group: "stages",
+  inputs: [
+    { name: "tube", label: "Tube type", unit: "", required: false, control: "select", options: TRIODE_NAMES, help: "Pick a type from the built-in table, or leave it blank and enter the five model parameters." },
+    { name: "mu", label: "Model µ", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Koren model amplification factor. With a tube chosen, any parameter you enter replaces the table's." },
+    { name: "ex", label: "Model EX", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Exponent, between 1 and 3 (usually 1.2–1.4)." },
+    { name: "kg1", label: "Model KG1", unit: "", required: false, control: "quantity", quantity: "ratio" },
+    { name: "kp", label: "Model KP", unit: "", required: false, control: "quantity", quantity: "ratio" },
+    { name: "kvb", label: "Model KVB", unit: "", required: false, control: "quantity", quantity: "ratio", help: "In V²." },
+    { name: "supplyVoltage", label: "Supply voltage (B+)", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "At the top of the plate resistor." },
+    { name: "plateResistor", label: "Plate resistor Ra", unit: "Ω", required: true, control: "quantity", quantity: "resistance" },
+    { name: "cathodeResistor", label: "Cathode resistor Rk", unit: "Ω", required: true, control: "quantity", quantity: "resistance", help: "0 is allowed: the grid then sits at 0 V bias." },
+    { name: "cathodeBypassed", label: "Cathode resistor bypassed", unit: "", required: false, default: true, control: "boolean" },
+    { name: "loadResistance", label: "Next stage's load (grid resistor)", unit: "Ω", required: false, control: "quantity", quantity: "resistance", help: "Optional: it sits in parallel with Ra for the signal." },
+  ],
+  outputs: [
+    { name: "plateVoltage", label: "Plate voltage (to cathode)", unit: "V" },
+    { name: "plateCurrent", label: "Plate current", unit: "A" },
+    { name: "cathodeVoltage", label: "Cathode voltage (bias)", unit: "V" },
+    { name: "plateDissipation", label: "Plate dissipation", unit: "W" },
+    { name: "amplificationFactor", label: "Amplification factor µ", unit: "" },
+    { name: "plateResistance", label: "Plate resistance rp", unit: "Ω" },
+    { name: "transconductance", label: "Transconductance gm", unit: "S" },
+    { name: "gain", label: "Voltage gain (magnitude, inverting)", unit: "" },
+  ],
+  schema: triodeStageSchema,
+  formulas: [
+    { label: "Triode model (Koren)", latex: String.raw`E_1 = \frac{E_p}{K_P}\ln\!\left(1 + e^{K_P\left(\frac{1}{\mu} + \frac{E_g}{\sqrt{K_{VB} + E_p^2}}\right)}\right),\quad I_p = \frac{E_1^{E_X}}{K_{G1}}\left(1 + \operatorname{sgn} E_1\right)` },
+    { label: "Load line and cathode bias", latex: String.raw`E_p = B^{+} - I_p\,(R_a + R_k),\quad E_g = -I_p R_k` },
+    { label: "Gain, cathode bypassed", latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L'},\quad R_L' = R_a \parallel R_L` },
+    { label: "Gain, cathode not bypassed", latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k}` },
+  ],
+  references: [
+    { title: "N. L. Koren, Improved vacuum tube models for SPICE simulations, Glass Audio 8(5), 1996", detail: "Triode equations for E1 and Ip and the parameter table (µ, EX, KG1, KP, KVB); parameters recalled from memory" },
+    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Chapter 12, resistance-capacitance coupled triode amplifiers: stage gain µRL/(rp + RL) and the effect of an unbypassed cathode resistor (cited from memory)" },
+    { title: "Tube data sheets (12AX7, 12AT7, 12AU7, 6SN7, 6SL7 and others)", detail: "Typical operating characteristics and maximum plate dissipation per section (from memory)" },
+  ],
+  whyItMatters:
+    "Whether a preamp or driver stage sounds right depends on where the tube sits on its curves: too little " +
+    "current and it distorts, too much and the plate overheats. This works out the plate voltage you should " +
+    "measure on a healthy stage, so a reading far off points to a drifted plate resistor, a leaky coupling " +
+    "capacitor or a weak tube. It also shows why leaving out the cathode bypass capacitor cuts the gain.",
+  compute(input: TriodeStageInput): CalcResult<TriodeStageOutputs> {
+    const { supplyVoltage: bPlus, plateResistor: ra, cathodeResistor: rk, loadResistance: rl } = input;
+    const bypassed = input.cathodeBypassed ?? true;
+    const { params: p, name, rating, overridden } = modelFor(input);
+    const solved = solveOperatingPoint(p, bPlus, ra, rk);
+    const warnings: Warning[] = [...highVoltageWarning(bPlus)];
+    const steps: Step[] = [
+      { label: "Triode model (Koren)", latex: String.raw`E_1 = \frac{E_p}{K_P}\ln\!\left(1 + e^{K_P\left(\frac{1}{\mu} + \frac{E_g}{\sqrt{K_{VB} + E_p^2}}\right)}\right),\quad I_p = \frac{E_1^{E_X}}{K_{G1}}\left(1 + \operatorname{sgn} E_1\right)` },
+      { label: `Model parameters (${name})`, latex: String.raw`\mu = ${tex(p.mu)},\; E_X = ${tex(p.ex)},\; K_{G1} = ${tex(p.kg1)},\; K_P = ${tex(p.kp)},\; K_{VB} = ${tex(p.kvb)}\,\mathrm{V^2}` },
+      { label: "Load line and cathode bias", latex: String.raw`E_p = B^{+} - I_p\,(R_a + R_k),\quad E_g = -I_p R_k` },
+      { label: "Load line with your values", latex: String.raw`E_p = ${texQuantity(bPlus, "V")} - I_p\,(${texQuantity(ra, "Ω")} + ${texQuantity(rk, "Ω")}),\quad E_g = -I_p \times ${texQuantity(rk, "Ω")}` },
+    ];
+    if (overridden.length) {
+      warnings.push({ level: "info", message: `Using the ${name} table entry with your own ${overridden.join(", ")}.` });
+    }
+    if (!solved.ok) {
+      warnings.push({ level: "caution", message: solved.message });
+      const outputs: TriodeStageOutputs = { plateVoltage: null, plateCurrent: null, cathodeVoltage: null, plateDissipation: null, amplificationFactor: null, plateResistance: null, transconductance: null, gain: null };
+      return { outputs, steps, warnings };
+    }
+
+    const { ip, ep, eg, vk, point } = solved;
+    const dissipation = ep * ip;
+    const mu = point.mu;
+    const gm = point.gm;
+    const rp = point.gp > 0 && Number.isFinite(1 / point.gp) ? 1 / point.gp : null;
+    const rLoad = rl === undefined ? ra : (ra * rl) / (ra + rl);
+    // Conductance form of the gain formulas (multiply through by gp = 1/rp), finite even if rp is not.
+    const degeneration = bypassed ? 0 : (mu + 1) * rk;
+    const gain = (gm * rLoad) / (1 + point.gp * (rLoad + degeneration));
+
+    steps.push(
+      { label: "Operating point (model current equals load-line current)", latex: String.raw`I_p = ${texQuantity(ip, "A", 4)},\quad E_p = ${texQuantity(bPlus, "V")} - ${texQuantity(ip, "A", 4)} \times ${texQuantity(ra + rk, "Ω", 4)} = ${texQuantity(ep, "V", 4)},\quad E_g = ${texQuantity(eg, "V", 4)}` },
+      { label: "Cathode voltage", latex: String.raw`V_k = I_p R_k = ${texQuantity(ip, "A")} \times ${texQuantity(rk, "Ω")} = ${texQuantity(vk, "V")}` },
+      { label: "Plate to chassis, as a meter reads it", latex: String.raw`V_a = E_p + V_k = B^{+} - I_p R_a = ${texQuantity(ep + vk, "V", 4)}` },
+      { label: "Plate dissipation", latex: String.raw`P_a = E_p I_p = ${texQuantity(ep, "V")} \times ${texQuantity(ip, "A")} = ${texQuantity(dissipation, "W")}` },
+      { label: "Small-signal parameters at the operating point", latex: String.raw`g_m = \frac{\partial I_p}{\partial E_g} = ${texQuantity(gm, "S")},\quad r_p = \left(\frac{\partial I_p}{\partial E_p}\right)^{-1} = ${rp === null ? String.raw`\infty` : texQuantity(rp, "Ω")},\quad \mu = g_m r_p = ${texQuantity(mu, "")}` },
+    );
+    if (rl !== undefined) {
+      steps.push({ label: "Signal load: plate resistor in parallel with the next stage", latex: String.raw`R_L' = \frac{R_a R_L}{R_a + R_L} = \frac{${texQuantity(ra, "Ω")} \times ${texQuantity(rl, "Ω")}}{${texQuantity(ra, "Ω")} + ${texQuantity(rl, "Ω")}} = ${texQuantity(rLoad, "Ω")}` });
+    }
+    const rpTex = rp === null ? String.raw`\infty` : texQuantity(rp, "Ω");
+    const gainLabel = "Voltage gain (inverting: the plate swings opposite to the grid)";
+    steps.push(
+      bypassed
+        ? { label: `${gainLabel}, cathode bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L'} = \frac{${texQuantity(mu, "")} \times ${texQuantity(rLoad, "Ω")}}{${rpTex} + ${texQuantity(rLoad, "Ω")}} = ${texQuantity(gain, "")}` }
+        : { label: `${gainLabel}, cathode not bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k} = \frac{${texQuantity(mu, "")} \times ${texQuantity(rLoad, "Ω")}}{${rpTex} + ${texQuantity(rLoad, "Ω")} + ${texQuantity(mu + 1, "")} \times ${texQuantity(rk, "Ω")}} = ${texQuantity(gain, "")}` },
+    );
+
+    if (rating !== undefined && dissipation > rating) {
+      warnings.push({ level: "caution", message: `Plate dissipation ${formatQuantity(dissipation, "W")} is above the ${name}'s rated ${formatQuantity(rating, "W")} per section; raise Ra or Rk, or lower B+.` });
+    }
+    if (rating === undefined) {
+      warnings.push({ level: "info", message: "No rated plate dissipation is known for custom model parameters; check the data sheet yourself." });
+    }
+    if (rk === 0) {
+      warnings.push({ level: "info", message: "With no cathode resistor the grid sits at 0 V; a real tube then draws grid current on signal peaks, which the model ignores." });
+    }
+    if (ip < 1e-6) {
+      warnings.push({ level: "caution", message: `The tube is close to cut-off (${formatQuantity(ip, "A")}); gain and linearity will be poor.` });
+    }
+    warnings.push({ level: "info", message: "The model is a fit to typical curves; real tubes of one type differ by 20% or more, so expect your measured voltages to differ too." });
+
+    const outputs = { plateVoltage: ep, plateCurrent: ip, cathodeVoltage: vk, plateDissipation: dissipation, amplificationFactor: mu, plateResistance: rp, transconductance: gm, gain };
+    return { outputs, steps, warnings };
+  },
+});
