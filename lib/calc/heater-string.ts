@@ -1,0 +1,198 @@
+import { z } from "zod";
+import { formatQuantity, texQuantity } from "./format";
+import { highVoltageWarning } from "./safety";
+import { findHeater, HEATER_SOURCE, TUBE_NAMES } from "./tables/heaters";
+import { suggestedRating } from "./tables/wattage";
+import { defineCalculator, type Step, type Warning } from "./types";
+import { quantity, tidy } from "./units";
+
+/**
+ * Series heater string on the mains: the heaters carry one current, their voltages add, and a
+ * dropping resistor takes up the difference, R = (V_line − ΣV)/I (Ohm's law; RCA receiving tube
+ * manual, application notes on series heater operation).
+ */
+
+// Rated currents within this fraction of each other count as one string current (common practice).
+const MATCH = 0.02;
+const MAX_HEATERS = 40;
+
+const heater = z.object({
+  voltage: quantity("voltage", { positive: true, max: 500, label: "Heater voltage" }),
+  current: quantity("current", { positive: true, max: 20, label: "Heater current" }),
+});
+
+/** A list of type numbers, or one text like "12BE6, 12BA6 12AV6"; names are checked against the table. */
+const tubeList = z
+  .union([z.array(z.string()), z.string()], { error: "Tubes must be a list of type numbers" })
+  .transform((raw, ctx) => {
+    const names = (typeof raw === "string" ? raw.split(/[,;\s]+/) : raw).map((s) => s.trim());
+    const list = typeof raw === "string" ? names.filter(Boolean) : names;
+    if (list.length > MAX_HEATERS) {
+      ctx.addIssue({ code: "custom", message: `At most ${MAX_HEATERS} tubes` });
+      return z.NEVER;
+    }
+    return list.map((name, i) => {
+      const entry = findHeater(name);
+      if (!entry) {
+        ctx.addIssue({
+          code: "custom",
+          path: [i],
+          message: `tubes.${i}: unknown tube type "${name}" — it is not in the built-in heater table; enter its heater voltage and current under heaters instead`,
+        });
+        return name;
+      }
+      return entry.names[0];
+    });
+  });
+
+export const heaterStringSchema = z
+  .object({
+    lineVoltage: quantity("voltage", { positive: true, max: 1000, label: "Line voltage" }),
+    heaters: z.array(heater).max(MAX_HEATERS, { error: `At most ${MAX_HEATERS} heaters` }).optional(),
+    tubes: tubeList.optional(),
+  })
+  .superRefine((v, ctx) => {
+    const hasHeaters = (v.heaters?.length ?? 0) > 0;
+    const hasTubes = (v.tubes?.length ?? 0) > 0;
+    if (hasHeaters && hasTubes) {
+      ctx.addIssue({ code: "custom", path: ["tubes"], message: "Give either heaters or tubes, not both" });
+    } else if (!hasHeaters && !hasTubes) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["heaters"],
+        message: "Heaters are required: list each heater's voltage and current, or name the tubes instead",
+      });
+    }
+  });
+
+export type HeaterStringInput = z.output<typeof heaterStringSchema>;
+
+export const calculator = defineCalculator({
+  slug: "heater-string",
+  title: "Series heater string",
+  purpose: "Whether a string of heaters in series suits the mains, and the dropping resistor it needs.",
+  group: "supplies",
+  inputs: [
+    { name: "lineVoltage", label: "Line voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The mains voltage (rms) across the whole string." },
+    { name: "heaters", label: "Heaters", unit: "", required: false, control: "list", help: "Each heater's rated voltage and current, e.g. { voltage: 12.6, current: 0.15 }. Or name the tubes instead." },
+    { name: "tubes", label: "Tubes", unit: "", required: false, control: "list", options: TUBE_NAMES, help: "Type numbers from the built-in table, e.g. 12BE6, 12BA6, 12AV6, 50C5, 35W4." },
+  ],
+  outputs: [
+    { name: "stringVoltage", label: "Voltage the string needs", unit: "V" },
+    { name: "stringCurrent", label: "String current", unit: "A" },
+    { name: "currentsMatch", label: "Heater currents match", unit: "" },
+    { name: "droppingResistance", label: "Dropping resistor", unit: "Ω" },
+    { name: "dissipation", label: "Dropping resistor dissipation", unit: "W" },
+    { name: "suggestedRating", label: "Suggested power rating", unit: "W" },
+  ],
+  schema: heaterStringSchema,
+  formulas: [
+    { label: "String voltage", latex: String.raw`V_{string} = \sum_k V_k` },
+    { label: "Dropping resistor", latex: String.raw`R = \frac{V_{line} - V_{string}}{I}` },
+    { label: "Dissipation", latex: String.raw`P = (V_{line} - V_{string})\,I = I^2 R` },
+  ],
+  references: [
+    { title: "RCA receiving tube manual (RC-series)", detail: "Heater ratings of each type; application notes on series heater strings (from memory)" },
+    { title: "Built-in heater table", detail: HEATER_SOURCE },
+    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Series heater operation in AC/DC receivers (chapter not checked)" },
+  ],
+  whyItMatters:
+    "In an AC/DC radio or a series-string television every heater is in one loop across the mains. Their " +
+    "voltages add up, the same current flows through them all, and whatever the string does not use must be " +
+    "dropped by a resistor or a ballast. Substituting a tube with a different heater current, or getting the " +
+    "resistor wrong, over-runs some heaters and under-runs others — and one open heater darkens the whole set.",
+  compute(input: HeaterStringInput) {
+    const vLine = input.lineVoltage;
+    const fromTubes = !(input.heaters && input.heaters.length > 0);
+    const list = fromTubes
+      ? (input.tubes ?? []).map((name) => {
+          const h = findHeater(name)!;
+          return { label: name, voltage: h.voltage, current: h.current };
+        })
+      : input.heaters!.map((h, k) => ({ label: `heater ${k + 1}`, ...h }));
+
+    const stringVoltage = tidy(list.reduce((sum, h) => sum + h.voltage, 0));
+    const currents = list.map((h) => h.current);
+    const iMin = Math.min(...currents);
+    const iMax = Math.max(...currents);
+    const currentsMatch = iMax <= iMin * (1 + MATCH);
+    const stringCurrent = iMin;
+    const excess = vLine - stringVoltage;
+    const needed = excess > 0;
+    const droppingResistance = needed ? excess / stringCurrent : 0;
+    const dissipation = needed ? excess * stringCurrent : 0;
+    const rating = needed ? suggestedRating(dissipation) : { rating: 0, warning: null };
+
+    const terms = list.map((h) => texQuantity(h.voltage, "V")).join(" + ");
+    const steps: Step[] = [
+      { label: "String voltage", latex: String.raw`V_{string} = ${terms} = ${texQuantity(stringVoltage, "V", 4)}` },
+      {
+        label: currentsMatch ? "String current (all heaters rated alike)" : "String current (lowest rated heater current)",
+        latex: String.raw`I = ${texQuantity(stringCurrent, "A")}`,
+      },
+    ];
+    if (needed) {
+      steps.push(
+        {
+          label: "Dropping resistor",
+          latex: String.raw`R = \frac{V_{line} - V_{string}}{I} = \frac{${texQuantity(vLine, "V")} - ${texQuantity(stringVoltage, "V")}}{${texQuantity(stringCurrent, "A")}} = ${texQuantity(droppingResistance, "Ω")}`,
+        },
+        {
+          label: "Dissipation",
+          latex: String.raw`P = (V_{line} - V_{string})\,I = ${texQuantity(excess, "V")} \times ${texQuantity(stringCurrent, "A")} = ${texQuantity(dissipation, "W")}`,
+        },
+        {
+          label: "Suggested rating (at least twice the dissipation)",
+          latex: rating.rating === null
+            ? String.raw`2P = ${texQuantity(2 * dissipation, "W")} \text{ — above the largest standard rating}`
+            : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \;\Rightarrow\; ${texQuantity(rating.rating, "W")}`,
+        },
+      );
+    } else {
+      steps.push({
+        label: "No dropping resistor",
+        latex: String.raw`V_{string} = ${texQuantity(stringVoltage, "V", 4)} \ge V_{line} = ${texQuantity(vLine, "V")} \;\Rightarrow\; R = 0`,
+      });
+    }
+
+    const warnings: Warning[] = [...highVoltageWarning(vLine)];
+    if (vLine > 50) {
+      warnings.push({
+        level: "caution",
+        message:
+          "A heater string across the mains usually means an AC/DC set whose chassis can be tied to one side of the line. " +
+          "Work on it through an isolation transformer and never trust a plug's orientation.",
+      });
+    }
+    if (!currentsMatch) {
+      warnings.push({
+        level: "caution",
+        message:
+          `The heaters are rated for different currents (${formatQuantity(iMin, "A")} to ${formatQuantity(iMax, "A")}). ` +
+          "In series they all carry one current, so this string only approximately suits the lowest-current heater's rating: " +
+          "the others run cool, and the lowest-current one may be over-run while the others warm up. Use tubes of one heater current, or shunt the odd heater.",
+      });
+    }
+    if (excess < 0) {
+      const short = (-excess / stringVoltage) * 100;
+      warnings.push({
+        level: "caution",
+        message:
+          `The string needs ${formatQuantity(stringVoltage, "V")}, more than the ${formatQuantity(vLine, "V")} line, so every heater runs about ${short.toPrecision(2)}% below its rating. ` +
+          "A few per cent is how many AC/DC sets were built; much more and emission suffers.",
+      });
+    }
+    if (rating.warning) warnings.push(rating.warning);
+    warnings.push({
+      level: "info",
+      message:
+        "Cold heaters draw a surge well above their rating until they warm up, and one open heater breaks the whole string: every tube goes dark.",
+    });
+
+    return {
+      outputs: { stringVoltage, stringCurrent, currentsMatch, droppingResistance, dissipation, suggestedRating: rating.rating },
+      steps,
+      warnings,
+    };
+  },
+});
