@@ -90,6 +90,9 @@ export interface TriodeStageOutputs {
   gain: N;
 }
 
+const MODEL_TEX = String.raw`E_1 = \frac{E_p}{K_P}\ln\!\left(1 + e^{K_P\left(\frac{1}{\mu} + \frac{E_g}{\sqrt{K_{VB} + E_p^2}}\right)}\right),\quad I_p = \frac{E_1^{E_X}}{K_{G1}}\left(1 + \operatorname{sgn} E_1\right)`;
+const LOAD_LINE_TEX = String.raw`E_p = B^{+} - I_p\,(R_a + R_k),\quad E_g = -I_p R_k`;
+
 const tex = (n: number) => String(Number(n.toPrecision(6)));
 
 function modelFor(input: TriodeStageInput): { params: TriodeParams; name: string; rating?: number; overridden: ModelKey[] } {
@@ -131,8 +134,8 @@ export const calculator = defineCalculator({
   ],
   schema: triodeStageSchema,
   formulas: [
-    { label: "Triode model (Koren)", latex: String.raw`E_1 = \frac{E_p}{K_P}\ln\!\left(1 + e^{K_P\left(\frac{1}{\mu} + \frac{E_g}{\sqrt{K_{VB} + E_p^2}}\right)}\right),\quad I_p = \frac{E_1^{E_X}}{K_{G1}}\left(1 + \operatorname{sgn} E_1\right)` },
-    { label: "Load line and cathode bias", latex: String.raw`E_p = B^{+} - I_p\,(R_a + R_k),\quad E_g = -I_p R_k` },
+    { label: "Triode model (Koren)", latex: MODEL_TEX },
+    { label: "Load line and cathode bias", latex: LOAD_LINE_TEX },
     { label: "Gain, cathode bypassed", latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L'},\quad R_L' = R_a \parallel R_L` },
     { label: "Gain, cathode not bypassed", latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k}` },
   ],
@@ -152,11 +155,15 @@ export const calculator = defineCalculator({
     const { params: p, name, rating, overridden } = modelFor(input);
     const solved = solveOperatingPoint(p, bPlus, ra, rk);
     const warnings: Warning[] = [...highVoltageWarning(bPlus)];
+    // Each value is formatted once; formatting dominates the cost of compute.
+    const tB = texQuantity(bPlus, "V");
+    const tRa = texQuantity(ra, "Ω");
+    const tRk = texQuantity(rk, "Ω");
     const steps: Step[] = [
-      { label: "Triode model (Koren)", latex: String.raw`E_1 = \frac{E_p}{K_P}\ln\!\left(1 + e^{K_P\left(\frac{1}{\mu} + \frac{E_g}{\sqrt{K_{VB} + E_p^2}}\right)}\right),\quad I_p = \frac{E_1^{E_X}}{K_{G1}}\left(1 + \operatorname{sgn} E_1\right)` },
+      { label: "Triode model (Koren)", latex: MODEL_TEX },
       { label: `Model parameters (${name})`, latex: String.raw`\mu = ${tex(p.mu)},\; E_X = ${tex(p.ex)},\; K_{G1} = ${tex(p.kg1)},\; K_P = ${tex(p.kp)},\; K_{VB} = ${tex(p.kvb)}\,\mathrm{V^2}` },
-      { label: "Load line and cathode bias", latex: String.raw`E_p = B^{+} - I_p\,(R_a + R_k),\quad E_g = -I_p R_k` },
-      { label: "Load line with your values", latex: String.raw`E_p = ${texQuantity(bPlus, "V")} - I_p\,(${texQuantity(ra, "Ω")} + ${texQuantity(rk, "Ω")}),\quad E_g = -I_p \times ${texQuantity(rk, "Ω")}` },
+      { label: "Load line and cathode bias", latex: LOAD_LINE_TEX },
+      { label: "Load line with your values", latex: String.raw`E_p = ${tB} - I_p\,(${tRa} + ${tRk}),\quad E_g = -I_p \times ${tRk}` },
     ];
     if (overridden.length) {
       warnings.push({ level: "info", message: `Using the ${name} table entry with your own ${overridden.join(", ")}.` });
@@ -177,22 +184,28 @@ export const calculator = defineCalculator({
     const degeneration = bypassed ? 0 : (mu + 1) * rk;
     const gain = (gm * rLoad) / (1 + point.gp * (rLoad + degeneration));
 
+    const tIp = texQuantity(ip, "A");
+    const tIp4 = texQuantity(ip, "A", 4);
+    const tEp = texQuantity(ep, "V");
+    const tMu = texQuantity(mu, "");
+    const tRl = texQuantity(rLoad, "Ω");
+    const tGain = texQuantity(gain, "");
+    const rpTex = rp === null ? String.raw`\infty` : texQuantity(rp, "Ω");
     steps.push(
-      { label: "Operating point (model current equals load-line current)", latex: String.raw`I_p = ${texQuantity(ip, "A", 4)},\quad E_p = ${texQuantity(bPlus, "V")} - ${texQuantity(ip, "A", 4)} \times ${texQuantity(ra + rk, "Ω", 4)} = ${texQuantity(ep, "V", 4)},\quad E_g = ${texQuantity(eg, "V", 4)}` },
-      { label: "Cathode voltage", latex: String.raw`V_k = I_p R_k = ${texQuantity(ip, "A")} \times ${texQuantity(rk, "Ω")} = ${texQuantity(vk, "V")}` },
+      { label: "Operating point (model current equals load-line current)", latex: String.raw`I_p = ${tIp4},\quad E_p = ${tB} - ${tIp4} \times ${texQuantity(ra + rk, "Ω", 4)} = ${texQuantity(ep, "V", 4)},\quad E_g = ${texQuantity(eg, "V", 4)}` },
+      { label: "Cathode voltage", latex: String.raw`V_k = I_p R_k = ${tIp} \times ${tRk} = ${texQuantity(vk, "V")}` },
       { label: "Plate to chassis, as a meter reads it", latex: String.raw`V_a = E_p + V_k = B^{+} - I_p R_a = ${texQuantity(ep + vk, "V", 4)}` },
-      { label: "Plate dissipation", latex: String.raw`P_a = E_p I_p = ${texQuantity(ep, "V")} \times ${texQuantity(ip, "A")} = ${texQuantity(dissipation, "W")}` },
-      { label: "Small-signal parameters at the operating point", latex: String.raw`g_m = \frac{\partial I_p}{\partial E_g} = ${texQuantity(gm, "S")},\quad r_p = \left(\frac{\partial I_p}{\partial E_p}\right)^{-1} = ${rp === null ? String.raw`\infty` : texQuantity(rp, "Ω")},\quad \mu = g_m r_p = ${texQuantity(mu, "")}` },
+      { label: "Plate dissipation", latex: String.raw`P_a = E_p I_p = ${tEp} \times ${tIp} = ${texQuantity(dissipation, "W")}` },
+      { label: "Small-signal parameters at the operating point", latex: String.raw`g_m = \frac{\partial I_p}{\partial E_g} = ${texQuantity(gm, "S")},\quad r_p = \left(\frac{\partial I_p}{\partial E_p}\right)^{-1} = ${rpTex},\quad \mu = g_m r_p = ${tMu}` },
     );
     if (rl !== undefined) {
-      steps.push({ label: "Signal load: plate resistor in parallel with the next stage", latex: String.raw`R_L' = \frac{R_a R_L}{R_a + R_L} = \frac{${texQuantity(ra, "Ω")} \times ${texQuantity(rl, "Ω")}}{${texQuantity(ra, "Ω")} + ${texQuantity(rl, "Ω")}} = ${texQuantity(rLoad, "Ω")}` });
+      steps.push({ label: "Signal load: plate resistor in parallel with the next stage", latex: String.raw`R_L' = \frac{R_a R_L}{R_a + R_L} = \frac{${tRa} \times ${texQuantity(rl, "Ω")}}{${tRa} + ${texQuantity(rl, "Ω")}} = ${tRl}` });
     }
-    const rpTex = rp === null ? String.raw`\infty` : texQuantity(rp, "Ω");
     const gainLabel = "Voltage gain (inverting: the plate swings opposite to the grid)";
     steps.push(
       bypassed
-        ? { label: `${gainLabel}, cathode bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L'} = \frac{${texQuantity(mu, "")} \times ${texQuantity(rLoad, "Ω")}}{${rpTex} + ${texQuantity(rLoad, "Ω")}} = ${texQuantity(gain, "")}` }
-        : { label: `${gainLabel}, cathode not bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k} = \frac{${texQuantity(mu, "")} \times ${texQuantity(rLoad, "Ω")}}{${rpTex} + ${texQuantity(rLoad, "Ω")} + ${texQuantity(mu + 1, "")} \times ${texQuantity(rk, "Ω")}} = ${texQuantity(gain, "")}` },
+        ? { label: `${gainLabel}, cathode bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L'} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl}} = ${tGain}` }
+        : { label: `${gainLabel}, cathode not bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl} + ${texQuantity(mu + 1, "")} \times ${tRk}} = ${tGain}` },
     );
 
     if (rating !== undefined && dissipation > rating) {

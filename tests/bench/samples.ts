@@ -1,0 +1,40 @@
+/**
+ * One typical input per calculator for the micro-benchmark, keyed by slug, with the input
+ * names of PRODUCT.md. Values are the kind a bench would enter, written as the form sends
+ * them (engineering text where a person would type it), so validation does real parsing.
+ */
+export const samples: Record<string, Record<string, unknown>> = {
+  "cathode-bias": {
+    biasVoltage: "1.5 V",
+    plateCurrent: "1 mA",
+    screenCurrent: 0,
+    bypassCapacitance: "25 uF",
+    amplificationFactor: 100,
+    plateResistance: "62.5k",
+    plateLoad: "100k",
+  },
+  "time-constant": { resistance: "220k", capacitance: "47 uF", initialVoltage: "350 V", targetVoltage: "30 V", elapsed: "10 s" },
+  bleeder: { capacitance: "40 uF", workingVoltage: "450 V", safeVoltage: 60, maxTime: 5, tolerance: 0.05 },
+  "supply-ripple": {
+    loadCurrent: "80 mA",
+    capacitance: "40 uF",
+    lineFrequency: 60,
+    rectifier: "full-wave",
+    stages: [
+      { kind: "lc", inductance: "10 H", capacitance: "40 uF" },
+      { kind: "rc", resistance: "4.7k", capacitance: "20 uF" },
+    ],
+  },
+  "dropping-resistor": { supplyVoltage: "300 V", loadVoltage: "250 V", loadCurrent: "10 mA" },
+  "heater-string": { lineVoltage: "120 V", tubes: ["12BE6", "12BA6", "12AV6", "50C5", "35W4"] },
+  "arc-clearance": { peakVoltage: "15 kV", gap: "5 mm", pressure: 101325, temperature: 293.15, safetyFactor: 2 },
+  "resistor-drift": { nominal: "100k", measured: "128k", tolerance: 0.2 },
+  "ohms-law": { voltage: "250 V", resistance: "100k" },
+  reactance: { frequency: "1 kHz", capacitance: "100 nF", inductance: "10 mH" },
+  "triode-stage": { tube: "12AX7", supplyVoltage: "250 V", plateResistor: "100k", cathodeResistor: "1.5k", cathodeBypassed: true, loadResistance: "470k" },
+  "colour-code": { bands: ["yellow", "violet", "red", "gold"] },
+  "preferred-value": { value: "5.13k", series: "E12" },
+};
+
+/** Slugs that are closed-form (no iteration), measured against the closed-form targets. */
+export const ITERATIVE_SLUGS: readonly string[] = ["triode-stage"];
