@@ -187,12 +187,17 @@ export function quantity(kind: QuantityKind, o: QuantityOptions = { positive: tr
 
 /** An optional quantity: blank gives undefined. */
 export function optionalQuantity(kind: QuantityKind, o: QuantityOptions = { positive: true }) {
+  // .optional() so an absent key is accepted by z.object (zod 4 treats a bare transform as required).
   return z
     .unknown()
-    .transform((raw, ctx): number | undefined => (isBlank(raw) ? undefined : check(raw, kind, o, ctx)));
+    .transform((raw, ctx): number | undefined => (isBlank(raw) ? undefined : check(raw, kind, o, ctx)))
+    .optional();
 }
 
 /** A quantity with a default used when the field is blank or absent. */
 export function quantityWithDefault(kind: QuantityKind, fallback: number, o: QuantityOptions = { positive: true }) {
-  return z.unknown().transform((raw, ctx): number => (isBlank(raw) ? fallback : check(raw, kind, o, ctx)));
+  return z
+    .unknown()
+    .transform((raw, ctx): number => (isBlank(raw) ? fallback : check(raw, kind, o, ctx)))
+    .default(fallback);
 }
