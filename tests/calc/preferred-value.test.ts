@@ -80,9 +80,10 @@ describe("preferred-value: identities and properties", () => {
         for (const v of Object.values(o)) expect(Number.isFinite(v)).toBe(true);
         expect(o.below).toBeLessThanOrEqual(x * (1 + 1e-9));
         expect(o.above).toBeGreaterThanOrEqual(x * (1 - 1e-9));
-        expect(Math.abs(Math.log(o.nearest / x))).toBeLessThanOrEqual(Math.log(o.above / o.below) / 2 + 1e-12);
-        // historic E6–E24 gaps (e.g. 2.7 → 3.3) stretch a little past the nominal tolerance
-        expect(Math.abs(o.errorOfNearest)).toBeLessThan(tol[series] * 1.12);
+        // within 1e-9 of a member counts as that member (binary noise from unit scaling)
+        expect(Math.abs(Math.log(o.nearest / x))).toBeLessThanOrEqual(Math.log(o.above / o.below) / 2 + 1e-9);
+        // the widest gaps (E12 1.2 → 1.5, E96 0.953 → 0.976) put the log midpoint up to ~1.2× the nominal tolerance away
+        expect(Math.abs(o.errorOfNearest)).toBeLessThan(tol[series] * 1.2);
         expect(o.errorOfNearest).toBeCloseTo((o.nearest - x) / x, 12);
       }),
     );
