@@ -1,9 +1,15 @@
-import { desc, eq } from "drizzle-orm";
-import type { Member } from "@/lib/auth/member";
+import { and, asc, desc, eq, inArray, or, sql, type AnyColumn, type SQL } from "drizzle-orm";
+import type { JobStatus } from "@/db/enums";
+import { JOB_STATUS_LABELS } from "@/db/enums";
+import { assertRole, can, type Member } from "@/lib/auth/member";
+import { forbidden, notFound } from "@/lib/auth/errors";
+import type { JobCreate, JobListQuery, JobUpdate } from "@/lib/jobs/job-schemas";
 import { getDb } from "../client";
-import { jobs } from "../schema";
+import { files, jobs, logEntries } from "../schema";
+import { assertJobInWorkshop } from "./job-access";
 
-/** Columns a job list shows; every query here is scoped to the member's workshop. */
+/** Jobs: every query here is scoped to the member's workshop and checks the role itself. */
+
 const listColumns = {
   id: jobs.id,
   title: jobs.title,
@@ -17,6 +23,140 @@ const listColumns = {
   updatedAt: jobs.updatedAt,
 };
 
+const detailColumns = { ...listColumns, customerEmail: jobs.customerEmail, notes: jobs.notes };
+
+export type JobListRow = Awaited<ReturnType<typeof listJobs>>[number];
+export type JobDetail = NonNullable<ReturnType<typeof findJob>>;
+
+/** Every job of the workshop, most recently worked on first (used where no paging is needed). */
 export function listJobs(member: Member) {
   return getDb().select(listColumns).from(jobs).where(eq(jobs.workshopId, member.workshopId)).orderBy(desc(jobs.updatedAt)).all();
+}
+
+const SORT_COLUMNS = {
+  updatedAt: jobs.updatedAt,
+  createdAt: jobs.createdAt,
+  title: sql`${jobs.title} collate nocase`,
+  status: jobs.status,
+  equipmentKind: jobs.equipmentKind,
+  customerName: sql`${jobs.customerName} collate nocase`,
+  year: jobs.year,
+} as const;
+
+/** LIKE pattern that matches the text literally (no user wildcards). */
+function likePattern(text: string): string {
+  return `%${text.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}
+
+/** One page of the workshop's jobs with filters, search and sorting done in SQL. */
+export function searchJobs(member: Member, q: JobListQuery) {
+  const db = getDb();
+  const where: SQL[] = [eq(jobs.workshopId, member.workshopId)];
+  if (q.status?.length) where.push(q.status.length === 1 ? eq(jobs.status, q.status[0]) : inArray(jobs.status, q.status));
+  if (q.kind) where.push(eq(jobs.equipmentKind, q.kind));
+  if (q.q) {
+    const p = likePattern(q.q);
+    const like = (col: AnyColumn) => sql`${col} like ${p} escape '\\'`;
+    where.push(or(like(jobs.title), like(jobs.maker), like(jobs.model), like(jobs.customerName), like(jobs.customerEmail))!);
+  }
+  const condition = and(...where);
+  const order = q.dir === "asc" ? asc : desc;
+  const rows = db
+    .select(listColumns)
+    .from(jobs)
+    .where(condition)
+    .orderBy(order(SORT_COLUMNS[q.sort]), order(jobs.id))
+    .limit(q.pageSize)
+    .offset((q.page - 1) * q.pageSize)
+    .all();
+  const total = db.select({ n: sql<number>`count(*)` }).from(jobs).where(condition).get()?.n ?? 0;
+  return { jobs: rows, total, page: q.page, pageSize: q.pageSize };
+}
+
+export function findJob(member: Member, jobId: number) {
+  return getDb()
+    .select(detailColumns)
+    .from(jobs)
+    .where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId)))
+    .get();
+}
+
+export function getJob(member: Member, jobId: number) {
+  const job = findJob(member, jobId);
+  if (!job) throw notFound("That job");
+  return job;
+}
+
+export function createJob(member: Member, input: JobCreate) {
+  if (!can.editJobs(member)) throw forbidden("book in jobs");
+  return getDb().transaction((tx) => {
+    const job = tx
+      .insert(jobs)
+      .values({ ...input, workshopId: member.workshopId, status: "booked-in" })
+      .returning(detailColumns)
+      .get();
+    tx.insert(logEntries)
+      .values({ jobId: job.id, workshopId: member.workshopId, authorId: member.userId, kind: "status", text: `Booked in: ${job.title}.`, data: { to: "booked-in" } })
+      .run();
+    return job;
+  });
+}
+
+export function updateJob(member: Member, jobId: number, input: JobUpdate) {
+  if (!can.editJobs(member)) throw forbidden("edit job details");
+  getJob(member, jobId);
+  const changes = Object.fromEntries(Object.entries(input).filter(([, v]) => v !== undefined));
+  return getDb()
+    .update(jobs)
+    .set({ ...changes, updatedAt: sql`(unixepoch('subsec') * 1000)` })
+    .where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId)))
+    .returning(detailColumns)
+    .get()!;
+}
+
+/** Moves a job along the workflow and writes the change to its log, in one transaction. */
+export function changeJobStatus(member: Member, jobId: number, status: JobStatus) {
+  if (!can.changeStatus(member)) throw forbidden("change a job's status");
+  return getDb().transaction((tx) => {
+    const before = tx
+      .select({ status: jobs.status })
+      .from(jobs)
+      .where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId)))
+      .get();
+    if (!before) throw notFound("That job");
+    const job = tx
+      .update(jobs)
+      .set({ status, updatedAt: sql`(unixepoch('subsec') * 1000)` })
+      .where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId)))
+      .returning(detailColumns)
+      .get()!;
+    if (before.status !== status) {
+      tx.insert(logEntries)
+        .values({
+          jobId,
+          workshopId: member.workshopId,
+          authorId: member.userId,
+          kind: "status",
+          text: `Status: ${JOB_STATUS_LABELS[before.status]} → ${JOB_STATUS_LABELS[status]}.`,
+          data: { from: before.status, to: status },
+        })
+        .run();
+    }
+    return job;
+  });
+}
+
+/** Owners only. Parts, readings, calculations, files and log go with it (foreign-key cascade). */
+export function deleteJob(member: Member, jobId: number): { storedNames: string[] } {
+  assertRole(member, ["owner"], "delete jobs");
+  return getDb().transaction((tx) => {
+    assertJobInWorkshop(member, jobId, tx);
+    const stored = tx
+      .select({ storedName: files.storedName })
+      .from(files)
+      .where(and(eq(files.jobId, jobId), eq(files.workshopId, member.workshopId)))
+      .all();
+    tx.delete(jobs).where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId))).run();
+    return { storedNames: stored.map((r) => r.storedName) };
+  });
 }

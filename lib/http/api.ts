@@ -36,7 +36,7 @@ export function fieldErrors(error: z.ZodError): Record<string, string> {
   return fields;
 }
 
-function sameOrigin(request: Request): boolean {
+export function sameOrigin(request: Request): boolean {
   const origin = request.headers.get("origin");
   if (!origin) return true; // non-browser clients send none; browsers always do on cross-site POSTs
   const host = request.headers.get("x-forwarded-host") ?? request.headers.get("host");

@@ -1,0 +1,24 @@
+import { requireMember } from "@/lib/auth/member";
+import { handle } from "@/lib/http/api";
+import { idParam, type JobParams } from "@/lib/http/ids";
+import { renderBenchSheet } from "@/lib/jobs/bench-sheet";
+import { downloadName } from "@/lib/jobs/download-name";
+
+export const runtime = "nodejs";
+
+/** The job's printable bench sheet (PDF), for any member of its workshop. */
+export const GET = handle(async (request: Request, { params }: JobParams) => {
+  const member = await requireMember();
+  const jobId = idParam((await params).id, "That job");
+  const pdf = await renderBenchSheet(member, jobId);
+  const inline = new URL(request.url).searchParams.get("inline") === "1";
+  return new Response(new Uint8Array(pdf), {
+    headers: {
+      "content-type": "application/pdf",
+      "content-length": String(pdf.length),
+      "content-disposition": downloadName(inline ? "inline" : "attachment", `bench-sheet-job-${jobId}.pdf`),
+      "cache-control": "private, no-store",
+      "x-content-type-options": "nosniff",
+    },
+  });
+});

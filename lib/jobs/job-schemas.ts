@@ -1,0 +1,83 @@
+import { z } from "zod";
+import { EQUIPMENT_KINDS, JOB_STATUSES } from "@/db/enums";
+import { blankToUndefined, optionalText, requiredText } from "./fields";
+
+/** One schema per job form, used by react-hook-form (zodResolver) and the route handlers (safeParse). */
+
+const THIS_YEAR = new Date().getFullYear();
+
+const yearField = z
+  .union([z.number(), z.string()], { error: "Enter the year as a number, like 1952." })
+  .nullable()
+  .optional()
+  .transform((v, ctx): number | null | undefined => {
+    if (v === undefined) return undefined;
+    if (v === null || (typeof v === "string" && v.trim() === "")) return null;
+    const n = typeof v === "number" ? v : Number(v.trim());
+    if (!Number.isInteger(n) || n < 1880 || n > THIS_YEAR + 1) {
+      ctx.addIssue({ code: "custom", message: `Enter a year between 1880 and ${THIS_YEAR + 1}, or leave it blank.` });
+      return z.NEVER;
+    }
+    return n;
+  });
+
+const customerEmailField = optionalText(254, "Customer e-mail").refine(
+  (v) => v == null || z.email().safeParse(v).success,
+  "Enter a valid e-mail address, like name@example.com, or leave it blank.",
+);
+
+export const jobFields = {
+  title: requiredText(120, "The title", "Give the set a short title, like “Five-tube table radio, 1950s”."),
+  equipmentKind: z.enum(EQUIPMENT_KINDS, { error: "Choose what kind of set it is." }),
+  maker: optionalText(80, "Maker"),
+  model: optionalText(80, "Model"),
+  year: yearField,
+  customerName: optionalText(120, "Customer name"),
+  customerEmail: customerEmailField,
+  notes: optionalText(4000, "Notes"),
+};
+
+export const jobCreateSchema = z.object(jobFields);
+export type JobCreateInput = z.input<typeof jobCreateSchema>;
+export type JobCreate = z.output<typeof jobCreateSchema>;
+
+/** PATCH: any subset of the fields; an absent key is left as it is. */
+export const jobUpdateSchema = z
+  .object({ ...jobFields, title: jobFields.title.optional(), equipmentKind: jobFields.equipmentKind.optional() })
+  .refine((v) => Object.values(v).some((x) => x !== undefined), { message: "Send at least one field to change." });
+export type JobUpdate = z.output<typeof jobUpdateSchema>;
+
+export const statusChangeSchema = z.object({
+  status: z.enum(JOB_STATUSES, { error: "Choose one of the workflow steps." }),
+});
+
+export const JOB_SORTS = ["updatedAt", "createdAt", "title", "status", "equipmentKind", "customerName", "year"] as const;
+export type JobSort = (typeof JOB_SORTS)[number];
+
+const statusList = z
+  .string()
+  .transform((s, ctx) => {
+    const list = s.split(",").map((x) => x.trim()).filter(Boolean);
+    for (const x of list) {
+      if (!(JOB_STATUSES as readonly string[]).includes(x)) {
+        ctx.addIssue({ code: "custom", message: `“${x}” is not a job status; use one of ${JOB_STATUSES.join(", ")}.` });
+        return z.NEVER;
+      }
+    }
+    return list as (typeof JOB_STATUSES)[number][];
+  });
+
+/** GET /api/jobs query: paging, sorting, filters and text search; every parameter optional. */
+export const jobListQuerySchema = z.object({
+  page: z.preprocess(blankToUndefined, z.coerce.number({ error: "page must be a whole number" }).int("page must be a whole number").min(1, "page starts at 1").max(100_000).default(1)),
+  pageSize: z.preprocess(
+    blankToUndefined,
+    z.coerce.number({ error: "pageSize must be a whole number" }).int("pageSize must be a whole number").min(1, "pageSize must be 1 to 100").max(100, "pageSize must be 1 to 100").default(50),
+  ),
+  sort: z.preprocess(blankToUndefined, z.enum(JOB_SORTS, { error: `sort must be one of ${JOB_SORTS.join(", ")}` }).default("updatedAt")),
+  dir: z.preprocess(blankToUndefined, z.enum(["asc", "desc"], { error: "dir must be asc or desc" }).default("desc")),
+  status: z.preprocess(blankToUndefined, statusList.optional()),
+  kind: z.preprocess(blankToUndefined, z.enum(EQUIPMENT_KINDS, { error: `kind must be one of ${EQUIPMENT_KINDS.join(", ")}` }).optional()),
+  q: z.preprocess(blankToUndefined, z.string().trim().max(100, "Keep the search under 100 characters").optional()),
+});
+export type JobListQuery = z.output<typeof jobListQuerySchema>;

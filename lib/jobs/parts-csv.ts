@@ -1,0 +1,84 @@
+import Papa from "papaparse";
+import { fieldErrors } from "@/lib/http/api";
+import { partSchema, type PartValues } from "./part-schemas";
+
+/**
+ * The parts list as CSV, one part per row under a header. Import is all-or-nothing: any bad row
+ * and nothing is added; errors name the row as a spreadsheet numbers it (the header is row 1).
+ */
+
+export const CSV_COLUMNS = ["designator", "kind", "original_value", "original_rating", "replacement_value", "replacement_rating", "state"] as const;
+
+const TO_FIELD: Record<(typeof CSV_COLUMNS)[number], keyof PartValues> = {
+  designator: "designator",
+  kind: "kind",
+  original_value: "originalValue",
+  original_rating: "originalRating",
+  replacement_value: "replacementValue",
+  replacement_rating: "replacementRating",
+  state: "state",
+};
+
+export const MAX_IMPORT_ROWS = 500;
+
+/** A cell a spreadsheet would run as a formula gets a leading apostrophe (CSV injection). */
+function safeCell(v: string | null): string {
+  if (!v) return "";
+  return /^[=+\-@\t\r]/.test(v) ? `'${v}` : v;
+}
+
+export function partsToCsv(parts: PartValues[]): string {
+  const rows = parts.map((p) => CSV_COLUMNS.map((c) => safeCell((p[TO_FIELD[c]] as string | null) ?? null)));
+  return Papa.unparse({ fields: [...CSV_COLUMNS], data: rows }, { newline: "\r\n" });
+}
+
+const normaliseHeader = (h: string) => h.trim().toLowerCase().replace(/[\s-]+/g, "_");
+const unescapeCell = (v: string) => (/^'[=+\-@\t\r]/.test(v) ? v.slice(1) : v);
+
+export type CsvImport = { ok: true; rows: PartValues[] } | { ok: false; message: string; fields: Record<string, string> };
+
+export function parsePartsCsv(text: string): CsvImport {
+  const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ""), {
+    header: true,
+    skipEmptyLines: false,
+    transformHeader: normaliseHeader,
+  });
+  const headers = parsed.meta.fields ?? [];
+  const missing = ["designator", "kind"].filter((h) => !headers.includes(h));
+  if (missing.length) {
+    return { ok: false, message: `The header row needs the columns ${missing.join(" and ")} (columns: ${CSV_COLUMNS.join(", ")}).`, fields: { header: `Missing column: ${missing.join(", ")}` } };
+  }
+  const unknown = headers.filter((h) => h && !(CSV_COLUMNS as readonly string[]).includes(h));
+  if (unknown.length) {
+    return { ok: false, message: `Unknown column${unknown.length > 1 ? "s" : ""}: ${unknown.join(", ")}. Use ${CSV_COLUMNS.join(", ")}.`, fields: { header: `Unknown column: ${unknown.join(", ")}` } };
+  }
+  const fields: Record<string, string> = {};
+  const rows: PartValues[] = [];
+  parsed.data.forEach((record, i) => {
+    const rowNumber = i + 2;
+    const cells = CSV_COLUMNS.map((c) => (record[c] ?? "").trim());
+    if (cells.every((c) => c === "")) return; // blank line
+    const candidate: Record<string, string | undefined> = {};
+    CSV_COLUMNS.forEach((c, k) => {
+      candidate[TO_FIELD[c]] = cells[k] === "" && c === "state" ? undefined : unescapeCell(cells[k]);
+    });
+    const result = partSchema.safeParse(candidate);
+    if (!result.success) {
+      for (const [field, message] of Object.entries(fieldErrors(result.error))) fields[`row.${rowNumber}.${field}`] = `Row ${rowNumber}: ${message}`;
+      return;
+    }
+    rows.push(result.data);
+  });
+  for (const err of parsed.errors) {
+    if (err.code === "UndetectableDelimiter") continue;
+    const rowNumber = (err.row ?? 0) + 2;
+    fields[`row.${rowNumber}`] ??= `Row ${rowNumber}: ${err.message}`;
+  }
+  const badRows = new Set(Object.keys(fields).map((k) => k.split(".")[1]));
+  if (badRows.size) {
+    return { ok: false, message: `${badRows.size} row${badRows.size > 1 ? "s need" : " needs"} attention; nothing was imported.`, fields };
+  }
+  if (rows.length === 0) return { ok: false, message: "The CSV has a header but no parts.", fields: { csv: "Add at least one part under the header row." } };
+  if (rows.length > MAX_IMPORT_ROWS) return { ok: false, message: `Import up to ${MAX_IMPORT_ROWS} parts at a time.`, fields: { csv: `This file has ${rows.length} parts.` } };
+  return { ok: true, rows };
+}

@@ -1,0 +1,95 @@
+import { randomBytes } from "node:crypto";
+import fs from "node:fs/promises";
+import path from "node:path";
+import { fileTypeFromBuffer } from "file-type";
+import sharp from "sharp";
+import { databasePath } from "@/db/client";
+import { HttpError } from "@/lib/http/api";
+
+/**
+ * Photos and schematics of a job, kept outside public/ under random names. The type is sniffed
+ * from the bytes (file-type), never taken from the name or the browser's claim.
+ */
+
+export const MAX_UPLOAD_BYTES = 20 * 1024 * 1024;
+
+/** Sniffed MIME type → stored extension. PDF is for schematics; images may be either. */
+export const ALLOWED_TYPES: Record<string, string> = {
+  "image/jpeg": "jpg",
+  "image/png": "png",
+  "image/webp": "webp",
+  "application/pdf": "pdf",
+};
+
+export function uploadsDir(): string {
+  return path.resolve(/*turbopackIgnore: true*/ process.env.GLOWBENCH_UPLOADS || path.join(path.dirname(databasePath()), "uploads"));
+}
+
+/** A browser sends only a base name; anything with folders, "..", or control characters is refused. */
+export function checkOriginalName(name: string): string {
+  const trimmed = name.trim();
+  // eslint-disable-next-line no-control-regex
+  if (!trimmed || /[\/\\\u0000-\u001f\u007f]/.test(trimmed) || trimmed.includes("..") || trimmed.length > 200) {
+    throw new HttpError(400, "That file name is not accepted: use a plain name without folders or “..”, up to 200 characters.", {
+      file: "Rename the file to a plain name (letters, numbers, dashes) and try again.",
+    });
+  }
+  return trimmed;
+}
+
+export interface PreparedUpload {
+  type: string;
+  ext: string;
+  bytes: Buffer;
+  thumbnail: Buffer | null;
+}
+
+/** Checks size and content; nothing is written until every check has passed. */
+export async function prepareUpload(file: File): Promise<PreparedUpload> {
+  if (file.size === 0) throw new HttpError(400, "The file is empty.", { file: "Choose a file that is not empty." });
+  if (file.size > MAX_UPLOAD_BYTES) throw new HttpError(413, "Files may be up to 20 MB.", { file: "This file is over 20 MB; export a smaller copy." });
+  const bytes = Buffer.from(await file.arrayBuffer());
+  const sniffed = await fileTypeFromBuffer(bytes);
+  const type = sniffed?.mime;
+  if (!type || !ALLOWED_TYPES[type]) {
+    throw new HttpError(415, "Only JPEG, PNG or WebP photos and PDF or image schematics can be attached.", {
+      file: `This file's content is ${sniffed ? sniffed.mime : "not a photo or PDF"}, whatever its name says.`,
+    });
+  }
+  let thumbnail: Buffer | null = null;
+  if (type.startsWith("image/")) {
+    try {
+      thumbnail = await sharp(bytes).rotate().resize(480, 480, { fit: "inside", withoutEnlargement: true }).webp({ quality: 78 }).toBuffer();
+    } catch {
+      throw new HttpError(415, "That image could not be read; it may be damaged.", { file: "The image could not be opened; save it again and retry." });
+    }
+  }
+  return { type, ext: ALLOWED_TYPES[type], bytes, thumbnail };
+}
+
+export const thumbnailName = (storedName: string) => `${storedName}.thumb.webp`;
+
+/** Writes the file (and its thumbnail) under a fresh random name; returns the name. */
+export async function storeUpload(prepared: PreparedUpload): Promise<string> {
+  const dir = uploadsDir();
+  await fs.mkdir(dir, { recursive: true });
+  const storedName = `${randomBytes(16).toString("hex")}.${prepared.ext}`;
+  await fs.writeFile(path.join(dir, storedName), prepared.bytes, { flag: "wx" });
+  if (prepared.thumbnail) await fs.writeFile(path.join(dir, thumbnailName(storedName)), prepared.thumbnail, { flag: "wx" });
+  return storedName;
+}
+
+export async function removeStored(storedName: string): Promise<void> {
+  const dir = uploadsDir();
+  const base = path.basename(storedName);
+  await Promise.all([fs.rm(path.join(dir, base), { force: true }), fs.rm(path.join(dir, thumbnailName(base)), { force: true })]);
+}
+
+export async function readStored(storedName: string, thumb: boolean): Promise<Buffer | null> {
+  const base = path.basename(storedName);
+  try {
+    return await fs.readFile(path.join(uploadsDir(), thumb ? thumbnailName(base) : base));
+  } catch {
+    return null;
+  }
+}
