@@ -4,6 +4,7 @@ import net from "node:net";
 import os from "node:os";
 import path from "node:path";
 import type { TestProject } from "vitest/node";
+import { startFakePaymentService, type FakePaymentService } from "../../lib/payments/fake-service";
 
 /**
  * Starts the real production server (`next start`) once for the whole run, on a free loopback port,
@@ -15,6 +16,9 @@ declare module "vitest" {
   export interface ProvidedContext {
     baseUrl: string;
     dataDir: string;
+    /** The fake payment service's address and the webhook secret it signs with. */
+    paymentsUrl: string;
+    paymentsWebhookSecret: string;
   }
 }
 
@@ -45,15 +49,28 @@ async function waitFor(url: string, child: ChildProcess, ms = 60_000) {
 }
 
 let child: ChildProcess | undefined;
+let payments: FakePaymentService | undefined;
+
+const STRIPE_SECRET_KEY = "sk_test_glowbench_tests";
+const STRIPE_WEBHOOK_SECRET = "whsec_glowbench_tests_0123456789";
 
 export default async function setup(project: TestProject) {
   const root = process.cwd();
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-test-"));
   project.provide("dataDir", dataDir);
+  project.provide("paymentsWebhookSecret", STRIPE_WEBHOOK_SECRET);
   if (!fs.existsSync(path.join(root, ".next", "BUILD_ID"))) {
     project.provide("baseUrl", "");
+    project.provide("paymentsUrl", "");
     return;
   }
+  const port = await freePort();
+  payments = await startFakePaymentService({
+    secretKey: STRIPE_SECRET_KEY,
+    webhookSecret: STRIPE_WEBHOOK_SECRET,
+    webhookUrl: `http://127.0.0.1:${port}/api/payments/webhook`,
+  });
+  project.provide("paymentsUrl", payments.url);
   const dbFile = path.join(dataDir, "glowbench.db");
   const env = {
     ...process.env,
@@ -62,12 +79,14 @@ export default async function setup(project: TestProject) {
     GLOWBENCH_TRUST_PROXY: "1",
     GLOWBENCH_UPLOADS: path.join(dataDir, "uploads"),
     SESSION_SECRET: "test-secret-test-secret-test-secret-0123456789",
+    STRIPE_SECRET_KEY,
+    STRIPE_WEBHOOK_SECRET,
+    STRIPE_API_BASE: payments.url,
   };
   // Seed before the server opens the file, through the same code as `npm run db:seed`.
   const seed = spawn(process.execPath, [path.join(root, "node_modules/tsx/dist/cli.mjs"), "db/seed.ts"], { env, stdio: "inherit" });
   await new Promise<void>((resolve, reject) => seed.on("exit", (code) => (code === 0 ? resolve() : reject(new Error(`seed exited ${code}`)))));
 
-  const port = await freePort();
   child = spawn(process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-p", String(port), "-H", "127.0.0.1"], {
     env: { ...env, PORT: String(port) },
     stdio: ["ignore", "pipe", "pipe"],
@@ -80,6 +99,7 @@ export default async function setup(project: TestProject) {
   project.provide("baseUrl", baseUrl);
   return async () => {
     child?.kill("SIGTERM");
+    await payments?.close();
     await new Promise((r) => setTimeout(r, 300));
   };
 }

@@ -1,0 +1,6 @@
+/** Runs once when the server starts (Next.js instrumentation): local stand-ins for outside services. */
+export async function register() {
+  if (process.env.NEXT_RUNTIME !== "nodejs") return;
+  const { startLocalPaymentsIfWanted } = await import("./lib/payments/dev-start");
+  await startLocalPaymentsIfWanted();
+}

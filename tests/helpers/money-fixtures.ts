@@ -1,0 +1,66 @@
+import Database from "better-sqlite3";
+import path from "node:path";
+import { inject } from "vitest";
+import { Client } from "./http";
+
+/**
+ * Arranging rows for the estimate, invoice and payment tests. Acts and assertions go through the real
+ * server; only the arrangement (a job in a given state, a workshop's rates) is written straight into the
+ * test database the server uses, so these tests do not depend on other areas' editing screens.
+ */
+
+let db: Database.Database | undefined;
+export function testDb(): Database.Database {
+  db ??= new Database(path.join(inject("dataDir"), "glowbench.db"));
+  db.pragma("busy_timeout = 5000");
+  return db;
+}
+
+let counter = 0;
+const unique = () => `${Date.now().toString(36)}${(counter++).toString(36)}${Math.random().toString(36).slice(2, 6)}`;
+
+/** A fresh workshop of our own through sign-up, charging £45.00/h with 20% tax. */
+export async function ownWorkshop(label: string) {
+  const owner = new Client({ "x-forwarded-for": `198.18.${Math.floor(Math.random() * 250)}.${Math.floor(Math.random() * 250)}` });
+  const email = `${label}-${unique()}@money.test`;
+  const res = await owner.post("/api/auth/sign-up", { workshopName: `${label} Valve Bench`, name: `${label} Owner`, email, password: "a sturdy passphrase" });
+  if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${await res.text()}`);
+  const { workshop } = await res.json();
+  testDb().prepare("UPDATE workshops SET currency = 'GBP', hourly_rate_minor = 4500, tax_rate_bp = 2000 WHERE id = ?").run(workshop.id);
+  return { owner, workshopId: workshop.id as number, email };
+}
+
+export function workshopIdByName(name: string): number {
+  return (testDb().prepare("SELECT id FROM workshops WHERE name = ?").get(name) as { id: number }).id;
+}
+
+export interface JobFixture {
+  status?: string;
+  customerEmail?: string | null;
+  parts?: { designator: string; unitCostMinor: number | null }[];
+}
+
+/** A job with a customer and parts, in the given state. Returns the job and part ids. */
+export function createJob(workshopId: number, fixture: JobFixture = {}) {
+  const d = testDb();
+  const job = d
+    .prepare("INSERT INTO jobs (workshop_id, title, equipment_kind, customer_name, customer_email, status) VALUES (?, ?, 'table-radio', 'Iona Testwell', ?, ?) RETURNING id")
+    .get(workshopId, `Test set ${unique()}`, fixture.customerEmail === undefined ? `iona-${unique()}@example.com` : fixture.customerEmail, fixture.status ?? "inspecting") as { id: number };
+  const partIds = (fixture.parts ?? []).map(
+    (p) =>
+      (
+        d
+          .prepare("INSERT INTO parts (job_id, workshop_id, designator, kind, replacement_value, replacement_rating, unit_cost_minor) VALUES (?, ?, ?, 'paper', '0.047 µF', '630 V', ?) RETURNING id")
+          .get(job.id, workshopId, p.designator, p.unitCostMinor) as { id: number }
+      ).id,
+  );
+  return { jobId: job.id, partIds };
+}
+
+export function setJobStatus(jobId: number, status: string) {
+  testDb().prepare("UPDATE jobs SET status = ? WHERE id = ?").run(status, jobId);
+}
+
+export function logTexts(jobId: number, kind: string): string[] {
+  return (testDb().prepare("SELECT text FROM log_entries WHERE job_id = ? AND kind = ? ORDER BY id").all(jobId, kind) as { text: string }[]).map((r) => r.text);
+}
