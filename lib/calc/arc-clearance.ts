@@ -117,42 +117,8 @@ export const calculator = defineCalculator({
     const delta = relativeAirDensity(p, t);
     const minimumGap = gapForVolts(v, delta);
     const recommendedClearance = minimumGap * k;
-    const sqrtDd = Math.sqrt(delta * minimumGap * 100);
-
-    const steps: Step[] = [
-      {
-        label: "Relative air density",
-        latex: String.raw`\delta = \frac{${texQuantity(p / 1000, "kPa", 6)}}{101.325\,\mathrm{kPa}} \cdot \frac{293.15\,\mathrm{K}}{${texQuantity(t, "K", 5)}} = ${delta.toPrecision(4)}`,
-      },
-    ];
-
-    let breakdownVoltage: number | null = null;
-    let willArc: boolean | null = null;
-    if (gap !== undefined) {
-      breakdownVoltage = breakdownVolts(gap, delta);
-      willArc = v >= breakdownVoltage;
-      const dcm = gap * 100;
-      steps.push(
-        {
-          label: "Breakdown voltage of the gap",
-          latex: String.raw`V_b = 24.22 \times ${delta.toPrecision(4)} \times ${dcm.toPrecision(4)} + 6.08\sqrt{${delta.toPrecision(4)} \times ${dcm.toPrecision(4)}} = ${texQuantity(breakdownVoltage, "V")}`,
-        },
-        {
-          label: willArc ? "The gap arcs" : "The gap holds",
-          latex: String.raw`${texQuantity(v, "V")} ${willArc ? "\\ge" : "<"} ${texQuantity(breakdownVoltage, "V")}`,
-        },
-      );
-    }
-    steps.push(
-      {
-        label: "Minimum gap for the peak voltage",
-        latex: String.raw`\sqrt{\delta d} = \frac{-6.08 + \sqrt{6.08^2 + 4 \times 24.22 \times ${(v / 1000).toPrecision(4)}}}{2 \times 24.22} = ${sqrtDd.toPrecision(4)}, \quad d = \frac{${sqrtDd.toPrecision(4)}^2}{${delta.toPrecision(4)}}\,\mathrm{cm} = ${texQuantity(minimumGap, "m")}`,
-      },
-      {
-        label: "Recommended clearance",
-        latex: String.raw`d_{rec} = ${k} \times ${texQuantity(minimumGap, "m")} = ${texQuantity(recommendedClearance, "m")}`,
-      },
-    );
+    const breakdownVoltage = gap === undefined ? null : breakdownVolts(gap, delta);
+    const willArc = breakdownVoltage === null ? null : v >= breakdownVoltage;
 
     const warnings: Warning[] = [
       ALWAYS_DANGER,
@@ -188,6 +154,41 @@ export const calculator = defineCalculator({
       });
     }
 
-    return { outputs: { relativeAirDensity: delta, breakdownVoltage, willArc, minimumGap, recommendedClearance }, steps, warnings };
+    return { outputs: { relativeAirDensity: delta, breakdownVoltage, willArc, minimumGap, recommendedClearance }, warnings };
+  },
+  explain(input: ArcClearanceInput, o) {
+    const { peakVoltage: v, gap, pressure: p, temperature: t, safetyFactor: k } = input;
+    const { relativeAirDensity: delta, breakdownVoltage, willArc, minimumGap, recommendedClearance } = o;
+    const sqrtDd = Math.sqrt(delta * minimumGap * 100);
+    const steps: Step[] = [
+      {
+        label: "Relative air density",
+        latex: String.raw`\delta = \frac{${texQuantity(p / 1000, "kPa", 6)}}{101.325\,\mathrm{kPa}} \cdot \frac{293.15\,\mathrm{K}}{${texQuantity(t, "K", 5)}} = ${delta.toPrecision(4)}`,
+      },
+    ];
+    if (gap !== undefined && breakdownVoltage !== null) {
+      const dcm = gap * 100;
+      steps.push(
+        {
+          label: "Breakdown voltage of the gap",
+          latex: String.raw`V_b = 24.22 \times ${delta.toPrecision(4)} \times ${dcm.toPrecision(4)} + 6.08\sqrt{${delta.toPrecision(4)} \times ${dcm.toPrecision(4)}} = ${texQuantity(breakdownVoltage, "V")}`,
+        },
+        {
+          label: willArc ? "The gap arcs" : "The gap holds",
+          latex: String.raw`${texQuantity(v, "V")} ${willArc ? "\\ge" : "<"} ${texQuantity(breakdownVoltage, "V")}`,
+        },
+      );
+    }
+    steps.push(
+      {
+        label: "Minimum gap for the peak voltage",
+        latex: String.raw`\sqrt{\delta d} = \frac{-6.08 + \sqrt{6.08^2 + 4 \times 24.22 \times ${(v / 1000).toPrecision(4)}}}{2 \times 24.22} = ${sqrtDd.toPrecision(4)}, \quad d = \frac{${sqrtDd.toPrecision(4)}^2}{${delta.toPrecision(4)}}\,\mathrm{cm} = ${texQuantity(minimumGap, "m")}`,
+      },
+      {
+        label: "Recommended clearance",
+        latex: String.raw`d_{rec} = ${k} \times ${texQuantity(minimumGap, "m")} = ${texQuantity(recommendedClearance, "m")}`,
+      },
+    );
+    return steps;
   },
 });

@@ -79,42 +79,13 @@ export const calculator = defineCalculator({
     "the part is at the top of its tolerance — and even then you check with a meter before you touch anything.",
   compute(input: BleederInput) {
     const { capacitance: c, workingVoltage: vw, safeVoltage: vs, maxTime: t, tolerance: tol } = input;
-    const logRatio = Math.log(vw / vs);
-    const maxResistance = t / (c * logRatio);
-    const allowed = maxResistance / (1 + tol);
-    let r = preferredBelow(allowed, "E12");
+    const maxResistance = t / (c * Math.log(vw / vs));
+    let r = preferredBelow(maxResistance / (1 + tol), "E12");
     // preferredBelow treats values within 1e-9 as equal; keep the inequality strict.
     if (r * (1 + tol) > maxResistance) r = preferredBelow(r * (1 - 1e-6), "E12");
     const bleederCurrent = vw / r;
     const dissipation = (vw * vw) / r;
     const rating = suggestedRating(dissipation);
-    const worstTime = r * (1 + tol) * c * logRatio;
-    const energy = 0.5 * c * vw * vw;
-
-    const steps: Step[] = [
-      {
-        label: "Largest bleeder that meets the time",
-        latex: String.raw`R_{max} = \frac{t_{max}}{C\,\ln(V_w/V_{safe})} = \frac{${texQuantity(t, "s")}}{${texQuantity(c, "F")} \times \ln(${texQuantity(vw, "V")}/${texQuantity(vs, "V")})} = ${texQuantity(maxResistance, "Ω")}`,
-      },
-      {
-        label: "Allowing for tolerance",
-        latex: String.raw`R \le \frac{R_{max}}{1 + \text{tol}} = \frac{${texQuantity(maxResistance, "Ω")}}{1 + ${tol}} = ${texQuantity(allowed, "Ω")}`,
-      },
-      { label: "Largest E12 value at or below that", latex: String.raw`R = ${texQuantity(r, "Ω")}` },
-      {
-        label: "Check: discharge time with the part at +tolerance",
-        latex: String.raw`t = R\,(1 + \text{tol})\,C\,\ln\frac{V_w}{V_{safe}} = ${texQuantity(r * (1 + tol), "Ω")} \times ${texQuantity(c, "F")} \times ${logRatio.toPrecision(4)} = ${texQuantity(worstTime, "s")} \le ${texQuantity(t, "s")}`,
-      },
-      { label: "Bleeder current", latex: String.raw`I = \frac{V_w}{R} = \frac{${texQuantity(vw, "V")}}{${texQuantity(r, "Ω")}} = ${texQuantity(bleederCurrent, "A")}` },
-      { label: "Dissipation", latex: String.raw`P = \frac{V_w^2}{R} = \frac{(${texQuantity(vw, "V")})^2}{${texQuantity(r, "Ω")}} = ${texQuantity(dissipation, "W")}` },
-      {
-        label: "Suggested rating (at least twice the dissipation)",
-        latex: rating.rating === null
-          ? String.raw`2P = ${texQuantity(2 * dissipation, "W")} \text{ — above the largest standard rating}`
-          : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \;\Rightarrow\; ${texQuantity(rating.rating, "W")}`,
-      },
-      { label: "Energy stored at the working voltage", latex: String.raw`E = \tfrac{1}{2}\,C\,V_w^2 = \tfrac{1}{2} \times ${texQuantity(c, "F")} \times (${texQuantity(vw, "V")})^2 = ${texQuantity(energy, "J")}` },
-    ];
 
     const warnings: Warning[] = [
       ALWAYS_DANGER,
@@ -133,8 +104,39 @@ export const calculator = defineCalculator({
 
     return {
       outputs: { maxResistance, suggestedResistance: r, bleederCurrent, dissipation, suggestedRating: rating.rating },
-      steps,
       warnings,
     };
+  },
+  explain(input: BleederInput, o) {
+    const { capacitance: c, workingVoltage: vw, safeVoltage: vs, maxTime: t, tolerance: tol } = input;
+    const { maxResistance, suggestedResistance: r, bleederCurrent, dissipation } = o;
+    const logRatio = Math.log(vw / vs);
+    const allowed = maxResistance / (1 + tol);
+    const worstTime = r * (1 + tol) * c * logRatio;
+    const energy = 0.5 * c * vw * vw;
+    return [
+      {
+        label: "Largest bleeder that meets the time",
+        latex: String.raw`R_{max} = \frac{t_{max}}{C\,\ln(V_w/V_{safe})} = \frac{${texQuantity(t, "s")}}{${texQuantity(c, "F")} \times \ln(${texQuantity(vw, "V")}/${texQuantity(vs, "V")})} = ${texQuantity(maxResistance, "Ω")}`,
+      },
+      {
+        label: "Allowing for tolerance",
+        latex: String.raw`R \le \frac{R_{max}}{1 + \text{tol}} = \frac{${texQuantity(maxResistance, "Ω")}}{1 + ${tol}} = ${texQuantity(allowed, "Ω")}`,
+      },
+      { label: "Largest E12 value at or below that", latex: String.raw`R = ${texQuantity(r, "Ω")}` },
+      {
+        label: "Check: discharge time with the part at +tolerance",
+        latex: String.raw`t = R\,(1 + \text{tol})\,C\,\ln\frac{V_w}{V_{safe}} = ${texQuantity(r * (1 + tol), "Ω")} \times ${texQuantity(c, "F")} \times ${logRatio.toPrecision(4)} = ${texQuantity(worstTime, "s")} \le ${texQuantity(t, "s")}`,
+      },
+      { label: "Bleeder current", latex: String.raw`I = \frac{V_w}{R} = \frac{${texQuantity(vw, "V")}}{${texQuantity(r, "Ω")}} = ${texQuantity(bleederCurrent, "A")}` },
+      { label: "Dissipation", latex: String.raw`P = \frac{V_w^2}{R} = \frac{(${texQuantity(vw, "V")})^2}{${texQuantity(r, "Ω")}} = ${texQuantity(dissipation, "W")}` },
+      {
+        label: "Suggested rating (at least twice the dissipation)",
+        latex: o.suggestedRating === null
+          ? String.raw`2P = ${texQuantity(2 * dissipation, "W")} \text{ — above the largest standard rating}`
+          : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \;\Rightarrow\; ${texQuantity(o.suggestedRating, "W")}`,
+      },
+      { label: "Energy stored at the working voltage", latex: String.raw`E = \tfrac{1}{2}\,C\,V_w^2 = \tfrac{1}{2} \times ${texQuantity(c, "F")} \times (${texQuantity(vw, "V")})^2 = ${texQuantity(energy, "J")}` },
+    ] satisfies Step[];
   },
 });

@@ -162,32 +162,6 @@ export const calculator = defineCalculator({
     const rating = suggestedRating(dissipation);
     const pref = nearestPreferred(cathodeResistance, "E12");
 
-    const steps: Step[] = [
-      {
-        label: "Cathode current",
-        latex: String.raw`I_k = ${texQuantity(ip, "A", 4)} + ${texQuantity(ig2, "A", 4)} = ${texQuantity(cathodeCurrent, "A", 4)}`,
-      },
-      {
-        label: "Cathode resistance",
-        latex: String.raw`R_k = \frac{${texQuantity(vk, "V", 4)}}{${texQuantity(cathodeCurrent, "A", 4)}} = ${texQuantity(cathodeResistance, "Ω", 4)}`,
-      },
-      {
-        label: "Dissipation",
-        latex: String.raw`P = (${texQuantity(cathodeCurrent, "A", 4)})^2 \times ${texQuantity(cathodeResistance, "Ω", 4)} = ${texQuantity(dissipation, "W")}`,
-      },
-      {
-        label: "Suggested rating",
-        latex:
-          rating.rating === null
-            ? String.raw`2P = ${texQuantity(2 * dissipation, "W")}\ \text{(beyond the standard ratings)}`
-            : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \Rightarrow ${texQuantity(rating.rating, "W")}`,
-      },
-      {
-        label: "Nearest E12 value and the bias it gives at the same current",
-        latex: String.raw`R_\text{pref} = ${texQuantity(pref, "Ω")},\quad V_k' \approx ${texQuantity(pref * cathodeCurrent, "V")}`,
-      },
-    ];
-
     const warnings: Warning[] = [ALWAYS_DANGER];
     if (rating.warning) warnings.push(rating.warning);
 
@@ -195,23 +169,7 @@ export const calculator = defineCalculator({
     if (ck !== undefined) {
       const b = bypassResistance(cathodeResistance, input);
       bypassCornerFrequency = 1 / (2 * Math.PI * b.r * ck);
-      if (b.model === "triode") {
-        steps.push({
-          label: "Resistance looking into the cathode (triode)",
-          latex: String.raw`\frac{r_p + R_a}{\mu + 1} = \frac{${texQuantity(input.plateResistance as number, "Ω")} + ${texQuantity(input.plateLoad as number, "Ω")}}{${input.amplificationFactor} + 1} = ${texQuantity(b.rCathode as number, "Ω")}`,
-        });
-      } else if (b.model === "pentode") {
-        steps.push({
-          label: "Resistance looking into the cathode (pentode)",
-          latex: String.raw`\frac{1}{g_m} = \frac{1}{${texQuantity(input.transconductance as number, "S")}} = ${texQuantity(b.rCathode as number, "Ω")}`,
-        });
-      }
-      if (b.model !== "rk") {
-        steps.push({
-          label: "Resistance the capacitor sees",
-          latex: String.raw`R = ${texQuantity(cathodeResistance, "Ω")} \parallel ${texQuantity(b.rCathode as number, "Ω")} = ${texQuantity(b.r, "Ω")}`,
-        });
-      } else {
+      if (b.model === "rk") {
         warnings.push({
           level: "caution",
           message:
@@ -219,10 +177,6 @@ export const calculator = defineCalculator({
             "The tube's cathode lowers the resistance the capacitor sees, so Rk alone underestimates the corner frequency: the real corner is higher.",
         });
       }
-      steps.push({
-        label: "Bypass corner frequency",
-        latex: String.raw`f = \frac{1}{2\pi \times ${texQuantity(b.r, "Ω")} \times ${texQuantity(ck, "F")}} = ${texQuantity(bypassCornerFrequency, "Hz")}`,
-      });
       if (bypassCornerFrequency > 20) {
         warnings.push({
           level: "info",
@@ -246,8 +200,60 @@ export const calculator = defineCalculator({
         nearestPreferred: pref,
         bypassCornerFrequency,
       },
-      steps,
       warnings,
     };
+  },
+  explain(input: CathodeBiasInput, o) {
+    const { biasVoltage: vk, plateCurrent: ip, screenCurrent: ig2, bypassCapacitance: ck } = input;
+    const { cathodeCurrent, cathodeResistance, dissipation, nearestPreferred: pref } = o;
+    const steps: Step[] = [
+      {
+        label: "Cathode current",
+        latex: String.raw`I_k = ${texQuantity(ip, "A", 4)} + ${texQuantity(ig2, "A", 4)} = ${texQuantity(cathodeCurrent, "A", 4)}`,
+      },
+      {
+        label: "Cathode resistance",
+        latex: String.raw`R_k = \frac{${texQuantity(vk, "V", 4)}}{${texQuantity(cathodeCurrent, "A", 4)}} = ${texQuantity(cathodeResistance, "Ω", 4)}`,
+      },
+      {
+        label: "Dissipation",
+        latex: String.raw`P = (${texQuantity(cathodeCurrent, "A", 4)})^2 \times ${texQuantity(cathodeResistance, "Ω", 4)} = ${texQuantity(dissipation, "W")}`,
+      },
+      {
+        label: "Suggested rating",
+        latex:
+          o.suggestedRating === null
+            ? String.raw`2P = ${texQuantity(2 * dissipation, "W")}\ \text{(beyond the standard ratings)}`
+            : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \Rightarrow ${texQuantity(o.suggestedRating, "W")}`,
+      },
+      {
+        label: "Nearest E12 value and the bias it gives at the same current",
+        latex: String.raw`R_\text{pref} = ${texQuantity(pref, "Ω")},\quad V_k' \approx ${texQuantity(pref * cathodeCurrent, "V")}`,
+      },
+    ];
+    if (ck === undefined || o.bypassCornerFrequency === null) return steps;
+    const b = bypassResistance(cathodeResistance, input);
+    if (b.model === "triode") {
+      steps.push({
+        label: "Resistance looking into the cathode (triode)",
+        latex: String.raw`\frac{r_p + R_a}{\mu + 1} = \frac{${texQuantity(input.plateResistance as number, "Ω")} + ${texQuantity(input.plateLoad as number, "Ω")}}{${input.amplificationFactor} + 1} = ${texQuantity(b.rCathode as number, "Ω")}`,
+      });
+    } else if (b.model === "pentode") {
+      steps.push({
+        label: "Resistance looking into the cathode (pentode)",
+        latex: String.raw`\frac{1}{g_m} = \frac{1}{${texQuantity(input.transconductance as number, "S")}} = ${texQuantity(b.rCathode as number, "Ω")}`,
+      });
+    }
+    if (b.model !== "rk") {
+      steps.push({
+        label: "Resistance the capacitor sees",
+        latex: String.raw`R = ${texQuantity(cathodeResistance, "Ω")} \parallel ${texQuantity(b.rCathode as number, "Ω")} = ${texQuantity(b.r, "Ω")}`,
+      });
+    }
+    steps.push({
+      label: "Bypass corner frequency",
+      latex: String.raw`f = \frac{1}{2\pi \times ${texQuantity(b.r, "Ω")} \times ${texQuantity(ck, "F")}} = ${texQuantity(o.bypassCornerFrequency, "Hz")}`,
+    });
+    return steps;
   },
 });

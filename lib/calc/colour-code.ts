@@ -188,20 +188,8 @@ export const calculator = defineCalculator({
     "the part should be before you measure it; coding a value tells you what to look for in the parts drawer. " +
     "If a reading makes no sense, try the bands from the other end — and when colours are doubtful, trust the schematic and your meter.",
   compute(input: ColourCodeInput) {
-    const coded = input.bands
-      ? decodeBands(input.bands)
-      : encodeResistance(input.resistance as number, input.tolerance ?? DEFAULT_TOLERANCE);
-    if (!coded.ok) throw new Error(coded.message); // the schema has already refused this
-    const { digits, exponent, resistance, tolerance, colours } = coded;
-    const significand = digits.join("");
-    const steps: Step[] = [
-      { label: "Bands", latex: String.raw`\text{${colours.join(", ")}}` },
-      {
-        label: "Figures and multiplier",
-        latex: String.raw`R = ${significand}\times 10^{${exponent}}\,\Omega = ${texQuantity(resistance, "Ω")}`,
-      },
-      { label: "Tolerance", latex: String.raw`\pm ${pct(tolerance)}\quad(${texQuantity(resistance * (1 - tolerance), "Ω")}\ \text{to}\ ${texQuantity(resistance * (1 + tolerance), "Ω")})` },
-    ];
+    const coded = code(input);
+    const { digits, resistance, tolerance, colours } = coded;
     const warnings: Warning[] = [];
     if (input.bands && input.tolerance !== undefined && Math.abs(input.tolerance - tolerance) > 1e-12) {
       warnings.push({ level: "info", message: "The tolerance field is ignored when reading bands; the last band sets it." });
@@ -214,9 +202,28 @@ export const calculator = defineCalculator({
       level: "info",
       message: "Heat darkens old bands: red can pass for brown and orange for red. Check with a meter out of circuit.",
     });
-    return { outputs: { resistance, tolerance, bands: colours as string[] }, steps, warnings };
+    return { outputs: { resistance, tolerance, bands: colours as string[] }, warnings };
+  },
+  explain(input: ColourCodeInput) {
+    const { digits, exponent, resistance, tolerance, colours } = code(input);
+    return [
+      { label: "Bands", latex: String.raw`\text{${colours.join(", ")}}` },
+      {
+        label: "Figures and multiplier",
+        latex: String.raw`R = ${digits.join("")}\times 10^{${exponent}}\,\Omega = ${texQuantity(resistance, "Ω")}`,
+      },
+      { label: "Tolerance", latex: String.raw`\pm ${pct(tolerance)}\quad(${texQuantity(resistance * (1 - tolerance), "Ω")}\ \text{to}\ ${texQuantity(resistance * (1 + tolerance), "Ω")})` },
+    ] satisfies Step[];
   },
 });
+
+function code(input: ColourCodeInput): Decoded {
+  const coded = input.bands
+    ? decodeBands(input.bands)
+    : encodeResistance(input.resistance as number, input.tolerance ?? DEFAULT_TOLERANCE);
+  if (!coded.ok) throw new Error(coded.message); // the schema has already refused this
+  return coded;
+}
 
 /** The five-band form of a two-figure value (4.7 k → yellow, violet, black, brown, …). */
 function encodeFive(resistance: number, tolerance: number): Colour[] | null {

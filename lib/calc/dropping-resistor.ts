@@ -90,28 +90,6 @@ export const calculator = defineCalculator({
     const pref = nearestPreferred(resistance, "E12");
     const raw = vs - i * pref;
     const loadVoltageWithPreferred = Math.max(0, raw);
-    const steps: Step[] = [
-      {
-        label: "Resistance",
-        latex: String.raw`R = \frac{${texQuantity(vs, "V", 4)} - ${texQuantity(vl, "V", 4)}}{${texQuantity(i, "A", 4)}} = ${texQuantity(resistance, "Ω", 4)}`,
-      },
-      {
-        label: "Dissipation",
-        latex: String.raw`P = (${texQuantity(i, "A", 4)})^2 \times ${texQuantity(resistance, "Ω", 4)} = ${texQuantity(dissipation, "W")}`,
-      },
-      {
-        label: "Suggested rating",
-        latex:
-          rating.rating === null
-            ? String.raw`2P = ${texQuantity(2 * dissipation, "W")}\ \text{(beyond the standard ratings)}`
-            : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \Rightarrow ${texQuantity(rating.rating, "W")}`,
-      },
-      { label: "Nearest E12 value", latex: String.raw`R_\text{pref} = ${texQuantity(pref, "Ω")}` },
-      {
-        label: "Stage voltage with the E12 value (load taken as a constant current)",
-        latex: String.raw`V_l' = ${texQuantity(vs, "V", 4)} - ${texQuantity(i, "A", 4)} \times ${texQuantity(pref, "Ω")} = ${texQuantity(loadVoltageWithPreferred, "V", 4)}`,
-      },
-    ];
     const warnings: Warning[] = [...highVoltageWarning(vs, vl)];
     if (rating.warning) warnings.push(rating.warning);
     warnings.push({
@@ -132,8 +110,33 @@ export const calculator = defineCalculator({
     });
     return {
       outputs: { resistance, dissipation, suggestedRating: rating.rating, nearestPreferred: pref, loadVoltageWithPreferred },
-      steps,
       warnings,
     };
+  },
+  explain(input: DroppingResistorInput, o) {
+    const { supplyVoltage: vs, loadVoltage: vl, loadCurrent: i } = input;
+    const { resistance, dissipation, nearestPreferred: pref, loadVoltageWithPreferred } = o;
+    return [
+      {
+        label: "Resistance",
+        latex: String.raw`R = \frac{${texQuantity(vs, "V", 4)} - ${texQuantity(vl, "V", 4)}}{${texQuantity(i, "A", 4)}} = ${texQuantity(resistance, "Ω", 4)}`,
+      },
+      {
+        label: "Dissipation",
+        latex: String.raw`P = (${texQuantity(i, "A", 4)})^2 \times ${texQuantity(resistance, "Ω", 4)} = ${texQuantity(dissipation, "W")}`,
+      },
+      {
+        label: "Suggested rating",
+        latex:
+          o.suggestedRating === null
+            ? String.raw`2P = ${texQuantity(2 * dissipation, "W")}\ \text{(beyond the standard ratings)}`
+            : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \Rightarrow ${texQuantity(o.suggestedRating, "W")}`,
+      },
+      { label: "Nearest E12 value", latex: String.raw`R_\text{pref} = ${texQuantity(pref, "Ω")}` },
+      {
+        label: "Stage voltage with the E12 value (load taken as a constant current)",
+        latex: String.raw`V_l' = ${texQuantity(vs, "V", 4)} - ${texQuantity(i, "A", 4)} \times ${texQuantity(pref, "Ω")} = ${texQuantity(loadVoltageWithPreferred, "V", 4)}`,
+      },
+    ] satisfies Step[];
   },
 });

@@ -103,18 +103,16 @@ export const calculator = defineCalculator({
     "resistor wrong, over-runs some heaters and under-runs others — and one open heater darkens the whole set.",
   compute(input: HeaterStringInput) {
     const vLine = input.lineVoltage;
-    const fromTubes = !(input.heaters && input.heaters.length > 0);
-    const list = fromTubes
-      ? (input.tubes ?? []).map((name) => {
-          const h = findHeater(name)!;
-          return { label: name, voltage: h.voltage, current: h.current };
-        })
-      : input.heaters!.map((h, k) => ({ label: `heater ${k + 1}`, ...h }));
-
-    const stringVoltage = tidy(list.reduce((sum, h) => sum + h.voltage, 0));
-    const currents = list.map((h) => h.current);
-    const iMin = Math.min(...currents);
-    const iMax = Math.max(...currents);
+    const list = heaterList(input);
+    let sum = 0;
+    let iMin = Infinity;
+    let iMax = -Infinity;
+    for (const h of list) {
+      sum += h.voltage;
+      if (h.current < iMin) iMin = h.current;
+      if (h.current > iMax) iMax = h.current;
+    }
+    const stringVoltage = tidy(sum);
     const currentsMatch = iMax <= iMin * (1 + MATCH);
     const stringCurrent = iMin;
     const excess = vLine - stringVoltage;
@@ -122,38 +120,6 @@ export const calculator = defineCalculator({
     const droppingResistance = needed ? excess / stringCurrent : 0;
     const dissipation = needed ? excess * stringCurrent : 0;
     const rating = needed ? suggestedRating(dissipation) : { rating: 0, warning: null };
-
-    const terms = list.map((h) => texQuantity(h.voltage, "V")).join(" + ");
-    const steps: Step[] = [
-      { label: "String voltage", latex: String.raw`V_{string} = ${terms} = ${texQuantity(stringVoltage, "V", 4)}` },
-      {
-        label: currentsMatch ? "String current (all heaters rated alike)" : "String current (lowest rated heater current)",
-        latex: String.raw`I = ${texQuantity(stringCurrent, "A")}`,
-      },
-    ];
-    if (needed) {
-      steps.push(
-        {
-          label: "Dropping resistor",
-          latex: String.raw`R = \frac{V_{line} - V_{string}}{I} = \frac{${texQuantity(vLine, "V")} - ${texQuantity(stringVoltage, "V")}}{${texQuantity(stringCurrent, "A")}} = ${texQuantity(droppingResistance, "Ω")}`,
-        },
-        {
-          label: "Dissipation",
-          latex: String.raw`P = (V_{line} - V_{string})\,I = ${texQuantity(excess, "V")} \times ${texQuantity(stringCurrent, "A")} = ${texQuantity(dissipation, "W")}`,
-        },
-        {
-          label: "Suggested rating (at least twice the dissipation)",
-          latex: rating.rating === null
-            ? String.raw`2P = ${texQuantity(2 * dissipation, "W")} \text{ — above the largest standard rating}`
-            : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \;\Rightarrow\; ${texQuantity(rating.rating, "W")}`,
-        },
-      );
-    } else {
-      steps.push({
-        label: "No dropping resistor",
-        latex: String.raw`V_{string} = ${texQuantity(stringVoltage, "V", 4)} \ge V_{line} = ${texQuantity(vLine, "V")} \;\Rightarrow\; R = 0`,
-      });
-    }
 
     const warnings: Warning[] = [...highVoltageWarning(vLine)];
     if (vLine > 50) {
@@ -191,8 +157,49 @@ export const calculator = defineCalculator({
 
     return {
       outputs: { stringVoltage, stringCurrent, currentsMatch, droppingResistance, dissipation, suggestedRating: rating.rating },
-      steps,
       warnings,
     };
   },
+  explain(input: HeaterStringInput, o) {
+    const vLine = input.lineVoltage;
+    const { stringVoltage, stringCurrent, currentsMatch, droppingResistance, dissipation } = o;
+    const terms = heaterList(input).map((h) => texQuantity(h.voltage, "V")).join(" + ");
+    const steps: Step[] = [
+      { label: "String voltage", latex: String.raw`V_{string} = ${terms} = ${texQuantity(stringVoltage, "V", 4)}` },
+      {
+        label: currentsMatch ? "String current (all heaters rated alike)" : "String current (lowest rated heater current)",
+        latex: String.raw`I = ${texQuantity(stringCurrent, "A")}`,
+      },
+    ];
+    if (vLine - stringVoltage > 0) {
+      steps.push(
+        {
+          label: "Dropping resistor",
+          latex: String.raw`R = \frac{V_{line} - V_{string}}{I} = \frac{${texQuantity(vLine, "V")} - ${texQuantity(stringVoltage, "V")}}{${texQuantity(stringCurrent, "A")}} = ${texQuantity(droppingResistance, "Ω")}`,
+        },
+        {
+          label: "Dissipation",
+          latex: String.raw`P = (V_{line} - V_{string})\,I = ${texQuantity(vLine - stringVoltage, "V")} \times ${texQuantity(stringCurrent, "A")} = ${texQuantity(dissipation, "W")}`,
+        },
+        {
+          label: "Suggested rating (at least twice the dissipation)",
+          latex: o.suggestedRating === null
+            ? String.raw`2P = ${texQuantity(2 * dissipation, "W")} \text{ — above the largest standard rating}`
+            : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \;\Rightarrow\; ${texQuantity(o.suggestedRating, "W")}`,
+        },
+      );
+    } else {
+      steps.push({
+        label: "No dropping resistor",
+        latex: String.raw`V_{string} = ${texQuantity(stringVoltage, "V", 4)} \ge V_{line} = ${texQuantity(vLine, "V")} \;\Rightarrow\; R = 0`,
+      });
+    }
+    return steps;
+  },
 });
+
+/** The heaters as voltage and current, from the table when tubes are named. */
+function heaterList(input: HeaterStringInput): { voltage: number; current: number }[] {
+  if (input.heaters && input.heaters.length > 0) return input.heaters;
+  return (input.tubes ?? []).map((name) => findHeater(name)!);
+}

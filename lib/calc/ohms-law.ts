@@ -23,14 +23,15 @@ export interface OhmsValues {
   power: number;
 }
 
-type Solved = { ok: true; values: OhmsValues; formulas: { name: Name; tex: string; sub: string }[] } | { ok: false; field: Name; message: string };
+/** `sub` is typeset only when the working is shown: the schema solves too, just to refuse impossible pairs. */
+type Solved = { ok: true; values: OhmsValues; formulas: { name: Name; tex: string; sub: () => string }[] } | { ok: false; field: Name; message: string };
 
 const tq = (v: number, u: string) => texQuantity(v, u, 4);
 
 /** Solve from exactly two known values. Pure; the schema calls it to refuse impossible pairs. */
 export function solveOhms(k: Partial<OhmsValues>): Solved {
   const { voltage: v, current: i, resistance: r, power: p } = k;
-  const done = (values: OhmsValues, formulas: { name: Name; tex: string; sub: string }[]): Solved => {
+  const done = (values: OhmsValues, formulas: { name: Name; tex: string; sub: () => string }[]): Solved => {
     for (const n of NAMES) {
       if (!Number.isFinite(values[n])) {
         return { ok: false, field: NAMES.find((m) => k[m] !== undefined) as Name, message: "These two values are too far apart to combine; the result would overflow" };
@@ -51,16 +52,16 @@ export function solveOhms(k: Partial<OhmsValues>): Solved {
     const res = v / i;
     const pw = v * i;
     return done({ voltage: v, current: i, resistance: res, power: pw }, [
-      { name: "resistance", tex: "R = V/I", sub: `R = \\frac{${tq(v, "V")}}{${tq(i, "A")}} = ${tq(res, "Ω")}` },
-      { name: "power", tex: "P = V I", sub: `P = ${tq(v, "V")} \\times ${tq(i, "A")} = ${tq(pw, "W")}` },
+      { name: "resistance", tex: "R = V/I", sub: () => `R = \\frac{${tq(v, "V")}}{${tq(i, "A")}} = ${tq(res, "Ω")}` },
+      { name: "power", tex: "P = V I", sub: () => `P = ${tq(v, "V")} \\times ${tq(i, "A")} = ${tq(pw, "W")}` },
     ]);
   }
   if (v !== undefined && r !== undefined) {
     const cur = v / r;
     const pw = (v * v) / r;
     return done({ voltage: v, current: cur, resistance: r, power: pw }, [
-      { name: "current", tex: "I = V/R", sub: `I = \\frac{${tq(v, "V")}}{${tq(r, "Ω")}} = ${tq(cur, "A")}` },
-      { name: "power", tex: "P = V^2/R", sub: `P = \\frac{(${tq(v, "V")})^2}{${tq(r, "Ω")}} = ${tq(pw, "W")}` },
+      { name: "current", tex: "I = V/R", sub: () => `I = \\frac{${tq(v, "V")}}{${tq(r, "Ω")}} = ${tq(cur, "A")}` },
+      { name: "power", tex: "P = V^2/R", sub: () => `P = \\frac{(${tq(v, "V")})^2}{${tq(r, "Ω")}} = ${tq(pw, "W")}` },
     ]);
   }
   if (v !== undefined && p !== undefined) {
@@ -70,16 +71,16 @@ export function solveOhms(k: Partial<OhmsValues>): Solved {
     const res = (v * v) / p;
     const cur = p / v;
     return done({ voltage: v, current: cur, resistance: res, power: p }, [
-      { name: "resistance", tex: "R = V^2/P", sub: `R = \\frac{(${tq(v, "V")})^2}{${tq(p, "W")}} = ${tq(res, "Ω")}` },
-      { name: "current", tex: "I = P/V", sub: `I = \\frac{${tq(p, "W")}}{${tq(v, "V")}} = ${tq(cur, "A")}` },
+      { name: "resistance", tex: "R = V^2/P", sub: () => `R = \\frac{(${tq(v, "V")})^2}{${tq(p, "W")}} = ${tq(res, "Ω")}` },
+      { name: "current", tex: "I = P/V", sub: () => `I = \\frac{${tq(p, "W")}}{${tq(v, "V")}} = ${tq(cur, "A")}` },
     ]);
   }
   if (i !== undefined && r !== undefined) {
     const volt = i * r;
     const pw = i * i * r;
     return done({ voltage: volt, current: i, resistance: r, power: pw }, [
-      { name: "voltage", tex: "V = I R", sub: `V = ${tq(i, "A")} \\times ${tq(r, "Ω")} = ${tq(volt, "V")}` },
-      { name: "power", tex: "P = I^2 R", sub: `P = (${tq(i, "A")})^2 \\times ${tq(r, "Ω")} = ${tq(pw, "W")}` },
+      { name: "voltage", tex: "V = I R", sub: () => `V = ${tq(i, "A")} \\times ${tq(r, "Ω")} = ${tq(volt, "V")}` },
+      { name: "power", tex: "P = I^2 R", sub: () => `P = (${tq(i, "A")})^2 \\times ${tq(r, "Ω")} = ${tq(pw, "W")}` },
     ]);
   }
   if (i !== undefined && p !== undefined) {
@@ -89,16 +90,16 @@ export function solveOhms(k: Partial<OhmsValues>): Solved {
     const res = p / (i * i);
     const volt = p / i;
     return done({ voltage: volt, current: i, resistance: res, power: p }, [
-      { name: "resistance", tex: "R = P/I^2", sub: `R = \\frac{${tq(p, "W")}}{(${tq(i, "A")})^2} = ${tq(res, "Ω")}` },
-      { name: "voltage", tex: "V = P/I", sub: `V = \\frac{${tq(p, "W")}}{${tq(i, "A")}} = ${tq(volt, "V")}` },
+      { name: "resistance", tex: "R = P/I^2", sub: () => `R = \\frac{${tq(p, "W")}}{(${tq(i, "A")})^2} = ${tq(res, "Ω")}` },
+      { name: "voltage", tex: "V = P/I", sub: () => `V = \\frac{${tq(p, "W")}}{${tq(i, "A")}} = ${tq(volt, "V")}` },
     ]);
   }
   if (r !== undefined && p !== undefined) {
     const volt = Math.sqrt(p * r);
     const cur = Math.sqrt(p / r);
     return done({ voltage: volt, current: cur, resistance: r, power: p }, [
-      { name: "voltage", tex: "V = \\sqrt{P R}", sub: `V = \\sqrt{${tq(p, "W")} \\times ${tq(r, "Ω")}} = ${tq(volt, "V")}` },
-      { name: "current", tex: "I = \\sqrt{P/R}", sub: `I = \\sqrt{\\frac{${tq(p, "W")}}{${tq(r, "Ω")}}} = ${tq(cur, "A")}` },
+      { name: "voltage", tex: "V = \\sqrt{P R}", sub: () => `V = \\sqrt{${tq(p, "W")} \\times ${tq(r, "Ω")}} = ${tq(volt, "V")}` },
+      { name: "current", tex: "I = \\sqrt{P/R}", sub: () => `I = \\sqrt{\\frac{${tq(p, "W")}}{${tq(r, "Ω")}}} = ${tq(cur, "A")}` },
     ]);
   }
   return { ok: false, field: "voltage", message: "Enter exactly two of voltage, current, resistance and power" };
@@ -160,16 +161,21 @@ export const calculator = defineCalculator({
   compute(input: OhmsLawInput) {
     const solved = solveOhms(input);
     if (!solved.ok) throw new Error(solved.message); // the schema has already refused this
-    const { values, formulas } = solved;
-    const steps: Step[] = [];
-    for (const f of formulas) {
-      steps.push({ label: `${LABEL[f.name][0].toUpperCase()}${LABEL[f.name].slice(1)}: formula`, latex: f.tex });
-      steps.push({ label: `${LABEL[f.name][0].toUpperCase()}${LABEL[f.name].slice(1)}: with your values`, latex: f.sub });
-    }
-    const warnings: Warning[] = [...highVoltageWarning(values.voltage)];
+    const warnings: Warning[] = [...highVoltageWarning(solved.values.voltage)];
     if (input.resistance !== undefined && input.power !== undefined) {
       warnings.push({ level: "info", message: "From resistance and power alone the direction is unknown; voltage and current are given as positive." });
     }
-    return { outputs: { ...values }, steps, warnings };
+    return { outputs: { ...solved.values }, warnings };
+  },
+  explain(input: OhmsLawInput) {
+    const solved = solveOhms(input);
+    if (!solved.ok) return [];
+    const steps: Step[] = [];
+    for (const f of solved.formulas) {
+      const name = `${LABEL[f.name][0].toUpperCase()}${LABEL[f.name].slice(1)}`;
+      steps.push({ label: `${name}: formula`, latex: f.tex });
+      steps.push({ label: `${name}: with your values`, latex: f.sub() });
+    }
+    return steps;
   },
 });

@@ -109,7 +109,20 @@ export const calculator = defineCalculator({
     const errorOfNearest = (nearest - x) / x;
     const n = SERIES[series].length;
 
-    const steps: Step[] = [
+    const warnings: Warning[] = [];
+    if (below === above) {
+      warnings.push({ level: "info", message: `${texPlain(x)} is itself a member of ${series}.` });
+    }
+    warnings.push({
+      level: "info",
+      message: `${series} has ${n} values per decade; the step between neighbours is about ${((10 ** (1 / n) - 1) * 100).toFixed(0)} %.`,
+    });
+    return { outputs: { nearest, below, above, errorOfNearest }, warnings };
+  },
+  explain(input: PreferredValueInput, o) {
+    const { value: x, series } = input;
+    const { nearest, below, above, errorOfNearest } = o;
+    return [
       {
         label: `Neighbours in ${series}`,
         latex: String.raw`${texNumber(below)} \le ${texNumber(x, 4)} \le ${texNumber(above)}`,
@@ -123,17 +136,7 @@ export const calculator = defineCalculator({
         label: "Error of the nearest value",
         latex: String.raw`\varepsilon = \frac{${texNumber(nearest)} - ${texNumber(x, 4)}}{${texNumber(x, 4)}} = ${(errorOfNearest * 100).toFixed(2)}\,\%`,
       },
-    ];
-
-    const warnings: Warning[] = [];
-    if (below === above) {
-      warnings.push({ level: "info", message: `${texPlain(x)} is itself a member of ${series}.` });
-    }
-    warnings.push({
-      level: "info",
-      message: `${series} has ${n} values per decade; the step between neighbours is about ${((10 ** (1 / n) - 1) * 100).toFixed(0)} %.`,
-    });
-    return { outputs: { nearest, below, above, errorOfNearest }, steps, warnings };
+    ] satisfies Step[];
   },
 });
 

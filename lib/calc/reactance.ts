@@ -78,56 +78,55 @@ export const calculator = defineCalculator({
     "resonates where the two reactances are equal; changing either part moves the frequency by the square root.",
   compute(input: ReactanceInput) {
     const { frequency: f, capacitance: c, inductance: l } = input;
-    const steps: Step[] = [];
     const warnings: Warning[] = [];
-    let capacitiveReactance: number | null = null;
-    let inductiveReactance: number | null = null;
-    let resonantFrequency: number | null = null;
-
-    if (f !== undefined && c !== undefined) {
-      capacitiveReactance = 1 / (2 * Math.PI * f * c);
-      steps.push({
-        label: "Capacitive reactance",
-        latex: String.raw`X_C = \frac{1}{2\pi \times ${texQuantity(f, "Hz", 4)} \times ${texQuantity(c, "F", 4)}} = ${texQuantity(capacitiveReactance, "Ω", 4)}`,
-      });
-    }
-    if (f !== undefined && l !== undefined) {
-      inductiveReactance = 2 * Math.PI * f * l;
-      steps.push({
-        label: "Inductive reactance",
-        latex: String.raw`X_L = 2\pi \times ${texQuantity(f, "Hz", 4)} \times ${texQuantity(l, "H", 4)} = ${texQuantity(inductiveReactance, "Ω", 4)}`,
-      });
-    }
-    if (c !== undefined && l !== undefined) {
-      resonantFrequency = 1 / (2 * Math.PI * Math.sqrt(l * c));
-      const z0 = Math.sqrt(l / c);
-      steps.push(
-        {
-          label: "Resonant frequency",
-          latex: String.raw`f_0 = \frac{1}{2\pi\sqrt{${texQuantity(l, "H", 4)} \times ${texQuantity(c, "F", 4)}}} = ${texQuantity(resonantFrequency, "Hz", 4)}`,
-        },
-        {
-          label: "Reactance of either part at resonance",
-          latex: String.raw`X_C = X_L = \sqrt{L/C} = ${texQuantity(z0, "Ω", 4)}`,
-        },
-      );
-      if (f !== undefined) {
-        const ratio = f / resonantFrequency;
-        if (Math.abs(ratio - 1) > 1e-6) {
-          warnings.push({
-            level: "info",
-            message:
-              ratio < 1
-                ? `At ${formatQuantity(f, "Hz")} you are below resonance: a series pair looks capacitive, a parallel pair inductive.`
-                : `At ${formatQuantity(f, "Hz")} you are above resonance: a series pair looks inductive, a parallel pair capacitive.`,
-          });
-        }
+    const capacitiveReactance = f !== undefined && c !== undefined ? 1 / (2 * Math.PI * f * c) : null;
+    const inductiveReactance = f !== undefined && l !== undefined ? 2 * Math.PI * f * l : null;
+    const resonantFrequency = c !== undefined && l !== undefined ? 1 / (2 * Math.PI * Math.sqrt(l * c)) : null;
+    if (resonantFrequency !== null && f !== undefined) {
+      const ratio = f / resonantFrequency;
+      if (Math.abs(ratio - 1) > 1e-6) {
+        warnings.push({
+          level: "info",
+          message:
+            ratio < 1
+              ? `At ${formatQuantity(f, "Hz")} you are below resonance: a series pair looks capacitive, a parallel pair inductive.`
+              : `At ${formatQuantity(f, "Hz")} you are above resonance: a series pair looks inductive, a parallel pair capacitive.`,
+        });
       }
     }
     warnings.push({
       level: "info",
       message: "Ideal parts assumed: real capacitors have leakage and series resistance, and coils have winding resistance and self-capacitance.",
     });
-    return { outputs: { capacitiveReactance, inductiveReactance, resonantFrequency }, steps, warnings };
+    return { outputs: { capacitiveReactance, inductiveReactance, resonantFrequency }, warnings };
+  },
+  explain(input: ReactanceInput, o) {
+    const { frequency: f, capacitance: c, inductance: l } = input;
+    const steps: Step[] = [];
+    if (f !== undefined && c !== undefined && o.capacitiveReactance !== null) {
+      steps.push({
+        label: "Capacitive reactance",
+        latex: String.raw`X_C = \frac{1}{2\pi \times ${texQuantity(f, "Hz", 4)} \times ${texQuantity(c, "F", 4)}} = ${texQuantity(o.capacitiveReactance, "Ω", 4)}`,
+      });
+    }
+    if (f !== undefined && l !== undefined && o.inductiveReactance !== null) {
+      steps.push({
+        label: "Inductive reactance",
+        latex: String.raw`X_L = 2\pi \times ${texQuantity(f, "Hz", 4)} \times ${texQuantity(l, "H", 4)} = ${texQuantity(o.inductiveReactance, "Ω", 4)}`,
+      });
+    }
+    if (c !== undefined && l !== undefined && o.resonantFrequency !== null) {
+      steps.push(
+        {
+          label: "Resonant frequency",
+          latex: String.raw`f_0 = \frac{1}{2\pi\sqrt{${texQuantity(l, "H", 4)} \times ${texQuantity(c, "F", 4)}}} = ${texQuantity(o.resonantFrequency, "Hz", 4)}`,
+        },
+        {
+          label: "Reactance of either part at resonance",
+          latex: String.raw`X_C = X_L = \sqrt{L/C} = ${texQuantity(Math.sqrt(l / c), "Ω", 4)}`,
+        },
+      );
+    }
+    return steps;
   },
 });

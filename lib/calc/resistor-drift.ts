@@ -114,52 +114,54 @@ export const calculator = defineCalculator({
   compute(input: ResistorDriftInput) {
     const { nominal, measured, tolerance } = input;
     const { deviation, withinTolerance, verdict } = judgeDrift(nominal, measured, tolerance);
-    const steps: Step[] = [];
     const warnings: Warning[] = [];
-    if (measured === "open" || deviation === null) {
-      steps.push({ label: "Reading", latex: String.raw`R_\text{measured} = \infty\ (\text{open})` });
+    if (verdict === "open") {
       warnings.push({
         level: "caution",
         message:
           "The resistor reads open. Confirm on a higher range and with one lead lifted; a resistor that is truly open must be replaced, " +
           "and look for why it failed (an overloaded resistor often points to a shorted capacitor or tube).",
       });
-    } else {
-      steps.push(
-        {
-          label: "Deviation",
-          latex: String.raw`\delta = \frac{${texQuantity(measured, "Ω", 4)} - ${texQuantity(nominal, "Ω", 4)}}{${texQuantity(nominal, "Ω", 4)}} = ${(deviation * 100).toFixed(2)}\,\%`,
-        },
-        {
-          label: "Compare with the tolerance",
-          latex: String.raw`|\delta| = ${(Math.abs(deviation) * 100).toFixed(2)}\,\% ${withinTolerance ? "\\le" : ">"} ${(tolerance * 100).toFixed(2)}\,\%`,
-        },
-        {
-          label: "Allowed range",
-          latex: String.raw`${texQuantity(nominal * (1 - tolerance), "Ω")} \ldots ${texQuantity(nominal * (1 + tolerance), "Ω")}`,
-        },
-      );
-      if (verdict === "high") {
-        warnings.push({
-          level: "info",
-          message:
-            "Composition resistors usually drift high with age (common practice). Replace it with a modern film part of the same value and at least the same wattage.",
-        });
-      }
-      if (verdict === "low") {
-        warnings.push({
-          level: "caution",
-          message:
-            measured === 0
-              ? "It reads as a short. Check the meter leads and lift one end of the resistor; a resistor rarely fails short by itself."
-              : "Reading low is unusual for a resistor: another part in parallel may be in the path. Lift one lead and measure again.",
-        });
-      }
+    } else if (verdict === "high") {
+      warnings.push({
+        level: "info",
+        message:
+          "Composition resistors usually drift high with age (common practice). Replace it with a modern film part of the same value and at least the same wattage.",
+      });
+    } else if (verdict === "low") {
+      warnings.push({
+        level: "caution",
+        message:
+          measured === 0
+            ? "It reads as a short. Check the meter leads and lift one end of the resistor; a resistor rarely fails short by itself."
+            : "Reading low is unusual for a resistor: another part in parallel may be in the path. Lift one lead and measure again.",
+      });
     }
     warnings.push({
       level: "info",
       message: `Measure with the set unplugged and the filter capacitors discharged. Allowed at ±${(tolerance * 100).toFixed(0)} %: ${formatQuantity(nominal * (1 - tolerance), "Ω")} to ${formatQuantity(nominal * (1 + tolerance), "Ω")}.`,
     });
-    return { outputs: { deviation, withinTolerance, verdict }, steps, warnings };
+    return { outputs: { deviation, withinTolerance, verdict }, warnings };
+  },
+  explain(input: ResistorDriftInput, o) {
+    const { nominal, measured, tolerance } = input;
+    const { deviation, withinTolerance } = o;
+    if (measured === "open" || deviation === null) {
+      return [{ label: "Reading", latex: String.raw`R_\text{measured} = \infty\ (\text{open})` }];
+    }
+    return [
+      {
+        label: "Deviation",
+        latex: String.raw`\delta = \frac{${texQuantity(measured, "Ω", 4)} - ${texQuantity(nominal, "Ω", 4)}}{${texQuantity(nominal, "Ω", 4)}} = ${(deviation * 100).toFixed(2)}\,\%`,
+      },
+      {
+        label: "Compare with the tolerance",
+        latex: String.raw`|\delta| = ${(Math.abs(deviation) * 100).toFixed(2)}\,\% ${withinTolerance ? "\\le" : ">"} ${(tolerance * 100).toFixed(2)}\,\%`,
+      },
+      {
+        label: "Allowed range",
+        latex: String.raw`${texQuantity(nominal * (1 - tolerance), "Ω")} \ldots ${texQuantity(nominal * (1 + tolerance), "Ω")}`,
+      },
+    ] satisfies Step[];
   },
 });

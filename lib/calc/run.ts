@@ -39,15 +39,17 @@ export function runCalculator(calc: Calculator, raw: unknown): RunResult {
     return { ok: false, error: { message, fields } };
   }
   const input = parsed.data as Record<string, unknown>;
-  let computed;
+  let outputs: Record<string, OutputValue>;
+  let warnings: Warning[];
+  let steps: Step[];
   try {
-    computed = calc.compute(input);
+    ({ outputs, warnings } = calc.compute(input));
+    steps = calc.explain(input, outputs);
   } catch (err) {
     // A pure compute should not throw for validated input; if it does, answer plainly, never a 500.
     const message = err instanceof Error ? err.message : "These inputs cannot be solved.";
     return { ok: false, error: { message, fields: {} } };
   }
-  const { outputs, steps, warnings } = computed;
   return {
     ok: true,
     result: { slug: calc.slug, inputs: input, outputs, steps, warnings, references: calc.references },

@@ -106,62 +106,32 @@ export const calculator = defineCalculator({
     const omega = 2 * Math.PI * fr;
     const vpp = i / (fr * c);
     const rippleRms = vpp / (2 * Math.sqrt(3));
-
-    const steps: Step[] = [
-      {
-        label: "Ripple frequency",
-        latex: rectifier === "full-wave"
-          ? String.raw`f_r = 2f = 2 \times ${texQuantity(f, "Hz")} = ${texQuantity(fr, "Hz")}`
-          : String.raw`f_r = f = ${texQuantity(fr, "Hz")}`,
-      },
-      {
-        label: "Ripple on the reservoir, peak to peak",
-        latex: String.raw`V_{pp} = \frac{I}{f_r\,C} = \frac{${texQuantity(i, "A")}}{${texQuantity(fr, "Hz")} \times ${texQuantity(c, "F")}} = ${texQuantity(vpp, "V")}`,
-      },
-      {
-        label: "Ripple on the reservoir, rms (sawtooth)",
-        latex: String.raw`V_{rms} = \frac{V_{pp}}{2\sqrt{3}} = \frac{${texQuantity(vpp, "V")}}{3.464} = ${texQuantity(rippleRms, "V")}`,
-      },
-    ];
     const warnings: Warning[] = [ALWAYS_DANGER];
 
     let ripple = rippleRms;
-    const stages: { [key: string]: OutputValue }[] = [];
+    const stages: { attenuation: number; rippleRms: number; dcDrop: number }[] = [];
     stagesIn.forEach((s, n) => {
       const xc = 1 / (omega * s.capacitance);
-      const tag = `Stage ${n + 1}`;
       let attenuation: number;
       let dcDrop: number;
       if (s.kind === "rc") {
         attenuation = xc / Math.hypot(s.resistance, xc);
         dcDrop = i * s.resistance;
-        steps.push({
-          label: `${tag} (RC): attenuation`,
-          latex: String.raw`X_C = \frac{1}{2\pi f_r C} = ${texQuantity(xc, "Ω")}, \quad \frac{X_C}{\sqrt{R^2 + X_C^2}} = \frac{${texQuantity(xc, "Ω")}}{\sqrt{(${texQuantity(s.resistance, "Ω")})^2 + (${texQuantity(xc, "Ω")})^2}} = ${attenuation.toPrecision(3)}`,
-        });
-        steps.push({ label: `${tag} (RC): DC drop`, latex: String.raw`\Delta V = I R = ${texQuantity(i, "A")} \times ${texQuantity(s.resistance, "Ω")} = ${texQuantity(dcDrop, "V")}` });
       } else {
-        const xl = omega * s.inductance;
-        attenuation = Math.abs(xc / (xl - xc));
+        attenuation = Math.abs(xc / (omega * s.inductance - xc));
         dcDrop = 0;
-        steps.push({
-          label: `${tag} (LC): attenuation`,
-          latex: String.raw`X_L = ${texQuantity(xl, "Ω")}, \; X_C = ${texQuantity(xc, "Ω")}, \quad \left|\frac{X_C}{X_L - X_C}\right| = ${attenuation.toPrecision(3)}`,
-        });
         const f0 = 1 / (2 * Math.PI * Math.sqrt(s.inductance * s.capacitance));
         if (f0 > fr / 3) {
           const where = attenuation >= 1 ? "at or above" : "near";
           warnings.push({
             level: "caution",
             message:
-              `${tag}: the choke and capacitor resonate at ${formatQuantity(f0, "Hz")}, ${where} the ${formatQuantity(fr, "Hz")} ripple frequency, ` +
+              `Stage ${n + 1}: the choke and capacitor resonate at ${formatQuantity(f0, "Hz")}, ${where} the ${formatQuantity(fr, "Hz")} ripple frequency, ` +
               `so this stage ${attenuation >= 1 ? "magnifies ripple rather than removing it" : "removes little ripple"}. Common practice keeps the resonance well below the ripple frequency (a third or less); use a larger choke or capacitor.`,
           });
         }
       }
-      const before = ripple;
-      ripple = before * attenuation;
-      steps.push({ label: `${tag}: ripple after it`, latex: String.raw`V_{rms} = ${texQuantity(before, "V")} \times ${attenuation.toPrecision(3)} = ${texQuantity(ripple, "V")}` });
+      ripple *= attenuation;
       stages.push({ attenuation, rippleRms: ripple, dcDrop });
     });
 
@@ -181,9 +151,51 @@ export const calculator = defineCalculator({
     });
 
     return {
-      outputs: { rippleFrequency: fr, ripplePeakToPeak: vpp, rippleRms, stages, finalRippleRms: ripple },
-      steps,
+      outputs: { rippleFrequency: fr, ripplePeakToPeak: vpp, rippleRms, stages: stages as { [key: string]: OutputValue }[], finalRippleRms: ripple },
       warnings,
     };
+  },
+  explain(input: SupplyRippleInput, o) {
+    const { loadCurrent: i, capacitance: c, lineFrequency: f, rectifier } = input;
+    const { rippleFrequency: fr, ripplePeakToPeak: vpp, rippleRms } = o;
+    const omega = 2 * Math.PI * fr;
+    const steps: Step[] = [
+      {
+        label: "Ripple frequency",
+        latex: rectifier === "full-wave"
+          ? String.raw`f_r = 2f = 2 \times ${texQuantity(f, "Hz")} = ${texQuantity(fr, "Hz")}`
+          : String.raw`f_r = f = ${texQuantity(fr, "Hz")}`,
+      },
+      {
+        label: "Ripple on the reservoir, peak to peak",
+        latex: String.raw`V_{pp} = \frac{I}{f_r\,C} = \frac{${texQuantity(i, "A")}}{${texQuantity(fr, "Hz")} \times ${texQuantity(c, "F")}} = ${texQuantity(vpp, "V")}`,
+      },
+      {
+        label: "Ripple on the reservoir, rms (sawtooth)",
+        latex: String.raw`V_{rms} = \frac{V_{pp}}{2\sqrt{3}} = \frac{${texQuantity(vpp, "V")}}{3.464} = ${texQuantity(rippleRms, "V")}`,
+      },
+    ];
+    let before = rippleRms;
+    (input.stages ?? []).forEach((s, n) => {
+      const out = o.stages[n] as { attenuation: number; rippleRms: number; dcDrop: number };
+      const xc = 1 / (omega * s.capacitance);
+      const tag = `Stage ${n + 1}`;
+      const att = out.attenuation.toPrecision(3);
+      if (s.kind === "rc") {
+        steps.push({
+          label: `${tag} (RC): attenuation`,
+          latex: String.raw`X_C = \frac{1}{2\pi f_r C} = ${texQuantity(xc, "Ω")}, \quad \frac{X_C}{\sqrt{R^2 + X_C^2}} = \frac{${texQuantity(xc, "Ω")}}{\sqrt{(${texQuantity(s.resistance, "Ω")})^2 + (${texQuantity(xc, "Ω")})^2}} = ${att}`,
+        });
+        steps.push({ label: `${tag} (RC): DC drop`, latex: String.raw`\Delta V = I R = ${texQuantity(i, "A")} \times ${texQuantity(s.resistance, "Ω")} = ${texQuantity(out.dcDrop, "V")}` });
+      } else {
+        steps.push({
+          label: `${tag} (LC): attenuation`,
+          latex: String.raw`X_L = ${texQuantity(omega * s.inductance, "Ω")}, \; X_C = ${texQuantity(xc, "Ω")}, \quad \left|\frac{X_C}{X_L - X_C}\right| = ${att}`,
+        });
+      }
+      steps.push({ label: `${tag}: ripple after it`, latex: String.raw`V_{rms} = ${texQuantity(before, "V")} \times ${att} = ${texQuantity(out.rippleRms, "V")}` });
+      before = out.rippleRms;
+    });
+    return steps;
   },
 });

@@ -98,38 +98,8 @@ export const calculator = defineCalculator({
   compute(input: TimeConstantInput) {
     const { resistance: r, capacitance: c, initialVoltage: v0, targetVoltage: vt, elapsed: t } = input;
     const tau = r * c;
-    const fiveTau = 5 * tau;
-    const energy = 0.5 * c * v0 * v0;
-    const steps: Step[] = [
-      {
-        label: "Time constant",
-        latex: String.raw`\tau = R\,C = ${texQuantity(r, "Ω")} \times ${texQuantity(c, "F")} = ${texQuantity(tau, "s")}`,
-      },
-      { label: "Five time constants", latex: String.raw`5\tau = 5 \times ${texQuantity(tau, "s")} = ${texQuantity(fiveTau, "s")}` },
-    ];
-
-    let timeToTarget: number | null = null;
-    if (vt !== undefined) {
-      timeToTarget = tau * Math.log(v0 / vt);
-      steps.push({
-        label: "Time to the target voltage",
-        latex: String.raw`t = \tau\,\ln\frac{V_0}{V_t} = ${texQuantity(tau, "s")} \times \ln\frac{${texQuantity(v0, "V")}}{${texQuantity(vt, "V")}} = ${texQuantity(timeToTarget, "s")}`,
-      });
-    }
-
-    let voltageAtElapsed: number | null = null;
-    if (t !== undefined) {
-      voltageAtElapsed = v0 * Math.exp(-t / tau);
-      steps.push({
-        label: "Voltage after the elapsed time",
-        latex: String.raw`V(t) = V_0\,e^{-t/\tau} = ${texQuantity(v0, "V")} \times e^{-${texQuantity(t, "s")}/${texQuantity(tau, "s")}} = ${texQuantity(voltageAtElapsed, "V")}`,
-      });
-    }
-
-    steps.push({
-      label: "Energy stored at the initial voltage",
-      latex: String.raw`E = \tfrac{1}{2}\,C\,V_0^2 = \tfrac{1}{2} \times ${texQuantity(c, "F")} \times (${texQuantity(v0, "V")})^2 = ${texQuantity(energy, "J")}`,
-    });
+    const timeToTarget = vt === undefined ? null : tau * Math.log(v0 / vt);
+    const voltageAtElapsed = t === undefined ? null : v0 * Math.exp(-t / tau);
 
     const warnings: Warning[] = [...highVoltageWarning(v0)];
     if (v0 > 50 && v0 * Math.exp(-5) > 50) {
@@ -144,6 +114,35 @@ export const calculator = defineCalculator({
         "Electrolytic capacitors can recover some charge after being discharged (dielectric absorption); measure again before touching.",
     });
 
-    return { outputs: { timeConstant: tau, fiveTau, timeToTarget, voltageAtElapsed }, steps, warnings };
+    return { outputs: { timeConstant: tau, fiveTau: 5 * tau, timeToTarget, voltageAtElapsed }, warnings };
+  },
+  explain(input: TimeConstantInput, o) {
+    const { resistance: r, capacitance: c, initialVoltage: v0, targetVoltage: vt, elapsed: t } = input;
+    const { timeConstant: tau, fiveTau, timeToTarget, voltageAtElapsed } = o;
+    const energy = 0.5 * c * v0 * v0;
+    const steps: Step[] = [
+      {
+        label: "Time constant",
+        latex: String.raw`\tau = R\,C = ${texQuantity(r, "Ω")} \times ${texQuantity(c, "F")} = ${texQuantity(tau, "s")}`,
+      },
+      { label: "Five time constants", latex: String.raw`5\tau = 5 \times ${texQuantity(tau, "s")} = ${texQuantity(fiveTau, "s")}` },
+    ];
+    if (vt !== undefined && timeToTarget !== null) {
+      steps.push({
+        label: "Time to the target voltage",
+        latex: String.raw`t = \tau\,\ln\frac{V_0}{V_t} = ${texQuantity(tau, "s")} \times \ln\frac{${texQuantity(v0, "V")}}{${texQuantity(vt, "V")}} = ${texQuantity(timeToTarget, "s")}`,
+      });
+    }
+    if (t !== undefined && voltageAtElapsed !== null) {
+      steps.push({
+        label: "Voltage after the elapsed time",
+        latex: String.raw`V(t) = V_0\,e^{-t/\tau} = ${texQuantity(v0, "V")} \times e^{-${texQuantity(t, "s")}/${texQuantity(tau, "s")}} = ${texQuantity(voltageAtElapsed, "V")}`,
+      });
+    }
+    steps.push({
+      label: "Energy stored at the initial voltage",
+      latex: String.raw`E = \tfrac{1}{2}\,C\,V_0^2 = \tfrac{1}{2} \times ${texQuantity(c, "F")} \times (${texQuantity(v0, "V")})^2 = ${texQuantity(energy, "J")}`,
+    });
+    return steps;
   },
 });

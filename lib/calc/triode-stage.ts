@@ -3,7 +3,7 @@ import { formatQuantity, texQuantity } from "./format";
 import { highVoltageWarning } from "./safety";
 import { TRIODE_NAMES, findTriode } from "./tables/triodes";
 import { solveOperatingPoint, type TriodeParams } from "./triode-model";
-import { defineCalculator, type CalcResult, type Step, type Warning } from "./types";
+import { defineCalculator, type Computed, type Step, type Warning } from "./types";
 import { optionalQuantity, quantity } from "./units";
 
 export { plateCurves } from "./triode-model";
@@ -149,64 +149,30 @@ export const calculator = defineCalculator({
     "current and it distorts, too much and the plate overheats. This works out the plate voltage you should " +
     "measure on a healthy stage, so a reading far off points to a drifted plate resistor, a leaky coupling " +
     "capacitor or a weak tube. It also shows why leaving out the cathode bypass capacitor cuts the gain.",
-  compute(input: TriodeStageInput): CalcResult<TriodeStageOutputs> {
+  compute(input: TriodeStageInput): Computed<TriodeStageOutputs> {
     const { supplyVoltage: bPlus, plateResistor: ra, cathodeResistor: rk, loadResistance: rl } = input;
     const bypassed = input.cathodeBypassed ?? true;
     const { params: p, name, rating, overridden } = modelFor(input);
     const solved = solveOperatingPoint(p, bPlus, ra, rk);
     const warnings: Warning[] = [...highVoltageWarning(bPlus)];
-    // Each value is formatted once; formatting dominates the cost of compute.
-    const tB = texQuantity(bPlus, "V");
-    const tRa = texQuantity(ra, "Ω");
-    const tRk = texQuantity(rk, "Ω");
-    const steps: Step[] = [
-      { label: "Triode model (Koren)", latex: MODEL_TEX },
-      { label: `Model parameters (${name})`, latex: String.raw`\mu = ${tex(p.mu)},\; E_X = ${tex(p.ex)},\; K_{G1} = ${tex(p.kg1)},\; K_P = ${tex(p.kp)},\; K_{VB} = ${tex(p.kvb)}\,\mathrm{V^2}` },
-      { label: "Load line and cathode bias", latex: LOAD_LINE_TEX },
-      { label: "Load line with your values", latex: String.raw`E_p = ${tB} - I_p\,(${tRa} + ${tRk}),\quad E_g = -I_p \times ${tRk}` },
-    ];
     if (overridden.length) {
       warnings.push({ level: "info", message: `Using the ${name} table entry with your own ${overridden.join(", ")}.` });
     }
     if (!solved.ok) {
       warnings.push({ level: "caution", message: solved.message });
       const outputs: TriodeStageOutputs = { plateVoltage: null, plateCurrent: null, cathodeVoltage: null, plateDissipation: null, amplificationFactor: null, plateResistance: null, transconductance: null, gain: null };
-      return { outputs, steps, warnings };
+      return { outputs, warnings };
     }
 
-    const { ip, ep, eg, vk, point } = solved;
+    const { ip, ep, vk, point } = solved;
     const dissipation = ep * ip;
     const mu = point.mu;
     const gm = point.gm;
     const rp = point.gp > 0 && Number.isFinite(1 / point.gp) ? 1 / point.gp : null;
-    const rLoad = rl === undefined ? ra : (ra * rl) / (ra + rl);
+    const rLoad = signalLoad(ra, rl);
     // Conductance form of the gain formulas (multiply through by gp = 1/rp), finite even if rp is not.
     const degeneration = bypassed ? 0 : (mu + 1) * rk;
     const gain = (gm * rLoad) / (1 + point.gp * (rLoad + degeneration));
-
-    const tIp = texQuantity(ip, "A");
-    const tIp4 = texQuantity(ip, "A", 4);
-    const tEp = texQuantity(ep, "V");
-    const tMu = texQuantity(mu, "");
-    const tRl = texQuantity(rLoad, "Ω");
-    const tGain = texQuantity(gain, "");
-    const rpTex = rp === null ? String.raw`\infty` : texQuantity(rp, "Ω");
-    steps.push(
-      { label: "Operating point (model current equals load-line current)", latex: String.raw`I_p = ${tIp4},\quad E_p = ${tB} - ${tIp4} \times ${texQuantity(ra + rk, "Ω", 4)} = ${texQuantity(ep, "V", 4)},\quad E_g = ${texQuantity(eg, "V", 4)}` },
-      { label: "Cathode voltage", latex: String.raw`V_k = I_p R_k = ${tIp} \times ${tRk} = ${texQuantity(vk, "V")}` },
-      { label: "Plate to chassis, as a meter reads it", latex: String.raw`V_a = E_p + V_k = B^{+} - I_p R_a = ${texQuantity(ep + vk, "V", 4)}` },
-      { label: "Plate dissipation", latex: String.raw`P_a = E_p I_p = ${tEp} \times ${tIp} = ${texQuantity(dissipation, "W")}` },
-      { label: "Small-signal parameters at the operating point", latex: String.raw`g_m = \frac{\partial I_p}{\partial E_g} = ${texQuantity(gm, "S")},\quad r_p = \left(\frac{\partial I_p}{\partial E_p}\right)^{-1} = ${rpTex},\quad \mu = g_m r_p = ${tMu}` },
-    );
-    if (rl !== undefined) {
-      steps.push({ label: "Signal load: plate resistor in parallel with the next stage", latex: String.raw`R_L' = \frac{R_a R_L}{R_a + R_L} = \frac{${tRa} \times ${texQuantity(rl, "Ω")}}{${tRa} + ${texQuantity(rl, "Ω")}} = ${tRl}` });
-    }
-    const gainLabel = "Voltage gain (inverting: the plate swings opposite to the grid)";
-    steps.push(
-      bypassed
-        ? { label: `${gainLabel}, cathode bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L'} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl}} = ${tGain}` }
-        : { label: `${gainLabel}, cathode not bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl} + ${texQuantity(mu + 1, "")} \times ${tRk}} = ${tGain}` },
-    );
 
     if (rating !== undefined && dissipation > rating) {
       warnings.push({ level: "caution", message: `Plate dissipation ${formatQuantity(dissipation, "W")} is above the ${name}'s rated ${formatQuantity(rating, "W")} per section; raise Ra or Rk, or lower B+.` });
@@ -223,6 +189,54 @@ export const calculator = defineCalculator({
     warnings.push({ level: "info", message: "The model is a fit to typical curves; real tubes of one type differ by 20% or more, so expect your measured voltages to differ too." });
 
     const outputs = { plateVoltage: ep, plateCurrent: ip, cathodeVoltage: vk, plateDissipation: dissipation, amplificationFactor: mu, plateResistance: rp, transconductance: gm, gain };
-    return { outputs, steps, warnings };
+    return { outputs, warnings };
+  },
+  explain(input: TriodeStageInput, o: TriodeStageOutputs) {
+    const { supplyVoltage: bPlus, plateResistor: ra, cathodeResistor: rk, loadResistance: rl } = input;
+    const bypassed = input.cathodeBypassed ?? true;
+    const { params: p, name } = modelFor(input);
+    // Each value is formatted once; formatting dominates the cost of the working.
+    const tB = texQuantity(bPlus, "V");
+    const tRa = texQuantity(ra, "Ω");
+    const tRk = texQuantity(rk, "Ω");
+    const steps: Step[] = [
+      { label: "Triode model (Koren)", latex: MODEL_TEX },
+      { label: `Model parameters (${name})`, latex: String.raw`\mu = ${tex(p.mu)},\; E_X = ${tex(p.ex)},\; K_{G1} = ${tex(p.kg1)},\; K_P = ${tex(p.kp)},\; K_{VB} = ${tex(p.kvb)}\,\mathrm{V^2}` },
+      { label: "Load line and cathode bias", latex: LOAD_LINE_TEX },
+      { label: "Load line with your values", latex: String.raw`E_p = ${tB} - I_p\,(${tRa} + ${tRk}),\quad E_g = -I_p \times ${tRk}` },
+    ];
+    const { plateCurrent: ip, plateVoltage: ep, cathodeVoltage: vk, plateDissipation: dissipation, amplificationFactor: mu, transconductance: gm, plateResistance: rp, gain } = o;
+    if (ip === null || ep === null || vk === null || dissipation === null || mu === null || gm === null || gain === null) return steps;
+
+    const eg = -ip * rk;
+    const rLoad = signalLoad(ra, rl);
+    const tIp = texQuantity(ip, "A");
+    const tIp4 = texQuantity(ip, "A", 4);
+    const tMu = texQuantity(mu, "");
+    const tRl = texQuantity(rLoad, "Ω");
+    const tGain = texQuantity(gain, "");
+    const rpTex = rp === null ? String.raw`\infty` : texQuantity(rp, "Ω");
+    steps.push(
+      { label: "Operating point (model current equals load-line current)", latex: String.raw`I_p = ${tIp4},\quad E_p = ${tB} - ${tIp4} \times ${texQuantity(ra + rk, "Ω", 4)} = ${texQuantity(ep, "V", 4)},\quad E_g = ${texQuantity(eg, "V", 4)}` },
+      { label: "Cathode voltage", latex: String.raw`V_k = I_p R_k = ${tIp} \times ${tRk} = ${texQuantity(vk, "V")}` },
+      { label: "Plate to chassis, as a meter reads it", latex: String.raw`V_a = E_p + V_k = B^{+} - I_p R_a = ${texQuantity(ep + vk, "V", 4)}` },
+      { label: "Plate dissipation", latex: String.raw`P_a = E_p I_p = ${texQuantity(ep, "V")} \times ${tIp} = ${texQuantity(dissipation, "W")}` },
+      { label: "Small-signal parameters at the operating point", latex: String.raw`g_m = \frac{\partial I_p}{\partial E_g} = ${texQuantity(gm, "S")},\quad r_p = \left(\frac{\partial I_p}{\partial E_p}\right)^{-1} = ${rpTex},\quad \mu = g_m r_p = ${tMu}` },
+    );
+    if (rl !== undefined) {
+      steps.push({ label: "Signal load: plate resistor in parallel with the next stage", latex: String.raw`R_L' = \frac{R_a R_L}{R_a + R_L} = \frac{${tRa} \times ${texQuantity(rl, "Ω")}}{${tRa} + ${texQuantity(rl, "Ω")}} = ${tRl}` });
+    }
+    const gainLabel = "Voltage gain (inverting: the plate swings opposite to the grid)";
+    steps.push(
+      bypassed
+        ? { label: `${gainLabel}, cathode bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L'} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl}} = ${tGain}` }
+        : { label: `${gainLabel}, cathode not bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl} + ${texQuantity(mu + 1, "")} \times ${tRk}} = ${tGain}` },
+    );
+    return steps;
   },
 });
+
+/** Ra alone, or Ra ∥ RL when the next stage's grid resistor loads it. */
+function signalLoad(ra: number, rl: number | undefined): number {
+  return rl === undefined ? ra : (ra * rl) / (ra + rl);
+}

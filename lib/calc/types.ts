@@ -47,10 +47,15 @@ export interface OutputMeta {
   unit: string;
 }
 
-export interface CalcResult<O extends Record<string, OutputValue>> {
+/** What compute returns: numbers and advice only, no typesetting, so it is cheap enough for every keystroke. */
+export interface Computed<O extends Record<string, OutputValue>> {
   outputs: O;
-  steps: Step[];
   warnings: Warning[];
+}
+
+/** A computed result with its working shown: what runCalculator assembles from compute and explain. */
+export interface CalcResult<O extends Record<string, OutputValue>> extends Computed<O> {
+  steps: Step[];
 }
 
 export interface Calculator<S extends z.ZodType = z.ZodType, O extends Record<string, OutputValue> = Record<string, OutputValue>> {
@@ -68,7 +73,13 @@ export interface Calculator<S extends z.ZodType = z.ZodType, O extends Record<st
   references: readonly Reference[];
   /** A short paragraph on why the number matters at the bench. */
   whyItMatters: string;
-  compute(input: z.output<S>): CalcResult<O>;
+  /** Pure: validated input to outputs and warnings. Never NaN/Infinity for input the schema accepts. */
+  compute(input: z.output<S>): Computed<O>;
+  /**
+   * The substituted steps (LaTeX) for outputs that compute gave for this input. Kept apart from
+   * compute because typesetting costs far more than the arithmetic; only shown working needs it.
+   */
+  explain(input: z.output<S>, outputs: O): Step[];
 }
 
 /** Identity helper that keeps the schema's output type flowing into compute. */
