@@ -1,0 +1,224 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import dynamic from "next/dynamic";
+import Link from "next/link";
+import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState, type ReactNode } from "react";
+import { FormProvider, useForm, useWatch, type Resolver } from "react-hook-form";
+import { runCalculator, type RunResult } from "@/lib/calc/run";
+import { encodeInputs } from "@/lib/calc/share";
+import type { Calculator, InputMeta, OutputMeta } from "@/lib/calc/types";
+import { plain } from "@/lib/bench/errors";
+import { ADVANCED, hiddenFields, initialMode, MODES, toRaw, type FormValues } from "@/lib/bench/form-values";
+import { loadCalculator } from "@/lib/bench/load-calculator";
+import { ChartSlot } from "./chart-slot";
+import { DangerBanner } from "./danger-banner";
+import { InputControl } from "./input-fields";
+import { PrintInputs } from "./print-inputs";
+import { ResultsPanel } from "./results-panel";
+import { ShareActions } from "./share-actions";
+import { Working } from "./working";
+
+const SaveToJob = dynamic(() => import("./save-to-job"), { ssr: false, loading: () => <p className="text-muted">Loading…</p> });
+
+export interface CalculatorViewProps {
+  slug: string;
+  inputs: InputMeta[];
+  outputs: OutputMeta[];
+  initial: FormValues;
+  example: FormValues;
+  initialRun: RunResult;
+  serverHtml: Record<string, string>;
+  workingOpen: boolean;
+  signedIn: boolean;
+  alwaysDanger: boolean;
+  formulas: ReactNode;
+  sources: ReactNode;
+  why: ReactNode;
+}
+
+/**
+ * A calculator page's live part: the form (react-hook-form with the calculator's own zod schema), the
+ * result recomputed in the browser on every keystroke, the working, the picture, saving and sharing.
+ * The calculator module is loaded on its own; until it arrives the server's result is shown.
+ */
+export function CalculatorView(p: CalculatorViewProps) {
+  const { slug, inputs } = p;
+  const calcRef = useRef<Calculator | null>(null);
+  const [calc, setCalc] = useState<Calculator | null>(null);
+  const [mode, setMode] = useState(() => initialMode(slug, p.initial));
+  const [moreOpen, setMoreOpen] = useState(() =>
+    (ADVANCED[slug]?.fields ?? []).some((f) => {
+      const v = p.initial[f];
+      const d = p.inputs.find((i) => i.name === f)?.default;
+      return typeof v === "string" && v.trim() !== "" && v !== String(d ?? "");
+    }),
+  );
+  const modeRef = useRef(mode);
+  modeRef.current = mode;
+
+  // The calculator's own schema validates what the form holds, cleaned as the calculator receives it.
+  const resolver = useCallback<Resolver<FormValues>>(
+    async (values, context, options) => {
+      const c = calcRef.current;
+      if (!c) return { values, errors: {} };
+      const zr = zodResolver(c.schema as never) as unknown as Resolver<FormValues>;
+      return zr(toRaw(slug, inputs, values, modeRef.current), context, options);
+    },
+    [slug, inputs],
+  );
+  const form = useForm<FormValues>({ defaultValues: p.initial, resolver, mode: "onSubmit", reValidateMode: "onSubmit" });
+  const values = useWatch({ control: form.control }) as FormValues;
+  const raw = useMemo(() => toRaw(slug, inputs, values, mode), [slug, inputs, values, mode]);
+  const run = useMemo(() => (calc ? runCalculator(calc, raw) : p.initialRun), [calc, raw, p.initialRun]);
+  const later = useDeferredValue(run);
+
+  useEffect(() => {
+    let alive = true;
+    loadCalculator(slug).then((c) => {
+      if (!alive) return;
+      calcRef.current = c;
+      setCalc(c);
+      // Lets tests and the speed bench know results now follow keystrokes in the browser.
+      document.documentElement.dataset.benchReady = "1";
+    });
+    return () => {
+      alive = false;
+      delete document.documentElement.dataset.benchReady;
+    };
+  }, [slug]);
+
+  // Re-check every field, so a message that depends on another field (target below initial) stays current.
+  const { trigger } = form;
+  useEffect(() => {
+    if (calc) void trigger();
+  }, [calc, raw, trigger]);
+
+  // The address carries the inputs, so the page can be sent to a colleague or reopened later.
+  useEffect(() => {
+    const t = setTimeout(() => {
+      const q = encodeInputs(raw);
+      const url = q ? `${window.location.pathname}?${q}` : window.location.pathname;
+      if (url !== window.location.pathname + window.location.search) window.history.replaceState(null, "", url);
+    }, 300);
+    return () => clearTimeout(t);
+  }, [raw]);
+
+  const hidden = hiddenFields(slug, mode);
+  const shown = inputs.filter((i) => !hidden.has(i.name));
+  const visibleNames = new Set(shown.map((i) => i.name));
+  const orphanErrors = run.ok ? [] : Object.entries(run.error.fields).filter(([k]) => !visibleNames.has(k.split(".")[0]));
+  const dangers = run.ok ? run.result.warnings.filter((w) => w.level === "danger").map((w) => w.message) : [];
+  const showDanger = p.alwaysDanger || dangers.length > 0;
+  const modes = MODES[slug]?.modes;
+  const advanced = ADVANCED[slug];
+  const isAdvanced = (name: string) => advanced?.fields.includes(name) ?? false;
+  const advancedError = !run.ok && Object.keys(run.error.fields).some((k) => isAdvanced(k.split(".")[0]));
+
+  return (
+    <FormProvider {...form}>
+      {showDanger ? (
+        <div className="mb-6">
+          <DangerBanner extra={dangers} />
+        </div>
+      ) : null}
+      <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
+        <form
+          onSubmit={(e) => e.preventDefault()}
+          noValidate
+          aria-labelledby="inputs-title"
+          className="gb-no-print rounded-card border border-rule bg-panel p-6 shadow-card"
+        >
+          <div className="mb-4 flex items-baseline justify-between gap-3">
+            <h2 id="inputs-title" className="text-lead font-bold">
+              Your values
+            </h2>
+            <p className="text-note text-muted">4k7 · 47 µF · 250 V · 1.5m</p>
+          </div>
+          {modes ? (
+            <fieldset className="mb-4">
+              <legend className="mb-1 font-bold">How to enter it</legend>
+              <div className="inline-flex rounded-chip border border-rule bg-sunk p-1">
+                {modes.map((m) => (
+                  <label key={m.id} className={`min-h-11 cursor-pointer rounded-chip px-3 py-2 font-bold has-[:focus-visible]:outline has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-glow ${mode === m.id ? "bg-panel text-ink shadow-sm" : "text-muted"}`}>
+                    <input type="radio" name="gb-mode" value={m.id} checked={mode === m.id} onChange={() => setMode(m.id)} className="sr-only" />
+                    {m.label}
+                  </label>
+                ))}
+              </div>
+            </fieldset>
+          ) : null}
+          <div className="flex flex-col gap-2">
+            {shown
+              .filter((m) => !isAdvanced(m.name))
+              .map((meta) => (
+                <InputControl key={meta.name} meta={meta} slug={slug} />
+              ))}
+          </div>
+          {advanced ? (
+            <details
+              open={moreOpen || advancedError}
+              onToggle={(e) => setMoreOpen(e.currentTarget.open)}
+              className="mt-2 rounded-card border border-rule bg-sunk/40"
+            >
+              <summary className="flex min-h-11 cursor-pointer items-center px-4 py-2 font-bold">{advanced.title}</summary>
+              <div className="flex flex-col gap-2 px-4 pb-2">
+                {shown
+                  .filter((m) => isAdvanced(m.name))
+                  .map((meta) => (
+                    <InputControl key={meta.name} meta={meta} slug={slug} />
+                  ))}
+              </div>
+            </details>
+          ) : null}
+          {orphanErrors.length ? (
+            <ul role="alert" className="mt-2 text-note font-bold text-hazard">
+              {orphanErrors.map(([k, m]) => (
+                <li key={k}>{plain(m)}</li>
+              ))}
+            </ul>
+          ) : null}
+        </form>
+        <div className="flex flex-col gap-6 lg:sticky lg:top-4" aria-labelledby="result-title">
+          <h2 id="result-title" className="sr-only">
+            Result
+          </h2>
+          <PrintInputs inputs={shown} raw={raw} />
+          <ResultsPanel slug={slug} outputs={p.outputs} run={run} />
+          {later.ok ? <ChartSlot slug={slug} inputs={later.result.inputs} outputs={later.result.outputs} /> : null}
+        </div>
+      </div>
+      <div className="mt-8">
+        <Working slug={slug} open={p.workingOpen} run={later} outputs={p.outputs} serverHtml={p.serverHtml} formulas={p.formulas} sources={p.sources} why={p.why} />
+      </div>
+      <section aria-labelledby="save-title" className="gb-no-print mt-8 rounded-card border border-rule bg-panel p-6 shadow-card">
+        <h2 id="save-title" className="mb-3 text-lead font-bold">
+          Save to a job
+        </h2>
+        {p.signedIn ? (
+          <SaveToJob slug={slug} inputs={raw} disabled={!run.ok} />
+        ) : (
+          <p className="text-muted" data-testid="sign-in-invitation">
+            Keep this calculation with the set’s record, with a note for whoever picks the job up next.{" "}
+            <Link href={`/sign-in?next=/bench/${slug}`} className="font-bold text-signal underline underline-offset-4">
+              Sign in to save it to a job
+            </Link>{" "}
+            or{" "}
+            <Link href="/sign-up" className="font-bold text-signal underline underline-offset-4">
+              open a workshop
+            </Link>
+            .
+          </p>
+        )}
+      </section>
+      <div className="mt-6">
+        <ShareActions
+          onReset={() => {
+            form.reset(p.example);
+            setMode(initialMode(slug, p.example));
+          }}
+        />
+      </div>
+    </FormProvider>
+  );
+}

@@ -1,0 +1,45 @@
+"use client";
+
+import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { formatQuantity } from "@/lib/calc/format";
+import { bleederDischarge, timeConstantDischarge } from "@/lib/bench/chart-data";
+import type { ChartProps } from "../chart-slot";
+import { C, ChartFrame, fmt, tick } from "./chart-frame";
+
+/** Capacitor voltage falling through the resistor, with the safe level (and the bleeder's deadline) marked. */
+export default function DischargeChart({ slug, inputs, outputs }: ChartProps) {
+  const d = slug === "bleeder" ? bleederDischarge(inputs, outputs) : timeConstantDischarge(inputs, outputs);
+  if (!d) return null;
+  const late = d.deadline !== undefined && d.tSafe > d.deadline;
+  return (
+    <ChartFrame
+      title="Discharge curve"
+      caption={
+        <>
+          From {formatQuantity(d.points[0].v, "V")} the voltage falls below the {d.safeLabel.toLowerCase()} of {formatQuantity(d.safe, "V")} after{" "}
+          <strong className="text-ink">{formatQuantity(d.tSafe, "s")}</strong>
+          {d.deadline !== undefined ? `; the time allowed is ${formatQuantity(d.deadline, "s")}` : ""}. Always verify with a meter.
+        </>
+      }
+    >
+      <ResponsiveContainer width="100%" height="100%">
+        <LineChart data={d.points} margin={{ top: 10, right: 16, bottom: 4, left: 8 }}>
+          <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
+          <XAxis dataKey="t" type="number" domain={[0, "dataMax"]} tickFormatter={fmt("s")} tick={tick} stroke={C.muted} />
+          <YAxis tickFormatter={fmt("V")} tick={tick} stroke={C.muted} width={64} />
+          <Tooltip
+            formatter={(v) => formatQuantity(Number(v), "V")}
+            labelFormatter={(t) => formatQuantity(Number(t), "s")}
+            contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
+          />
+          <ReferenceLine y={d.safe} stroke={C.ok} strokeDasharray="6 4" strokeWidth={2} label={{ value: `${d.safeLabel} ${formatQuantity(d.safe, "V")}`, fill: C.ok, position: "insideTopRight", fontSize: 13 }} />
+          {d.deadline !== undefined ? (
+            <ReferenceLine x={d.deadline} stroke={C.hazard} strokeDasharray="4 4" label={{ value: "Time allowed", fill: C.hazard, position: "insideTopLeft", fontSize: 13 }} />
+          ) : null}
+          <Line type="monotone" dataKey="v" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} name="Voltage" />
+          <ReferenceDot x={d.tSafe} y={d.safe} r={6} fill={late ? C.hazard : C.ok} stroke={C.panel} strokeWidth={2} />
+        </LineChart>
+      </ResponsiveContainer>
+    </ChartFrame>
+  );
+}

@@ -1,0 +1,102 @@
+"use client";
+
+import { useFormContext } from "react-hook-form";
+import { Field } from "@/components/ui/field";
+import type { InputMeta } from "@/lib/calc/types";
+import { errorAt } from "@/lib/bench/errors";
+import { ListInput } from "./list-inputs";
+
+/** Shown beside a field: the unit a bare number is read in. */
+export function unitSuffix(unit: string) {
+  return unit ? <span title={`A bare number is read in ${unit}; add a prefix such as k, m or µ`}>{unit}</span> : undefined;
+}
+
+const inputClass = "min-h-11 w-full rounded-chip border bg-panel px-3 py-2 text-body text-ink";
+
+function Message({ id, error }: { id: string; error?: string }) {
+  return (
+    <p id={`${id}-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
+      {error ?? ""}
+    </p>
+  );
+}
+
+function Hint({ id, help }: { id: string; help?: string }) {
+  return help ? (
+    <p id={`${id}-hint`} className="text-note text-muted">
+      {help}
+    </p>
+  ) : null;
+}
+
+const describedBy = (id: string, error?: string, help?: string) =>
+  [error ? `${id}-error` : null, help ? `${id}-hint` : null].filter(Boolean).join(" ") || undefined;
+
+/** One input of a calculator, rendered as its metadata asks. */
+export function InputControl({ meta, slug }: { meta: InputMeta; slug: string }) {
+  const { register, formState } = useFormContext();
+  const id = `in-${meta.name}`;
+  const error = errorAt(formState.errors, meta.name);
+  const label = (
+    <>
+      {meta.label}
+      {!meta.required ? <span className="ml-1 font-normal text-muted">(optional)</span> : null}
+    </>
+  );
+
+  if (meta.control === "list") return <ListInput meta={meta} slug={slug} />;
+
+  if (meta.control === "boolean") {
+    return (
+      <div className="flex flex-col gap-1">
+        <label htmlFor={id} className="flex min-h-11 cursor-pointer items-center gap-3 font-bold">
+          <input id={id} type="checkbox" className="h-5 w-5 accent-[rgb(var(--gb-glow))]" aria-describedby={describedBy(id, error, meta.help)} {...register(meta.name)} />
+          {meta.label}
+        </label>
+        <Hint id={id} help={meta.help} />
+        <Message id={id} error={error} />
+      </div>
+    );
+  }
+
+  if (meta.control === "select") {
+    return (
+      <div className="flex flex-col gap-1">
+        <label htmlFor={id} className="font-bold">
+          {label}
+        </label>
+        <select
+          id={id}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={describedBy(id, error, meta.help)}
+          className={`${inputClass} ${error ? "border-hazard" : "border-rule"}`}
+          {...register(meta.name)}
+        >
+          {!meta.required ? <option value="">None (enter the figures below)</option> : null}
+          {(meta.options ?? []).map((o) => (
+            <option key={o} value={o}>
+              {o.charAt(0).toUpperCase() + o.slice(1)}
+            </option>
+          ))}
+        </select>
+        <Hint id={id} help={meta.help} />
+        <Message id={id} error={error} />
+      </div>
+    );
+  }
+
+  return (
+    <Field
+      id={id}
+      label={label}
+      error={error}
+      hint={meta.help}
+      suffix={unitSuffix(meta.unit)}
+      autoComplete="off"
+      spellCheck={false}
+      inputMode="text"
+      className="gb-field"
+      {...register(meta.name)}
+    />
+  );
+}

@@ -1,0 +1,125 @@
+"use client";
+
+import type { RunResult } from "@/lib/calc/run";
+import type { OutputMeta, OutputValue, Warning } from "@/lib/calc/types";
+import { formatOutput, formatPlain, outputLabel } from "@/lib/bench/display";
+import { HEADLINES } from "@/lib/bench/examples";
+import { BAND_PAINT } from "./list-inputs";
+
+/** Outputs whose value is bad news, so the figure is shown in the hazard or caution colour. */
+function tone(slug: string, name: string, value: OutputValue): string {
+  if (slug === "arc-clearance" && name === "willArc" && value === true) return "text-hazard";
+  if (slug === "heater-string" && name === "currentsMatch" && value === false) return "text-hazard";
+  if (slug === "resistor-drift" && (name === "verdict" || name === "withinTolerance") && value !== "within" && value !== true) return "text-caution";
+  return "text-ink";
+}
+
+export function ResultsPanel({ slug, outputs, run }: { slug: string; outputs: readonly OutputMeta[]; run: RunResult }) {
+  if (!run.ok) {
+    const named = Object.keys(run.error.fields).filter((k) => k !== "_").length;
+    return (
+      <div data-testid="no-result" className="rounded-card border-2 border-dashed border-rule bg-panel p-6">
+        <h2 className="text-lead font-bold">No result yet</h2>
+        <p className="mt-1 text-muted">
+          {named ? "Fix the marked field" + (named > 1 ? "s" : "") + " and the answer appears here as you type." : run.error.message}
+        </p>
+      </div>
+    );
+  }
+  const { outputs: values, warnings } = run.result;
+  const headline = HEADLINES[slug] ?? outputs.slice(0, 2).map((o) => o.name);
+  const heads = outputs.filter((o) => headline.includes(o.name));
+  const rest = outputs.filter((o) => !headline.includes(o.name) && values[o.name] !== null && values[o.name] !== undefined);
+  return (
+    <div data-testid="result" className="flex flex-col gap-4">
+      <div className="grid gap-3 sm:grid-cols-2" aria-live="polite">
+        {heads.map((o) => (
+          <div key={o.name} className="rounded-card border border-rule bg-panel p-4 shadow-card">
+            <p className="text-note font-bold text-muted">{outputLabel(slug, o)}</p>
+            <p data-testid={`output-${o.name}`} className={`mt-1 font-mono text-reading font-bold ${tone(slug, o.name, values[o.name])}`}>
+              {formatOutput(slug, o, values[o.name])}
+            </p>
+          </div>
+        ))}
+      </div>
+      {rest.length ? (
+        <dl className="divide-y divide-rule rounded-card border border-rule bg-panel">
+          {rest.map((o) => (
+            <div key={o.name} className={`px-4 py-2.5 ${o.name === "stages" ? "" : "flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1"}`}>
+              <dt className="text-muted">{outputLabel(slug, o)}</dt>
+              <dd data-testid={`output-${o.name}`} className={`font-mono font-bold ${tone(slug, o.name, values[o.name])}`}>
+                {Array.isArray(values[o.name]) ? <ListValue name={o.name} value={values[o.name] as OutputValue[]} /> : formatOutput(slug, o, values[o.name])}
+              </dd>
+            </div>
+          ))}
+        </dl>
+      ) : null}
+      <Notes warnings={warnings} />
+    </div>
+  );
+}
+
+function ListValue({ name, value }: { name: string; value: OutputValue[] }) {
+  if (name === "bands") {
+    return (
+      <span className="flex flex-wrap gap-2">
+        {value.map((c, i) => (
+          <span key={i} className="inline-flex items-center gap-1 font-sans font-normal">
+            <span className="h-4 w-2.5 rounded-sm border border-rule" style={{ background: BAND_PAINT[String(c)] }} aria-hidden="true" />
+            {String(c)}
+          </span>
+        ))}
+      </span>
+    );
+  }
+  if (name === "stages") {
+    if (value.length === 0) return <span className="font-sans font-normal text-muted">no stages</span>;
+    return (
+      <table className="mt-1 w-full text-right text-note">
+        <thead className="font-sans text-muted">
+          <tr>
+            <th scope="col" className="pr-3 text-left font-normal">Stage</th>
+            <th scope="col" className="pr-3 font-normal">Passes (fraction)</th>
+            <th scope="col" className="pr-3 font-normal">Ripple after</th>
+            <th scope="col" className="font-normal">DC drop</th>
+          </tr>
+        </thead>
+        <tbody>
+          {value.map((s, i) => {
+            const row = s as Record<string, OutputValue>;
+            return (
+              <tr key={i}>
+                <th scope="row" className="pr-3 text-left">{i + 1}</th>
+                <td className="pr-3">{formatPlain(row.attenuation, "", 3)}</td>
+                <td className="pr-3">{formatPlain(row.rippleRms, "V")}</td>
+                <td>{formatPlain(row.dcDrop, "V")}</td>
+              </tr>
+            );
+          })}
+        </tbody>
+      </table>
+    );
+  }
+  return <>{value.map(String).join(", ")}</>;
+}
+
+const NOTE_STYLE: Record<string, string> = {
+  caution: "border-caution bg-caution-bg",
+  info: "border-rule bg-panel",
+};
+
+/** Cautions and notes (the danger warning has its own banner). */
+function Notes({ warnings }: { warnings: Warning[] }) {
+  const notes = warnings.filter((w) => w.level !== "danger");
+  if (!notes.length) return null;
+  return (
+    <ul className="flex flex-col gap-2" aria-label="Notes on this result">
+      {notes.map((w) => (
+        <li key={w.message} data-level={w.level} className={`rounded-chip border-l-4 p-3 text-note ${NOTE_STYLE[w.level]}`}>
+          <span className="font-bold">{w.level === "caution" ? "Caution: " : "Note: "}</span>
+          {w.message}
+        </li>
+      ))}
+    </ul>
+  );
+}

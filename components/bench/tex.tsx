@@ -1,0 +1,48 @@
+"use client";
+
+import { useEffect, useState } from "react";
+
+/**
+ * Live LaTeX for the substituted steps. KaTeX is loaded only after the page is interactive, so it
+ * never weighs on first load; until then the server's rendering of the same LaTeX is shown.
+ */
+
+type Katex = typeof import("katex").default;
+let katexModule: Katex | null = null;
+let loading: Promise<Katex> | null = null;
+const cache = new Map<string, string>();
+
+function loadKatex(): Promise<Katex> {
+  loading ??= import("katex").then((m) => (katexModule = m.default));
+  return loading;
+}
+
+export function useKatex(): Katex | null {
+  const [k, setK] = useState<Katex | null>(null);
+  useEffect(() => {
+    let alive = true;
+    loadKatex().then((m) => alive && setK(() => m));
+    return () => {
+      alive = false;
+    };
+  }, []);
+  return k;
+}
+
+function render(katex: Katex, latex: string): string {
+  let html = cache.get(latex);
+  if (html === undefined) {
+    html = katex.renderToString(latex, { throwOnError: false, displayMode: false, output: "htmlAndMathml" });
+    if (cache.size > 400) cache.clear();
+    cache.set(latex, html);
+  }
+  return html;
+}
+
+/** One formula: from KaTeX when loaded, from the server's HTML when it has it, else the LaTeX as text. */
+export function Tex({ latex, katex, serverHtml }: { latex: string; katex: Katex | null; serverHtml?: Record<string, string> }) {
+  const html = katex ? render(katex, latex) : serverHtml?.[latex];
+  if (html === undefined) return <code className="font-mono text-note text-muted">{latex}</code>;
+  return <span className="gb-tex" dangerouslySetInnerHTML={{ __html: html }} />;
+}
+

@@ -1,0 +1,41 @@
+/**
+ * A worked bench case per calculator, filled in when a page opens without inputs in its URL, so
+ * a newcomer sees an answer, its working and its picture straight away. Written as a person types them.
+ */
+export const EXAMPLES: Record<string, Record<string, unknown>> = {
+  "cathode-bias": { biasVoltage: "1.5 V", plateCurrent: "1 mA", bypassCapacitance: "25 uF" },
+  "triode-stage": { tube: "12AX7", supplyVoltage: "250 V", plateResistor: "100k", cathodeResistor: "1.5k", cathodeBypassed: true, loadResistance: "470k" },
+  "dropping-resistor": { supplyVoltage: "300 V", loadVoltage: "250 V", loadCurrent: "10 mA" },
+  "heater-string": { lineVoltage: "120 V", tubes: ["12BE6", "12BA6", "12AV6", "35C5", "35W4"] },
+  "supply-ripple": {
+    loadCurrent: "80 mA",
+    capacitance: "40 uF",
+    rectifier: "full-wave",
+    stages: [{ kind: "rc", resistance: "1k", capacitance: "20 uF" }],
+  },
+  "time-constant": { resistance: "220k", capacitance: "47 uF", initialVoltage: "350 V", targetVoltage: "30 V" },
+  bleeder: { capacitance: "40 uF", workingVoltage: "450 V" },
+  "arc-clearance": { peakVoltage: "15 kV", gap: "5 mm" },
+  "resistor-drift": { nominal: "100k", measured: "128k" },
+  "preferred-value": { value: "5.13k" },
+  "colour-code": { bands: ["yellow", "violet", "red", "gold"] },
+  "ohms-law": { voltage: "250 V", resistance: "100k" },
+  reactance: { frequency: "1 kHz", capacitance: "100 nF", inductance: "10 mH" },
+};
+
+/** The outputs shown large at the top of the result; the rest follow in a list. */
+export const HEADLINES: Record<string, readonly string[]> = {
+  "cathode-bias": ["cathodeResistance", "suggestedRating"],
+  "triode-stage": ["plateVoltage", "gain"],
+  "dropping-resistor": ["resistance", "suggestedRating"],
+  "heater-string": ["droppingResistance", "suggestedRating"],
+  "supply-ripple": ["rippleRms", "finalRippleRms"],
+  "time-constant": ["timeConstant", "timeToTarget"],
+  bleeder: ["suggestedResistance", "suggestedRating"],
+  "arc-clearance": ["minimumGap", "recommendedClearance"],
+  "resistor-drift": ["verdict", "deviation"],
+  "preferred-value": ["nearest", "errorOfNearest"],
+  "colour-code": ["resistance", "tolerance"],
+  "ohms-law": ["current", "power"],
+  reactance: ["capacitiveReactance", "resonantFrequency"],
+};

@@ -1,0 +1,112 @@
+import type { InputMeta } from "@/lib/calc/types";
+
+/**
+ * The form holds what a person typed (text for quantities, arrays for lists); the calculator's schema
+ * gets a cleaned copy with blanks dropped and only the active way of entering a list.
+ */
+
+export type FormValues = Record<string, unknown>;
+
+/** Calculators whose list input has an alternative: heaters or tube types, bands or a resistance. */
+export const MODES: Record<string, { modes: readonly { id: string; label: string; fields: readonly string[] }[] }> = {
+  "heater-string": {
+    modes: [
+      { id: "tubes", label: "By tube type", fields: ["tubes"] },
+      { id: "heaters", label: "By heater rating", fields: ["heaters"] },
+    ],
+  },
+  "colour-code": {
+    modes: [
+      { id: "bands", label: "Read the bands", fields: ["bands"] },
+      { id: "value", label: "Code a value", fields: ["resistance", "tolerance"] },
+    ],
+  },
+};
+
+export function hiddenFields(slug: string, mode: string | undefined): Set<string> {
+  const m = MODES[slug];
+  if (!m) return new Set();
+  return new Set(m.modes.filter((x) => x.id !== mode).flatMap((x) => x.fields));
+}
+
+/** The mode the initial inputs imply (the first one with a value, else the first). */
+export function initialMode(slug: string, values: FormValues): string | undefined {
+  const m = MODES[slug];
+  if (!m) return undefined;
+  const given = m.modes.find((x) => x.fields.some((f) => !isBlank(values[f]) && !(Array.isArray(values[f]) && (values[f] as unknown[]).length === 0)));
+  return (given ?? m.modes[0]).id;
+}
+
+function isBlank(v: unknown): boolean {
+  return v === undefined || v === null || (typeof v === "string" && v.trim() === "");
+}
+
+const text = (v: unknown) => (v === undefined || v === null ? "" : typeof v === "object" ? JSON.stringify(v) : String(v));
+
+/** Initial form values: the given inputs (from the URL or the example) over the metadata's defaults. */
+export function initialValues(inputs: readonly InputMeta[], given: FormValues): FormValues {
+  const out: FormValues = {};
+  for (const meta of inputs) {
+    const v = given[meta.name] ?? meta.default;
+    if (meta.control === "boolean") out[meta.name] = v === undefined ? true : v === true || v === "true" || v === "on";
+    else if (meta.control === "list") out[meta.name] = listValue(meta.name, v);
+    else out[meta.name] = text(v);
+  }
+  return out;
+}
+
+function listValue(name: string, v: unknown): unknown[] {
+  const arr = Array.isArray(v) ? v : typeof v === "string" && v.trim() ? v.split(/[\s,;]+/) : [];
+  if (name === "stages") {
+    return arr.map((s) => {
+      const o = (s ?? {}) as Record<string, unknown>;
+      return { kind: o.kind === "lc" ? "lc" : "rc", resistance: text(o.resistance), inductance: text(o.inductance), capacitance: text(o.capacitance) };
+    });
+  }
+  if (name === "heaters") {
+    return arr.map((h) => {
+      const o = (h ?? {}) as Record<string, unknown>;
+      return { voltage: text(o.voltage), current: text(o.current) };
+    });
+  }
+  return arr.map((x) => text(x));
+}
+
+/** What the schema (and the URL, and a saved job) gets from the form. */
+export function toRaw(slug: string, inputs: readonly InputMeta[], values: FormValues, mode?: string): FormValues {
+  const hidden = hiddenFields(slug, mode);
+  const out: FormValues = {};
+  for (const meta of inputs) {
+    if (hidden.has(meta.name)) continue;
+    const v = values[meta.name];
+    if (meta.control === "boolean") {
+      out[meta.name] = Boolean(v);
+    } else if (meta.control === "list") {
+      const list = cleanList(meta.name, Array.isArray(v) ? v : []);
+      if (list.length) out[meta.name] = list;
+    } else if (!isBlank(v)) {
+      out[meta.name] = String(v).trim();
+    }
+  }
+  return out;
+}
+
+function cleanList(name: string, arr: unknown[]): unknown[] {
+  if (name === "stages") {
+    return arr.map((s) => {
+      const o = s as Record<string, string>;
+      return o.kind === "lc"
+        ? { kind: "lc", inductance: o.inductance?.trim() ?? "", capacitance: o.capacitance?.trim() ?? "" }
+        : { kind: "rc", resistance: o.resistance?.trim() ?? "", capacitance: o.capacitance?.trim() ?? "" };
+    });
+  }
+  if (name === "heaters") return arr.map((h) => ({ voltage: String((h as Record<string, string>).voltage ?? "").trim(), current: String((h as Record<string, string>).current ?? "").trim() }));
+  return arr.map((x) => String(x ?? "").trim()).filter(Boolean);
+}
+
+/** Inputs most people leave alone, folded under "More figures" until needed. */
+export const ADVANCED: Record<string, { title: string; fields: readonly string[] }> = {
+  "cathode-bias": { title: "Tube figures, for a better bypass estimate", fields: ["amplificationFactor", "plateResistance", "plateLoad", "transconductance"] },
+  "triode-stage": { title: "Model parameters (to override the table or for another tube)", fields: ["mu", "ex", "kg1", "kp", "kvb"] },
+  "arc-clearance": { title: "Air and safety factor", fields: ["pressure", "temperature", "safetyFactor"] },
+};

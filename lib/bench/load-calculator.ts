@@ -1,0 +1,31 @@
+import type { Calculator } from "@/lib/calc/types";
+
+/**
+ * One dynamic import per calculator, so a Bench page's browser bundle carries only the module it
+ * shows (never the whole registry). Each entry becomes its own chunk.
+ */
+type Loader = () => Promise<{ calculator: unknown }>;
+
+const LOADERS: Record<string, Loader> = {
+  "arc-clearance": () => import("@/lib/calc/arc-clearance"),
+  bleeder: () => import("@/lib/calc/bleeder"),
+  "cathode-bias": () => import("@/lib/calc/cathode-bias"),
+  "colour-code": () => import("@/lib/calc/colour-code"),
+  "dropping-resistor": () => import("@/lib/calc/dropping-resistor"),
+  "heater-string": () => import("@/lib/calc/heater-string"),
+  "ohms-law": () => import("@/lib/calc/ohms-law"),
+  "preferred-value": () => import("@/lib/calc/preferred-value"),
+  reactance: () => import("@/lib/calc/reactance"),
+  "resistor-drift": () => import("@/lib/calc/resistor-drift"),
+  "supply-ripple": () => import("@/lib/calc/supply-ripple"),
+  "time-constant": () => import("@/lib/calc/time-constant"),
+  "triode-stage": () => import("@/lib/calc/triode-stage"),
+};
+
+export const LOADABLE_SLUGS = Object.keys(LOADERS);
+
+export async function loadCalculator(slug: string): Promise<Calculator> {
+  const load = LOADERS[slug];
+  if (!load) throw new Error(`No calculator module for "${slug}"`);
+  return (await load()).calculator as Calculator;
+}
