@@ -24,23 +24,30 @@ export interface Engineering {
 export function toEngineering(value: number, unit: string, sig = 3): Engineering {
   if (!Number.isFinite(value)) return { mantissa: String(value), prefix: "", texPrefix: "" };
   if (value === 0 || NO_PREFIX.has(unit)) return { mantissa: trim(value.toPrecision(sig)), prefix: "", texPrefix: "" };
-  const exp = Math.floor(Math.log10(Math.abs(value)));
-  let step = PREFIX_STEPS.find((s) => exp >= s.exp) ?? PREFIX_STEPS[PREFIX_STEPS.length - 1];
+  // A power rating reads better as "0.5 W" than "500 mW" (the wattages of the parts catalogue).
+  const abs = Math.abs(value);
+  if (unit === "W" && abs >= 0.1 && abs < 1) return { mantissa: trim(value.toPrecision(sig)), prefix: "", texPrefix: "" };
+  const exp = Math.floor(Math.log10(abs));
+  let k = 0;
+  while (k < PREFIX_STEPS.length - 1 && exp < PREFIX_STEPS[k].exp) k++;
+  let step = PREFIX_STEPS[k];
   let scaled = value / 10 ** step.exp;
   // 999.96 rounds to "1.00e+3": move up a prefix instead.
-  if (Math.abs(Number(scaled.toPrecision(sig))) >= 1000) {
-    const up = PREFIX_STEPS[PREFIX_STEPS.indexOf(step) - 1];
-    if (up) {
-      step = up;
-      scaled = value / 10 ** step.exp;
-    }
+  if (Math.abs(Number(scaled.toPrecision(sig))) >= 1000 && k > 0) {
+    step = PREFIX_STEPS[k - 1];
+    scaled = value / 10 ** step.exp;
   }
   return { mantissa: trim(scaled.toPrecision(sig)), prefix: step.symbol, texPrefix: step.tex };
 }
 
+/** "4.70" → "4.7", "250." → "250", "1.00e+3" → "1000": no trailing zeros, no regex (this runs per value shown). */
 function trim(s: string): string {
   if (s.includes("e")) return String(Number(s));
-  return s.includes(".") ? s.replace(/\.?0+$/, "") : s;
+  if (!s.includes(".")) return s;
+  let end = s.length;
+  while (s.charCodeAt(end - 1) === 48) end--; // "0"
+  if (s.charCodeAt(end - 1) === 46) end--; // "."
+  return s.slice(0, end);
 }
 
 /** "4.7 kΩ", "1.25 mA", "0.5 W". */

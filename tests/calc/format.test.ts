@@ -11,8 +11,18 @@ describe("formatQuantity", () => {
     expect(formatQuantity(47e-6, "F")).toBe("47 µF");
     expect(formatQuantity(100e-12, "F")).toBe("100 pF");
     expect(formatQuantity(4.7e-9, "F")).toBe("4.7 nF");
-    // sub-unit powers come out in milliwatts
-    expect(formatQuantity(0.5, "W")).toBe("500 mW");
+  });
+
+  it("shows power ratings from 0.1 W to 1 W in watts, smaller powers in milliwatts", () => {
+    // Resistor ratings are catalogued as 1/8, 1/4, 1/2 W (common practice), so "0.5 W" reads as the part.
+    expect(formatQuantity(0.5, "W")).toBe("0.5 W");
+    expect(formatQuantity(0.125, "W")).toBe("0.125 W");
+    expect(formatQuantity(0.1, "W")).toBe("0.1 W");
+    expect(formatQuantity(0.0999, "W")).toBe("99.9 mW");
+    expect(formatQuantity(1, "W")).toBe("1 W");
+    expect(formatQuantity(2500, "W")).toBe("2.5 kW");
+    expect(texQuantity(0.25, "W")).toBe(String.raw`0.25\,\mathrm{W}`);
+    expect(formatQuantity(0.5, "V")).toBe("500 mV"); // only watts are shown this way
   });
 
   it("rounds to significant figures and moves up a prefix at 1000", () => {

@@ -158,3 +158,58 @@ describe("quantity schemas", () => {
     expect(s.safeParse(Number.POSITIVE_INFINITY).success).toBe(false);
   });
 });
+
+describe("parseQuantity: the fast path for a kind's own unit agrees with mathjs", () => {
+  // "250 kV" takes the fast path; "250 kilovolt" (mathjs's long names) always goes through mathjs.
+  const kinds: [QuantityKind, string, string][] = [
+    ["voltage", "V", "volt"],
+    ["current", "A", "ampere"],
+    ["resistance", "Ω", "ohm"],
+    ["capacitance", "F", "farad"],
+    ["inductance", "H", "henry"],
+    ["frequency", "Hz", "hertz"],
+    ["time", "s", "second"],
+    ["length", "m", "meter"],
+    ["power", "W", "watt"],
+    ["conductance", "S", "siemens"],
+  ];
+  const prefixes: [string, string][] = [["", ""], ["p", "pico"], ["n", "nano"], ["u", "micro"], ["µ", "micro"], ["m", "milli"], ["k", "kilo"], ["M", "mega"], ["G", "giga"]];
+
+  it("property: same SI value either way", () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...kinds),
+        fc.constantFrom(...prefixes),
+        fc.double({ min: 1e-3, max: 1e4, noNaN: true }),
+        fc.boolean(),
+        ([kind, symbol, long], [p, longP], x, space) => {
+          const n = Number(x.toPrecision(4));
+          const fast = value(`${n}${space ? " " : ""}${p}${symbol}`, kind);
+          const slow = value(`${n} ${longP}${long}`, kind);
+          expect(Math.abs(fast / slow - 1)).toBeLessThan(1e-12);
+        },
+      ),
+      { numRuns: 300 },
+    );
+  });
+
+  it("wrong units and other spellings: mathjs's answers and messages", () => {
+    expect(message("47 uF", "voltage")).toBe("expected a voltage, got farads");
+    expect(message("250 V", "resistance")).toBe("expected a resistance, got volts");
+    expect(value("101.3 kPa", "pressure")).toBeCloseTo(101300, 6);
+    expect(value("1 bar", "pressure")).toBeCloseTo(1e5, 6);
+    expect(value("5 mm", "length")).toBeCloseTo(0.005, 12);
+    expect(value("20 degC", "temperature")).toBeCloseTo(293.15, 9);
+    expect(value("2.2 Mohm", "resistance")).toBe(2.2e6);
+    expect(value("4.7 kOhms", "resistance")).toBe(4700);
+  });
+});
+
+describe("parseQuantity: metres", () => {
+  it("a lone m after a length is the metre, mm is millimetres", () => {
+    expect(value("0.005 m", "length")).toBe(0.005);
+    expect(value("2m", "length")).toBe(2);
+    expect(value("5 mm", "length")).toBe(0.005);
+    expect(value("5m", "current")).toBe(0.005); // elsewhere m is still milli
+  });
+});

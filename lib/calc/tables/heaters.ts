@@ -122,7 +122,8 @@ for (const entry of HEATERS) for (const n of entry.names) byName.set(normaliseTu
 
 /** The heater of a tube type, case-insensitive; undefined when the table does not list it. */
 export function findHeater(name: string): HeaterEntry | undefined {
-  return byName.get(normaliseTubeName(name));
+  // Names the schema has already normalised hit directly; only typed names need the regex.
+  return byName.get(name) ?? byName.get(normaliseTubeName(name));
 }
 
 /** Every name the table knows, for the form's suggestions. */

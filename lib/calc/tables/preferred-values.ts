@@ -56,10 +56,17 @@ function assertPositive(value: number): void {
   if (!(value > 0) || !Number.isFinite(value)) throw new RangeError("A preferred value needs a positive, finite number");
 }
 
-/** Members of the decade around `value` and its neighbours, ascending. */
-function around(value: number, series: SeriesName): number[] {
+/** Members of the decade around `value` and its neighbours, ascending; cached, since every compute asks. */
+const aroundCache: Record<SeriesName, Map<number, readonly number[]>> = { E6: new Map(), E12: new Map(), E24: new Map(), E48: new Map(), E96: new Map() };
+function around(value: number, series: SeriesName): readonly number[] {
   const d = Math.floor(Math.log10(value));
-  return seriesValues(series, d - 1, d + 1);
+  const cache = aroundCache[series];
+  let list = cache.get(d);
+  if (!list) {
+    list = seriesValues(series, d - 1, d + 1); // at most ~650 decades × 5 series: bounded
+    cache.set(d, list);
+  }
+  return list;
 }
 
 // Relative slack so that 4700 typed as 4.7e3 counts as an exact member.
@@ -68,14 +75,21 @@ const SAME = 1e-9;
 /** The largest series member ≤ value (an exact member returns itself). */
 export function preferredBelow(value: number, series: SeriesName): number {
   assertPositive(value);
-  const candidates = around(value, series).filter((c) => c <= value * (1 + SAME));
-  return candidates[candidates.length - 1];
+  const list = around(value, series);
+  const limit = value * (1 + SAME);
+  let i = list.length - 1;
+  while (i > 0 && list[i] > limit) i--;
+  return list[i];
 }
 
 /** The smallest series member ≥ value (an exact member returns itself). */
 export function preferredAbove(value: number, series: SeriesName): number {
   assertPositive(value);
-  return around(value, series).find((c) => c >= value * (1 - SAME)) as number;
+  const list = around(value, series);
+  const limit = value * (1 - SAME);
+  let i = 0;
+  while (i < list.length - 1 && list[i] < limit) i++;
+  return list[i];
 }
 
 /**
