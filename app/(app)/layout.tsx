@@ -1,3 +1,4 @@
+import { QueryProvider } from "@/components/providers/query-provider";
 import { SiteHeader } from "@/components/shell/site-header";
 
 export default function AppLayout({ children }: { children: React.ReactNode }) {
@@ -8,7 +9,7 @@ export default function AppLayout({ children }: { children: React.ReactNode }) {
       </a>
       <SiteHeader />
       <main id="main" className="mx-auto max-w-6xl px-4 py-8">
-        {children}
+        <QueryProvider>{children}</QueryProvider>
       </main>
     </>
   );

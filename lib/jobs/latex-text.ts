@@ -104,14 +104,14 @@ export function latexToText(latex: string): string {
 
 /** The PDF's embedded font covers Latin only: spell out the few symbols it lacks. */
 const PDF_REPLACEMENTS: [RegExp, string][] = [
-  [/Ω/g, "ohm"], [/μ/g, "µ"], [/√/g, "sqrt"], [/≤/g, "<="], [/≥/g, ">="], [/≠/g, "!="], [/≈/g, "~"], [/⇒/g, "=>"], [/→/g, "->"],
+  [/μ/g, "µ"], [/√/g, "sqrt"], [/≤/g, "<="], [/≥/g, ">="], [/≠/g, "!="], [/≈/g, "~"], [/⇒/g, "=>"], [/→/g, "->"],
   [/∞/g, "infinity"], [/∥/g, "||"], [/π/g, "pi"], [/τ/g, "tau"], [/ω/g, "omega"], [/α/g, "alpha"], [/β/g, "beta"], [/γ/g, "gamma"],
   [/δ/g, "delta"], [/Δ/g, "Delta"], [/ρ/g, "rho"], [/θ/g, "theta"], [/φ/g, "phi"], [/ε/g, "epsilon"], [/λ/g, "lambda"],
   [/σ/g, "sigma"], [/Σ/g, "Sum"], [/[\u0370-\u03ff]/g, "?"],
 ];
 
 export function pdfText(text: string): string {
-  return PDF_REPLACEMENTS.reduce((t, [re, to]) => t.replace(re, /^[a-z]{2,}$/i.test(to) ? ` ${to} ` : to), text)
+  return PDF_REPLACEMENTS.reduce((t, [re, to]) => t.replace(re, /^[a-z]{2,}$/i.test(to) ? ` ${to} ` : to), text.replace(/Ω/g, "ohm"))
     .replace(/ {2,}/g, " ")
     .replace(/\( /g, "(")
     .replace(/ \)/g, ")")

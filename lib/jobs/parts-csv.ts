@@ -71,6 +71,8 @@ export function parsePartsCsv(text: string): CsvImport {
   });
   for (const err of parsed.errors) {
     if (err.code === "UndetectableDelimiter") continue;
+    const record = err.row === undefined ? undefined : parsed.data[err.row];
+    if (record && Object.values(record).every((v) => (v ?? "").trim() === "")) continue; // a blank line, e.g. the last
     const rowNumber = (err.row ?? 0) + 2;
     fields[`row.${rowNumber}`] ??= `Row ${rowNumber}: ${err.message}`;
   }

@@ -69,26 +69,25 @@ export async function prepareUpload(file: File): Promise<PreparedUpload> {
 
 export const thumbnailName = (storedName: string) => `${storedName}.thumb.webp`;
 
+/** Only ever a base name inside the uploads folder. */
+const storedPath = (name: string) => path.join(/*turbopackIgnore: true*/ uploadsDir(), path.basename(name));
+
 /** Writes the file (and its thumbnail) under a fresh random name; returns the name. */
 export async function storeUpload(prepared: PreparedUpload): Promise<string> {
-  const dir = uploadsDir();
-  await fs.mkdir(dir, { recursive: true });
+  await fs.mkdir(uploadsDir(), { recursive: true });
   const storedName = `${randomBytes(16).toString("hex")}.${prepared.ext}`;
-  await fs.writeFile(path.join(dir, storedName), prepared.bytes, { flag: "wx" });
-  if (prepared.thumbnail) await fs.writeFile(path.join(dir, thumbnailName(storedName)), prepared.thumbnail, { flag: "wx" });
+  await fs.writeFile(storedPath(storedName), prepared.bytes, { flag: "wx" });
+  if (prepared.thumbnail) await fs.writeFile(storedPath(thumbnailName(storedName)), prepared.thumbnail, { flag: "wx" });
   return storedName;
 }
 
 export async function removeStored(storedName: string): Promise<void> {
-  const dir = uploadsDir();
-  const base = path.basename(storedName);
-  await Promise.all([fs.rm(path.join(dir, base), { force: true }), fs.rm(path.join(dir, thumbnailName(base)), { force: true })]);
+  await Promise.all([fs.rm(storedPath(storedName), { force: true }), fs.rm(storedPath(thumbnailName(path.basename(storedName))), { force: true })]);
 }
 
 export async function readStored(storedName: string, thumb: boolean): Promise<Buffer | null> {
-  const base = path.basename(storedName);
   try {
-    return await fs.readFile(path.join(uploadsDir(), thumb ? thumbnailName(base) : base));
+    return await fs.readFile(storedPath(thumb ? thumbnailName(path.basename(storedName)) : storedName));
   } catch {
     return null;
   }

@@ -1,0 +1,71 @@
+import type { Metadata } from "next";
+import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
+import { PartAddForm } from "@/components/jobs/part-add-form";
+import { PartRow } from "@/components/jobs/part-row";
+import { PartsCsvTools } from "@/components/jobs/parts-csv-tools";
+import { Card, EmptyState } from "@/components/ui/card";
+import { listParts } from "@/db/queries/parts";
+import { listReadings } from "@/db/queries/readings";
+import { can } from "@/lib/auth/member";
+import { capacitorCautions, highestMeasuredVoltage } from "@/lib/jobs/part-cautions";
+
+export const metadata: Metadata = { title: "Parts" };
+
+export default async function PartsPage({ params }: JobPageProps) {
+  const { member, job } = await loadJobPage((await params).id, "parts");
+  const parts = listParts(member, job.id);
+  const supply = highestMeasuredVoltage(listReadings(member, job.id));
+  const cautions = capacitorCautions(parts, supply);
+  const flagged = new Set(cautions.map((c) => c.partId));
+  const canEdit = can.editJobs(member);
+  const count = (s: string) => parts.filter((p) => p.state === s).length;
+  return (
+    <div className="flex flex-col gap-5">
+      <div className="flex flex-wrap items-center gap-x-8 gap-y-2" data-testid="parts-summary">
+        {[["to order", count("to-order")], ["ordered", count("ordered")], ["fitted", count("fitted")], ["in all", parts.length]].map(([label, n]) => (
+          <p key={label} className="flex items-baseline gap-2">
+            <span className="font-mono text-reading">{n}</span>
+            <span className="text-muted">{label}</span>
+          </p>
+        ))}
+      </div>
+      {cautions.length ? (
+        <div role="note" className="rounded-card border border-caution/50 bg-caution-bg p-4" data-testid="part-cautions">
+          <p className="font-bold text-caution">Check these voltage ratings</p>
+          <ul className="mt-1 list-disc pl-5">
+            {cautions.map((c) => <li key={c.partId}>{c.message}</li>)}
+          </ul>
+          <p className="mt-1 text-note text-muted">A capacitor run above its rating can fail short. Ratings here are read from what you typed; check them against the part itself.</p>
+        </div>
+      ) : null}
+      {parts.length === 0 ? (
+        <EmptyState title="No parts listed yet">{canEdit ? "Add each capacitor, resistor or tube to replace below, or import a CSV." : "A technician lists the parts to replace here."}</EmptyState>
+      ) : (
+        <div className="overflow-x-auto rounded-card border border-rule bg-panel shadow-card">
+          <table className="w-full min-w-[48rem] border-collapse text-left">
+            <thead className="border-b border-rule bg-sunk/60 text-note font-bold uppercase tracking-wide text-muted">
+              <tr>
+                <th scope="col" className="px-3 py-2">Ref.</th>
+                <th scope="col" className="px-3 py-2">Kind</th>
+                <th scope="col" className="px-3 py-2">Original</th>
+                <th scope="col" className="px-3 py-2">Replacement</th>
+                <th scope="col" className="px-3 py-2">State</th>
+                <th scope="col" className="px-3 py-2"><span className="sr-only">Actions</span></th>
+              </tr>
+            </thead>
+            <tbody className="divide-y divide-rule">
+              {parts.map((p) => <PartRow key={p.id} jobId={job.id} part={p} canEdit={canEdit} caution={flagged.has(p.id)} />)}
+            </tbody>
+          </table>
+        </div>
+      )}
+      <PartsCsvTools jobId={job.id} canEdit={canEdit} />
+      {canEdit ? (
+        <Card>
+          <h2 className="mb-3 text-lead font-bold">Add a part</h2>
+          <PartAddForm jobId={job.id} />
+        </Card>
+      ) : null}
+    </div>
+  );
+}

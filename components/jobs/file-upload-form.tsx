@@ -1,0 +1,47 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useRef, useState } from "react";
+import { Button } from "@/components/ui/button";
+
+/** Multipart upload of one photo or schematic; the server sniffs the type and answers in plain words. */
+export function FileUploadForm({ jobId }: { jobId: number }) {
+  const router = useRouter();
+  const form = useRef<HTMLFormElement>(null);
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  async function onSubmit(e: React.FormEvent<HTMLFormElement>) {
+    e.preventDefault();
+    const data = new FormData(e.currentTarget);
+    const file = data.get("file");
+    if (!(file instanceof File) || file.size === 0) return setError("Choose a photo or schematic first.");
+    if (file.size > 20 * 1024 * 1024) return setError("Files may be up to 20 MB; export a smaller copy.");
+    setBusy(true);
+    setError(null);
+    const res = await fetch(`/api/jobs/${jobId}/files`, { method: "POST", body: data }).catch(() => null);
+    setBusy(false);
+    if (!res) return setError("Could not reach Glowbench. Check the connection and try again.");
+    if (!res.ok) {
+      const body = await res.json().catch(() => null);
+      return setError(body?.error?.fields?.file ? `${body.error.message} ${body.error.fields.file}` : (body?.error?.message ?? `Upload failed (${res.status}).`));
+    }
+    form.current?.reset();
+    router.refresh();
+  }
+  return (
+    <form ref={form} onSubmit={onSubmit} className="flex flex-wrap items-end gap-4" aria-describedby="upload-error upload-hint">
+      <label className="flex flex-col gap-1">
+        <span className="font-bold">File</span>
+        <input name="file" type="file" accept="image/jpeg,image/png,image/webp,application/pdf" className="min-h-11 rounded-chip border border-rule bg-panel px-3 py-2 file:mr-3 file:rounded-chip file:border-0 file:bg-sunk file:px-3 file:py-1 file:font-bold" />
+      </label>
+      <fieldset className="flex gap-4">
+        <legend className="mb-1 font-bold">It is a</legend>
+        <label className="inline-flex min-h-11 items-center gap-2"><input type="radio" name="kind" value="photo" defaultChecked /> Photo</label>
+        <label className="inline-flex min-h-11 items-center gap-2"><input type="radio" name="kind" value="schematic" /> Schematic</label>
+      </fieldset>
+      <Button type="submit" disabled={busy}>{busy ? "Uploading…" : "Attach"}</Button>
+      <p id="upload-hint" className="w-full text-note text-muted">JPEG, PNG or WebP photos; PDF or image schematics; up to 20 MB. The type is read from the file itself.</p>
+      <p id="upload-error" role="alert" aria-live="polite" className="w-full min-h-5 font-bold text-hazard">{error ?? ""}</p>
+    </form>
+  );
+}

@@ -1,0 +1,55 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm } from "react-hook-form";
+import { PART_KINDS, PART_STATES, PART_STATE_LABELS } from "@/db/enums";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { SelectField } from "@/components/ui/select-field";
+import { sendJson } from "@/lib/client/fetch-json";
+import { PART_KIND_LABELS, partSchema, type PartInput, type PartValues } from "@/lib/jobs/part-schemas";
+
+const EMPTY: PartInput = { designator: "", kind: "paper", originalValue: "", originalRating: "", replacementValue: "", replacementRating: "", state: "to-order" };
+
+export function PartAddForm({ jobId }: { jobId: number }) {
+  const router = useRouter();
+  const [formError, setFormError] = useState<string | null>(null);
+  const { register, handleSubmit, reset, setError, setFocus, formState: { errors, isSubmitting } } = useForm<PartInput, unknown, PartValues>({
+    resolver: zodResolver(partSchema),
+    defaultValues: EMPTY,
+  });
+  const onSubmit = handleSubmit(async (values) => {
+    setFormError(null);
+    const res = await sendJson(`/api/jobs/${jobId}/parts`, values);
+    if (!res.ok) {
+      for (const [name, message] of Object.entries(res.fields)) if (name in EMPTY) setError(name as keyof PartInput, { message });
+      return setFormError(res.message);
+    }
+    reset({ ...EMPTY, kind: values.kind });
+    setFocus("designator");
+    router.refresh();
+  });
+  const id = (n: string) => `part-${n}`;
+  return (
+    <form onSubmit={onSubmit} noValidate aria-label="Add a part" className="grid gap-x-3 sm:grid-cols-4">
+      <Field id={id("designator")} label="Ref." placeholder="C12" error={errors.designator?.message} {...register("designator")} />
+      <SelectField id={id("kind")} label="Kind" options={PART_KINDS.map((k) => ({ value: k, label: PART_KIND_LABELS[k] }))} error={errors.kind?.message} {...register("kind")} />
+      <Field id={id("original-value")} label="Original value" placeholder="0.05 µF" error={errors.originalValue?.message} {...register("originalValue")} />
+      <Field id={id("original-rating")} label="Original rating" placeholder="400 V" error={errors.originalRating?.message} {...register("originalRating")} />
+      <SelectField id={id("state")} label="State" options={PART_STATES.map((s) => ({ value: s, label: PART_STATE_LABELS[s] }))} error={errors.state?.message} {...register("state")} />
+      <div className="hidden sm:block" />
+      <Field id={id("replacement-value")} label="Replacement value" placeholder="0.047 µF" error={errors.replacementValue?.message} {...register("replacementValue")} />
+      <Field id={id("replacement-rating")} label="Replacement rating" placeholder="630 V" error={errors.replacementRating?.message} {...register("replacementRating")} />
+      <div className="flex items-center gap-3 sm:col-span-4">
+        <Button type="submit" disabled={isSubmitting}>
+          Add part
+        </Button>
+        <p role="alert" aria-live="polite" className="font-bold text-hazard">
+          {formError ?? ""}
+        </p>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,88 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from "@/db/enums";
+import { Button } from "@/components/ui/button";
+import { sendJson } from "@/lib/client/fetch-json";
+
+/** What each step means at the bench, in our words. */
+const HINTS: Record<JobStatus, string> = {
+  "booked-in": "Arrived; not yet opened.",
+  inspecting: "Back off, looking for damage and cooked parts.",
+  "awaiting-go-ahead": "Waiting for the customer to agree the work.",
+  recapping: "Replacing the paper and electrolytic capacitors.",
+  "slow-start": "First power-up on a current-limited supply.",
+  "fault-finding": "Tracing what still does not work.",
+  aligning: "Peaking the IF and dial tracking.",
+  ready: "Finished and tested; waiting for collection.",
+  returned: "Back with its owner.",
+};
+
+export function StatusWorkflow({ jobId, status, canChange }: { jobId: number; status: JobStatus; canChange: boolean }) {
+  const router = useRouter();
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const [other, setOther] = useState<JobStatus>(status);
+  const index = JOB_STATUSES.indexOf(status);
+  const next = JOB_STATUSES[index + 1];
+
+  async function move(to: JobStatus) {
+    setBusy(true);
+    setError(null);
+    const res = await sendJson(`/api/jobs/${jobId}/status`, { status: to });
+    setBusy(false);
+    if (!res.ok) return setError(res.message);
+    router.refresh();
+  }
+
+  return (
+    <div>
+      <ol className="grid gap-1 sm:grid-cols-3 lg:grid-cols-9" aria-label="Workflow">
+        {JOB_STATUSES.map((s, i) => (
+          <li
+            key={s}
+            aria-current={s === status ? "step" : undefined}
+            title={HINTS[s]}
+            className={`rounded-chip border px-2 py-2 text-note leading-tight ${
+              s === status ? "border-glow bg-glow text-glow-ink font-bold" : i < index ? "border-rule bg-sunk text-muted" : "border-rule bg-panel text-ink"
+            }`}
+          >
+            <span className="block font-mono text-[0.75rem] opacity-80">{i + 1}</span>
+            {JOB_STATUS_LABELS[s]}
+          </li>
+        ))}
+      </ol>
+      <p className="mt-3 text-muted">
+        <strong className="text-ink">{JOB_STATUS_LABELS[status]}:</strong> {HINTS[status]}
+      </p>
+      {canChange ? (
+        <div className="mt-4 flex flex-wrap items-end gap-3">
+          {next ? (
+            <Button onClick={() => move(next)} disabled={busy}>
+              Move to “{JOB_STATUS_LABELS[next]}”
+            </Button>
+          ) : null}
+          <label className="flex flex-col gap-1">
+            <span className="text-note font-bold">Or set the status to</span>
+            <select value={other} onChange={(e) => setOther(e.target.value as JobStatus)} className="min-h-11 rounded-chip border border-rule bg-panel px-3">
+              {JOB_STATUSES.map((s) => (
+                <option key={s} value={s}>
+                  {JOB_STATUS_LABELS[s]}
+                </option>
+              ))}
+            </select>
+          </label>
+          <Button variant="secondary" onClick={() => move(other)} disabled={busy || other === status}>
+            Set status
+          </Button>
+        </div>
+      ) : (
+        <p className="mt-3 text-note text-muted">Technicians and owners move a job along; each change is written to the Log.</p>
+      )}
+      <p role="alert" className="mt-2 min-h-5 font-bold text-hazard">
+        {error ?? ""}
+      </p>
+    </div>
+  );
+}

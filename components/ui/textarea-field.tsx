@@ -1,0 +1,35 @@
+import type { ComponentProps, ReactNode } from "react";
+
+export function TextareaField({
+  id,
+  label,
+  error,
+  hint,
+  className = "",
+  ...area
+}: ComponentProps<"textarea"> & { id: string; label: ReactNode; error?: string; hint?: ReactNode }) {
+  const describedBy = [error ? `${id}-error` : null, hint ? `${id}-hint` : null].filter(Boolean).join(" ") || undefined;
+  return (
+    <div className={`flex flex-col gap-1 ${className}`}>
+      <label htmlFor={id} className="font-bold">
+        {label}
+      </label>
+      <textarea
+        id={id}
+        rows={3}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={describedBy}
+        className={`w-full rounded-chip border bg-panel px-3 py-2 text-body text-ink placeholder:text-muted ${error ? "border-hazard" : "border-rule"}`}
+        {...area}
+      />
+      {hint ? (
+        <p id={`${id}-hint`} className="text-note text-muted">
+          {hint}
+        </p>
+      ) : null}
+      <p id={`${id}-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
+        {error ?? ""}
+      </p>
+    </div>
+  );
+}
