@@ -128,7 +128,8 @@ export const jobs = sqliteTable(
   },
   (t) => [
     index("jobs_workshop_updated").on(t.workshopId, t.updatedAt),
-    index("jobs_workshop_status").on(t.workshopId, t.status),
+    // Status filter with the list's default order: an ordered scan that stops after one page.
+    index("jobs_workshop_status_updated").on(t.workshopId, t.status, t.updatedAt),
     index("jobs_workshop_kind").on(t.workshopId, t.equipmentKind),
   ],
 );
