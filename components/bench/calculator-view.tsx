@@ -31,6 +31,8 @@ export interface CalculatorViewProps {
   serverHtml: Record<string, string>;
   workingOpen: boolean;
   signedIn: boolean;
+  /** Owners and technicians may book in a new job from here; apprentices save to existing ones. */
+  canCreateJob: boolean;
   alwaysDanger: boolean;
   formulas: ReactNode;
   sources: ReactNode;
@@ -73,7 +75,12 @@ export function CalculatorView(p: CalculatorViewProps) {
   const run = useMemo(() => (calc ? runCalculator(calc, raw) : p.initialRun), [calc, raw, p.initialRun]);
   const later = useDeferredValue(run);
 
+  // The calculator module loads on the first sign of use (pointer over or into the form, focus, a key):
+  // the server's result is already on the page, so nothing else waits for it.
+  const [wanted, setWanted] = useState(false);
+  const want = useCallback(() => setWanted(true), []);
   useEffect(() => {
+    if (!wanted) return;
     let alive = true;
     loadCalculator(slug).then((c) => {
       if (!alive) return;
@@ -86,7 +93,7 @@ export function CalculatorView(p: CalculatorViewProps) {
       alive = false;
       delete document.documentElement.dataset.benchReady;
     };
-  }, [slug]);
+  }, [slug, wanted]);
 
   // Re-check every field, so a message that depends on another field (target below initial) stays current.
   const { trigger } = form;
@@ -125,6 +132,10 @@ export function CalculatorView(p: CalculatorViewProps) {
       <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
         <form
           onSubmit={(e) => e.preventDefault()}
+          onPointerEnter={want}
+          onPointerDownCapture={want}
+          onFocusCapture={want}
+          onKeyDownCapture={want}
           noValidate
           aria-labelledby="inputs-title"
           className="gb-no-print rounded-card border border-rule bg-panel p-6 shadow-card"
@@ -189,14 +200,14 @@ export function CalculatorView(p: CalculatorViewProps) {
         </div>
       </div>
       <div className="mt-8">
-        <Working slug={slug} open={p.workingOpen} run={later} outputs={p.outputs} serverHtml={p.serverHtml} formulas={p.formulas} sources={p.sources} why={p.why} />
+        <Working slug={slug} live={calc !== null} open={p.workingOpen} run={later} outputs={p.outputs} serverHtml={p.serverHtml} formulas={p.formulas} sources={p.sources} why={p.why} />
       </div>
       <section aria-labelledby="save-title" className="gb-no-print mt-8 rounded-card border border-rule bg-panel p-6 shadow-card">
         <h2 id="save-title" className="mb-3 text-lead font-bold">
           Save to a job
         </h2>
         {p.signedIn ? (
-          <SaveToJob slug={slug} inputs={raw} disabled={!run.ok} />
+          <SaveToJob slug={slug} inputs={raw} disabled={!run.ok} canCreateJob={p.canCreateJob} />
         ) : (
           <p className="text-muted" data-testid="sign-in-invitation">
             Keep this calculation with the set’s record, with a note for whoever picks the job up next.{" "}
@@ -214,6 +225,7 @@ export function CalculatorView(p: CalculatorViewProps) {
       <div className="mt-6">
         <ShareActions
           onReset={() => {
+            want();
             form.reset(p.example);
             setMode(initialMode(slug, p.example));
           }}

@@ -15,7 +15,7 @@ const NEW = "new";
 const field = "min-h-11 w-full rounded-chip border border-rule bg-panel px-3 py-2 text-body text-ink";
 
 /** Save this calculation to one of the workshop's jobs (or a new one), with a note. The server recomputes it. */
-export default function SaveToJob({ slug, inputs, disabled }: { slug: string; inputs: Record<string, unknown>; disabled: boolean }) {
+export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { slug: string; inputs: Record<string, unknown>; disabled: boolean; canCreateJob: boolean }) {
   const id = useId();
   const [jobs, setJobs] = useState<JobSummary[] | null>(null);
   const [loadError, setLoadError] = useState("");
@@ -31,10 +31,10 @@ export default function SaveToJob({ slug, inputs, disabled }: { slug: string; in
     getJson<{ jobs: JobSummary[] }>("/api/jobs")
       .then((r) => {
         setJobs(r.jobs);
-        setJobId(r.jobs[0] ? String(r.jobs[0].id) : NEW);
+        setJobId(r.jobs[0] ? String(r.jobs[0].id) : canCreateJob ? NEW : "");
       })
       .catch((e: Error) => setLoadError(e.message));
-  }, []);
+  }, [canCreateJob]);
 
   async function save(e: React.FormEvent) {
     e.preventDefault();
@@ -80,7 +80,8 @@ export default function SaveToJob({ slug, inputs, disabled }: { slug: string; in
               {j.title}
             </option>
           ))}
-          <option value={NEW}>New job…</option>
+          {canCreateJob ? <option value={NEW}>New job…</option> : null}
+          {!canCreateJob && jobs.length === 0 ? <option value="">No jobs yet: ask a technician to book the set in</option> : null}
         </select>
         <p id={`${id}-job-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
           {errors.job ?? ""}
@@ -118,7 +119,7 @@ export default function SaveToJob({ slug, inputs, disabled }: { slug: string; in
         <label htmlFor={`${id}-note`} className="font-bold">
           Note <span className="font-normal text-muted">(optional)</span>
         </label>
-        <textarea id={`${id}-note`} value={note} onChange={(e) => setNote(e.target.value)} rows={2} maxLength={2000} className={field} placeholder="Where it goes, what you measured, what you fitted." />
+        <textarea id={`${id}-note`} value={note} onChange={(e) => setNote(e.target.value)} rows={2} maxLength={1000} className={field} placeholder="Where it goes, what you measured, what you fitted." />
       </div>
       <div className="flex flex-wrap items-center gap-4 md:col-span-2">
         <Button type="submit" disabled={busy || disabled}>

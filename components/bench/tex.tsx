@@ -17,15 +17,17 @@ function loadKatex(): Promise<Katex> {
   return loading;
 }
 
-export function useKatex(): Katex | null {
-  const [k, setK] = useState<Katex | null>(null);
+/** KaTeX once `wanted` has been true (after the first interaction), else null and nothing loaded. */
+export function useKatex(wanted: boolean): Katex | null {
+  const [k, setK] = useState<Katex | null>(katexModule);
   useEffect(() => {
+    if (!wanted || k) return;
     let alive = true;
     loadKatex().then((m) => alive && setK(() => m));
     return () => {
       alive = false;
     };
-  }, []);
+  }, [wanted, k]);
   return k;
 }
 

@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useRef, type ReactNode } from "react";
+import { useEffect, useRef, useState, type ReactNode } from "react";
 import type { RunResult } from "@/lib/calc/run";
 import type { OutputMeta } from "@/lib/calc/types";
 import { formatOutput, outputLabel } from "@/lib/bench/display";
@@ -9,6 +9,8 @@ import { Tex, useKatex } from "./tex";
 
 interface Props {
   slug: string;
+  /** Load KaTeX for live steps (true once the person has started working with the form). */
+  live: boolean;
   open: boolean;
   run: RunResult;
   outputs: readonly OutputMeta[];
@@ -19,8 +21,9 @@ interface Props {
 }
 
 /** The working: formulas, each step with the values substituted, the result, its source and why it matters. */
-export function Working({ slug, open, run, outputs, serverHtml, formulas, sources, why }: Props) {
-  const katex = useKatex();
+export function Working({ slug, live, open, run, outputs, serverHtml, formulas, sources, why }: Props) {
+  const [isOpen, setIsOpen] = useState(open);
+  const katex = useKatex(live || isOpen);
   const ref = useRef<HTMLDetailsElement>(null);
   useEffect(() => {
     // A printed sheet always carries the working.
@@ -30,7 +33,7 @@ export function Working({ slug, open, run, outputs, serverHtml, formulas, source
   }, []);
   const headline = HEADLINES[slug] ?? [];
   return (
-    <details ref={ref} open={open} data-testid="working" className="gb-working group rounded-card border border-rule bg-panel shadow-card">
+    <details ref={ref} open={open} onToggle={(e) => setIsOpen(e.currentTarget.open)} data-testid="working" className="gb-working group rounded-card border border-rule bg-panel shadow-card">
       <summary className="flex min-h-11 cursor-pointer list-none items-center gap-3 rounded-card px-6 py-4 text-lead font-bold hover:bg-sunk [&::-webkit-details-marker]:hidden">
         <span aria-hidden="true" className="inline-block font-mono text-glow transition group-open:rotate-90">
           ▸

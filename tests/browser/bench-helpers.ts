@@ -22,12 +22,15 @@ export async function expectOutput(page: Page, slug: string, result: Calculation
 
 /** The LaTeX of the steps on the page (KaTeX keeps its source in an annotation), once KaTeX has drawn them. */
 export async function expectSteps(page: Page, result: CalculationResponse) {
+  const working = page.getByTestId("working");
+  if ((await working.getAttribute("open")) === null) await working.locator("summary").click();
   await expect
     .poll(() => page.locator('[data-testid="steps"] annotation[encoding="application/x-tex"]').allTextContents(), { timeout: 10_000 })
     .toEqual(result.steps.map((s) => s.latex));
 }
 
-/** Wait until the calculator module has loaded in the browser (results then follow keystrokes). */
+/** Start using the form (the calculator module loads on first use) and wait until results follow keystrokes. */
 export async function ready(page: Page) {
+  await page.locator('form[aria-labelledby="inputs-title"]').locator("input, select").first().focus();
   await page.waitForFunction(() => document.documentElement.dataset.benchReady === "1", null, { timeout: 15_000 });
 }

@@ -7,7 +7,7 @@ import { CalculatorView } from "@/components/bench/calculator-view";
 import { EXAMPLES } from "@/lib/bench/examples";
 import { initialMode, initialValues, toRaw } from "@/lib/bench/form-values";
 import { ALWAYS_DANGER_SLUGS, GROUP_TITLES } from "@/lib/bench/groups";
-import { getMember } from "@/lib/auth/member";
+import { can, getMember } from "@/lib/auth/member";
 import { getCalculator } from "@/lib/calc/registry";
 import { runCalculator } from "@/lib/calc/run";
 import { decodeInputs } from "@/lib/calc/share";
@@ -82,6 +82,7 @@ export default async function CalculatorPage({ params, searchParams }: Params) {
         serverHtml={serverHtml}
         workingOpen={member?.role === "apprentice"}
         signedIn={!!member}
+        canCreateJob={!!member && can.editJobs(member)}
         alwaysDanger={ALWAYS_DANGER_SLUGS.has(slug)}
         formulas={formulas}
         sources={sources}
