@@ -2,7 +2,7 @@ import { z } from "zod";
 import { toEngineering } from "./format";
 import { SERIES, SERIES_NAMES, nearestPreferred, preferredAbove, preferredBelow, type SeriesName } from "./tables/preferred-values";
 import { defineCalculator, type Step, type Warning } from "./types";
-import { parseQuantity, type QuantityKind } from "./units";
+import { parseQuantity, type ParseResult, type QuantityKind } from "./units";
 
 /**
  * Nearest, next-lower and next-higher member of an IEC 60063 series. The series are geometric,
@@ -19,10 +19,19 @@ const partValue = z.unknown().transform((raw, ctx): number => {
     return z.NEVER;
   }
   const kinds: QuantityKind[] = ["resistance", "capacitance", "inductance"];
-  const tries = kinds.map((k) => parseQuantity(raw, k));
-  const hit = tries.find((t) => t.ok);
+  // Stop at the first kind that reads it: a plain "4k7" never needs the other two.
+  let first: ParseResult | undefined;
+  let hit: ParseResult | undefined;
+  for (const k of kinds) {
+    const t = parseQuantity(raw, k);
+    if (t.ok) {
+      hit = t;
+      break;
+    }
+    first ??= t;
+  }
   if (!hit || !hit.ok) {
-    const first = tries[0];
+    first = first as ParseResult;
     const message = !first.ok && /expected a resistance, got/.test(first.message)
       ? "Value must be a resistance, capacitance or inductance (or a plain number)"
       : `Value ${first.ok ? "" : first.message}`;
