@@ -7,7 +7,7 @@ import { SESSION_COOKIE } from "@/lib/auth/session-cookie";
  * security check: every page, action and route handler checks the session and role itself.
  */
 
-const MEMBER_AREAS = ["/jobs", "/workshop"];
+const MEMBER_AREAS = ["/jobs", "/workshop", "/invoices"];
 
 export function proxy(request: NextRequest) {
   const { pathname, search } = request.nextUrl;

@@ -82,6 +82,8 @@ export default async function setup(project: TestProject) {
     STRIPE_SECRET_KEY,
     STRIPE_WEBHOOK_SECRET,
     STRIPE_API_BASE: payments.url,
+    // Estimate e-mails go to outbox.jsonl beside the test database (lib/estimates/mail-transport.ts).
+    GLOWBENCH_OUTBOX: "1",
   };
   // Seed before the server opens the file, through the same code as `npm run db:seed`.
   const seed = spawn(process.execPath, [path.join(root, "node_modules/tsx/dist/cli.mjs"), "db/seed.ts"], { env, stdio: "inherit" });

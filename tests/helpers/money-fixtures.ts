@@ -64,3 +64,40 @@ export function setJobStatus(jobId: number, status: string) {
 export function logTexts(jobId: number, kind: string): string[] {
   return (testDb().prepare("SELECT text FROM log_entries WHERE job_id = ? AND kind = ? ORDER BY id").all(jobId, kind) as { text: string }[]).map((r) => r.text);
 }
+
+/** The text of the newest e-mail to an address (optionally with a matching subject), waiting briefly for it. */
+export async function latestMailText(to: string, subject?: RegExp): Promise<string> {
+  const file = path.join(inject("dataDir"), "outbox.jsonl");
+  for (let i = 0; i < 40; i++) {
+    const fs = await import("node:fs");
+    const mails = fs.existsSync(file) ? fs.readFileSync(file, "utf8").trim().split("\n").map((l) => JSON.parse(l) as { to: string; subject: string; text: string }) : [];
+    const found = mails.filter((m) => m.to === to && (!subject || subject.test(m.subject))).at(-1);
+    if (found) return found.text;
+    await new Promise((r) => setTimeout(r, 100));
+  }
+  throw new Error(`No e-mail to ${to}`);
+}
+
+/** The approval link in the newest estimate e-mail to a customer. */
+export async function approvalLinkFor(to: string): Promise<string> {
+  const text = await latestMailText(to, /estimate/i);
+  const link = /https?:\/\/\S+\/estimate\/[\w-]+/.exec(text)?.[0];
+  if (!link) throw new Error(`No approval link in the e-mail to ${to}`);
+  return link;
+}
+
+/**
+ * A member of our own with the given role in a workshop, signed in. The demo accounts are shared with the
+ * sign-in throttling tests, so role checks here use people of their own.
+ */
+export async function ownMember(workshopId: number, role: "owner" | "technician" | "apprentice") {
+  const { hashPassword } = await import("@/lib/auth/password");
+  const email = `${role}-${unique()}@money.test`;
+  const d = testDb();
+  const user = d.prepare("INSERT INTO users (email, name, password_hash) VALUES (?, ?, ?) RETURNING id").get(email, `Test ${role}`, await hashPassword("a sturdy passphrase")) as { id: number };
+  d.prepare("INSERT INTO memberships (workshop_id, user_id, role) VALUES (?, ?, ?)").run(workshopId, user.id, role);
+  const client = new Client({ "x-forwarded-for": `198.19.${Math.floor(Math.random() * 250)}.${Math.floor(Math.random() * 250)}` });
+  const res = await client.post("/api/auth/sign-in", { email, password: "a sturdy passphrase" });
+  if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status}`);
+  return { client, email };
+}

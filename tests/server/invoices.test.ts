@@ -1,6 +1,6 @@
 import { beforeAll, describe, expect, test } from "vitest";
 import { Client, signedIn } from "../helpers/http";
-import { createJob, logTexts, ownWorkshop, setJobStatus, workshopIdByName } from "../helpers/money-fixtures";
+import { createJob, logTexts, ownMember, ownWorkshop, setJobStatus, workshopIdByName } from "../helpers/money-fixtures";
 
 /** Invoices through the real server: owners only, numbered per workshop without gaps, issued → paid | void. */
 
@@ -70,8 +70,8 @@ describe("who may see invoices", () => {
     invoiceId = (await res.json()).id;
   });
 
-  test.each(["tech@demo.test", "apprentice@demo.test"])("%s gets 403 from every invoice route", async (email) => {
-    const client = await signedIn(email);
+  test.each(["technician", "apprentice"] as const)("a %s gets 403 from every invoice route", async (role) => {
+    const { client } = await ownMember(workshopIdByName("Lamplight Radio Workshop"), role);
     expect((await client.get(`/api/jobs/${jobId}/invoices`)).status).toBe(403);
     expect((await client.post(`/api/jobs/${jobId}/invoices`, { lines })).status).toBe(403);
     expect((await client.get(`/api/invoices/${invoiceId}`)).status).toBe(403);

@@ -1,0 +1,58 @@
+"use client";
+
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import { sendJson } from "@/lib/client/fetch-json";
+
+/** Approve or decline, once. The server re-checks the token; this only shows what it said. */
+export function AnswerButtons({ token }: { token: string }) {
+  const [note, setNote] = useState("");
+  const [busy, setBusy] = useState(false);
+  const [done, setDone] = useState<"approved" | "declined" | null>(null);
+  const [error, setError] = useState("");
+
+  async function answer(decision: "approve" | "decline") {
+    setBusy(true);
+    setError("");
+    const res = await sendJson<{ status: "approved" | "declined" }>("/api/estimates/answer", { token, decision, note: note || undefined });
+    setBusy(false);
+    if (res.ok) setDone(res.data.status);
+    else setError(res.fields.note ?? res.message);
+  }
+
+  if (done) {
+    return (
+      <div role="status" className="rounded-card border border-ok bg-ok-bg p-4">
+        <p className="font-bold">{done === "approved" ? "Thank you: the workshop will go ahead with the work." : "Thank you: the workshop will not do this work."}</p>
+        <p className="mt-1 text-muted">Your answer is with the workshop. You can close this page.</p>
+      </div>
+    );
+  }
+  return (
+    <div className="flex flex-col gap-3">
+      <label htmlFor="note" className="font-bold">
+        A note for the workshop <span className="font-normal text-muted">(optional)</span>
+      </label>
+      <textarea
+        id="note"
+        value={note}
+        onChange={(e) => setNote(e.target.value)}
+        maxLength={1000}
+        rows={3}
+        aria-describedby="answer-error"
+        className="rounded-chip border border-rule bg-panel px-3 py-2 text-body"
+      />
+      <div className="flex flex-wrap gap-3">
+        <Button onClick={() => answer("approve")} disabled={busy}>
+          Approve the estimate
+        </Button>
+        <Button variant="secondary" onClick={() => answer("decline")} disabled={busy}>
+          Decline
+        </Button>
+      </div>
+      <p id="answer-error" role="alert" className="min-h-6 font-bold text-hazard">
+        {error}
+      </p>
+    </div>
+  );
+}
