@@ -129,7 +129,7 @@ export function CalculatorView(p: CalculatorViewProps) {
           <DangerBanner extra={dangers} />
         </div>
       ) : null}
-      <div className="grid items-start gap-8 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
+      <div className="gb-calc-grid grid items-start gap-8 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
         <form
           onSubmit={(e) => e.preventDefault()}
           onPointerEnter={want}

@@ -34,7 +34,7 @@ export function useKatex(wanted: boolean): Katex | null {
 function render(katex: Katex, latex: string): string {
   let html = cache.get(latex);
   if (html === undefined) {
-    html = katex.renderToString(latex, { throwOnError: false, displayMode: false, output: "htmlAndMathml" });
+    html = katex.renderToString(latex, { throwOnError: false, displayMode: true, output: "htmlAndMathml" });
     if (cache.size > 400) cache.clear();
     cache.set(latex, html);
   }

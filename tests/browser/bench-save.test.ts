@@ -2,7 +2,7 @@ import type { Browser, BrowserContext } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
 import { launchBrowser } from "../helpers/browser";
 import { DEMO_PASSWORD, baseUrl } from "../helpers/http";
-import { expected, ready } from "./bench-helpers";
+import { expected, ready, shown } from "./bench-helpers";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -45,6 +45,14 @@ test("a technician books in a new job from the Bench and saves the calculation t
   expect(calculations[0].note).toBe("Bleeder for the reservoir, fitted across C12");
   const want = expected("bleeder", { capacitance: "32 uF", workingVoltage: "380" });
   expect(calculations[0].outputs.suggestedResistance).toBe(want.outputs.suggestedResistance);
+
+  // The job page lists it, and reopens it in the Bench with the same answer.
+  await page.goto(`${baseUrl()}/jobs/${jobId}/calculations`);
+  const card = page.getByTestId("calculations").locator("li", { hasText: "Bleeder resistor" });
+  await card.getByText("Bleeder for the reservoir, fitted across C12").waitFor();
+  await card.getByRole("link", { name: "Reopen in the Bench" }).click();
+  await page.waitForURL(/\/bench\/bleeder\?/);
+  expect(await page.getByTestId("output-suggestedResistance").textContent()).toBe(shown("bleeder", want, "suggestedResistance"));
   await context.close();
 });
 

@@ -30,7 +30,7 @@ export default async function CalculatorPage({ params, searchParams }: Params) {
   const example = initialValues(calc.inputs, EXAMPLES[slug] ?? {});
   const initial = hasInputs ? initialValues(calc.inputs, fromUrl) : example;
   const initialRun = runCalculator(calc, toRaw(slug, calc.inputs, initial, initialMode(slug, initial)));
-  const serverHtml = initialRun.ok ? Object.fromEntries(initialRun.result.steps.map((s) => [s.latex, tex(s.latex, false)])) : {};
+  const serverHtml = initialRun.ok ? Object.fromEntries(initialRun.result.steps.map((s) => [s.latex, tex(s.latex, true)])) : {};
   const member = await getMember();
 
   const formulas = (
