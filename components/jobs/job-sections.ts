@@ -14,6 +14,7 @@ export const JOB_SECTIONS: JobSection[] = [
   { slug: "readings", label: "Readings" },
   { slug: "calculations", label: "Calculations" },
   { slug: "files", label: "Files" },
+  { slug: "estimate", label: "Estimate" },
   { slug: "log", label: "Log" },
 ];
 

@@ -93,10 +93,10 @@ export function issueApprovalLink(member: Member, jobId: number) {
     const token = randomBytes(32).toString("base64url");
     const expiresAt = new Date(Date.now() + APPROVAL_LINK_DAYS * 86_400_000);
     tx.update(estimates).set({ status: "sent", approvalTokenHash: hashToken(token), tokenExpiresAt: expiresAt, respondedAt: null }).where(eq(estimates.id, current.id)).run();
-    const priced = withTotals(current, lines);
-    const total = formatMoney(priced.totalMinor, current.currency);
+    const total = formatMoney(withTotals(current, lines).totalMinor, current.currency);
+    // Log entries carry no amounts: apprentices read the Log and never see prices.
     tx.insert(logEntries)
-      .values({ jobId, workshopId: member.workshopId, authorId: member.userId, kind: "estimate", text: `Estimate for ${total} sent to ${job.customerEmail}.`, data: { estimateId: current.id, event: "sent", totalMinor: priced.totalMinor } })
+      .values({ jobId, workshopId: member.workshopId, authorId: member.userId, kind: "estimate", text: `Estimate sent to ${job.customerEmail} for approval.`, data: { estimateId: current.id, event: "sent" } })
       .run();
     return { token, expiresAt, job, total, workshopName: member.workshopName };
   });
@@ -137,13 +137,11 @@ export function answerEstimate(token: string, decision: "approve" | "decline", n
     // The status guard makes a concurrent second answer update nothing.
     const changed = tx.update(estimates).set({ status, respondedAt }).where(and(eq(estimates.id, estimate.id), eq(estimates.status, "sent"))).run();
     if (changed.changes !== 1) throw new HttpError(410, "This estimate has already been answered.");
-    const priced = withTotals(estimate, linesOf(tx, estimate.id));
-    const total = formatMoney(priced.totalMinor, estimate.currency);
     const job = jobInWorkshop(tx, estimate.workshopId, estimate.jobId)!;
     const who = job.customerName ?? "The customer";
-    const text = `${who} ${status} the estimate for ${total}.${note ? ` Their note: “${note}”` : ""}`;
+    const text = `${who} ${status} the estimate.${note ? ` Their note: “${note}”` : ""}`;
     tx.insert(logEntries)
-      .values({ jobId: estimate.jobId, workshopId: estimate.workshopId, authorId: null, kind: "estimate", text, data: { estimateId: estimate.id, event: status, totalMinor: priced.totalMinor } })
+      .values({ jobId: estimate.jobId, workshopId: estimate.workshopId, authorId: null, kind: "estimate", text, data: { estimateId: estimate.id, event: status } })
       .run();
     const preparer = estimate.createdBy
       ? tx.select({ email: users.email, name: users.name }).from(users).where(eq(users.id, estimate.createdBy)).get()

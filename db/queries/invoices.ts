@@ -3,7 +3,7 @@ import { assertRole, type Member } from "@/lib/auth/member";
 import { notFound } from "@/lib/auth/errors";
 import type { LinesValues } from "@/lib/estimates/schemas";
 import { HttpError } from "@/lib/http/api";
-import { computeTotals, formatMoney } from "@/lib/money";
+import { computeTotals } from "@/lib/money";
 import { getDb } from "../client";
 import { estimateLines, estimates, invoiceLines, invoices, jobs, logEntries, workshops } from "../schema";
 import { jobInWorkshop, priceLines, type PricedLineRow } from "./money-lines";
@@ -102,8 +102,9 @@ export function issueInvoice(member: Member, jobId: number, input: { lines?: Lin
     tx.insert(invoiceLines)
       .values(lines.map((l, i) => ({ invoiceId: invoice.id, kind: l.kind, description: l.description, quantityMilli: l.quantityMilli, unitPriceMinor: l.unitPriceMinor, amountMinor: totals.lines[i], position: i })))
       .run();
+    // No amounts in the Log: apprentices read it.
     tx.insert(logEntries)
-      .values({ jobId, workshopId: member.workshopId, authorId: member.userId, kind: "invoice", text: `Invoice ${counter.number} issued for ${formatMoney(totals.totalMinor, counter.currency)}.`, data: { invoiceId: invoice.id, event: "issued" } })
+      .values({ jobId, workshopId: member.workshopId, authorId: member.userId, kind: "invoice", text: `Invoice ${counter.number} issued.`, data: { invoiceId: invoice.id, event: "issued" } })
       .run();
     tx.update(jobs).set({ updatedAt: new Date() }).where(eq(jobs.id, jobId)).run();
     return invoice.id;

@@ -1,5 +1,4 @@
 import { and, eq } from "drizzle-orm";
-import { formatMoney } from "@/lib/money";
 import { getDb } from "../client";
 import { invoices, logEntries, paymentEvents } from "../schema";
 
@@ -47,7 +46,7 @@ export function applyCheckoutCompleted(eventId: string, eventType: string, sessi
         workshopId: invoice.workshopId,
         authorId: null,
         kind: "invoice",
-        text: `Invoice ${invoice.number} paid by card: ${formatMoney(invoice.totalMinor, invoice.currency)}.`,
+        text: `Invoice ${invoice.number} paid by card.`,
         data: { invoiceId: invoice.id, event: "paid", paymentEventId: eventId },
       })
       .run();

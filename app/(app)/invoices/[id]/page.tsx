@@ -33,7 +33,7 @@ export default async function InvoicePage({ params, searchParams }: { params: Pr
     <div className="flex flex-col gap-6">
       <div>
         <p className="text-note">
-          <Link href={`/jobs/${invoice.jobId}/estimate`} className="text-muted underline">
+          <Link href={`/jobs/${invoice.jobId}/estimate`} className="text-note font-bold text-signal underline-offset-4 hover:underline">
             ← {invoice.job.title}
           </Link>
         </p>

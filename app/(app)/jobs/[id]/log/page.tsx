@@ -13,6 +13,8 @@ const KIND: Record<string, { label: string; tone: string }> = {
   note: { label: "Note", tone: "bg-sunk text-ink" },
   "power-up": { label: "Power-up", tone: "bg-hazard-bg text-hazard" },
   status: { label: "Status", tone: "bg-caution-bg text-caution" },
+  estimate: { label: "Estimate", tone: "bg-ok-bg text-ink" },
+  invoice: { label: "Invoice", tone: "bg-ok-bg text-ink" },
 };
 
 export default async function LogPage({ params }: JobPageProps) {
@@ -34,7 +36,7 @@ export default async function LogPage({ params }: JobPageProps) {
                   <div className="flex flex-wrap items-center gap-x-3 gap-y-1 text-note">
                     <span className={`rounded-full px-2 py-0.5 font-bold ${kind.tone}`}>{kind.label}</span>
                     <time dateTime={e.createdAt.toISOString()} className="font-mono">{formatDateTime(e.createdAt)}</time>
-                    <span className="text-muted">{e.author?.name ?? "A former member"}</span>
+                    <span className="text-muted">{e.author?.name ?? (e.kind === "estimate" ? "The customer" : e.kind === "invoice" ? "Payment service" : "A former member")}</span>
                   </div>
                   {e.kind === "power-up" && data?.supplyVoltage !== undefined ? (
                     <p className="mt-2 flex gap-6 font-mono">
