@@ -19,8 +19,8 @@ export function DangerBanner({ extra = [] }: { extra?: string[] }) {
       className="gb-danger overflow-hidden rounded-card border-2 border-hazard bg-hazard-bg text-ink"
     >
       <div className="gb-hazard-stripe h-3" aria-hidden="true" />
-      <div className="flex gap-4 p-5">
-        <svg viewBox="0 0 40 40" className="h-10 w-10 shrink-0 text-hazard" aria-hidden="true">
+      <div className="flex gap-3 p-4 md:gap-4 md:p-5">
+        <svg viewBox="0 0 40 40" className="h-8 w-8 shrink-0 text-hazard md:h-10 md:w-10" aria-hidden="true">
           <path d="M20 3 38 35H2Z" fill="none" stroke="currentColor" strokeWidth="3" strokeLinejoin="round" />
           <path d="M22 12 14 24h6l-2 8 8-12h-6z" fill="currentColor" />
         </svg>
@@ -33,7 +33,7 @@ export function DangerBanner({ extra = [] }: { extra?: string[] }) {
               {m}
             </p>
           ))}
-          <ul className="mt-2 grid list-disc gap-x-8 gap-y-1 pl-5 md:grid-cols-2">
+          <ul className="mt-2 grid list-disc gap-x-8 gap-y-0.5 pl-5 text-note md:grid-cols-2 md:text-body">
             {POINTS.map((p) => (
               <li key={p}>{p}</li>
             ))}
