@@ -8,8 +8,6 @@ import { randomBytes, scrypt as scryptCb, timingSafeEqual, type ScryptOptions } 
 export const SCRYPT_PARAMS = { N: 2 ** 17, r: 8, p: 1 } as const;
 const KEY_LENGTH = 32;
 const SALT_BYTES = 16;
-export const PASSWORD_MIN = 8;
-export const PASSWORD_MAX = 128;
 
 function scrypt(password: string, salt: Buffer, N: number, r: number, p: number): Promise<Buffer> {
   // scrypt needs about 128·N·r bytes; Node's default maxmem (32 MiB) is too small for N = 2^17.

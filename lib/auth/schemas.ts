@@ -1,7 +1,9 @@
 import { z } from "zod";
-import { PASSWORD_MAX, PASSWORD_MIN } from "./password";
 
-/** Shared by the sign-in/sign-up forms (zodResolver) and their route handlers (safeParse). */
+/** Shared by the sign-in/sign-up forms (zodResolver) and their route handlers (safeParse). Browser-safe: no node imports. */
+
+export const PASSWORD_MIN = 8;
+export const PASSWORD_MAX = 128;
 
 export const emailField = z
   .string({ error: "Enter your e-mail address." })
