@@ -5,6 +5,7 @@ import os from "node:os";
 import path from "node:path";
 import type { TestProject } from "vitest/node";
 import { startFakePaymentService, type FakePaymentService } from "../../lib/payments/fake-service";
+import { startMailSink, type MailSink } from "../../lib/mail/sink";
 
 /**
  * Starts the real production server (`next start`) once for the whole run, on a free loopback port,
@@ -19,6 +20,7 @@ declare module "vitest" {
     /** The fake payment service's address and the webhook secret it signs with. */
     paymentsUrl: string;
     paymentsWebhookSecret: string;
+    mailDir: string;
   }
 }
 
@@ -53,12 +55,16 @@ let payments: FakePaymentService | undefined;
 
 const STRIPE_SECRET_KEY = "sk_test_glowbench_tests";
 const STRIPE_WEBHOOK_SECRET = "whsec_glowbench_tests_0123456789";
+let mailSink: MailSink | undefined;
 
 export default async function setup(project: TestProject) {
   const root = process.cwd();
   const dataDir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-test-"));
   project.provide("dataDir", dataDir);
   project.provide("paymentsWebhookSecret", STRIPE_WEBHOOK_SECRET);
+  // Every message the server sends goes over real SMTP to this loopback sink; tests read tests/helpers/mail.ts.
+  const mailDir = path.join(dataDir, "mail");
+  project.provide("mailDir", mailDir);
   if (!fs.existsSync(path.join(root, ".next", "BUILD_ID"))) {
     project.provide("baseUrl", "");
     project.provide("paymentsUrl", "");
@@ -72,6 +78,7 @@ export default async function setup(project: TestProject) {
   });
   project.provide("paymentsUrl", payments.url);
   const dbFile = path.join(dataDir, "glowbench.db");
+  mailSink = await startMailSink(mailDir);
   const env = {
     ...process.env,
     NODE_ENV: "production" as const,
@@ -84,6 +91,8 @@ export default async function setup(project: TestProject) {
     STRIPE_API_BASE: payments.url,
     // Estimate e-mails go to outbox.jsonl beside the test database (lib/estimates/mail-transport.ts).
     GLOWBENCH_OUTBOX: "1",
+    SMTP_URL: mailSink.url,
+    GLOWBENCH_MAIL_DIR: mailDir,
   };
   // Seed before the server opens the file, through the same code as `npm run db:seed`.
   const seed = spawn(process.execPath, [path.join(root, "node_modules/tsx/dist/cli.mjs"), "db/seed.ts"], { env, stdio: "inherit" });
@@ -102,6 +111,7 @@ export default async function setup(project: TestProject) {
   return async () => {
     child?.kill("SIGTERM");
     await payments?.close();
+    await mailSink?.close();
     await new Promise((r) => setTimeout(r, 300));
   };
 }

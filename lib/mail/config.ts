@@ -1,0 +1,31 @@
+import path from "node:path";
+import { databasePath } from "@/db/client";
+
+/**
+ * Where mail goes. A real deployment sets SMTP_URL. Development, the demo (GLOWBENCH_DEMO=1) and the
+ * tests keep mail on this machine: a local SMTP sink stores every message in a folder beside the
+ * database (or GLOWBENCH_MAIL_DIR), and the owner reads it at /workshop/outbox.
+ */
+
+/** True unless this is a real production deployment: dev, demo, or an explicit local mail folder. */
+export function localMailEnabled(): boolean {
+  return process.env.NODE_ENV !== "production" || process.env.GLOWBENCH_DEMO === "1" || !!process.env.GLOWBENCH_MAIL_DIR;
+}
+
+export function mailDir(): string {
+  return path.resolve(/*turbopackIgnore: true*/ process.env.GLOWBENCH_MAIL_DIR ?? path.join(path.dirname(databasePath()), "mail"));
+}
+
+/** The sender shown on every message; an operator with a real relay sets MAIL_FROM. */
+export function mailFrom(): string {
+  return process.env.MAIL_FROM ?? "Glowbench <no-reply@glowbench.invalid>";
+}
+
+/** The public address links in e-mails point at. */
+export function appUrl(request: Request): string {
+  if (process.env.GLOWBENCH_URL) return process.env.GLOWBENCH_URL.replace(/\/$/, "");
+  const url = new URL(request.url);
+  const host = request.headers.get("x-forwarded-host") ?? request.headers.get("host") ?? url.host;
+  const proto = request.headers.get("x-forwarded-proto") ?? url.protocol.replace(":", "");
+  return `${proto}://${host}`;
+}

@@ -1,0 +1,27 @@
+import fs from "node:fs";
+import path from "node:path";
+import { localMailEnabled, mailDir } from "./config";
+import type { StoredMail } from "./sink";
+
+/** Messages the local sink stored for one workshop, newest first; null when there is no local sink. */
+export function readOutbox(workshopId: number, limit = 50): StoredMail[] | null {
+  if (!localMailEnabled()) return null;
+  const dir = mailDir();
+  let names: string[];
+  try {
+    names = fs.readdirSync(dir).filter((n) => n.endsWith(".json") && !n.startsWith("."));
+  } catch {
+    return [];
+  }
+  const out: StoredMail[] = [];
+  for (const name of names.sort().reverse()) {
+    try {
+      const mail = JSON.parse(fs.readFileSync(path.join(dir, name), "utf8")) as StoredMail;
+      if (mail.workshopId === workshopId) out.push(mail);
+    } catch {
+      // a file being written or not ours: skip it
+    }
+    if (out.length >= limit) break;
+  }
+  return out;
+}
