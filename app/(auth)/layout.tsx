@@ -1,6 +1,10 @@
 import Link from "next/link";
 import { Wordmark } from "@/components/shell/logo";
 
+// Rendered per request so each page carries the nonce of its Content-Security-Policy (proxy.ts);
+// a page prerendered at build time has no nonce, its scripts are blocked and forms never hydrate.
+export const dynamic = "force-dynamic";
+
 export default function AuthLayout({ children }: { children: React.ReactNode }) {
   return (
     <div className="grid min-h-screen lg:grid-cols-[1.1fr_1fr]">

@@ -1,14 +1,16 @@
 import type { ComponentProps, ReactNode } from "react";
 
-/** A labelled select with its message tied by aria-describedby, like Field. */
+/** A labelled select whose message is tied to it with aria-describedby, like Field. */
 export function SelectField({
   id,
   label,
   error,
+  hint,
   options,
   className = "",
   ...select
-}: ComponentProps<"select"> & { id: string; label: ReactNode; error?: string; options: readonly { value: string; label: string }[] }) {
+}: ComponentProps<"select"> & { id: string; label: ReactNode; error?: string; hint?: ReactNode; options: readonly { value: string; label: string }[] }) {
+  const describedBy = [error ? `${id}-error` : null, hint ? `${id}-hint` : null].filter(Boolean).join(" ") || undefined;
   return (
     <div className={`flex flex-col gap-1 ${className}`}>
       <label htmlFor={id} className="font-bold">
@@ -17,7 +19,7 @@ export function SelectField({
       <select
         id={id}
         aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
+        aria-describedby={describedBy}
         className={`min-h-11 w-full rounded-chip border bg-panel px-3 py-2 text-body text-ink ${error ? "border-hazard" : "border-rule"}`}
         {...select}
       >
@@ -27,6 +29,11 @@ export function SelectField({
           </option>
         ))}
       </select>
+      {hint ? (
+        <p id={`${id}-hint`} className="text-note text-muted">
+          {hint}
+        </p>
+      ) : null}
       <p id={`${id}-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
         {error ?? ""}
       </p>

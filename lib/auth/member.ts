@@ -16,8 +16,8 @@ export interface Member {
   role: Role;
 }
 
-/** Load the member for a user id, checking nothing else. */
-export function loadMember(userId: number): (Member & { sessionVersion: number }) | null {
+/** Load the member for a user id, checking nothing else: the preferred workshop if they belong to it, else their first. */
+export function loadMember(userId: number, preferredWorkshopId?: number): (Member & { sessionVersion: number }) | null {
   const row = getDb()
     .select({
       userId: users.id,
@@ -32,7 +32,7 @@ export function loadMember(userId: number): (Member & { sessionVersion: number }
     .innerJoin(memberships, eq(memberships.userId, users.id))
     .innerJoin(workshops, eq(workshops.id, memberships.workshopId))
     .where(eq(users.id, userId))
-    .orderBy(asc(memberships.id))
+    .orderBy(sql`case when ${memberships.workshopId} = ${preferredWorkshopId ?? 0} then 0 else 1 end`, asc(memberships.id))
     .limit(1)
     .get();
   return row ?? null;
@@ -43,7 +43,7 @@ export const getMember = cache(async (): Promise<Member | null> => {
   const session = await getSession();
   if (!session.uid || !session.ver || !session.iat) return null;
   if (Date.now() - session.iat > SESSION_MAX_AGE_SECONDS * 1000) return null;
-  const member = loadMember(session.uid);
+  const member = loadMember(session.uid, session.wid);
   if (!member || member.sessionVersion !== session.ver) return null;
   const { sessionVersion: _v, ...rest } = member;
   return rest;

@@ -10,6 +10,8 @@ export interface SessionData {
   uid?: number;
   ver?: number;
   iat?: number;
+  /** The workshop this session works in, for people who belong to more than one. */
+  wid?: number;
 }
 
 /** Absolute lifetime, enforced on the server whatever the cookie's own expiry says. */
@@ -33,11 +35,12 @@ export async function getSession() {
   return getIronSession<SessionData>(await cookies(), options());
 }
 
-export async function startSession(userId: number, sessionVersion: number): Promise<void> {
+export async function startSession(userId: number, sessionVersion: number, workshopId?: number): Promise<void> {
   const session = await getSession();
   session.uid = userId;
   session.ver = sessionVersion;
   session.iat = Date.now();
+  session.wid = workshopId;
   await session.save();
 }
 

@@ -1,0 +1,18 @@
+import { NextResponse } from "next/server";
+import { RESET_GONE, completePasswordReset, findPasswordReset } from "@/db/queries/password-resets";
+import { hashPassword } from "@/lib/auth/password";
+import { resetPasswordSchema } from "@/lib/auth/reset-schemas";
+import { endSession } from "@/lib/auth/session";
+import { HttpError, handle, parseJson } from "@/lib/http/api";
+
+/** Sets the new password; every session of the user ends, this browser's too, so they sign in afresh. */
+export const POST = handle(async (request: Request) => {
+  const { token, password } = await parseJson(request, resetPasswordSchema);
+  // Check the link before spending a hash on it; completePasswordReset checks again atomically.
+  const state = findPasswordReset(token);
+  if (state === "unknown") throw new HttpError(404, "That reset link is not valid. Check you opened the whole link from the e-mail.");
+  if (state === "gone") throw new HttpError(410, RESET_GONE);
+  completePasswordReset(token, await hashPassword(password));
+  await endSession();
+  return NextResponse.json({ ok: true });
+});

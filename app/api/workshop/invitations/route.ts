@@ -1,0 +1,31 @@
+import { NextResponse } from "next/server";
+import { createInvitation, listInvitations, revokeInvitation } from "@/db/queries/invitations";
+import { assertRole, requireMember } from "@/lib/auth/member";
+import { HttpError, handle, parseJson } from "@/lib/http/api";
+import { appUrl } from "@/lib/mail/config";
+import { invitationMail } from "@/lib/mail/messages";
+import { sendMail } from "@/lib/mail/send";
+import { invitationSchema } from "@/lib/workshop/schemas";
+
+export const GET = handle(async () => {
+  const member = await requireMember();
+  return NextResponse.json({ invitations: listInvitations(member) });
+});
+
+export const POST = handle(async (request: Request) => {
+  const member = await requireMember();
+  assertRole(member, ["owner"], "invite members");
+  const input = await parseJson(request, invitationSchema);
+  const invitation = createInvitation(member, input);
+  const link = `${appUrl(request)}/invite/${invitation.token}`;
+  try {
+    await sendMail({ to: invitation.email, ...invitationMail({ workshopName: member.workshopName, inviterName: member.name, role: invitation.role, link, expiresAt: invitation.expiresAt }), workshopId: member.workshopId });
+  } catch (err) {
+    // A link nobody received must not stay valid.
+    console.error("Invitation e-mail failed", err);
+    revokeInvitation(member, invitation.id, "undeliverable");
+    throw new HttpError(502, "The invitation e-mail could not be sent, so no invitation was made. Check the mail settings and try again.");
+  }
+  const { token: _token, ...shown } = invitation;
+  return NextResponse.json({ invitation: { ...shown, state: "pending" } }, { status: 201 });
+});

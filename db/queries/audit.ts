@@ -1,0 +1,45 @@
+import { desc, eq } from "drizzle-orm";
+import { assertRole, type Member } from "@/lib/auth/member";
+import { getDb, type Db } from "../client";
+import { auditEvents, users } from "../schema";
+
+/** Who did what to the workshop's membership and accounts. Written inside the change's own transaction. */
+
+export type AuditAction =
+  | "workshop.updated"
+  | "invitation.created"
+  | "invitation.revoked"
+  | "member.joined"
+  | "member.role-changed"
+  | "member.removed"
+  | "password.reset-requested"
+  | "password.reset";
+
+type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
+
+export function recordAudit(
+  tx: Tx | Db,
+  event: { workshopId: number; actorUserId: number | null; action: AuditAction; detail?: Record<string, unknown> },
+): void {
+  tx.insert(auditEvents).values(event).run();
+}
+
+/** The owner's view of the workshop's recent audit trail, newest first. */
+export function listAuditEvents(member: Member, limit = 50) {
+  assertRole(member, ["owner"], "see the workshop's audit trail");
+  return getDb()
+    .select({
+      id: auditEvents.id,
+      action: auditEvents.action,
+      detail: auditEvents.detail,
+      createdAt: auditEvents.createdAt,
+      actorName: users.name,
+    })
+    .from(auditEvents)
+    .leftJoin(users, eq(users.id, auditEvents.actorUserId))
+    .where(eq(auditEvents.workshopId, member.workshopId))
+    .orderBy(desc(auditEvents.createdAt), desc(auditEvents.id))
+    .limit(limit)
+    .all();
+}
+export type AuditEventRow = ReturnType<typeof listAuditEvents>[number];
