@@ -52,10 +52,10 @@ async function waitFor(url: string, child: ChildProcess, ms = 60_000) {
 
 let child: ChildProcess | undefined;
 let payments: FakePaymentService | undefined;
+let mailSink: MailSink | undefined;
 
 const STRIPE_SECRET_KEY = "sk_test_glowbench_tests";
 const STRIPE_WEBHOOK_SECRET = "whsec_glowbench_tests_0123456789";
-let mailSink: MailSink | undefined;
 
 export default async function setup(project: TestProject) {
   const root = process.cwd();
