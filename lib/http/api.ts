@@ -52,13 +52,6 @@ export function assertSameOrigin(request: Request): void {
   if (!sameOrigin(request)) throw new HttpError(403, "Cross-site requests are not accepted.");
 }
 
-/** A numeric id from a route segment; anything else is simply not found. */
-export function idParam(value: string, what = "That record"): number {
-  const id = Number(value);
-  if (!/^\d{1,15}$/.test(value) || !Number.isSafeInteger(id) || id < 1) throw new HttpError(404, `${what} was not found in your workshop.`);
-  return id;
-}
-
 /** Checks a state-changing request: same origin, JSON, size; returns the raw parsed body. */
 export async function readJsonBody(request: Request): Promise<unknown> {
   if (!sameOrigin(request)) throw new HttpError(403, "Cross-site requests are not accepted.");

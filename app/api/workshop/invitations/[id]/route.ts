@@ -1,7 +1,8 @@
 import { NextResponse } from "next/server";
 import { revokeInvitation } from "@/db/queries/invitations";
 import { requireMember } from "@/lib/auth/member";
-import { assertSameOrigin, handle, idParam } from "@/lib/http/api";
+import { assertSameOrigin, handle } from "@/lib/http/api";
+import { idParam } from "@/lib/http/ids";
 
 export const DELETE = handle(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
   assertSameOrigin(request);

@@ -1,7 +1,8 @@
 import { NextResponse } from "next/server";
 import { changeMemberRole, removeMember } from "@/db/queries/members";
 import { requireMember } from "@/lib/auth/member";
-import { assertSameOrigin, handle, idParam, parseJson } from "@/lib/http/api";
+import { assertSameOrigin, handle, parseJson } from "@/lib/http/api";
+import { idParam } from "@/lib/http/ids";
 import { roleChangeSchema } from "@/lib/workshop/schemas";
 
 type Context = { params: Promise<{ id: string }> };
