@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
-import { Client, signedIn } from "../helpers/http";
+import { Client } from "../helpers/http";
 import { mailTo } from "../helpers/mail";
-import { address, invite, ownWorkshop, testDb } from "../helpers/workshops";
+import { addMember, address, invite, ownWorkshop, testDb } from "../helpers/workshops";
 
 describe("invitations through the real server and SMTP", () => {
   test("the owner invites by e-mail; the link signs a new person up with that role", async () => {
@@ -117,8 +117,9 @@ describe("invitations through the real server and SMTP", () => {
   });
 
   test("only owners invite or see invitations", async () => {
-    for (const email of ["tech@demo.test", "apprentice@demo.test"]) {
-      const client = await signedIn(email);
+    const shop = await ownWorkshop("Owners only");
+    for (const role of ["technician", "apprentice"]) {
+      const { client } = await addMember(shop.client, role);
       expect((await client.post("/api/workshop/invitations", { email: address("x"), role: "apprentice" })).status).toBe(403);
       expect((await client.get("/api/workshop/invitations")).status).toBe(403);
     }

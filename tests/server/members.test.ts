@@ -7,10 +7,14 @@ const members = async (c: Client) => ((await (await c.get("/api/workshop/members
 
 describe("members and roles through the real server", () => {
   test("every role reads the member list; passwords never appear", async () => {
-    for (const email of ["owner@demo.test", "tech@demo.test", "apprentice@demo.test"]) {
-      const list = await members(await signedIn(email));
-      expect(list.map((m) => m.email)).toEqual(expect.arrayContaining(["owner@demo.test", "tech@demo.test", "apprentice@demo.test"]));
-      expect(list.map((m) => m.email)).not.toContain("other@demo.test");
+    const shop = await ownWorkshop("Readers");
+    const tech = await addMember(shop.client, "technician");
+    const apprentice = await addMember(shop.client, "apprentice");
+    for (const client of [shop.client, tech.client, apprentice.client]) {
+      const list = await members(client);
+      expect(list.map((m) => m.email)).toEqual([shop.owner.email, tech.email, apprentice.email]);
+      expect(list.map((m) => m.role)).toEqual(["owner", "technician", "apprentice"]);
+      expect(list.map((m) => m.email)).not.toContain("owner@demo.test");
       expect(JSON.stringify(list)).not.toMatch(/hash|scrypt|password/i);
     }
   });
