@@ -1,0 +1,89 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useEffect, useState } from "react";
+import { useForm } from "react-hook-form";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { TextareaField } from "@/components/ui/textarea-field";
+import type { ReadyDraft } from "@/db/queries/ready-message";
+import { getJson, sendJson } from "@/lib/client/fetch-json";
+import { readyMessageSchema, type ReadyMessageForm } from "@/lib/mail/ready-schemas";
+
+/**
+ * "Tell the customer it's ready": a self-contained panel for the job Overview. It loads the draft
+ * from the workshop's template, lets a technician or owner edit it, and sends it with the bench sheet.
+ * `status` is only a cue to reload the draft when the job's status changes on the page.
+ */
+export function ReadyMessage({ jobId, status }: { jobId: number; status?: string }) {
+  const [draft, setDraft] = useState<ReadyDraft | null>(null);
+  const [loadError, setLoadError] = useState<string | null>(null);
+  const [result, setResult] = useState<{ ok: boolean; message: string } | null>(null);
+  const { register, handleSubmit, reset, setError, formState: { errors, isSubmitting } } = useForm<ReadyMessageForm>({
+    resolver: zodResolver(readyMessageSchema),
+    defaultValues: { subject: "", text: "" },
+  });
+
+  useEffect(() => {
+    let live = true;
+    getJson<{ draft: ReadyDraft }>(`/api/jobs/${jobId}/ready-message`)
+      .then(({ draft }) => {
+        if (!live) return;
+        setDraft(draft);
+        reset({ subject: draft.subject, text: draft.text });
+      })
+      .catch((err: Error) => live && setLoadError(err.message));
+    return () => {
+      live = false;
+    };
+  }, [jobId, status, reset]);
+
+  const onSubmit = handleSubmit(async (values) => {
+    setResult(null);
+    const res = await sendJson<{ sent: { to: string } }>(`/api/jobs/${jobId}/ready-message`, values);
+    if (!res.ok) {
+      if (res.fields.subject) setError("subject", { message: res.fields.subject });
+      if (res.fields.text) setError("text", { message: res.fields.text });
+      setResult({ ok: false, message: res.message });
+      return;
+    }
+    setResult({ ok: true, message: `Sent to ${res.data.sent.to} with the bench sheet attached.` });
+  });
+
+  if (loadError) return <p className="text-note text-hazard">{loadError}</p>;
+  if (!draft) return <p className="text-note text-muted">Loading the customer message…</p>;
+  if (!draft.canSend) {
+    if (draft.blocked === "role") return null;
+    return (
+      <section aria-labelledby={`ready-${jobId}`} className="rounded-card border border-dashed border-rule p-4">
+        <h3 id={`ready-${jobId}`} className="font-bold">
+          Tell the customer
+        </h3>
+        <p className="mt-1 text-note text-muted">{draft.reason}</p>
+      </section>
+    );
+  }
+  return (
+    <section aria-labelledby={`ready-${jobId}`} className="rounded-card border border-ok bg-ok-bg/40 p-4">
+      <h3 id={`ready-${jobId}`} className="font-bold">
+        Tell the customer it’s ready
+      </h3>
+      <p className="mb-3 mt-1 text-note text-muted">
+        To <strong className="text-ink">{draft.to}</strong>, with the bench sheet as a PDF. Edit the words for this customer if you like; the
+        template lives in the workshop settings.
+      </p>
+      <form onSubmit={onSubmit} noValidate className="flex flex-col gap-1" aria-label="Ready to collect message">
+        <Field id={`ready-subject-${jobId}`} label="Subject" error={errors.subject?.message} {...register("subject")} />
+        <TextareaField id={`ready-text-${jobId}`} label="Message" rows={10} error={errors.text?.message} {...register("text")} />
+        <div className="flex flex-wrap items-center gap-4">
+          <Button type="submit" disabled={isSubmitting}>
+            {isSubmitting ? "Sending…" : "Send to customer"}
+          </Button>
+          <p role="status" aria-live="polite" className={`text-note font-bold ${result?.ok ? "text-ok" : "text-hazard"}`}>
+            {result?.message ?? ""}
+          </p>
+        </div>
+      </form>
+    </section>
+  );
+}
