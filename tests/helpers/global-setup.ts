@@ -89,8 +89,6 @@ export default async function setup(project: TestProject) {
     STRIPE_SECRET_KEY,
     STRIPE_WEBHOOK_SECRET,
     STRIPE_API_BASE: payments.url,
-    // Estimate e-mails go to outbox.jsonl beside the test database (lib/estimates/mail-transport.ts).
-    GLOWBENCH_OUTBOX: "1",
     SMTP_URL: mailSink.url,
     GLOWBENCH_MAIL_DIR: mailDir,
   };

@@ -1,3 +1,4 @@
+import { mailTo } from "./mail";
 import Database from "better-sqlite3";
 import path from "node:path";
 import { inject } from "vitest";
@@ -65,13 +66,10 @@ export function logTexts(jobId: number, kind: string): string[] {
   return (testDb().prepare("SELECT text FROM log_entries WHERE job_id = ? AND kind = ? ORDER BY id").all(jobId, kind) as { text: string }[]).map((r) => r.text);
 }
 
-/** The text of the newest e-mail to an address (optionally with a matching subject), waiting briefly for it. */
+/** The text of the newest e-mail to an address (optionally with a matching subject) the SMTP sink received, waiting briefly for it. */
 export async function latestMailText(to: string, subject?: RegExp): Promise<string> {
-  const file = path.join(inject("dataDir"), "outbox.jsonl");
-  for (let i = 0; i < 40; i++) {
-    const fs = await import("node:fs");
-    const mails = fs.existsSync(file) ? fs.readFileSync(file, "utf8").trim().split("\n").map((l) => JSON.parse(l) as { to: string; subject: string; text: string }) : [];
-    const found = mails.filter((m) => m.to === to && (!subject || subject.test(m.subject))).at(-1);
+  for (let i = 0; i < 100; i++) {
+    const found = mailTo(to).filter((m) => !subject || subject.test(m.subject)).at(-1);
     if (found) return found.text;
     await new Promise((r) => setTimeout(r, 100));
   }
