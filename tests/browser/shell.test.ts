@@ -13,7 +13,7 @@ afterAll(async () => {
 
 test("the owner signs in, sees the shell with name and role, and signs out", async () => {
   const page = await browser.newPage();
-  await page.goto(`${baseUrl()}/sign-in`);
+  await page.goto(`${baseUrl()}/sign-in`, { waitUntil: "networkidle" }); // hydrated before typing
   await page.getByLabel("E-mail").fill("owner@demo.test");
   await page.getByLabel("Password").fill(DEMO_PASSWORD);
   await page.getByRole("button", { name: "Sign in" }).click();
@@ -23,7 +23,8 @@ test("the owner signs in, sees the shell with name and role, and signs out", asy
   for (const name of ["Bench", "Jobs", "Workshop"]) {
     expect(await page.getByRole("navigation", { name: "Main" }).getByRole("link", { name }).count()).toBe(1);
   }
-  expect(await page.getByText("Five-tube AC/DC table radio, early 1950s").count()).toBeGreaterThan(0);
+  // The job list loads after the page (TanStack Query), so wait for it.
+  await expect.poll(() => page.getByText("Five-tube AC/DC table radio, early 1950s").count()).toBeGreaterThan(0);
   await page.getByRole("button", { name: "Sign out" }).click();
   await page.waitForURL(/\/sign-in/);
   await page.goto(`${baseUrl()}/jobs`);
@@ -33,7 +34,7 @@ test("the owner signs in, sees the shell with name and role, and signs out", asy
 
 test("sign-in shows field messages under the fields for empty input, and a plain message for a wrong password", async () => {
   const page = await browser.newPage();
-  await page.goto(`${baseUrl()}/sign-in`);
+  await page.goto(`${baseUrl()}/sign-in`, { waitUntil: "networkidle" }); // hydrated before typing
   await page.getByRole("button", { name: "Sign in" }).click();
   await expect.poll(() => page.locator("#email-error").textContent()).toContain("Enter your e-mail address");
   expect(await page.locator("#password").getAttribute("aria-invalid")).toBe("true");
