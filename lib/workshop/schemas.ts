@@ -1,7 +1,6 @@
 import { z } from "zod";
 import { ROLES } from "@/db/enums";
-import { emailField, newPasswordField } from "@/lib/auth/schemas";
-import { PASSWORD_MAX } from "@/lib/auth/password";
+import { PASSWORD_MAX, emailField, newPasswordField } from "@/lib/auth/schemas";
 
 /** Shared by the /workshop forms (zodResolver) and the /api/workshop route handlers (safeParse). */
 
