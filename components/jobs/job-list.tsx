@@ -8,6 +8,7 @@ import { EQUIPMENT_KIND_LABELS, type EquipmentKind, type JobStatus } from "@/db/
 import { EmptyState } from "@/components/ui/card";
 import { getJson } from "@/lib/client/fetch-json";
 import { formatDate } from "@/lib/jobs/dates";
+import { JOB_LIST_PAGE_SIZE } from "@/lib/jobs/job-schemas";
 import { JobFilters, type Filters } from "./job-filters";
 import { StatusBadge } from "./status-badge";
 
@@ -22,14 +23,14 @@ export interface JobListItem {
   status: JobStatus;
   updatedAt: string;
 }
-interface JobPage {
+export interface JobPage {
   jobs: JobListItem[];
   total: number;
   page: number;
   pageSize: number;
 }
 
-const PAGE_SIZE = 25;
+const PAGE_SIZE = JOB_LIST_PAGE_SIZE;
 const col = createColumnHelper<JobListItem>();
 const columns = [
   col.accessor("title", {
@@ -58,7 +59,8 @@ function useDebounced<T>(value: T, ms: number): T {
   return v;
 }
 
-export function JobList() {
+/** `firstPage` is the unfiltered first page, rendered on the server so the list shows without waiting. */
+export function JobList({ firstPage }: { firstPage?: JobPage }) {
   const [filters, setFilters] = useState<Filters>({ q: "", status: "", kind: "" });
   const [sorting, setSorting] = useState<SortingState>([{ id: "updatedAt", desc: true }]);
   const [page, setPage] = useState(1);
@@ -70,7 +72,13 @@ export function JobList() {
   if (q) params.set("q", q);
   if (filters.status) params.set("status", filters.status);
   if (filters.kind) params.set("kind", filters.kind);
-  const query = useQuery({ queryKey: ["jobs", params.toString()], queryFn: () => getJson<JobPage>(`/api/jobs?${params}`), placeholderData: keepPreviousData });
+  const isFirst = page === 1 && !q && !filters.status && !filters.kind && sorting[0]?.id === "updatedAt" && sorting[0]?.desc;
+  const query = useQuery({
+    queryKey: ["jobs", params.toString()],
+    queryFn: () => getJson<JobPage>(`/api/jobs?${params}`),
+    placeholderData: keepPreviousData,
+    initialData: isFirst ? firstPage : undefined,
+  });
 
   const data = query.data;
   const table = useReactTable({

@@ -4,9 +4,9 @@ import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
 import { JobForm } from "./job-form";
-import { JobList } from "./job-list";
+import { JobList, type JobPage } from "./job-list";
 
-export function JobsPageClient({ workshopName, canCreate }: { workshopName: string; canCreate: boolean }) {
+export function JobsPageClient({ workshopName, canCreate, firstPage }: { workshopName: string; canCreate: boolean; firstPage: JobPage }) {
   const [creating, setCreating] = useState(false);
   return (
     <>
@@ -23,7 +23,7 @@ export function JobsPageClient({ workshopName, canCreate }: { workshopName: stri
           <JobForm onDone={() => setCreating(false)} />
         </Card>
       ) : null}
-      <JobList />
+      <JobList firstPage={firstPage} />
     </>
   );
 }

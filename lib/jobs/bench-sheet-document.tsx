@@ -2,15 +2,18 @@ import path from "node:path";
 import { Document, Font, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { BenchSheetData } from "./bench-sheet-data";
 
-/** The printable bench sheet: A4, our own layout, the shipped OFL font embedded. */
+/**
+ * The printable bench sheet: A4, our own layout, the shipped OFL font embedded. WOFF (not WOFF2):
+ * the PDF font subsetter drops the glyph outlines of WOFF2 files, leaving blank text.
+ */
 
 const fontFile = (name: string) => path.join(/*turbopackIgnore: true*/ process.cwd(), "fonts", name);
 Font.register({
   family: "Body",
   fonts: [
-    { src: fontFile("atkinson-hyperlegible-latin-400-normal.woff2") },
-    { src: fontFile("atkinson-hyperlegible-latin-700-normal.woff2"), fontWeight: 700 },
-    { src: fontFile("atkinson-hyperlegible-latin-400-italic.woff2"), fontStyle: "italic" },
+    { src: fontFile("atkinson-hyperlegible-latin-400-normal.woff") },
+    { src: fontFile("atkinson-hyperlegible-latin-700-normal.woff"), fontWeight: 700 },
+    { src: fontFile("atkinson-hyperlegible-latin-400-italic.woff"), fontStyle: "italic" },
   ],
 });
 Font.registerHyphenationCallback((word) => [word]);
@@ -21,7 +24,7 @@ const s = StyleSheet.create({
   page: { fontFamily: "Body", fontSize: 10, color: ink, padding: 36, paddingBottom: 48, lineHeight: 1.35 },
   top: { flexDirection: "row", justifyContent: "space-between", borderBottom: `2 solid ${ink}`, paddingBottom: 6, marginBottom: 10 },
   brand: { fontSize: 9, color: "#57504a" },
-  title: { fontSize: 17, fontWeight: 700, marginBottom: 4 },
+  title: { fontSize: 17, fontWeight: 700, lineHeight: 1.2, marginBottom: 8 },
   facts: { flexDirection: "row", flexWrap: "wrap", marginBottom: 10 },
   fact: { width: "33%", marginBottom: 3 },
   factLabel: { fontSize: 8, color: "#57504a" },
@@ -83,7 +86,7 @@ export function BenchSheetDocument({ data }: { data: BenchSheetData }) {
           <Text>{data.caution}</Text>
         </View>
 
-        <Text style={s.h2}>Parts fitted</Text>
+        <Text style={s.h2} minPresenceAhead={60}>Parts fitted</Text>
         {data.partsFitted.length ? (
           <Table
             cols={[{ label: "Ref.", width: "12%" }, { label: "Kind", width: "22%" }, { label: "Original", width: "33%" }, { label: "Fitted", width: "33%" }]}
@@ -94,7 +97,7 @@ export function BenchSheetDocument({ data }: { data: BenchSheetData }) {
         )}
         {data.partsOutstanding.length ? <Text style={[s.muted, { marginTop: 4 }]}>Not yet fitted: {data.partsOutstanding.join(", ")}.</Text> : null}
 
-        <Text style={s.h2}>Resistor survey</Text>
+        <Text style={s.h2} minPresenceAhead={60}>Resistor survey</Text>
         {data.resistors.length ? (
           <Table
             cols={[{ label: "Ref.", width: "14%" }, { label: "Marked", width: "16%" }, { label: "Tolerance", width: "14%" }, { label: "Measured", width: "16%" }, { label: "Deviation", width: "16%" }, { label: "Verdict", width: "24%" }]}
@@ -104,7 +107,7 @@ export function BenchSheetDocument({ data }: { data: BenchSheetData }) {
           <Text style={s.muted}>No resistors measured.</Text>
         )}
 
-        <Text style={s.h2}>Voltages</Text>
+        <Text style={s.h2} minPresenceAhead={60}>Voltages</Text>
         {data.voltages.length ? (
           <Table
             cols={[{ label: "Test point", width: "32%" }, { label: "Expected", width: "16%" }, { label: "Measured", width: "16%" }, { label: "Difference", width: "14%" }, { label: "Verdict", width: "22%" }]}
@@ -114,7 +117,7 @@ export function BenchSheetDocument({ data }: { data: BenchSheetData }) {
           <Text style={s.muted}>No voltages recorded.</Text>
         )}
 
-        <Text style={s.h2}>Calculations</Text>
+        <Text style={s.h2} minPresenceAhead={60}>Calculations</Text>
         {data.calculations.length === 0 ? <Text style={s.muted}>No calculations saved to this job.</Text> : null}
         {data.calculations.map((c, i) => (
           <View key={i} style={s.calc} wrap={false}>

@@ -1,6 +1,9 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
+import type { JobPage } from "@/components/jobs/job-list";
 import { JobsPageClient } from "@/components/jobs/jobs-page-client";
+import { searchJobs } from "@/db/queries/jobs";
+import { JOB_LIST_PAGE_SIZE, jobListQuerySchema } from "@/lib/jobs/job-schemas";
 import { can, getMember } from "@/lib/auth/member";
 
 export const metadata: Metadata = { title: "Jobs" };
@@ -8,5 +11,7 @@ export const metadata: Metadata = { title: "Jobs" };
 export default async function JobsPage() {
   const member = await getMember();
   if (!member) redirect("/sign-in?next=/jobs");
-  return <JobsPageClient workshopName={member.workshopName} canCreate={can.editJobs(member)} />;
+  // The same first page GET /api/jobs gives, as JSON (dates as strings), so the client cache can take it over.
+  const firstPage = JSON.parse(JSON.stringify(searchJobs(member, jobListQuerySchema.parse({ pageSize: String(JOB_LIST_PAGE_SIZE) })))) as JobPage;
+  return <JobsPageClient workshopName={member.workshopName} canCreate={can.editJobs(member)} firstPage={firstPage} />;
 }

@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { HighVoltageNote } from "@/components/jobs/high-voltage-note";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
 import { NoteForm, PowerUpForm } from "@/components/jobs/log-forms";
 import { Card, EmptyState } from "@/components/ui/card";
@@ -60,7 +59,6 @@ export default async function LogPage({ params }: JobPageProps) {
           <h2 className="mb-1 text-lead font-bold">Power-up</h2>
           <p className="mb-3 text-note text-muted">For each step of a slow start on a current-limited supply or a series lamp.</p>
           <PowerUpForm jobId={job.id} />
-          <HighVoltageNote compact />
         </Card>
       </div>
     </div>
