@@ -32,17 +32,15 @@ const tq = (v: number, u: string) => texQuantity(v, u, 4);
 export function solveOhms(k: Partial<OhmsValues>): Solved {
   const { voltage: v, current: i, resistance: r, power: p } = k;
   const done = (values: OhmsValues, formulas: { name: Name; tex: string; sub: () => string }[]): Solved => {
-    for (const n of NAMES) {
-      if (!Number.isFinite(values[n])) {
-        return { ok: false, field: NAMES.find((m) => k[m] !== undefined) as Name, message: "These two values are too far apart to combine; the result would overflow" };
-      }
+    const { voltage, current, resistance, power } = values;
+    if (!(Number.isFinite(voltage) && Number.isFinite(current) && Number.isFinite(resistance) && Number.isFinite(power))) {
+      return { ok: false, field: NAMES.find((m) => k[m] !== undefined) as Name, message: "These two values are too far apart to combine; the result would overflow" };
     }
-    if (!(values.resistance > 0)) {
+    if (!(resistance > 0)) {
       return { ok: false, field: NAMES.find((m) => k[m] !== undefined) as Name, message: "These values would give a resistance of zero (a short)" };
     }
     // -0 (from "-0 V") would read oddly in a result; 0 + -0 is +0.
-    for (const n of NAMES) values[n] = values[n] + 0;
-    return { ok: true, values, formulas };
+    return { ok: true, values: { voltage: voltage + 0, current: current + 0, resistance: resistance + 0, power: power + 0 }, formulas };
   };
   if (v !== undefined && i !== undefined) {
     if (v === 0 && i === 0) return { ok: false, field: "current", message: "With no voltage and no current the resistance cannot be found" };
