@@ -47,9 +47,15 @@ function httpRows(h: HttpReport): Row[] {
   for (const f of [h.health, h.calculator]) {
     rows.push({ part: "http", figure: `${f.route}: req/s (rounds ${f.rounds.join(", ")})`, value: rate(f.requestsPerSecond), target: "", verdict: "—" });
     rows.push({ part: "http", figure: `${f.route}: p50 / p99`, value: `${ms(f.p50Ms)} / ${ms(f.p99Ms)}`, target: "", verdict: "—" });
+    if (f.cpuMicrosPerRequest !== null) {
+      rows.push({ part: "http", figure: `${f.route}: server CPU per request`, value: `${Math.round(f.cpuMicrosPerRequest)} µs`, target: "", verdict: "—" });
+    }
     if (f.non2xx || f.errors) rows.push({ part: "http", figure: `${f.route}: non-2xx / errors`, value: `${f.non2xx} / ${f.errors}`, target: "0", verdict: "MISSED" });
   }
   rows.push({ part: "http", figure: "calculator ÷ health throughput", value: h.ratio.toFixed(2), target: `≥ ${HTTP_TARGET_RATIO}`, verdict: h.meetsTarget ? "met" : "MISSED" });
+  if (h.cpuRatio !== null) {
+    rows.push({ part: "http", figure: "health ÷ calculator CPU per request (the ratio a quiet machine shows)", value: h.cpuRatio.toFixed(2), target: `≥ ${HTTP_TARGET_RATIO}`, verdict: "—" });
+  }
   return rows;
 }
 
