@@ -21,11 +21,4 @@ export function mailFrom(): string {
   return process.env.MAIL_FROM ?? "Glowbench <no-reply@glowbench.invalid>";
 }
 
-/** The public address links in e-mails point at. */
-export function appUrl(request: Request): string {
-  if (process.env.GLOWBENCH_URL) return process.env.GLOWBENCH_URL.replace(/\/$/, "");
-  const url = new URL(request.url);
-  const host = request.headers.get("x-forwarded-host") ?? request.headers.get("host") ?? url.host;
-  const proto = request.headers.get("x-forwarded-proto") ?? url.protocol.replace(":", "");
-  return `${proto}://${host}`;
-}
+export { publicOrigin as appUrl } from "@/lib/http/public-origin";
