@@ -1,4 +1,5 @@
 import type { Metadata, Viewport } from "next";
+import { connection } from "next/server";
 import { bodyFont, figureFont } from "./fonts";
 import "./globals.css";
 
@@ -14,7 +15,9 @@ export const viewport: Viewport = {
   ],
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  // Every page carries the per-request CSP nonce set in proxy.ts, so none may be prerendered without it.
+  await connection();
   return (
     <html lang="en-GB" className={`${bodyFont.variable} ${figureFont.variable}`}>
       <body className="min-h-screen bg-paper text-ink font-sans">{children}</body>

@@ -1,8 +1,8 @@
-import { sendMail } from "./mail-transport";
+import { sendMail } from "@/lib/mail/send";
 
 /** The e-mails of the estimate round trip: the approval link to the customer, the answer to whoever prepared it. */
 
-export async function sendApprovalLink(input: { to: string; customerName: string | null; workshopName: string; jobTitle: string; total: string; link: string; expiresAt: Date }) {
+export async function sendApprovalLink(input: { workshopId: number; to: string; customerName: string | null; workshopName: string; jobTitle: string; total: string; link: string; expiresAt: Date }) {
   const until = input.expiresAt.toLocaleDateString("en-GB", { day: "numeric", month: "long", year: "numeric" });
   const text = [
     `${input.customerName ? `Dear ${input.customerName}` : "Hello"},`,
@@ -16,16 +16,17 @@ export async function sendApprovalLink(input: { to: string; customerName: string
     "",
     input.workshopName,
   ].join("\n");
-  await sendMail({ to: input.to, subject: `Your estimate from ${input.workshopName}: ${input.total}`, text });
+  await sendMail({ to: input.to, subject: `Your estimate from ${input.workshopName}: ${input.total}`, text, workshopId: input.workshopId });
 }
 
-export async function notifyPreparer(answer: { text: string; status: string; job: { id: number; title: string }; preparer?: { email: string; name: string } }) {
+export async function notifyPreparer(answer: { workshopId: number; text: string; status: string; job: { id: number; title: string }; preparer?: { email: string; name: string } }) {
   if (!answer.preparer) return;
   try {
     await sendMail({
       to: answer.preparer.email,
       subject: `Estimate ${answer.status}: ${answer.job.title}`,
       text: `${answer.preparer.name},\n\n${answer.text}\n\nThe answer is in the job's Log: /jobs/${answer.job.id}\n`,
+      workshopId: answer.workshopId,
     });
   } catch (err) {
     // The answer is already recorded and logged; a mail failure must not make the customer answer again.

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { JobDetails } from "@/components/jobs/job-details";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
+import { ReadyMessage } from "@/components/jobs/ready-message";
 import { StatusWorkflow } from "@/components/jobs/status-workflow";
 import { Card } from "@/components/ui/card";
 import { listFiles } from "@/db/queries/files";
@@ -31,6 +32,12 @@ export default async function JobOverviewPage({ params }: JobPageProps) {
         <h2 className="mb-4 text-lead font-bold">Where it is</h2>
         <StatusWorkflow key={job.status} jobId={job.id} status={job.status} canChange={can.changeStatus(member)} />
       </Card>
+      {job.status === "ready" && can.changeStatus(member) ? (
+        <Card className="lg:col-span-2">
+          <h2 className="mb-4 text-lead font-bold">Tell the customer it&rsquo;s ready</h2>
+          <ReadyMessage jobId={job.id} status={job.status} />
+        </Card>
+      ) : null}
       <Card>
         <h2 className="mb-4 text-lead font-bold">The set</h2>
         <JobDetails job={job} canEdit={can.editJobs(member)} canDelete={can.deleteJobs(member)} />

@@ -15,6 +15,7 @@ export const POST = handle(async (request: Request, { params }: JobParams) => {
   const issued = issueApprovalLink(member, jobId);
   try {
     await sendApprovalLink({
+      workshopId: member.workshopId,
       to: issued.job.customerEmail!,
       customerName: issued.job.customerName,
       workshopName: issued.workshopName,
