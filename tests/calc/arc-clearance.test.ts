@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { breakdownVolts, calculator, gapForVolts } from "@/lib/calc/arc-clearance";
 import { runCalculator } from "@/lib/calc/run";
+import { calcRunner, logUniform } from "../helpers/calc";
 
 type Out = {
   relativeAirDensity: number;
@@ -11,15 +12,7 @@ type Out = {
   recommendedClearance: number;
 };
 
-function run(raw: Record<string, unknown>) {
-  const r = runCalculator(calculator, raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  return r.result;
-}
-const out = (raw: Record<string, unknown>) => run(raw).outputs as unknown as Out;
-
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log10(lo), max: Math.log10(hi), noNaN: true }).map((e) => Math.min(hi, Math.max(lo, 10 ** e)));
+const { run, out } = calcRunner<Out>(calculator);
 
 describe("arc-clearance: published checks", () => {
   it("a 1 cm uniform gap in standard air breaks down at about 30 kV", () => {

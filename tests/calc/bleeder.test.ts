@@ -5,6 +5,7 @@ import { texQuantity } from "@/lib/calc/format";
 import { runCalculator } from "@/lib/calc/run";
 import { E12 } from "@/lib/calc/tables/preferred-values";
 import { calculator as timeConstant } from "@/lib/calc/time-constant";
+import { calcRunner, logUniform } from "../helpers/calc";
 
 type Out = {
   maxResistance: number;
@@ -14,15 +15,7 @@ type Out = {
   suggestedRating: number | null;
 };
 
-function run(raw: Record<string, unknown>) {
-  const r = runCalculator(calculator, raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  return r.result;
-}
-const out = (raw: Record<string, unknown>) => run(raw).outputs as unknown as Out;
-
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log10(lo), max: Math.log10(hi), noNaN: true }).map((e) => Math.min(hi, Math.max(lo, 10 ** e)));
+const { run, out } = calcRunner<Out>(calculator);
 
 /** Is x a member of E12 (any decade)? */
 function isE12(x: number): boolean {

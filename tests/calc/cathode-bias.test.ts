@@ -1,9 +1,9 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { calculator } from "@/lib/calc/cathode-bias";
-import { runCalculator } from "@/lib/calc/run";
 import { E12 } from "@/lib/calc/tables/preferred-values";
 import { STANDARD_WATTAGES } from "@/lib/calc/tables/wattage";
+import { calcRunner, logUniform } from "../helpers/calc";
 
 type Out = {
   cathodeCurrent: number;
@@ -14,19 +14,7 @@ type Out = {
   bypassCornerFrequency: number | null;
 };
 
-function run(raw: Record<string, unknown>) {
-  const r = runCalculator(calculator, raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  return r.result;
-}
-const out = (raw: Record<string, unknown>) => run(raw).outputs as unknown as Out;
-function fields(raw: Record<string, unknown>): Record<string, string> {
-  const r = runCalculator(calculator, raw);
-  if (r.ok) throw new Error("expected a refusal");
-  return r.error.fields;
-}
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log10(lo), max: Math.log10(hi), noNaN: true }).map((e) => Math.min(hi, Math.max(lo, 10 ** e)));
+const { run, out, fields } = calcRunner<Out>(calculator);
 const parallel = (a: number, b: number) => (a * b) / (a + b);
 
 describe("cathode-bias: published checks", () => {

@@ -3,20 +3,11 @@ import { describe, expect, it } from "vitest";
 import { calculator, decodeBands, encodeResistance } from "@/lib/calc/colour-code";
 import { runCalculator } from "@/lib/calc/run";
 import { TOLERANCE } from "@/lib/calc/tables/colour-code";
+import { calcRunner } from "../helpers/calc";
 
 type Out = { resistance: number; tolerance: number; bands: string[] };
 
-function run(raw: Record<string, unknown>) {
-  const r = runCalculator(calculator, raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  return r.result;
-}
-const out = (raw: Record<string, unknown>) => run(raw).outputs as unknown as Out;
-function fields(raw: Record<string, unknown>): Record<string, string> {
-  const r = runCalculator(calculator, raw);
-  if (r.ok) throw new Error("expected a refusal");
-  return r.error.fields;
-}
+const { run, out, fields } = calcRunner<Out>(calculator);
 
 describe("colour-code: published checks (IEC 60062)", () => {
   it("yellow-violet-red-gold is 4.7 kΩ ±5 %", () => {

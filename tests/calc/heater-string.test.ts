@@ -3,6 +3,7 @@ import { describe, expect, it } from "vitest";
 import { calculator } from "@/lib/calc/heater-string";
 import { runCalculator } from "@/lib/calc/run";
 import { findHeater, HEATERS, TUBE_NAMES } from "@/lib/calc/tables/heaters";
+import { calcRunner } from "../helpers/calc";
 
 type Out = {
   stringVoltage: number;
@@ -13,12 +14,7 @@ type Out = {
   suggestedRating: number | null;
 };
 
-function run(raw: Record<string, unknown>) {
-  const r = runCalculator(calculator, raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  return r.result;
-}
-const out = (raw: Record<string, unknown>) => run(raw).outputs as unknown as Out;
+const { run, out } = calcRunner<Out>(calculator);
 
 describe("heater-string: published checks", () => {
   it("the classic five-tube AC/DC set: 12BE6 + 12BA6 + 12AV6 + 50C5 + 35W4 needs 122.8 V at 0.15 A", () => {

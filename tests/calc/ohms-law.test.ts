@@ -2,23 +2,12 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { calculator } from "@/lib/calc/ohms-law";
 import { runCalculator } from "@/lib/calc/run";
+import { calcRunner, logUniform } from "../helpers/calc";
 
 type Out = { voltage: number; current: number; resistance: number; power: number };
 const NAMES = ["voltage", "current", "resistance", "power"] as const;
 
-function run(raw: Record<string, unknown>) {
-  const r = runCalculator(calculator, raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  return r.result;
-}
-const out = (raw: Record<string, unknown>) => run(raw).outputs as unknown as Out;
-function fields(raw: Record<string, unknown>): Record<string, string> {
-  const r = runCalculator(calculator, raw);
-  if (r.ok) throw new Error("expected a refusal");
-  return r.error.fields;
-}
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log10(lo), max: Math.log10(hi), noNaN: true }).map((e) => Math.min(hi, Math.max(lo, 10 ** e)));
+const { run, out, fields } = calcRunner<Out>(calculator);
 
 describe("ohms-law: checks against published tube data", () => {
   it("35Z5GT heater, 35 V at 0.15 A: 233 Ω hot, 5.25 W", () => {

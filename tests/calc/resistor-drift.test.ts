@@ -1,23 +1,11 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { calculator } from "@/lib/calc/resistor-drift";
-import { runCalculator } from "@/lib/calc/run";
+import { calcRunner, logUniform } from "../helpers/calc";
 
 type Out = { deviation: number | null; withinTolerance: boolean; verdict: string };
 
-function run(raw: Record<string, unknown>) {
-  const r = runCalculator(calculator, raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  return r.result;
-}
-const out = (raw: Record<string, unknown>) => run(raw).outputs as unknown as Out;
-function fields(raw: Record<string, unknown>): Record<string, string> {
-  const r = runCalculator(calculator, raw);
-  if (r.ok) throw new Error("expected a refusal");
-  return r.error.fields;
-}
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log10(lo), max: Math.log10(hi), noNaN: true }).map((e) => Math.min(hi, Math.max(lo, 10 ** e)));
+const { run, out, fields } = calcRunner<Out>(calculator);
 
 describe("resistor-drift: checks against the published tolerances", () => {
   it("defaults to ±20 %, the no-band tolerance of IEC 60062 and of the era's composition resistors", () => {

@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { runCalculator } from "@/lib/calc/run";
 import { calculator } from "@/lib/calc/supply-ripple";
+import { calcRunner, logUniform } from "../helpers/calc";
 
 type StageOut = { attenuation: number; rippleRms: number; dcDrop: number };
 type Out = {
@@ -12,15 +13,7 @@ type Out = {
   finalRippleRms: number;
 };
 
-function run(raw: Record<string, unknown>) {
-  const r = runCalculator(calculator, raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  return r.result;
-}
-const out = (raw: Record<string, unknown>) => run(raw).outputs as unknown as Out;
-
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log10(lo), max: Math.log10(hi), noNaN: true }).map((e) => Math.min(hi, Math.max(lo, 10 ** e)));
+const { run, out } = calcRunner<Out>(calculator);
 
 describe("supply-ripple: published checks", () => {
   it("full-wave ripples at twice the mains frequency, half-wave at the mains frequency", () => {

@@ -3,19 +3,13 @@ import { describe, expect, it } from "vitest";
 import { texQuantity } from "@/lib/calc/format";
 import { runCalculator } from "@/lib/calc/run";
 import { calculator } from "@/lib/calc/time-constant";
+import { calcRunner, logUniform } from "../helpers/calc";
 
 type Out = { timeConstant: number; fiveTau: number; timeToTarget: number | null; voltageAtElapsed: number | null };
 
-function run(raw: Record<string, unknown>) {
-  const r = runCalculator(calculator, raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  return r.result;
-}
-const out = (raw: Record<string, unknown>) => run(raw).outputs as unknown as Out;
+const { run, out } = calcRunner<Out>(calculator);
 
 /** Log-uniform positive number in [lo, hi]. */
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log10(lo), max: Math.log10(hi), noNaN: true }).map((e) => Math.min(hi, Math.max(lo, 10 ** e)));
 
 describe("time-constant: published checks", () => {
   it("1 MΩ with 1 µF gives a one-second time constant", () => {
