@@ -56,7 +56,8 @@ export function decodeBands(names: readonly string[]): Decoded | Failure {
     }
     tolerance = t;
   }
-  const significand = digits.reduce((acc, d) => acc * 10 + d, 0);
+  let significand = 0;
+  for (const d of digits) significand = significand * 10 + d;
   return { ok: true, digits, exponent, resistance: tidy(significand * 10 ** exponent), tolerance, colours };
 }
 

@@ -90,7 +90,7 @@ export const calculator = defineCalculator({
     const pref = nearestPreferred(resistance, "E12");
     const raw = vs - i * pref;
     const loadVoltageWithPreferred = Math.max(0, raw);
-    const warnings: Warning[] = [...highVoltageWarning(vs, vl)];
+    const warnings: Warning[] = highVoltageWarning(vs, vl);
     if (rating.warning) warnings.push(rating.warning);
     warnings.push({
       level: "info",

@@ -1,6 +1,7 @@
 /** Engineering-notation formatting shared by steps (LaTeX) and the UI (plain text). */
+import { toPrecision } from "./precision";
 
-const PREFIX_STEPS: { exp: number; symbol: string; tex: string }[] = [
+const PREFIX_STEPS: { exp: number; symbol: string; tex: string; scale: number }[] = [
   { exp: 9, symbol: "G", tex: "G" },
   { exp: 6, symbol: "M", tex: "M" },
   { exp: 3, symbol: "k", tex: "k" },
@@ -9,7 +10,7 @@ const PREFIX_STEPS: { exp: number; symbol: string; tex: string }[] = [
   { exp: -6, symbol: "µ", tex: "\\mu " },
   { exp: -9, symbol: "n", tex: "n" },
   { exp: -12, symbol: "p", tex: "p" },
-];
+].map((s) => ({ ...s, scale: 10 ** s.exp })); // the very divisor `10 ** exp` gave, computed once
 
 /** Units that take no engineering prefix when shown. */
 const NO_PREFIX = new Set(["", "%", "K", "Pa", "×", "dB"]);
@@ -23,21 +24,24 @@ export interface Engineering {
 /** Split a value into a mantissa with `sig` significant figures and an SI prefix. */
 export function toEngineering(value: number, unit: string, sig = 3): Engineering {
   if (!Number.isFinite(value)) return { mantissa: String(value), prefix: "", texPrefix: "" };
-  if (value === 0 || NO_PREFIX.has(unit)) return { mantissa: trim(value.toPrecision(sig)), prefix: "", texPrefix: "" };
+  if (value === 0 || NO_PREFIX.has(unit)) return { mantissa: trim(toPrecision(value, sig)), prefix: "", texPrefix: "" };
   // A power rating reads better as "0.5 W" than "500 mW" (the wattages of the parts catalogue).
   const abs = Math.abs(value);
-  if (unit === "W" && abs >= 0.1 && abs < 1) return { mantissa: trim(value.toPrecision(sig)), prefix: "", texPrefix: "" };
+  if (unit === "W" && abs >= 0.1 && abs < 1) return { mantissa: trim(toPrecision(value, sig)), prefix: "", texPrefix: "" };
   const exp = Math.floor(Math.log10(abs));
   let k = 0;
   while (k < PREFIX_STEPS.length - 1 && exp < PREFIX_STEPS[k].exp) k++;
   let step = PREFIX_STEPS[k];
-  let scaled = value / 10 ** step.exp;
-  // 999.96 rounds to "1.00e+3": move up a prefix instead.
-  if (Math.abs(Number(scaled.toPrecision(sig))) >= 1000 && k > 0) {
+  let scaled = value / step.scale;
+  let digits = toPrecision(scaled, sig);
+  // 999.96 rounds to "1.00e+3": move up a prefix instead. Below 900 no rounding reaches 1000,
+  // so the check (a number parse) is skipped for nearly every value; toPrecision runs once.
+  if (k > 0 && (scaled >= 900 || scaled <= -900) && Math.abs(Number(digits)) >= 1000) {
     step = PREFIX_STEPS[k - 1];
-    scaled = value / 10 ** step.exp;
+    scaled = value / step.scale;
+    digits = toPrecision(scaled, sig);
   }
-  return { mantissa: trim(scaled.toPrecision(sig)), prefix: step.symbol, texPrefix: step.tex };
+  return { mantissa: trim(digits), prefix: step.symbol, texPrefix: step.tex };
 }
 
 /** "4.70" → "4.7", "250." → "250", "1.00e+3" → "1000": no trailing zeros, no regex (this runs per value shown). */
@@ -58,8 +62,15 @@ export function formatQuantity(value: number, unit: string, sig = 3): string {
 
 const TEX_UNIT: Record<string, string> = { "Ω": "\\Omega", "µ": "\\mu ", "%": "\\%", "×": "\\times" };
 
+const texUnits = new Map<string, string>(); // a handful of unit symbols, so this stays tiny
+
 function texUnit(unit: string): string {
-  return unit.replace(/[Ωµ%×]/g, (c) => TEX_UNIT[c]);
+  let tex = texUnits.get(unit);
+  if (tex === undefined) {
+    tex = unit.replace(/[Ωµ%×]/g, (c) => TEX_UNIT[c]);
+    if (texUnits.size < 64) texUnits.set(unit, tex);
+  }
+  return tex;
 }
 
 /** LaTeX for a quantity: `4.7\,\mathrm{k\Omega}`. */

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { formatQuantity, texQuantity } from "./format";
+import { toPrecision } from "./precision";
 import { highVoltageWarning } from "./safety";
 import { findHeater, HEATER_SOURCE, TUBE_NAMES } from "./tables/heaters";
 import { suggestedRating } from "./tables/wattage";
@@ -15,6 +16,12 @@ import { quantity, tidy } from "./units";
 // Rated currents within this fraction of each other count as one string current (common practice).
 const MATCH = 0.02;
 const MAX_HEATERS = 40;
+
+const LIVE_CHASSIS =
+  "A heater string across the mains usually means an AC/DC set whose chassis can be tied to one side of the line. " +
+  "Work on it through an isolation transformer and never trust a plug's orientation.";
+const COLD_SURGE =
+  "Cold heaters draw a surge well above their rating until they warm up, and one open heater breaks the whole string: every tube goes dark.";
 
 const heater = z.object({
   voltage: quantity("voltage", { positive: true, max: 500, label: "Heater voltage" }),
@@ -103,11 +110,14 @@ export const calculator = defineCalculator({
     "resistor wrong, over-runs some heaters and under-runs others — and one open heater darkens the whole set.",
   compute(input: HeaterStringInput) {
     const vLine = input.lineVoltage;
-    const list = heaterList(input);
     let sum = 0;
     let iMin = Infinity;
     let iMax = -Infinity;
-    for (const h of list) {
+    // A plain loop over the given heaters or the table entries, in list order (the sum's rounding depends on it).
+    const given = input.heaters && input.heaters.length > 0 ? input.heaters : null;
+    const n = given ? given.length : (input.tubes?.length ?? 0);
+    for (let k = 0; k < n; k++) {
+      const h = given ? given[k] : findHeater(input.tubes![k])!;
       sum += h.voltage;
       if (h.current < iMin) iMin = h.current;
       if (h.current > iMax) iMax = h.current;
@@ -121,14 +131,9 @@ export const calculator = defineCalculator({
     const dissipation = needed ? excess * stringCurrent : 0;
     const rating = needed ? suggestedRating(dissipation) : { rating: 0, warning: null };
 
-    const warnings: Warning[] = [...highVoltageWarning(vLine)];
+    const warnings: Warning[] = highVoltageWarning(vLine);
     if (vLine > 50) {
-      warnings.push({
-        level: "caution",
-        message:
-          "A heater string across the mains usually means an AC/DC set whose chassis can be tied to one side of the line. " +
-          "Work on it through an isolation transformer and never trust a plug's orientation.",
-      });
+      warnings.push({ level: "caution", message: LIVE_CHASSIS });
     }
     if (!currentsMatch) {
       warnings.push({
@@ -144,16 +149,12 @@ export const calculator = defineCalculator({
       warnings.push({
         level: "caution",
         message:
-          `The string needs ${formatQuantity(stringVoltage, "V")}, more than the ${formatQuantity(vLine, "V")} line, so every heater runs about ${short.toPrecision(2)}% below its rating. ` +
+          `The string needs ${formatQuantity(stringVoltage, "V")}, more than the ${formatQuantity(vLine, "V")} line, so every heater runs about ${toPrecision(short, 2)}% below its rating. ` +
           "A few per cent is how many AC/DC sets were built; much more and emission suffers.",
       });
     }
     if (rating.warning) warnings.push(rating.warning);
-    warnings.push({
-      level: "info",
-      message:
-        "Cold heaters draw a surge well above their rating until they warm up, and one open heater breaks the whole string: every tube goes dark.",
-    });
+    warnings.push({ level: "info", message: COLD_SURGE });
 
     return {
       outputs: { stringVoltage, stringCurrent, currentsMatch, droppingResistance, dissipation, suggestedRating: rating.rating },

@@ -16,90 +16,92 @@ type Name = "voltage" | "current" | "resistance" | "power";
 const NAMES: readonly Name[] = ["voltage", "current", "resistance", "power"];
 const LABEL: Record<Name, string> = { voltage: "voltage", current: "current", resistance: "resistance", power: "power" };
 
-export interface OhmsValues {
+export type OhmsValues = {
   voltage: number;
   current: number;
   resistance: number;
   power: number;
-}
+};
 
-/** `sub` is typeset only when the working is shown: the schema solves too, just to refuse impossible pairs. */
-type Solved = { ok: true; values: OhmsValues; formulas: { name: Name; tex: string; sub: () => string }[] } | { ok: false; field: Name; message: string };
+/** Which two values were given; explain typesets the formulas of that pair. */
+type Pair = "vi" | "vr" | "vp" | "ir" | "ip" | "rp";
+
+type Solved = { ok: true; values: OhmsValues; pair: Pair } | { ok: false; field: Name; message: string };
 
 const tq = (v: number, u: string) => texQuantity(v, u, 4);
+
+type Formula = { name: Name; tex: string; sub: (x: OhmsValues) => string };
+
+/** The two formulas each pair solves with, and their working; typeset only when the working is shown. */
+const FORMULAS: Record<Pair, readonly Formula[]> = {
+  vi: [
+    { name: "resistance", tex: "R = V/I", sub: (x) => `R = \\frac{${tq(x.voltage, "V")}}{${tq(x.current, "A")}} = ${tq(x.resistance, "Ω")}` },
+    { name: "power", tex: "P = V I", sub: (x) => `P = ${tq(x.voltage, "V")} \\times ${tq(x.current, "A")} = ${tq(x.power, "W")}` },
+  ],
+  vr: [
+    { name: "current", tex: "I = V/R", sub: (x) => `I = \\frac{${tq(x.voltage, "V")}}{${tq(x.resistance, "Ω")}} = ${tq(x.current, "A")}` },
+    { name: "power", tex: "P = V^2/R", sub: (x) => `P = \\frac{(${tq(x.voltage, "V")})^2}{${tq(x.resistance, "Ω")}} = ${tq(x.power, "W")}` },
+  ],
+  vp: [
+    { name: "resistance", tex: "R = V^2/P", sub: (x) => `R = \\frac{(${tq(x.voltage, "V")})^2}{${tq(x.power, "W")}} = ${tq(x.resistance, "Ω")}` },
+    { name: "current", tex: "I = P/V", sub: (x) => `I = \\frac{${tq(x.power, "W")}}{${tq(x.voltage, "V")}} = ${tq(x.current, "A")}` },
+  ],
+  ir: [
+    { name: "voltage", tex: "V = I R", sub: (x) => `V = ${tq(x.current, "A")} \\times ${tq(x.resistance, "Ω")} = ${tq(x.voltage, "V")}` },
+    { name: "power", tex: "P = I^2 R", sub: (x) => `P = (${tq(x.current, "A")})^2 \\times ${tq(x.resistance, "Ω")} = ${tq(x.power, "W")}` },
+  ],
+  ip: [
+    { name: "resistance", tex: "R = P/I^2", sub: (x) => `R = \\frac{${tq(x.power, "W")}}{(${tq(x.current, "A")})^2} = ${tq(x.resistance, "Ω")}` },
+    { name: "voltage", tex: "V = P/I", sub: (x) => `V = \\frac{${tq(x.power, "W")}}{${tq(x.current, "A")}} = ${tq(x.voltage, "V")}` },
+  ],
+  rp: [
+    { name: "voltage", tex: "V = \\sqrt{P R}", sub: (x) => `V = \\sqrt{${tq(x.power, "W")} \\times ${tq(x.resistance, "Ω")}} = ${tq(x.voltage, "V")}` },
+    { name: "current", tex: "I = \\sqrt{P/R}", sub: (x) => `I = \\sqrt{\\frac{${tq(x.power, "W")}}{${tq(x.resistance, "Ω")}}} = ${tq(x.current, "A")}` },
+  ],
+};
+
+/** The first given field, where a refusal of the pair as a whole is reported. */
+function firstGiven(k: Partial<OhmsValues>): Name {
+  return k.voltage !== undefined ? "voltage" : k.current !== undefined ? "current" : k.resistance !== undefined ? "resistance" : "power";
+}
+
+/** Refuse overflow and a zero resistance; otherwise the solved values. A plain function, not a closure per call. */
+function finish(k: Partial<OhmsValues>, pair: Pair, voltage: number, current: number, resistance: number, power: number): Solved {
+  if (!(Number.isFinite(voltage) && Number.isFinite(current) && Number.isFinite(resistance) && Number.isFinite(power))) {
+    return { ok: false, field: firstGiven(k), message: "These two values are too far apart to combine; the result would overflow" };
+  }
+  if (!(resistance > 0)) {
+    return { ok: false, field: firstGiven(k), message: "These values would give a resistance of zero (a short)" };
+  }
+  // -0 (from "-0 V") would read oddly in a result; 0 + -0 is +0.
+  return { ok: true, values: { voltage: voltage + 0, current: current + 0, resistance: resistance + 0, power: power + 0 }, pair };
+}
 
 /** Solve from exactly two known values. Pure; the schema calls it to refuse impossible pairs. */
 export function solveOhms(k: Partial<OhmsValues>): Solved {
   const { voltage: v, current: i, resistance: r, power: p } = k;
-  const done = (values: OhmsValues, formulas: { name: Name; tex: string; sub: () => string }[]): Solved => {
-    const { voltage, current, resistance, power } = values;
-    if (!(Number.isFinite(voltage) && Number.isFinite(current) && Number.isFinite(resistance) && Number.isFinite(power))) {
-      return { ok: false, field: NAMES.find((m) => k[m] !== undefined) as Name, message: "These two values are too far apart to combine; the result would overflow" };
-    }
-    if (!(resistance > 0)) {
-      return { ok: false, field: NAMES.find((m) => k[m] !== undefined) as Name, message: "These values would give a resistance of zero (a short)" };
-    }
-    // -0 (from "-0 V") would read oddly in a result; 0 + -0 is +0.
-    return { ok: true, values: { voltage: voltage + 0, current: current + 0, resistance: resistance + 0, power: power + 0 }, formulas };
-  };
   if (v !== undefined && i !== undefined) {
     if (v === 0 && i === 0) return { ok: false, field: "current", message: "With no voltage and no current the resistance cannot be found" };
     if (i === 0) return { ok: false, field: "current", message: "Zero current with a voltage across means an open circuit: the resistance would be infinite" };
     if (v === 0) return { ok: false, field: "voltage", message: "Zero voltage with current flowing means a short: the resistance would be zero" };
     if (Math.sign(v) !== Math.sign(i)) return { ok: false, field: "current", message: "Voltage and current must have the same sign for a resistor" };
-    const res = v / i;
-    const pw = v * i;
-    return done({ voltage: v, current: i, resistance: res, power: pw }, [
-      { name: "resistance", tex: "R = V/I", sub: () => `R = \\frac{${tq(v, "V")}}{${tq(i, "A")}} = ${tq(res, "Ω")}` },
-      { name: "power", tex: "P = V I", sub: () => `P = ${tq(v, "V")} \\times ${tq(i, "A")} = ${tq(pw, "W")}` },
-    ]);
+    return finish(k, "vi", v, i, v / i, v * i);
   }
-  if (v !== undefined && r !== undefined) {
-    const cur = v / r;
-    const pw = (v * v) / r;
-    return done({ voltage: v, current: cur, resistance: r, power: pw }, [
-      { name: "current", tex: "I = V/R", sub: () => `I = \\frac{${tq(v, "V")}}{${tq(r, "Ω")}} = ${tq(cur, "A")}` },
-      { name: "power", tex: "P = V^2/R", sub: () => `P = \\frac{(${tq(v, "V")})^2}{${tq(r, "Ω")}} = ${tq(pw, "W")}` },
-    ]);
-  }
+  if (v !== undefined && r !== undefined) return finish(k, "vr", v, v / r, r, (v * v) / r);
   if (v !== undefined && p !== undefined) {
     if (v === 0 && p === 0) return { ok: false, field: "power", message: "With no voltage and no power the resistance cannot be found" };
     if (v === 0) return { ok: false, field: "voltage", message: "A resistor cannot take power with zero voltage across it" };
     if (p === 0) return { ok: false, field: "power", message: "Zero power with a voltage across means no current: the resistance would be infinite" };
-    const res = (v * v) / p;
-    const cur = p / v;
-    return done({ voltage: v, current: cur, resistance: res, power: p }, [
-      { name: "resistance", tex: "R = V^2/P", sub: () => `R = \\frac{(${tq(v, "V")})^2}{${tq(p, "W")}} = ${tq(res, "Ω")}` },
-      { name: "current", tex: "I = P/V", sub: () => `I = \\frac{${tq(p, "W")}}{${tq(v, "V")}} = ${tq(cur, "A")}` },
-    ]);
+    return finish(k, "vp", v, p / v, (v * v) / p, p);
   }
-  if (i !== undefined && r !== undefined) {
-    const volt = i * r;
-    const pw = i * i * r;
-    return done({ voltage: volt, current: i, resistance: r, power: pw }, [
-      { name: "voltage", tex: "V = I R", sub: () => `V = ${tq(i, "A")} \\times ${tq(r, "Ω")} = ${tq(volt, "V")}` },
-      { name: "power", tex: "P = I^2 R", sub: () => `P = (${tq(i, "A")})^2 \\times ${tq(r, "Ω")} = ${tq(pw, "W")}` },
-    ]);
-  }
+  if (i !== undefined && r !== undefined) return finish(k, "ir", i * r, i, r, i * i * r);
   if (i !== undefined && p !== undefined) {
     if (i === 0 && p === 0) return { ok: false, field: "power", message: "With no current and no power the resistance cannot be found" };
     if (i === 0) return { ok: false, field: "current", message: "A resistor cannot take power with no current through it" };
     if (p === 0) return { ok: false, field: "power", message: "Zero power with current flowing means a short: the resistance would be zero" };
-    const res = p / (i * i);
-    const volt = p / i;
-    return done({ voltage: volt, current: i, resistance: res, power: p }, [
-      { name: "resistance", tex: "R = P/I^2", sub: () => `R = \\frac{${tq(p, "W")}}{(${tq(i, "A")})^2} = ${tq(res, "Ω")}` },
-      { name: "voltage", tex: "V = P/I", sub: () => `V = \\frac{${tq(p, "W")}}{${tq(i, "A")}} = ${tq(volt, "V")}` },
-    ]);
+    return finish(k, "ip", p / i, i, p / (i * i), p);
   }
-  if (r !== undefined && p !== undefined) {
-    const volt = Math.sqrt(p * r);
-    const cur = Math.sqrt(p / r);
-    return done({ voltage: volt, current: cur, resistance: r, power: p }, [
-      { name: "voltage", tex: "V = \\sqrt{P R}", sub: () => `V = \\sqrt{${tq(p, "W")} \\times ${tq(r, "Ω")}} = ${tq(volt, "V")}` },
-      { name: "current", tex: "I = \\sqrt{P/R}", sub: () => `I = \\sqrt{\\frac{${tq(p, "W")}}{${tq(r, "Ω")}}} = ${tq(cur, "A")}` },
-    ]);
-  }
+  if (r !== undefined && p !== undefined) return finish(k, "rp", Math.sqrt(p * r), Math.sqrt(p / r), r, p);
   return { ok: false, field: "voltage", message: "Enter exactly two of voltage, current, resistance and power" };
 }
 
@@ -123,6 +125,8 @@ export const ohmsLawSchema = z
     const solved = solveOhms(k);
     if (!solved.ok) ctx.addIssue({ code: "custom", path: [solved.field], message: solved.message });
   });
+
+const DIRECTION_UNKNOWN = "From resistance and power alone the direction is unknown; voltage and current are given as positive.";
 
 export type OhmsLawInput = z.output<typeof ohmsLawSchema>;
 
@@ -159,20 +163,18 @@ export const calculator = defineCalculator({
   compute(input: OhmsLawInput) {
     const solved = solveOhms(input);
     if (!solved.ok) throw new Error(solved.message); // the schema has already refused this
-    const warnings: Warning[] = [...highVoltageWarning(solved.values.voltage)];
-    if (input.resistance !== undefined && input.power !== undefined) {
-      warnings.push({ level: "info", message: "From resistance and power alone the direction is unknown; voltage and current are given as positive." });
-    }
-    return { outputs: { ...solved.values }, warnings };
+    const warnings: Warning[] = highVoltageWarning(solved.values.voltage);
+    if (solved.pair === "rp") warnings.push({ level: "info", message: DIRECTION_UNKNOWN });
+    return { outputs: solved.values, warnings };
   },
   explain(input: OhmsLawInput) {
     const solved = solveOhms(input);
     if (!solved.ok) return [];
     const steps: Step[] = [];
-    for (const f of solved.formulas) {
+    for (const f of FORMULAS[solved.pair]) {
       const name = `${LABEL[f.name][0].toUpperCase()}${LABEL[f.name].slice(1)}`;
       steps.push({ label: `${name}: formula`, latex: f.tex });
-      steps.push({ label: `${name}: with your values`, latex: f.sub() });
+      steps.push({ label: `${name}: with your values`, latex: f.sub(solved.values) });
     }
     return steps;
   },

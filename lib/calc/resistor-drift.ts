@@ -50,6 +50,12 @@ export const resistorDriftSchema = z.object({
 
 export type ResistorDriftInput = z.output<typeof resistorDriftSchema>;
 
+/** `(t·100).toFixed(0)`; a whole percentage (the usual case) is its own digits, without the slower native call. */
+function percent0(t: number): string {
+  const pc = t * 100;
+  return Number.isInteger(pc) ? String(pc) : pc.toFixed(0);
+}
+
 export type DriftVerdict = "within" | "high" | "low" | "open";
 
 /** Deviation and verdict, shared with the job Readings table. */
@@ -139,7 +145,7 @@ export const calculator = defineCalculator({
     }
     warnings.push({
       level: "info",
-      message: `Measure with the set unplugged and the filter capacitors discharged. Allowed at ±${(tolerance * 100).toFixed(0)} %: ${formatQuantity(nominal * (1 - tolerance), "Ω")} to ${formatQuantity(nominal * (1 + tolerance), "Ω")}.`,
+      message: `Measure with the set unplugged and the filter capacitors discharged. Allowed at ±${percent0(tolerance)} %: ${formatQuantity(nominal * (1 - tolerance), "Ω")} to ${formatQuantity(nominal * (1 + tolerance), "Ω")}.`,
     });
     return { outputs: { deviation, withinTolerance, verdict }, warnings };
   },

@@ -8,7 +8,7 @@ export const HIGH_VOLTAGE_CAUTION =
   "bring the set up on a current-limited supply; keep one hand away from the chassis; " +
   "follow local electrical codes and licensed practice. These figures are estimates, not a guarantee of safety.";
 
-/** The danger warning every calculator adds when any voltage in its circuit exceeds 50 V. */
+/** The danger warning every calculator adds when any voltage in its circuit exceeds 50 V. A fresh array each call: the caller may push its own warnings onto it. */
 export function highVoltageWarning(...volts: (number | undefined)[]): Warning[] {
   // A plain loop: this runs in every compute, where filter/map chains showed up in the benchmark.
   for (const v of volts) {

@@ -101,7 +101,7 @@ export const calculator = defineCalculator({
     const timeToTarget = vt === undefined ? null : tau * Math.log(v0 / vt);
     const voltageAtElapsed = t === undefined ? null : v0 * Math.exp(-t / tau);
 
-    const warnings: Warning[] = [...highVoltageWarning(v0)];
+    const warnings: Warning[] = highVoltageWarning(v0);
     if (v0 > 50 && v0 * Math.exp(-5) > 50) {
       warnings.push({
         level: "caution",

@@ -154,7 +154,7 @@ export const calculator = defineCalculator({
     const bypassed = input.cathodeBypassed ?? true;
     const { params: p, name, rating, overridden } = modelFor(input);
     const solved = solveOperatingPoint(p, bPlus, ra, rk);
-    const warnings: Warning[] = [...highVoltageWarning(bPlus)];
+    const warnings: Warning[] = highVoltageWarning(bPlus);
     if (overridden.length) {
       warnings.push({ level: "info", message: `Using the ${name} table entry with your own ${overridden.join(", ")}.` });
     }

@@ -1,5 +1,6 @@
 import { create, unitDependencies, type Unit } from "mathjs";
 import { z } from "zod";
+import { round15 } from "./precision";
 
 /**
  * Engineering-notation parsing for calculator inputs, built on mathjs units.
@@ -96,7 +97,10 @@ const FAST: Partial<Record<QuantityKind, RegExp>> = Object.fromEntries(
 
 /** Round away binary noise from prefix scaling (470e-9 rather than 4.7000000000000005e-7). */
 export function tidy(value: number): number {
-  return Number.isFinite(value) && value !== 0 ? Number(value.toPrecision(15)) : value;
+  // Whole numbers below 10^15 have at most 15 figures, so rounding to 15 returns them unchanged:
+  // skip the string round trip (it is most of the cost of some computes).
+  if (Number.isInteger(value) && value < 1e15 && value > -1e15) return value;
+  return Number.isFinite(value) && value !== 0 ? round15(value) : value;
 }
 
 export type ParseResult = { ok: true; value: number } | { ok: false; message: string };

@@ -58,28 +58,36 @@ export const TOLERANCE: Readonly<Partial<Record<Colour, number>>> = {
 
 const ALIASES: Readonly<Record<string, Colour>> = { gray: "grey" };
 
+/** Every accepted spelling, lower case, to its colour: one Map lookup per band. */
+const BY_NAME = new Map<string, Colour>([...COLOURS.map((c) => [c, c] as const), ...Object.entries(ALIASES)]);
+
 /** Read a colour name (any case, surrounding spaces, "gray" for "grey"); null when it is not one of ours. */
 export function parseColour(name: string): Colour | null {
-  const key = name.trim().toLowerCase();
-  if (key in ALIASES) return ALIASES[key];
-  return (COLOURS as readonly string[]).includes(key) ? (key as Colour) : null;
+  return BY_NAME.get(name) ?? BY_NAME.get(name.trim().toLowerCase()) ?? null;
 }
+
+/** A table as [colour, value] pairs, built once for the reverse lookups below. */
+function reverse(table: Readonly<Partial<Record<Colour, number>>>): [Colour, number][] {
+  return Object.entries(table) as [Colour, number][];
+}
+const DIGIT_ENTRIES = reverse(DIGIT);
+const MULTIPLIER_ENTRIES = reverse(MULTIPLIER_EXPONENT);
+const TOLERANCE_ENTRIES = reverse(TOLERANCE);
 
 /** The colour for a digit 0–9. */
 export function digitColour(digit: number): Colour {
-  const hit = (Object.entries(DIGIT) as [Colour, number][]).find(([, d]) => d === digit);
-  if (!hit) throw new RangeError(`No colour for digit ${digit}`);
-  return hit[0];
+  for (const [c, d] of DIGIT_ENTRIES) if (d === digit) return c;
+  throw new RangeError(`No colour for digit ${digit}`);
 }
 
 /** The multiplier colour for 10^exponent, or null when the code has none (below 10⁻³ or above 10⁹). */
 export function multiplierColour(exponent: number): Colour | null {
-  const hit = (Object.entries(MULTIPLIER_EXPONENT) as [Colour, number][]).find(([, e]) => e === exponent);
-  return hit ? hit[0] : null;
+  for (const [c, e] of MULTIPLIER_ENTRIES) if (e === exponent) return c;
+  return null;
 }
 
 /** The tolerance colour for a fraction (0.05 → gold), or null when none is coded. */
 export function toleranceColour(tolerance: number): Colour | null {
-  const hit = (Object.entries(TOLERANCE) as [Colour, number][]).find(([, t]) => Math.abs(t - tolerance) <= 1e-12);
-  return hit ? hit[0] : null;
+  for (const [c, t] of TOLERANCE_ENTRIES) if (Math.abs(t - tolerance) <= 1e-12) return c;
+  return null;
 }
