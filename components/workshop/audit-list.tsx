@@ -9,6 +9,8 @@ function describe(e: AuditEventRow): string {
       return `${who} opened the workshop.`;
     case "workshop.updated":
       return `${who} changed the workshop settings (${[d.changed ?? []].flat().map((k) => SETTING_NAMES[k] ?? k).join(", ")}).`;
+    case "workshop.charges-updated":
+      return `${who} changed the workshop's charges (${[d.changed ?? []].flat().map((k) => SETTING_NAMES[k] ?? k).join(", ")}).`;
     case "invitation.created":
       return `${who} invited ${d.email} as ${d.role}.`;
     case "invitation.revoked":
@@ -34,6 +36,9 @@ const SETTING_NAMES: Record<string, string> = {
   contactPhone: "phone",
   address: "address",
   readyMessageTemplate: "ready message",
+  currency: "currency",
+  hourlyRateMinor: "hourly rate",
+  taxRateBp: "tax rate",
 };
 
 const when = (d: Date) => d.toLocaleString("en-GB", { day: "numeric", month: "short", hour: "2-digit", minute: "2-digit" });

@@ -7,6 +7,7 @@ import { auditEvents, users } from "../schema";
 
 export type AuditAction =
   | "workshop.updated"
+  | "workshop.charges-updated"
   | "invitation.created"
   | "invitation.revoked"
   | "member.joined"

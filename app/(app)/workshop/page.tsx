@@ -6,12 +6,13 @@ import { AuditList } from "@/components/workshop/audit-list";
 import { InvitationList } from "@/components/workshop/invitation-list";
 import { InviteForm } from "@/components/workshop/invite-form";
 import { MemberList } from "@/components/workshop/member-list";
+import { ChargesCard } from "@/components/workshop/charges-card";
 import { ContactDetails } from "@/components/workshop/contact-details";
 import { SettingsForm } from "@/components/workshop/settings-form";
 import { listAuditEvents } from "@/db/queries/audit";
 import { listInvitations } from "@/db/queries/invitations";
 import { listMembers } from "@/db/queries/members";
-import { getWorkshopSettings } from "@/db/queries/workshop";
+import { getCharges, getWorkshopSettings } from "@/db/queries/workshop";
 import { can, getMember } from "@/lib/auth/member";
 import { localMailEnabled } from "@/lib/mail/config";
 
@@ -22,6 +23,8 @@ export default async function WorkshopPage() {
   if (!member) redirect("/sign-in?next=/workshop");
   const owner = can.manageMembers(member);
   const settings = getWorkshopSettings(member);
+  // Apprentices never see prices: the card is not rendered for them at all.
+  const charges = can.prepareEstimates(member) ? getCharges(member) : null;
   const members = listMembers(member).map((m) => ({ ...m, joinedAt: m.joinedAt.toISOString() }));
   const invitations = owner
     ? listInvitations(member).map((i) => ({ id: i.id, email: i.email, role: i.role, state: i.state as "pending" | "expired", expiresAt: i.expiresAt.toISOString(), invitedBy: i.invitedBy }))
@@ -60,22 +63,25 @@ export default async function WorkshopPage() {
             </Card>
           ) : null}
         </div>
-        <Card>
-          <h2 className="mb-3 text-lead font-bold">{owner ? "Settings" : "Contact details"}</h2>
-          {owner ? (
-            <SettingsForm
-              initial={{
-                name: settings.name,
-                contactEmail: settings.contactEmail ?? "",
-                contactPhone: settings.contactPhone ?? "",
-                address: settings.address ?? "",
-                readyMessageTemplate: settings.readyMessageTemplate ?? "",
-              }}
-            />
-          ) : (
-            <ContactDetails settings={settings} />
-          )}
-        </Card>
+        <div className="flex flex-col gap-6">
+          {charges ? <ChargesCard charges={charges} owner={owner} /> : null}
+          <Card>
+            <h2 className="mb-3 text-lead font-bold">{owner ? "Settings" : "Contact details"}</h2>
+            {owner ? (
+              <SettingsForm
+                initial={{
+                  name: settings.name,
+                  contactEmail: settings.contactEmail ?? "",
+                  contactPhone: settings.contactPhone ?? "",
+                  address: settings.address ?? "",
+                  readyMessageTemplate: settings.readyMessageTemplate ?? "",
+                }}
+              />
+            ) : (
+              <ContactDetails settings={settings} />
+            )}
+          </Card>
+        </div>
       </div>
 
       {owner ? (
