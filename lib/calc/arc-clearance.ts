@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity } from "./format";
+import { formatQuantity, texQuantity, tex } from "./format";
 import { ALWAYS_DANGER } from "./safety";
 import { defineCalculator, type Step, type Warning } from "./types";
 import { optionalQuantity, quantity, quantityWithDefault } from "./units";
@@ -92,10 +92,10 @@ export const calculator = defineCalculator({
   ],
   schema: arcClearanceSchema,
   formulas: [
-    { label: "Relative air density", latex: String.raw`\delta = \frac{p}{101.325\,\mathrm{kPa}} \cdot \frac{293.15\,\mathrm{K}}{T}` },
-    { label: "Uniform-field breakdown (d in cm)", latex: String.raw`V_b = 24.22\,\delta d + 6.08\sqrt{\delta d}\;\mathrm{kV}` },
-    { label: "Minimum gap", latex: String.raw`\sqrt{\delta d} = \frac{-6.08 + \sqrt{6.08^2 + 4 \cdot 24.22\,V}}{2 \cdot 24.22}, \quad d = \frac{(\sqrt{\delta d})^2}{\delta}` },
-    { label: "Recommended clearance", latex: String.raw`d_{rec} = k\,d_{min}` },
+    { label: "Relative air density", latex: tex`\delta = \frac{p}{101.325\,\mathrm{kPa}} \cdot \frac{293.15\,\mathrm{K}}{T}` },
+    { label: "Uniform-field breakdown (d in cm)", latex: tex`V_b = 24.22\,\delta d + 6.08\sqrt{\delta d}\;\mathrm{kV}` },
+    { label: "Minimum gap", latex: tex`\sqrt{\delta d} = \frac{-6.08 + \sqrt{6.08^2 + 4 \cdot 24.22\,V}}{2 \cdot 24.22}, \quad d = \frac{(\sqrt{\delta d})^2}{\delta}` },
+    { label: "Recommended clearance", latex: tex`d_{rec} = k\,d_{min}` },
   ],
   references: [
     {
@@ -163,7 +163,7 @@ export const calculator = defineCalculator({
     const steps: Step[] = [
       {
         label: "Relative air density",
-        latex: String.raw`\delta = \frac{${texQuantity(p / 1000, "kPa", 6)}}{101.325\,\mathrm{kPa}} \cdot \frac{293.15\,\mathrm{K}}{${texQuantity(t, "K", 5)}} = ${delta.toPrecision(4)}`,
+        latex: tex`\delta = \frac{${texQuantity(p / 1000, "kPa", 6)}}{101.325\,\mathrm{kPa}} \cdot \frac{293.15\,\mathrm{K}}{${texQuantity(t, "K", 5)}} = ${delta.toPrecision(4)}`,
       },
     ];
     if (gap !== undefined && breakdownVoltage !== null) {
@@ -171,22 +171,22 @@ export const calculator = defineCalculator({
       steps.push(
         {
           label: "Breakdown voltage of the gap",
-          latex: String.raw`V_b = 24.22 \times ${delta.toPrecision(4)} \times ${dcm.toPrecision(4)} + 6.08\sqrt{${delta.toPrecision(4)} \times ${dcm.toPrecision(4)}} = ${texQuantity(breakdownVoltage, "V")}`,
+          latex: tex`V_b = 24.22 \times ${delta.toPrecision(4)} \times ${dcm.toPrecision(4)} + 6.08\sqrt{${delta.toPrecision(4)} \times ${dcm.toPrecision(4)}} = ${texQuantity(breakdownVoltage, "V")}`,
         },
         {
           label: willArc ? "The gap arcs" : "The gap holds",
-          latex: String.raw`${texQuantity(v, "V")} ${willArc ? "\\ge" : "<"} ${texQuantity(breakdownVoltage, "V")}`,
+          latex: tex`${texQuantity(v, "V")} ${willArc ? "\\ge" : "<"} ${texQuantity(breakdownVoltage, "V")}`,
         },
       );
     }
     steps.push(
       {
         label: "Minimum gap for the peak voltage",
-        latex: String.raw`\sqrt{\delta d} = \frac{-6.08 + \sqrt{6.08^2 + 4 \times 24.22 \times ${(v / 1000).toPrecision(4)}}}{2 \times 24.22} = ${sqrtDd.toPrecision(4)}, \quad d = \frac{${sqrtDd.toPrecision(4)}^2}{${delta.toPrecision(4)}}\,\mathrm{cm} = ${texQuantity(minimumGap, "m")}`,
+        latex: tex`\sqrt{\delta d} = \frac{-6.08 + \sqrt{6.08^2 + 4 \times 24.22 \times ${(v / 1000).toPrecision(4)}}}{2 \times 24.22} = ${sqrtDd.toPrecision(4)}, \quad d = \frac{${sqrtDd.toPrecision(4)}^2}{${delta.toPrecision(4)}}\,\mathrm{cm} = ${texQuantity(minimumGap, "m")}`,
       },
       {
         label: "Recommended clearance",
-        latex: String.raw`d_{rec} = ${k} \times ${texQuantity(minimumGap, "m")} = ${texQuantity(recommendedClearance, "m")}`,
+        latex: tex`d_{rec} = ${k} \times ${texQuantity(minimumGap, "m")} = ${texQuantity(recommendedClearance, "m")}`,
       },
     );
     return steps;

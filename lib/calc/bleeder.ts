@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity } from "./format";
+import { formatQuantity, texQuantity, tex } from "./format";
 import { ALWAYS_DANGER } from "./safety";
 import { preferredBelow } from "./tables/preferred-values";
 import { suggestedRating } from "./tables/wattage";
@@ -56,10 +56,10 @@ export const calculator = defineCalculator({
   ],
   schema: bleederSchema,
   formulas: [
-    { label: "Discharge to the safe voltage", latex: String.raw`t = R\,C\,\ln\frac{V_w}{V_{safe}}` },
-    { label: "Largest bleeder", latex: String.raw`R_{max} = \frac{t_{max}}{C\,\ln(V_w/V_{safe})}` },
-    { label: "Allowing for tolerance", latex: String.raw`R\,(1 + \text{tol}) \le R_{max}` },
-    { label: "Current and dissipation", latex: String.raw`I = \frac{V_w}{R}, \quad P = \frac{V_w^2}{R}` },
+    { label: "Discharge to the safe voltage", latex: tex`t = R\,C\,\ln\frac{V_w}{V_{safe}}` },
+    { label: "Largest bleeder", latex: tex`R_{max} = \frac{t_{max}}{C\,\ln(V_w/V_{safe})}` },
+    { label: "Allowing for tolerance", latex: tex`R\,(1 + \text{tol}) \le R_{max}` },
+    { label: "Current and dissipation", latex: tex`I = \frac{V_w}{R}, \quad P = \frac{V_w^2}{R}` },
   ],
   references: [
     {
@@ -117,26 +117,26 @@ export const calculator = defineCalculator({
     return [
       {
         label: "Largest bleeder that meets the time",
-        latex: String.raw`R_{max} = \frac{t_{max}}{C\,\ln(V_w/V_{safe})} = \frac{${texQuantity(t, "s")}}{${texQuantity(c, "F")} \times \ln(${texQuantity(vw, "V")}/${texQuantity(vs, "V")})} = ${texQuantity(maxResistance, "Ω")}`,
+        latex: tex`R_{max} = \frac{t_{max}}{C\,\ln(V_w/V_{safe})} = \frac{${texQuantity(t, "s")}}{${texQuantity(c, "F")} \times \ln(${texQuantity(vw, "V")}/${texQuantity(vs, "V")})} = ${texQuantity(maxResistance, "Ω")}`,
       },
       {
         label: "Allowing for tolerance",
-        latex: String.raw`R \le \frac{R_{max}}{1 + \text{tol}} = \frac{${texQuantity(maxResistance, "Ω")}}{1 + ${tol}} = ${texQuantity(allowed, "Ω")}`,
+        latex: tex`R \le \frac{R_{max}}{1 + \text{tol}} = \frac{${texQuantity(maxResistance, "Ω")}}{1 + ${tol}} = ${texQuantity(allowed, "Ω")}`,
       },
-      { label: "Largest E12 value at or below that", latex: String.raw`R = ${texQuantity(r, "Ω")}` },
+      { label: "Largest E12 value at or below that", latex: tex`R = ${texQuantity(r, "Ω")}` },
       {
         label: "Check: discharge time with the part at +tolerance",
-        latex: String.raw`t = R\,(1 + \text{tol})\,C\,\ln\frac{V_w}{V_{safe}} = ${texQuantity(r * (1 + tol), "Ω")} \times ${texQuantity(c, "F")} \times ${logRatio.toPrecision(4)} = ${texQuantity(worstTime, "s")} \le ${texQuantity(t, "s")}`,
+        latex: tex`t = R\,(1 + \text{tol})\,C\,\ln\frac{V_w}{V_{safe}} = ${texQuantity(r * (1 + tol), "Ω")} \times ${texQuantity(c, "F")} \times ${logRatio.toPrecision(4)} = ${texQuantity(worstTime, "s")} \le ${texQuantity(t, "s")}`,
       },
-      { label: "Bleeder current", latex: String.raw`I = \frac{V_w}{R} = \frac{${texQuantity(vw, "V")}}{${texQuantity(r, "Ω")}} = ${texQuantity(bleederCurrent, "A")}` },
-      { label: "Dissipation", latex: String.raw`P = \frac{V_w^2}{R} = \frac{(${texQuantity(vw, "V")})^2}{${texQuantity(r, "Ω")}} = ${texQuantity(dissipation, "W")}` },
+      { label: "Bleeder current", latex: tex`I = \frac{V_w}{R} = \frac{${texQuantity(vw, "V")}}{${texQuantity(r, "Ω")}} = ${texQuantity(bleederCurrent, "A")}` },
+      { label: "Dissipation", latex: tex`P = \frac{V_w^2}{R} = \frac{(${texQuantity(vw, "V")})^2}{${texQuantity(r, "Ω")}} = ${texQuantity(dissipation, "W")}` },
       {
         label: "Suggested rating (at least twice the dissipation)",
         latex: o.suggestedRating === null
-          ? String.raw`2P = ${texQuantity(2 * dissipation, "W")} \text{ — above the largest standard rating}`
-          : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \;\Rightarrow\; ${texQuantity(o.suggestedRating, "W")}`,
+          ? tex`2P = ${texQuantity(2 * dissipation, "W")} \text{ — above the largest standard rating}`
+          : tex`2P = ${texQuantity(2 * dissipation, "W")} \;\Rightarrow\; ${texQuantity(o.suggestedRating, "W")}`,
       },
-      { label: "Energy stored at the working voltage", latex: String.raw`E = \tfrac{1}{2}\,C\,V_w^2 = \tfrac{1}{2} \times ${texQuantity(c, "F")} \times (${texQuantity(vw, "V")})^2 = ${texQuantity(energy, "J")}` },
+      { label: "Energy stored at the working voltage", latex: tex`E = \tfrac{1}{2}\,C\,V_w^2 = \tfrac{1}{2} \times ${texQuantity(c, "F")} \times (${texQuantity(vw, "V")})^2 = ${texQuantity(energy, "J")}` },
     ] satisfies Step[];
   },
 });

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity } from "./format";
+import { formatQuantity, texQuantity, tex } from "./format";
 import { ALWAYS_DANGER } from "./safety";
 import { nearestPreferred } from "./tables/preferred-values";
 import { suggestedRating } from "./tables/wattage";
@@ -136,10 +136,10 @@ export const calculator = defineCalculator({
   ],
   schema: cathodeBiasSchema,
   formulas: [
-    { label: "Cathode current", latex: String.raw`I_k = I_p + I_{g2}` },
-    { label: "Cathode resistance", latex: String.raw`R_k = \frac{V_k}{I_k}` },
-    { label: "Dissipation", latex: String.raw`P = I_k^2 R_k` },
-    { label: "Bypass corner", latex: String.raw`f = \frac{1}{2\pi R C_k},\quad R = R_k \parallel \frac{r_p + R_a}{\mu + 1}\ \text{(triode)},\ R_k \parallel \frac{1}{g_m}\ \text{(pentode)}` },
+    { label: "Cathode current", latex: tex`I_k = I_p + I_{g2}` },
+    { label: "Cathode resistance", latex: tex`R_k = \frac{V_k}{I_k}` },
+    { label: "Dissipation", latex: tex`P = I_k^2 R_k` },
+    { label: "Bypass corner", latex: tex`f = \frac{1}{2\pi R C_k},\quad R = R_k \parallel \frac{r_p + R_a}{\mu + 1}\ \text{(triode)},\ R_k \parallel \frac{1}{g_m}\ \text{(pentode)}` },
   ],
   references: [
     {
@@ -209,26 +209,26 @@ export const calculator = defineCalculator({
     const steps: Step[] = [
       {
         label: "Cathode current",
-        latex: String.raw`I_k = ${texQuantity(ip, "A", 4)} + ${texQuantity(ig2, "A", 4)} = ${texQuantity(cathodeCurrent, "A", 4)}`,
+        latex: tex`I_k = ${texQuantity(ip, "A", 4)} + ${texQuantity(ig2, "A", 4)} = ${texQuantity(cathodeCurrent, "A", 4)}`,
       },
       {
         label: "Cathode resistance",
-        latex: String.raw`R_k = \frac{${texQuantity(vk, "V", 4)}}{${texQuantity(cathodeCurrent, "A", 4)}} = ${texQuantity(cathodeResistance, "Ω", 4)}`,
+        latex: tex`R_k = \frac{${texQuantity(vk, "V", 4)}}{${texQuantity(cathodeCurrent, "A", 4)}} = ${texQuantity(cathodeResistance, "Ω", 4)}`,
       },
       {
         label: "Dissipation",
-        latex: String.raw`P = (${texQuantity(cathodeCurrent, "A", 4)})^2 \times ${texQuantity(cathodeResistance, "Ω", 4)} = ${texQuantity(dissipation, "W")}`,
+        latex: tex`P = (${texQuantity(cathodeCurrent, "A", 4)})^2 \times ${texQuantity(cathodeResistance, "Ω", 4)} = ${texQuantity(dissipation, "W")}`,
       },
       {
         label: "Suggested rating",
         latex:
           o.suggestedRating === null
-            ? String.raw`2P = ${texQuantity(2 * dissipation, "W")}\ \text{(beyond the standard ratings)}`
-            : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \Rightarrow ${texQuantity(o.suggestedRating, "W")}`,
+            ? tex`2P = ${texQuantity(2 * dissipation, "W")}\ \text{(beyond the standard ratings)}`
+            : tex`2P = ${texQuantity(2 * dissipation, "W")} \Rightarrow ${texQuantity(o.suggestedRating, "W")}`,
       },
       {
         label: "Nearest E12 value and the bias it gives at the same current",
-        latex: String.raw`R_\text{pref} = ${texQuantity(pref, "Ω")},\quad V_k' \approx ${texQuantity(pref * cathodeCurrent, "V")}`,
+        latex: tex`R_\text{pref} = ${texQuantity(pref, "Ω")},\quad V_k' \approx ${texQuantity(pref * cathodeCurrent, "V")}`,
       },
     ];
     if (ck === undefined || o.bypassCornerFrequency === null) return steps;
@@ -236,23 +236,23 @@ export const calculator = defineCalculator({
     if (b.model === "triode") {
       steps.push({
         label: "Resistance looking into the cathode (triode)",
-        latex: String.raw`\frac{r_p + R_a}{\mu + 1} = \frac{${texQuantity(input.plateResistance as number, "Ω")} + ${texQuantity(input.plateLoad as number, "Ω")}}{${input.amplificationFactor} + 1} = ${texQuantity(b.rCathode as number, "Ω")}`,
+        latex: tex`\frac{r_p + R_a}{\mu + 1} = \frac{${texQuantity(input.plateResistance as number, "Ω")} + ${texQuantity(input.plateLoad as number, "Ω")}}{${input.amplificationFactor} + 1} = ${texQuantity(b.rCathode as number, "Ω")}`,
       });
     } else if (b.model === "pentode") {
       steps.push({
         label: "Resistance looking into the cathode (pentode)",
-        latex: String.raw`\frac{1}{g_m} = \frac{1}{${texQuantity(input.transconductance as number, "S")}} = ${texQuantity(b.rCathode as number, "Ω")}`,
+        latex: tex`\frac{1}{g_m} = \frac{1}{${texQuantity(input.transconductance as number, "S")}} = ${texQuantity(b.rCathode as number, "Ω")}`,
       });
     }
     if (b.model !== "rk") {
       steps.push({
         label: "Resistance the capacitor sees",
-        latex: String.raw`R = ${texQuantity(cathodeResistance, "Ω")} \parallel ${texQuantity(b.rCathode as number, "Ω")} = ${texQuantity(b.r, "Ω")}`,
+        latex: tex`R = ${texQuantity(cathodeResistance, "Ω")} \parallel ${texQuantity(b.rCathode as number, "Ω")} = ${texQuantity(b.r, "Ω")}`,
       });
     }
     steps.push({
       label: "Bypass corner frequency",
-      latex: String.raw`f = \frac{1}{2\pi \times ${texQuantity(b.r, "Ω")} \times ${texQuantity(ck, "F")}} = ${texQuantity(o.bypassCornerFrequency, "Hz")}`,
+      latex: tex`f = \frac{1}{2\pi \times ${texQuantity(b.r, "Ω")} \times ${texQuantity(ck, "F")}} = ${texQuantity(o.bypassCornerFrequency, "Hz")}`,
     });
     return steps;
   },

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity } from "./format";
+import { formatQuantity, texQuantity, tex } from "./format";
 import {
   DIGIT,
   MULTIPLIER_EXPONENT,
@@ -176,9 +176,9 @@ export const calculator = defineCalculator({
   ],
   schema: colourCodeSchema,
   formulas: [
-    { label: "Four bands", latex: String.raw`R = (10\,d_1 + d_2)\times 10^{m},\quad \pm t` },
-    { label: "Five bands", latex: String.raw`R = (100\,d_1 + 10\,d_2 + d_3)\times 10^{m},\quad \pm t` },
-    { label: "Three bands", latex: String.raw`R = (10\,d_1 + d_2)\times 10^{m},\quad \pm 20\,\%` },
+    { label: "Four bands", latex: tex`R = (10\,d_1 + d_2)\times 10^{m},\quad \pm t` },
+    { label: "Five bands", latex: tex`R = (100\,d_1 + 10\,d_2 + d_3)\times 10^{m},\quad \pm t` },
+    { label: "Three bands", latex: tex`R = (10\,d_1 + d_2)\times 10^{m},\quad \pm 20\,\%` },
   ],
   references: [
     { title: "IEC 60062, Marking codes for resistors and capacitors", detail: "Colour code table: figures, multipliers and tolerances" },
@@ -208,12 +208,12 @@ export const calculator = defineCalculator({
   explain(input: ColourCodeInput) {
     const { digits, exponent, resistance, tolerance, colours } = code(input);
     return [
-      { label: "Bands", latex: String.raw`\text{${colours.join(", ")}}` },
+      { label: "Bands", latex: tex`\text{${colours.join(", ")}}` },
       {
         label: "Figures and multiplier",
-        latex: String.raw`R = ${digits.join("")}\times 10^{${exponent}}\,\Omega = ${texQuantity(resistance, "Ω")}`,
+        latex: tex`R = ${digits.join("")}\times 10^{${exponent}}\,\Omega = ${texQuantity(resistance, "Ω")}`,
       },
-      { label: "Tolerance", latex: String.raw`\pm ${pct(tolerance)}\quad(${texQuantity(resistance * (1 - tolerance), "Ω")}\ \text{to}\ ${texQuantity(resistance * (1 + tolerance), "Ω")})` },
+      { label: "Tolerance", latex: tex`\pm ${pct(tolerance)}\quad(${texQuantity(resistance * (1 - tolerance), "Ω")}\ \text{to}\ ${texQuantity(resistance * (1 + tolerance), "Ω")})` },
     ] satisfies Step[];
   },
 });

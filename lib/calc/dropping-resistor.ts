@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity } from "./format";
+import { formatQuantity, texQuantity, tex } from "./format";
 import { highVoltageWarning } from "./safety";
 import { nearestPreferred } from "./tables/preferred-values";
 import { suggestedRating } from "./tables/wattage";
@@ -66,9 +66,9 @@ export const calculator = defineCalculator({
   ],
   schema: droppingResistorSchema,
   formulas: [
-    { label: "Resistance", latex: String.raw`R = \frac{V_s - V_l}{I}` },
-    { label: "Dissipation", latex: String.raw`P = I^2 R` },
-    { label: "Stage voltage with a preferred value", latex: String.raw`V_l' = V_s - I\,R_\text{pref}` },
+    { label: "Resistance", latex: tex`R = \frac{V_s - V_l}{I}` },
+    { label: "Dissipation", latex: tex`P = I^2 R` },
+    { label: "Stage voltage with a preferred value", latex: tex`V_l' = V_s - I\,R_\text{pref}` },
   ],
   references: [
     {
@@ -119,23 +119,23 @@ export const calculator = defineCalculator({
     return [
       {
         label: "Resistance",
-        latex: String.raw`R = \frac{${texQuantity(vs, "V", 4)} - ${texQuantity(vl, "V", 4)}}{${texQuantity(i, "A", 4)}} = ${texQuantity(resistance, "Ω", 4)}`,
+        latex: tex`R = \frac{${texQuantity(vs, "V", 4)} - ${texQuantity(vl, "V", 4)}}{${texQuantity(i, "A", 4)}} = ${texQuantity(resistance, "Ω", 4)}`,
       },
       {
         label: "Dissipation",
-        latex: String.raw`P = (${texQuantity(i, "A", 4)})^2 \times ${texQuantity(resistance, "Ω", 4)} = ${texQuantity(dissipation, "W")}`,
+        latex: tex`P = (${texQuantity(i, "A", 4)})^2 \times ${texQuantity(resistance, "Ω", 4)} = ${texQuantity(dissipation, "W")}`,
       },
       {
         label: "Suggested rating",
         latex:
           o.suggestedRating === null
-            ? String.raw`2P = ${texQuantity(2 * dissipation, "W")}\ \text{(beyond the standard ratings)}`
-            : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \Rightarrow ${texQuantity(o.suggestedRating, "W")}`,
+            ? tex`2P = ${texQuantity(2 * dissipation, "W")}\ \text{(beyond the standard ratings)}`
+            : tex`2P = ${texQuantity(2 * dissipation, "W")} \Rightarrow ${texQuantity(o.suggestedRating, "W")}`,
       },
-      { label: "Nearest E12 value", latex: String.raw`R_\text{pref} = ${texQuantity(pref, "Ω")}` },
+      { label: "Nearest E12 value", latex: tex`R_\text{pref} = ${texQuantity(pref, "Ω")}` },
       {
         label: "Stage voltage with the E12 value (load taken as a constant current)",
-        latex: String.raw`V_l' = ${texQuantity(vs, "V", 4)} - ${texQuantity(i, "A", 4)} \times ${texQuantity(pref, "Ω")} = ${texQuantity(loadVoltageWithPreferred, "V", 4)}`,
+        latex: tex`V_l' = ${texQuantity(vs, "V", 4)} - ${texQuantity(i, "A", 4)} \times ${texQuantity(pref, "Ω")} = ${texQuantity(loadVoltageWithPreferred, "V", 4)}`,
       },
     ] satisfies Step[];
   },

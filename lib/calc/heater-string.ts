@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity } from "./format";
+import { formatQuantity, texQuantity, tex } from "./format";
 import { toPrecision } from "./precision";
 import { highVoltageWarning } from "./safety";
 import { findHeater, HEATER_SOURCE, TUBE_NAMES } from "./tables/heaters";
@@ -94,9 +94,9 @@ export const calculator = defineCalculator({
   ],
   schema: heaterStringSchema,
   formulas: [
-    { label: "String voltage", latex: String.raw`V_{string} = \sum_k V_k` },
-    { label: "Dropping resistor", latex: String.raw`R = \frac{V_{line} - V_{string}}{I}` },
-    { label: "Dissipation", latex: String.raw`P = (V_{line} - V_{string})\,I = I^2 R` },
+    { label: "String voltage", latex: tex`V_{string} = \sum_k V_k` },
+    { label: "Dropping resistor", latex: tex`R = \frac{V_{line} - V_{string}}{I}` },
+    { label: "Dissipation", latex: tex`P = (V_{line} - V_{string})\,I = I^2 R` },
   ],
   references: [
     { title: "RCA receiving tube manual (RC-series)", detail: "Heater ratings of each type; application notes on series heater strings (from memory)" },
@@ -166,33 +166,33 @@ export const calculator = defineCalculator({
     const { stringVoltage, stringCurrent, currentsMatch, droppingResistance, dissipation } = o;
     const terms = heaterList(input).map((h) => texQuantity(h.voltage, "V")).join(" + ");
     const steps: Step[] = [
-      { label: "String voltage", latex: String.raw`V_{string} = ${terms} = ${texQuantity(stringVoltage, "V", 4)}` },
+      { label: "String voltage", latex: tex`V_{string} = ${terms} = ${texQuantity(stringVoltage, "V", 4)}` },
       {
         label: currentsMatch ? "String current (all heaters rated alike)" : "String current (lowest rated heater current)",
-        latex: String.raw`I = ${texQuantity(stringCurrent, "A")}`,
+        latex: tex`I = ${texQuantity(stringCurrent, "A")}`,
       },
     ];
     if (vLine - stringVoltage > 0) {
       steps.push(
         {
           label: "Dropping resistor",
-          latex: String.raw`R = \frac{V_{line} - V_{string}}{I} = \frac{${texQuantity(vLine, "V")} - ${texQuantity(stringVoltage, "V")}}{${texQuantity(stringCurrent, "A")}} = ${texQuantity(droppingResistance, "Ω")}`,
+          latex: tex`R = \frac{V_{line} - V_{string}}{I} = \frac{${texQuantity(vLine, "V")} - ${texQuantity(stringVoltage, "V")}}{${texQuantity(stringCurrent, "A")}} = ${texQuantity(droppingResistance, "Ω")}`,
         },
         {
           label: "Dissipation",
-          latex: String.raw`P = (V_{line} - V_{string})\,I = ${texQuantity(vLine - stringVoltage, "V")} \times ${texQuantity(stringCurrent, "A")} = ${texQuantity(dissipation, "W")}`,
+          latex: tex`P = (V_{line} - V_{string})\,I = ${texQuantity(vLine - stringVoltage, "V")} \times ${texQuantity(stringCurrent, "A")} = ${texQuantity(dissipation, "W")}`,
         },
         {
           label: "Suggested rating (at least twice the dissipation)",
           latex: o.suggestedRating === null
-            ? String.raw`2P = ${texQuantity(2 * dissipation, "W")} \text{ — above the largest standard rating}`
-            : String.raw`2P = ${texQuantity(2 * dissipation, "W")} \;\Rightarrow\; ${texQuantity(o.suggestedRating, "W")}`,
+            ? tex`2P = ${texQuantity(2 * dissipation, "W")} \text{ — above the largest standard rating}`
+            : tex`2P = ${texQuantity(2 * dissipation, "W")} \;\Rightarrow\; ${texQuantity(o.suggestedRating, "W")}`,
         },
       );
     } else {
       steps.push({
         label: "No dropping resistor",
-        latex: String.raw`V_{string} = ${texQuantity(stringVoltage, "V", 4)} \ge V_{line} = ${texQuantity(vLine, "V")} \;\Rightarrow\; R = 0`,
+        latex: tex`V_{string} = ${texQuantity(stringVoltage, "V", 4)} \ge V_{line} = ${texQuantity(vLine, "V")} \;\Rightarrow\; R = 0`,
       });
     }
     return steps;

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { texQuantity } from "./format";
+import { texQuantity, tex } from "./format";
 import { highVoltageWarning } from "./safety";
 import { defineCalculator, type Step, type Warning } from "./types";
 import { optionalQuantity } from "./units";
@@ -149,8 +149,8 @@ export const calculator = defineCalculator({
   ],
   schema: ohmsLawSchema,
   formulas: [
-    { label: "Ohm's law", latex: String.raw`V = I\,R` },
-    { label: "Power", latex: String.raw`P = V\,I = I^2 R = \frac{V^2}{R}` },
+    { label: "Ohm's law", latex: tex`V = I\,R` },
+    { label: "Power", latex: tex`P = V\,I = I^2 R = \frac{V^2}{R}` },
   ],
   references: [
     { title: "The ARRL Handbook for Radio Communications", detail: "Electrical fundamentals chapter: Ohm's law and power in resistive circuits" },

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { toEngineering } from "./format";
+import { toEngineering, tex } from "./format";
 import { SERIES, SERIES_NAMES, nearestPreferred, preferredAbove, preferredBelow, type SeriesName } from "./tables/preferred-values";
 import { defineCalculator, type Step, type Warning } from "./types";
 import { parseQuantity, type ParseResult, type QuantityKind } from "./units";
@@ -94,9 +94,9 @@ export const calculator = defineCalculator({
   ],
   schema: preferredValueSchema,
   formulas: [
-    { label: "Members of an E-n series", latex: String.raw`E_k \approx 10^{k/n}\times 10^{d},\quad k = 0 \ldots n-1` },
-    { label: "Nearest on a log scale", latex: String.raw`E^{*} = \arg\min_{E}\,\left|\ln\frac{x}{E}\right|` },
-    { label: "Error of the nearest value", latex: String.raw`\varepsilon = \frac{E^{*} - x}{x}` },
+    { label: "Members of an E-n series", latex: tex`E_k \approx 10^{k/n}\times 10^{d},\quad k = 0 \ldots n-1` },
+    { label: "Nearest on a log scale", latex: tex`E^{*} = \arg\min_{E}\,\left|\ln\frac{x}{E}\right|` },
+    { label: "Error of the nearest value", latex: tex`\varepsilon = \frac{E^{*} - x}{x}` },
   ],
   references: [
     { title: "IEC 60063, Preferred number series for resistors and capacitors", detail: "Tables of the E6, E12, E24, E48 and E96 series" },
@@ -134,16 +134,16 @@ export const calculator = defineCalculator({
     return [
       {
         label: `Neighbours in ${series}`,
-        latex: String.raw`${texNumber(below)} \le ${texNumber(x, 4)} \le ${texNumber(above)}`,
+        latex: tex`${texNumber(below)} \le ${texNumber(x, 4)} \le ${texNumber(above)}`,
       },
       {
         label: "Distance on a log scale",
-        latex: String.raw`\left|\ln\tfrac{${texNumber(x, 4)}}{${texNumber(below)}}\right| = ${Math.abs(Math.log(x / below)).toFixed(4)},\quad \left|\ln\tfrac{${texNumber(above)}}{${texNumber(x, 4)}}\right| = ${Math.abs(Math.log(above / x)).toFixed(4)}`,
+        latex: tex`\left|\ln\tfrac{${texNumber(x, 4)}}{${texNumber(below)}}\right| = ${Math.abs(Math.log(x / below)).toFixed(4)},\quad \left|\ln\tfrac{${texNumber(above)}}{${texNumber(x, 4)}}\right| = ${Math.abs(Math.log(above / x)).toFixed(4)}`,
       },
-      { label: "Nearest preferred value", latex: String.raw`E^{*} = ${texNumber(nearest)}` },
+      { label: "Nearest preferred value", latex: tex`E^{*} = ${texNumber(nearest)}` },
       {
         label: "Error of the nearest value",
-        latex: String.raw`\varepsilon = \frac{${texNumber(nearest)} - ${texNumber(x, 4)}}{${texNumber(x, 4)}} = ${(errorOfNearest * 100).toFixed(2)}\,\%`,
+        latex: tex`\varepsilon = \frac{${texNumber(nearest)} - ${texNumber(x, 4)}}{${texNumber(x, 4)}} = ${(errorOfNearest * 100).toFixed(2)}\,\%`,
       },
     ] satisfies Step[];
   },

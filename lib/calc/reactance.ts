@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity } from "./format";
+import { formatQuantity, texQuantity, tex } from "./format";
 import { defineCalculator, type Step, type Warning } from "./types";
 import { optionalQuantity } from "./units";
 
@@ -58,9 +58,9 @@ export const calculator = defineCalculator({
   ],
   schema: reactanceSchema,
   formulas: [
-    { label: "Capacitive reactance", latex: String.raw`X_C = \frac{1}{2\pi f C}` },
-    { label: "Inductive reactance", latex: String.raw`X_L = 2\pi f L` },
-    { label: "Resonant frequency", latex: String.raw`f_0 = \frac{1}{2\pi\sqrt{L C}}` },
+    { label: "Capacitive reactance", latex: tex`X_C = \frac{1}{2\pi f C}` },
+    { label: "Inductive reactance", latex: tex`X_L = 2\pi f L` },
+    { label: "Resonant frequency", latex: tex`f_0 = \frac{1}{2\pi\sqrt{L C}}` },
   ],
   references: [
     {
@@ -106,24 +106,24 @@ export const calculator = defineCalculator({
     if (f !== undefined && c !== undefined && o.capacitiveReactance !== null) {
       steps.push({
         label: "Capacitive reactance",
-        latex: String.raw`X_C = \frac{1}{2\pi \times ${texQuantity(f, "Hz", 4)} \times ${texQuantity(c, "F", 4)}} = ${texQuantity(o.capacitiveReactance, "Ω", 4)}`,
+        latex: tex`X_C = \frac{1}{2\pi \times ${texQuantity(f, "Hz", 4)} \times ${texQuantity(c, "F", 4)}} = ${texQuantity(o.capacitiveReactance, "Ω", 4)}`,
       });
     }
     if (f !== undefined && l !== undefined && o.inductiveReactance !== null) {
       steps.push({
         label: "Inductive reactance",
-        latex: String.raw`X_L = 2\pi \times ${texQuantity(f, "Hz", 4)} \times ${texQuantity(l, "H", 4)} = ${texQuantity(o.inductiveReactance, "Ω", 4)}`,
+        latex: tex`X_L = 2\pi \times ${texQuantity(f, "Hz", 4)} \times ${texQuantity(l, "H", 4)} = ${texQuantity(o.inductiveReactance, "Ω", 4)}`,
       });
     }
     if (c !== undefined && l !== undefined && o.resonantFrequency !== null) {
       steps.push(
         {
           label: "Resonant frequency",
-          latex: String.raw`f_0 = \frac{1}{2\pi\sqrt{${texQuantity(l, "H", 4)} \times ${texQuantity(c, "F", 4)}}} = ${texQuantity(o.resonantFrequency, "Hz", 4)}`,
+          latex: tex`f_0 = \frac{1}{2\pi\sqrt{${texQuantity(l, "H", 4)} \times ${texQuantity(c, "F", 4)}}} = ${texQuantity(o.resonantFrequency, "Hz", 4)}`,
         },
         {
           label: "Reactance of either part at resonance",
-          latex: String.raw`X_C = X_L = \sqrt{L/C} = ${texQuantity(Math.sqrt(l / c), "Ω", 4)}`,
+          latex: tex`X_C = X_L = \sqrt{L/C} = ${texQuantity(Math.sqrt(l / c), "Ω", 4)}`,
         },
       );
     }

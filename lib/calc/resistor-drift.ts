@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity } from "./format";
+import { formatQuantity, texQuantity, tex } from "./format";
 import { defineCalculator, type Step, type Warning } from "./types";
 import { parseQuantity, quantity, quantityWithDefault } from "./units";
 
@@ -102,8 +102,8 @@ export const calculator = defineCalculator({
   ],
   schema: resistorDriftSchema,
   formulas: [
-    { label: "Deviation", latex: String.raw`\delta = \frac{R_\text{measured} - R_\text{nominal}}{R_\text{nominal}}` },
-    { label: "Within tolerance", latex: String.raw`|\delta| \le t` },
+    { label: "Deviation", latex: tex`\delta = \frac{R_\text{measured} - R_\text{nominal}}{R_\text{nominal}}` },
+    { label: "Within tolerance", latex: tex`|\delta| \le t` },
   ],
   references: [
     {
@@ -153,20 +153,20 @@ export const calculator = defineCalculator({
     const { nominal, measured, tolerance } = input;
     const { deviation, withinTolerance } = o;
     if (measured === "open" || deviation === null) {
-      return [{ label: "Reading", latex: String.raw`R_\text{measured} = \infty\ (\text{open})` }];
+      return [{ label: "Reading", latex: tex`R_\text{measured} = \infty\ (\text{open})` }];
     }
     return [
       {
         label: "Deviation",
-        latex: String.raw`\delta = \frac{${texQuantity(measured, "Ω", 4)} - ${texQuantity(nominal, "Ω", 4)}}{${texQuantity(nominal, "Ω", 4)}} = ${(deviation * 100).toFixed(2)}\,\%`,
+        latex: tex`\delta = \frac{${texQuantity(measured, "Ω", 4)} - ${texQuantity(nominal, "Ω", 4)}}{${texQuantity(nominal, "Ω", 4)}} = ${(deviation * 100).toFixed(2)}\,\%`,
       },
       {
         label: "Compare with the tolerance",
-        latex: String.raw`|\delta| = ${(Math.abs(deviation) * 100).toFixed(2)}\,\% ${withinTolerance ? "\\le" : ">"} ${(tolerance * 100).toFixed(2)}\,\%`,
+        latex: tex`|\delta| = ${(Math.abs(deviation) * 100).toFixed(2)}\,\% ${withinTolerance ? "\\le" : ">"} ${(tolerance * 100).toFixed(2)}\,\%`,
       },
       {
         label: "Allowed range",
-        latex: String.raw`${texQuantity(nominal * (1 - tolerance), "Ω")} \ldots ${texQuantity(nominal * (1 + tolerance), "Ω")}`,
+        latex: tex`${texQuantity(nominal * (1 - tolerance), "Ω")} \ldots ${texQuantity(nominal * (1 + tolerance), "Ω")}`,
       },
     ] satisfies Step[];
   },

@@ -55,3 +55,22 @@ export function runCalculator(calc: Calculator, raw: unknown): RunResult {
     result: { slug: calc.slug, inputs: input, outputs, steps, warnings, references: calc.references },
   };
 }
+
+/** JSON of each calculator's static parts, made once: they are the same in every response. */
+const staticJson = new WeakMap<Calculator, { slug: string; references: string }>();
+
+/**
+ * The 200 body as JSON text, equal to JSON.stringify(result) (tests/calc/response-json.test.ts
+ * checks it), with the slug and references serialised once per calculator instead of per request.
+ */
+export function calculationJson(calc: Calculator, r: CalculationResponse): string {
+  let fixed = staticJson.get(calc);
+  if (!fixed) {
+    fixed = { slug: JSON.stringify(calc.slug), references: JSON.stringify(calc.references) };
+    staticJson.set(calc, fixed);
+  }
+  return (
+    `{"slug":${fixed.slug},"inputs":${JSON.stringify(r.inputs)},"outputs":${JSON.stringify(r.outputs)},` +
+    `"steps":${JSON.stringify(r.steps)},"warnings":${JSON.stringify(r.warnings)},"references":${fixed.references}}`
+  );
+}

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity } from "./format";
+import { formatQuantity, texQuantity, tex } from "./format";
 import { ALWAYS_DANGER } from "./safety";
 import { defineCalculator, type OutputValue, type Step, type Warning } from "./types";
 import { quantity, quantityWithDefault } from "./units";
@@ -80,10 +80,10 @@ export const calculator = defineCalculator({
   ],
   schema: supplyRippleSchema,
   formulas: [
-    { label: "Ripple frequency", latex: String.raw`f_r = 2f \;(\text{full-wave}), \quad f_r = f \;(\text{half-wave})` },
-    { label: "Reservoir ripple", latex: String.raw`V_{pp} = \frac{I}{f_r\,C}, \quad V_{rms} = \frac{V_{pp}}{2\sqrt{3}}` },
-    { label: "RC stage", latex: String.raw`\frac{V_{out}}{V_{in}} = \frac{X_C}{\sqrt{R^2 + X_C^2}}, \quad X_C = \frac{1}{2\pi f_r C}, \quad \Delta V_{dc} = I R` },
-    { label: "LC stage (ideal choke)", latex: String.raw`\frac{V_{out}}{V_{in}} = \left|\frac{X_C}{X_L - X_C}\right|, \quad X_L = 2\pi f_r L` },
+    { label: "Ripple frequency", latex: tex`f_r = 2f \;(\text{full-wave}), \quad f_r = f \;(\text{half-wave})` },
+    { label: "Reservoir ripple", latex: tex`V_{pp} = \frac{I}{f_r\,C}, \quad V_{rms} = \frac{V_{pp}}{2\sqrt{3}}` },
+    { label: "RC stage", latex: tex`\frac{V_{out}}{V_{in}} = \frac{X_C}{\sqrt{R^2 + X_C^2}}, \quad X_C = \frac{1}{2\pi f_r C}, \quad \Delta V_{dc} = I R` },
+    { label: "LC stage (ideal choke)", latex: tex`\frac{V_{out}}{V_{in}} = \left|\frac{X_C}{X_L - X_C}\right|, \quad X_L = 2\pi f_r L` },
   ],
   references: [
     {
@@ -163,16 +163,16 @@ export const calculator = defineCalculator({
       {
         label: "Ripple frequency",
         latex: rectifier === "full-wave"
-          ? String.raw`f_r = 2f = 2 \times ${texQuantity(f, "Hz")} = ${texQuantity(fr, "Hz")}`
-          : String.raw`f_r = f = ${texQuantity(fr, "Hz")}`,
+          ? tex`f_r = 2f = 2 \times ${texQuantity(f, "Hz")} = ${texQuantity(fr, "Hz")}`
+          : tex`f_r = f = ${texQuantity(fr, "Hz")}`,
       },
       {
         label: "Ripple on the reservoir, peak to peak",
-        latex: String.raw`V_{pp} = \frac{I}{f_r\,C} = \frac{${texQuantity(i, "A")}}{${texQuantity(fr, "Hz")} \times ${texQuantity(c, "F")}} = ${texQuantity(vpp, "V")}`,
+        latex: tex`V_{pp} = \frac{I}{f_r\,C} = \frac{${texQuantity(i, "A")}}{${texQuantity(fr, "Hz")} \times ${texQuantity(c, "F")}} = ${texQuantity(vpp, "V")}`,
       },
       {
         label: "Ripple on the reservoir, rms (sawtooth)",
-        latex: String.raw`V_{rms} = \frac{V_{pp}}{2\sqrt{3}} = \frac{${texQuantity(vpp, "V")}}{3.464} = ${texQuantity(rippleRms, "V")}`,
+        latex: tex`V_{rms} = \frac{V_{pp}}{2\sqrt{3}} = \frac{${texQuantity(vpp, "V")}}{3.464} = ${texQuantity(rippleRms, "V")}`,
       },
     ];
     let before = rippleRms;
@@ -184,16 +184,16 @@ export const calculator = defineCalculator({
       if (s.kind === "rc") {
         steps.push({
           label: `${tag} (RC): attenuation`,
-          latex: String.raw`X_C = \frac{1}{2\pi f_r C} = ${texQuantity(xc, "Ω")}, \quad \frac{X_C}{\sqrt{R^2 + X_C^2}} = \frac{${texQuantity(xc, "Ω")}}{\sqrt{(${texQuantity(s.resistance, "Ω")})^2 + (${texQuantity(xc, "Ω")})^2}} = ${att}`,
+          latex: tex`X_C = \frac{1}{2\pi f_r C} = ${texQuantity(xc, "Ω")}, \quad \frac{X_C}{\sqrt{R^2 + X_C^2}} = \frac{${texQuantity(xc, "Ω")}}{\sqrt{(${texQuantity(s.resistance, "Ω")})^2 + (${texQuantity(xc, "Ω")})^2}} = ${att}`,
         });
-        steps.push({ label: `${tag} (RC): DC drop`, latex: String.raw`\Delta V = I R = ${texQuantity(i, "A")} \times ${texQuantity(s.resistance, "Ω")} = ${texQuantity(out.dcDrop, "V")}` });
+        steps.push({ label: `${tag} (RC): DC drop`, latex: tex`\Delta V = I R = ${texQuantity(i, "A")} \times ${texQuantity(s.resistance, "Ω")} = ${texQuantity(out.dcDrop, "V")}` });
       } else {
         steps.push({
           label: `${tag} (LC): attenuation`,
-          latex: String.raw`X_L = ${texQuantity(omega * s.inductance, "Ω")}, \; X_C = ${texQuantity(xc, "Ω")}, \quad \left|\frac{X_C}{X_L - X_C}\right| = ${att}`,
+          latex: tex`X_L = ${texQuantity(omega * s.inductance, "Ω")}, \; X_C = ${texQuantity(xc, "Ω")}, \quad \left|\frac{X_C}{X_L - X_C}\right| = ${att}`,
         });
       }
-      steps.push({ label: `${tag}: ripple after it`, latex: String.raw`V_{rms} = ${texQuantity(before, "V")} \times ${att} = ${texQuantity(out.rippleRms, "V")}` });
+      steps.push({ label: `${tag}: ripple after it`, latex: tex`V_{rms} = ${texQuantity(before, "V")} \times ${att} = ${texQuantity(out.rippleRms, "V")}` });
       before = out.rippleRms;
     });
     return steps;

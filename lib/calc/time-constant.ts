@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity } from "./format";
+import { formatQuantity, texQuantity, tex } from "./format";
 import { highVoltageWarning } from "./safety";
 import { defineCalculator, type Step, type Warning } from "./types";
 import { optionalQuantity, quantity } from "./units";
@@ -75,10 +75,10 @@ export const calculator = defineCalculator({
   ],
   schema: timeConstantSchema,
   formulas: [
-    { label: "Time constant", latex: String.raw`\tau = R\,C` },
-    { label: "Discharge", latex: String.raw`V(t) = V_0\,e^{-t/\tau}` },
-    { label: "Time to a target voltage", latex: String.raw`t = \tau\,\ln\frac{V_0}{V_t}` },
-    { label: "Stored energy", latex: String.raw`E = \tfrac{1}{2}\,C\,V_0^2` },
+    { label: "Time constant", latex: tex`\tau = R\,C` },
+    { label: "Discharge", latex: tex`V(t) = V_0\,e^{-t/\tau}` },
+    { label: "Time to a target voltage", latex: tex`t = \tau\,\ln\frac{V_0}{V_t}` },
+    { label: "Stored energy", latex: tex`E = \tfrac{1}{2}\,C\,V_0^2` },
   ],
   references: [
     {
@@ -123,25 +123,25 @@ export const calculator = defineCalculator({
     const steps: Step[] = [
       {
         label: "Time constant",
-        latex: String.raw`\tau = R\,C = ${texQuantity(r, "Ω")} \times ${texQuantity(c, "F")} = ${texQuantity(tau, "s")}`,
+        latex: tex`\tau = R\,C = ${texQuantity(r, "Ω")} \times ${texQuantity(c, "F")} = ${texQuantity(tau, "s")}`,
       },
-      { label: "Five time constants", latex: String.raw`5\tau = 5 \times ${texQuantity(tau, "s")} = ${texQuantity(fiveTau, "s")}` },
+      { label: "Five time constants", latex: tex`5\tau = 5 \times ${texQuantity(tau, "s")} = ${texQuantity(fiveTau, "s")}` },
     ];
     if (vt !== undefined && timeToTarget !== null) {
       steps.push({
         label: "Time to the target voltage",
-        latex: String.raw`t = \tau\,\ln\frac{V_0}{V_t} = ${texQuantity(tau, "s")} \times \ln\frac{${texQuantity(v0, "V")}}{${texQuantity(vt, "V")}} = ${texQuantity(timeToTarget, "s")}`,
+        latex: tex`t = \tau\,\ln\frac{V_0}{V_t} = ${texQuantity(tau, "s")} \times \ln\frac{${texQuantity(v0, "V")}}{${texQuantity(vt, "V")}} = ${texQuantity(timeToTarget, "s")}`,
       });
     }
     if (t !== undefined && voltageAtElapsed !== null) {
       steps.push({
         label: "Voltage after the elapsed time",
-        latex: String.raw`V(t) = V_0\,e^{-t/\tau} = ${texQuantity(v0, "V")} \times e^{-${texQuantity(t, "s")}/${texQuantity(tau, "s")}} = ${texQuantity(voltageAtElapsed, "V")}`,
+        latex: tex`V(t) = V_0\,e^{-t/\tau} = ${texQuantity(v0, "V")} \times e^{-${texQuantity(t, "s")}/${texQuantity(tau, "s")}} = ${texQuantity(voltageAtElapsed, "V")}`,
       });
     }
     steps.push({
       label: "Energy stored at the initial voltage",
-      latex: String.raw`E = \tfrac{1}{2}\,C\,V_0^2 = \tfrac{1}{2} \times ${texQuantity(c, "F")} \times (${texQuantity(v0, "V")})^2 = ${texQuantity(energy, "J")}`,
+      latex: tex`E = \tfrac{1}{2}\,C\,V_0^2 = \tfrac{1}{2} \times ${texQuantity(c, "F")} \times (${texQuantity(v0, "V")})^2 = ${texQuantity(energy, "J")}`,
     });
     return steps;
   },

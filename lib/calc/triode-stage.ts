@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity } from "./format";
+import { formatQuantity, texQuantity, tex } from "./format";
 import { highVoltageWarning } from "./safety";
 import { TRIODE_NAMES, findTriode } from "./tables/triodes";
 import { solveOperatingPoint, type TriodeParams } from "./triode-model";
@@ -90,10 +90,10 @@ export interface TriodeStageOutputs {
   gain: N;
 }
 
-const MODEL_TEX = String.raw`E_1 = \frac{E_p}{K_P}\ln\!\left(1 + e^{K_P\left(\frac{1}{\mu} + \frac{E_g}{\sqrt{K_{VB} + E_p^2}}\right)}\right),\quad I_p = \frac{E_1^{E_X}}{K_{G1}}\left(1 + \operatorname{sgn} E_1\right)`;
-const LOAD_LINE_TEX = String.raw`E_p = B^{+} - I_p\,(R_a + R_k),\quad E_g = -I_p R_k`;
+const MODEL_TEX = tex`E_1 = \frac{E_p}{K_P}\ln\!\left(1 + e^{K_P\left(\frac{1}{\mu} + \frac{E_g}{\sqrt{K_{VB} + E_p^2}}\right)}\right),\quad I_p = \frac{E_1^{E_X}}{K_{G1}}\left(1 + \operatorname{sgn} E_1\right)`;
+const LOAD_LINE_TEX = tex`E_p = B^{+} - I_p\,(R_a + R_k),\quad E_g = -I_p R_k`;
 
-const tex = (n: number) => String(Number(n.toPrecision(6)));
+const sig6 = (n: number) => String(Number(n.toPrecision(6)));
 
 function modelFor(input: TriodeStageInput): { params: TriodeParams; name: string; rating?: number; overridden: ModelKey[] } {
   const entry = input.tube ? findTriode(input.tube) : undefined;
@@ -136,8 +136,8 @@ export const calculator = defineCalculator({
   formulas: [
     { label: "Triode model (Koren)", latex: MODEL_TEX },
     { label: "Load line and cathode bias", latex: LOAD_LINE_TEX },
-    { label: "Gain, cathode bypassed", latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L'},\quad R_L' = R_a \parallel R_L` },
-    { label: "Gain, cathode not bypassed", latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k}` },
+    { label: "Gain, cathode bypassed", latex: tex`A = \frac{\mu R_L'}{r_p + R_L'},\quad R_L' = R_a \parallel R_L` },
+    { label: "Gain, cathode not bypassed", latex: tex`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k}` },
   ],
   references: [
     { title: "N. L. Koren, Improved vacuum tube models for SPICE simulations, Glass Audio 8(5), 1996", detail: "Triode equations for E1 and Ip and the parameter table (µ, EX, KG1, KP, KVB); parameters recalled from memory" },
@@ -201,9 +201,9 @@ export const calculator = defineCalculator({
     const tRk = texQuantity(rk, "Ω");
     const steps: Step[] = [
       { label: "Triode model (Koren)", latex: MODEL_TEX },
-      { label: `Model parameters (${name})`, latex: String.raw`\mu = ${tex(p.mu)},\; E_X = ${tex(p.ex)},\; K_{G1} = ${tex(p.kg1)},\; K_P = ${tex(p.kp)},\; K_{VB} = ${tex(p.kvb)}\,\mathrm{V^2}` },
+      { label: `Model parameters (${name})`, latex: tex`\mu = ${sig6(p.mu)},\; E_X = ${sig6(p.ex)},\; K_{G1} = ${sig6(p.kg1)},\; K_P = ${sig6(p.kp)},\; K_{VB} = ${sig6(p.kvb)}\,\mathrm{V^2}` },
       { label: "Load line and cathode bias", latex: LOAD_LINE_TEX },
-      { label: "Load line with your values", latex: String.raw`E_p = ${tB} - I_p\,(${tRa} + ${tRk}),\quad E_g = -I_p \times ${tRk}` },
+      { label: "Load line with your values", latex: tex`E_p = ${tB} - I_p\,(${tRa} + ${tRk}),\quad E_g = -I_p \times ${tRk}` },
     ];
     const { plateCurrent: ip, plateVoltage: ep, cathodeVoltage: vk, plateDissipation: dissipation, amplificationFactor: mu, transconductance: gm, plateResistance: rp, gain } = o;
     if (ip === null || ep === null || vk === null || dissipation === null || mu === null || gm === null || gain === null) return steps;
@@ -215,22 +215,22 @@ export const calculator = defineCalculator({
     const tMu = texQuantity(mu, "");
     const tRl = texQuantity(rLoad, "Ω");
     const tGain = texQuantity(gain, "");
-    const rpTex = rp === null ? String.raw`\infty` : texQuantity(rp, "Ω");
+    const rpTex = rp === null ? tex`\infty` : texQuantity(rp, "Ω");
     steps.push(
-      { label: "Operating point (model current equals load-line current)", latex: String.raw`I_p = ${tIp4},\quad E_p = ${tB} - ${tIp4} \times ${texQuantity(ra + rk, "Ω", 4)} = ${texQuantity(ep, "V", 4)},\quad E_g = ${texQuantity(eg, "V", 4)}` },
-      { label: "Cathode voltage", latex: String.raw`V_k = I_p R_k = ${tIp} \times ${tRk} = ${texQuantity(vk, "V")}` },
-      { label: "Plate to chassis, as a meter reads it", latex: String.raw`V_a = E_p + V_k = B^{+} - I_p R_a = ${texQuantity(ep + vk, "V", 4)}` },
-      { label: "Plate dissipation", latex: String.raw`P_a = E_p I_p = ${texQuantity(ep, "V")} \times ${tIp} = ${texQuantity(dissipation, "W")}` },
-      { label: "Small-signal parameters at the operating point", latex: String.raw`g_m = \frac{\partial I_p}{\partial E_g} = ${texQuantity(gm, "S")},\quad r_p = \left(\frac{\partial I_p}{\partial E_p}\right)^{-1} = ${rpTex},\quad \mu = g_m r_p = ${tMu}` },
+      { label: "Operating point (model current equals load-line current)", latex: tex`I_p = ${tIp4},\quad E_p = ${tB} - ${tIp4} \times ${texQuantity(ra + rk, "Ω", 4)} = ${texQuantity(ep, "V", 4)},\quad E_g = ${texQuantity(eg, "V", 4)}` },
+      { label: "Cathode voltage", latex: tex`V_k = I_p R_k = ${tIp} \times ${tRk} = ${texQuantity(vk, "V")}` },
+      { label: "Plate to chassis, as a meter reads it", latex: tex`V_a = E_p + V_k = B^{+} - I_p R_a = ${texQuantity(ep + vk, "V", 4)}` },
+      { label: "Plate dissipation", latex: tex`P_a = E_p I_p = ${texQuantity(ep, "V")} \times ${tIp} = ${texQuantity(dissipation, "W")}` },
+      { label: "Small-signal parameters at the operating point", latex: tex`g_m = \frac{\partial I_p}{\partial E_g} = ${texQuantity(gm, "S")},\quad r_p = \left(\frac{\partial I_p}{\partial E_p}\right)^{-1} = ${rpTex},\quad \mu = g_m r_p = ${tMu}` },
     );
     if (rl !== undefined) {
-      steps.push({ label: "Signal load: plate resistor in parallel with the next stage", latex: String.raw`R_L' = \frac{R_a R_L}{R_a + R_L} = \frac{${tRa} \times ${texQuantity(rl, "Ω")}}{${tRa} + ${texQuantity(rl, "Ω")}} = ${tRl}` });
+      steps.push({ label: "Signal load: plate resistor in parallel with the next stage", latex: tex`R_L' = \frac{R_a R_L}{R_a + R_L} = \frac{${tRa} \times ${texQuantity(rl, "Ω")}}{${tRa} + ${texQuantity(rl, "Ω")}} = ${tRl}` });
     }
     const gainLabel = "Voltage gain (inverting: the plate swings opposite to the grid)";
     steps.push(
       bypassed
-        ? { label: `${gainLabel}, cathode bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L'} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl}} = ${tGain}` }
-        : { label: `${gainLabel}, cathode not bypassed`, latex: String.raw`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl} + ${texQuantity(mu + 1, "")} \times ${tRk}} = ${tGain}` },
+        ? { label: `${gainLabel}, cathode bypassed`, latex: tex`A = \frac{\mu R_L'}{r_p + R_L'} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl}} = ${tGain}` }
+        : { label: `${gainLabel}, cathode not bypassed`, latex: tex`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl} + ${texQuantity(mu + 1, "")} \times ${tRk}} = ${tGain}` },
     );
     return steps;
   },

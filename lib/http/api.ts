@@ -14,6 +14,11 @@ export function apiError(status: number, message: string, fields: Record<string,
   return NextResponse.json<ApiErrorBody>({ error: { message, fields } }, { status, headers });
 }
 
+/** A JSON response from text already serialised (the calculator route builds its JSON itself). */
+export function jsonTextResponse(text: string, status = 200): Response {
+  return new Response(text, { status, headers: { "content-type": "application/json" } });
+}
+
 /** Raised inside a handler to answer with a JSON error; caught by `handle`. */
 export class HttpError extends Error {
   constructor(

@@ -1,7 +1,6 @@
-import { NextResponse } from "next/server";
 import { getCalculator } from "@/lib/calc/registry";
-import { runCalculator } from "@/lib/calc/run";
-import { HttpError, handle, readJsonBody } from "@/lib/http/api";
+import { calculationJson, runCalculator } from "@/lib/calc/run";
+import { HttpError, handle, jsonTextResponse, readJsonBody } from "@/lib/http/api";
 
 /**
  * Public (signed-out visitors may calculate): validates and recomputes on the server with the very
@@ -13,6 +12,6 @@ export const POST = handle(async (request: Request, { params }: { params: Promis
   if (!calc) throw new HttpError(404, `There is no calculator called "${slug}".`);
   const body = await readJsonBody(request);
   const run = runCalculator(calc, body);
-  if (!run.ok) return NextResponse.json({ error: run.error }, { status: 400 });
-  return NextResponse.json(run.result);
+  if (!run.ok) return jsonTextResponse(JSON.stringify({ error: run.error }), 400);
+  return jsonTextResponse(calculationJson(calc, run.result));
 });
