@@ -2,14 +2,13 @@ import type { Config } from "tailwindcss";
 
 /**
  * Glowbench's own palette: warm bench paper and deep ink by day, a dim valve-glow at night.
- * Colours are CSS variables (app/globals.css) so the dark theme swaps them in one place.
+ * Colours are CSS variables (app/globals.css) so the dark theme (prefers-color-scheme) swaps them in one place.
  * Every text/background pair used in components meets WCAG AA contrast.
  */
 const v = (name: string) => `rgb(var(--gb-${name}) / <alpha-value>)`;
 
 const config: Config = {
   content: ["./app/**/*.{ts,tsx}", "./components/**/*.{ts,tsx}"],
-  darkMode: ["selector", '[data-theme="night"]'],
   theme: {
     extend: {
       colors: {
