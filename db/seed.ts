@@ -113,8 +113,10 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
     job({
       title: "Bench signal generator, 1950s",
       equipmentKind: "test-gear",
+      customerName: "Ivo Thackeray",
+      customerEmail: "ivo.thackeray@example.com",
       status: "ready",
-      notes: "Workshop's own instrument; recalibrated.",
+      notes: "Output attenuator cleaned; recalibrated against the workshop's frequency counter.",
       createdAt: at(400),
       updatedAt: at(50),
     });

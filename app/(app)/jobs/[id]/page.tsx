@@ -33,10 +33,9 @@ export default async function JobOverviewPage({ params }: JobPageProps) {
         <StatusWorkflow key={job.status} jobId={job.id} status={job.status} canChange={can.changeStatus(member)} />
       </Card>
       {job.status === "ready" && can.changeStatus(member) ? (
-        <Card className="lg:col-span-2">
-          <h2 className="mb-4 text-lead font-bold">Tell the customer it&rsquo;s ready</h2>
+        <div className="lg:col-span-2">
           <ReadyMessage jobId={job.id} status={job.status} />
-        </Card>
+        </div>
       ) : null}
       <Card>
         <h2 className="mb-4 text-lead font-bold">The set</h2>
