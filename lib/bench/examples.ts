@@ -8,10 +8,10 @@ export const EXAMPLES: Record<string, Record<string, unknown>> = {
   "dropping-resistor": { supplyVoltage: "300 V", loadVoltage: "250 V", loadCurrent: "10 mA" },
   "heater-string": { lineVoltage: "120 V", tubes: ["12BE6", "12BA6", "12AV6", "35C5", "35W4"] },
   "supply-ripple": {
-    loadCurrent: "80 mA",
+    loadCurrent: "60 mA",
     capacitance: "40 uF",
     rectifier: "full-wave",
-    stages: [{ kind: "rc", resistance: "1k", capacitance: "20 uF" }],
+    stages: [{ kind: "rc", resistance: "470", capacitance: "20 uF" }],
   },
   "time-constant": { resistance: "220k", capacitance: "47 uF", initialVoltage: "350 V", targetVoltage: "30 V" },
   bleeder: { capacitance: "40 uF", workingVoltage: "450 V" },
