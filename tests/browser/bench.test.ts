@@ -3,6 +3,7 @@ import { afterAll, beforeAll, expect, test } from "vitest";
 import { launchBrowser } from "../helpers/browser";
 import { baseUrl } from "../helpers/http";
 import { expectOutput, expectSteps, expected, ready } from "./bench-helpers";
+import { EXAMPLES } from "@/lib/bench/examples";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -49,13 +50,12 @@ test("supply ripple: adding an LC stage shows the ripple after it, in the table 
   const page = await open("/bench/supply-ripple");
   await page.getByRole("button", { name: "Add LC stage" }).click();
   await page.fill("#in-stages-1-inductance", "8 H");
+  // The page opens on the worked example of lib/bench/examples.ts; the test adds one LC stage to it.
   const raw = {
-    loadCurrent: "80 mA",
-    capacitance: "40 uF",
+    ...EXAMPLES["supply-ripple"],
     lineFrequency: "60",
-    rectifier: "full-wave",
     stages: [
-      { kind: "rc", resistance: "1k", capacitance: "20 uF" },
+      ...(EXAMPLES["supply-ripple"].stages as unknown[]),
       { kind: "lc", inductance: "8 H", capacitance: "20 uF" },
     ],
   };
