@@ -1,4 +1,5 @@
 import type { ComponentProps, ReactNode } from "react";
+import { FieldNotes } from "./field-notes";
 
 /** A labelled input whose message is tied to it with aria-describedby and announced when it appears. */
 export function Field({
@@ -30,14 +31,7 @@ export function Field({
           <span className="inline-flex items-center rounded-r-chip border border-l-0 border-rule bg-sunk px-3 font-mono text-muted">{suffix}</span>
         ) : null}
       </div>
-      {hint ? (
-        <p id={`${id}-hint`} className="text-note text-muted">
-          {hint}
-        </p>
-      ) : null}
-      <p id={`${id}-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
-        {error ?? ""}
-      </p>
+      <FieldNotes id={id} hint={hint} error={error} />
     </div>
   );
 }

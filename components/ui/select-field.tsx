@@ -1,4 +1,5 @@
 import type { ComponentProps, ReactNode } from "react";
+import { FieldNotes } from "./field-notes";
 
 /** A labelled select whose message is tied to it with aria-describedby, like Field. */
 export function SelectField({
@@ -29,14 +30,7 @@ export function SelectField({
           </option>
         ))}
       </select>
-      {hint ? (
-        <p id={`${id}-hint`} className="text-note text-muted">
-          {hint}
-        </p>
-      ) : null}
-      <p id={`${id}-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
-        {error ?? ""}
-      </p>
+      <FieldNotes id={id} hint={hint} error={error} />
     </div>
   );
 }

@@ -1,4 +1,5 @@
 import type { ComponentProps, ReactNode } from "react";
+import { FieldNotes } from "./field-notes";
 
 export function TextareaField({
   id,
@@ -22,14 +23,7 @@ export function TextareaField({
         className={`w-full rounded-chip border bg-panel px-3 py-2 text-body text-ink placeholder:text-muted ${error ? "border-hazard" : "border-rule"}`}
         {...area}
       />
-      {hint ? (
-        <p id={`${id}-hint`} className="text-note text-muted">
-          {hint}
-        </p>
-      ) : null}
-      <p id={`${id}-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
-        {error ?? ""}
-      </p>
+      <FieldNotes id={id} hint={hint} error={error} />
     </div>
   );
 }

@@ -1,23 +1,12 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { calculator } from "@/lib/calc/preferred-value";
-import { runCalculator } from "@/lib/calc/run";
 import { SERIES_NAMES } from "@/lib/calc/tables/preferred-values";
+import { calcRunner, logUniform } from "../helpers/calc";
 
 type Out = { nearest: number; below: number; above: number; errorOfNearest: number };
 
-function out(raw: Record<string, unknown>): Out {
-  const r = runCalculator(calculator, raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  return r.result.outputs as unknown as Out;
-}
-function fields(raw: Record<string, unknown>): Record<string, string> {
-  const r = runCalculator(calculator, raw);
-  if (r.ok) throw new Error("expected a refusal");
-  return r.error.fields;
-}
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log10(lo), max: Math.log10(hi), noNaN: true }).map((e) => Math.min(hi, Math.max(lo, 10 ** e)));
+const { out, fields } = calcRunner<Out>(calculator);
 
 describe("preferred-value: published checks (IEC 60063 tables)", () => {
   it("5 kΩ in E12 lies between 4.7 kΩ and 5.6 kΩ, nearest 4.7 kΩ", () => {

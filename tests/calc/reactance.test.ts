@@ -2,21 +2,11 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { calculator } from "@/lib/calc/reactance";
 import { runCalculator } from "@/lib/calc/run";
+import { calcRunner, logUniform } from "../helpers/calc";
 
 type Out = { capacitiveReactance: number | null; inductiveReactance: number | null; resonantFrequency: number | null };
 
-function out(raw: Record<string, unknown>): Out {
-  const r = runCalculator(calculator, raw);
-  if (!r.ok) throw new Error(JSON.stringify(r.error));
-  return r.result.outputs as unknown as Out;
-}
-function fields(raw: Record<string, unknown>): Record<string, string> {
-  const r = runCalculator(calculator, raw);
-  if (r.ok) throw new Error("expected a refusal");
-  return r.error.fields;
-}
-const logUniform = (lo: number, hi: number) =>
-  fc.double({ min: Math.log10(lo), max: Math.log10(hi), noNaN: true }).map((e) => Math.min(hi, Math.max(lo, 10 ** e)));
+const { out, fields } = calcRunner<Out>(calculator);
 
 describe("reactance: published checks", () => {
   it("1 µF at 60 Hz is about 2650 Ω", () => {
