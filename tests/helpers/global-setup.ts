@@ -65,7 +65,8 @@ export default async function setup(project: TestProject) {
   // Every message the server sends goes over real SMTP to this loopback sink; tests read tests/helpers/mail.ts.
   const mailDir = path.join(dataDir, "mail");
   project.provide("mailDir", mailDir);
-  if (!fs.existsSync(path.join(root, ".next", "BUILD_ID"))) {
+  // GLOWBENCH_UNIT_ONLY=1 skips the server even when a build exists (fast runs of unit and calculator tests).
+  if (process.env.GLOWBENCH_UNIT_ONLY === "1" || !fs.existsSync(path.join(root, ".next", "BUILD_ID"))) {
     project.provide("baseUrl", "");
     project.provide("paymentsUrl", "");
     return;
