@@ -1,5 +1,7 @@
 /** @type {import('next').NextConfig} */
 const nextConfig = {
+  // A second build folder lets two builds of one checkout run side by side (tests/helpers/global-setup.ts reads the same variable).
+  distDir: process.env.GLOWBENCH_DIST_DIR || ".next",
   poweredByHeader: false,
   reactStrictMode: true,
   serverExternalPackages: ["better-sqlite3", "sharp", "smtp-server", "nodemailer", "@react-pdf/renderer"],

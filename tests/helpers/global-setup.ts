@@ -66,7 +66,7 @@ export default async function setup(project: TestProject) {
   const mailDir = path.join(dataDir, "mail");
   project.provide("mailDir", mailDir);
   // GLOWBENCH_UNIT_ONLY=1 skips the server even when a build exists (fast runs of unit and calculator tests).
-  if (process.env.GLOWBENCH_UNIT_ONLY === "1" || !fs.existsSync(path.join(root, ".next", "BUILD_ID"))) {
+  if (process.env.GLOWBENCH_UNIT_ONLY === "1" || !fs.existsSync(path.join(root, process.env.GLOWBENCH_DIST_DIR || ".next", "BUILD_ID"))) {
     project.provide("baseUrl", "");
     project.provide("paymentsUrl", "");
     return;
