@@ -172,6 +172,11 @@ export const readings = sqliteTable(
     /** "resistor" survey rows (Ω) or "voltage" test-point rows (V, nominal = expected). */
     kind: text("kind", { enum: ["resistor", "voltage"] }).notNull().default("resistor"),
     designator: text("designator").notNull(),
+    /**
+     * Voltage rows: the part(s) this reading was taken across, comma-separated ("C5a, C5b"), so a
+     * capacitor's rating is compared only with a voltage measured at its own position. Null: none named.
+     */
+    partDesignators: text("part_designators"),
     nominal: real("nominal").notNull(),
     /** Null means open circuit / no reading. */
     measured: real("measured"),
