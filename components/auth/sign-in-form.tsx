@@ -5,6 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
+import { safeNextPath } from "@/lib/safe-next";
 import { Field } from "@/components/ui/field";
 import { signInSchema, type SignInInput } from "@/lib/auth/schemas";
 import { sendJson } from "@/lib/client/fetch-json";
@@ -29,7 +30,7 @@ export function SignInForm({ next }: { next?: string }) {
       setFormError(res.message);
       return;
     }
-    router.push(next && next.startsWith("/") && !next.startsWith("//") ? next : "/jobs");
+    router.push(safeNextPath(next));
     router.refresh();
   });
 

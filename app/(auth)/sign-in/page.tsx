@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { SignInForm } from "@/components/auth/sign-in-form";
+import { safeNextPath } from "@/lib/safe-next";
 
 export const metadata: Metadata = { title: "Sign in" };
 
@@ -15,7 +16,7 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
           Your new password is set and every other session has ended. Sign in with it now.
         </p>
       ) : null}
-      <SignInForm next={next} />
+      <SignInForm next={safeNextPath(next)} />
       <p className="mt-3">
         <Link href="/forgot-password" className="font-bold text-signal underline underline-offset-4">
           Forgot your password?
