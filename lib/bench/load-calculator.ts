@@ -17,6 +17,7 @@ const LOADERS: Record<string, Loader> = {
   "preferred-value": () => import("@/lib/calc/preferred-value"),
   reactance: () => import("@/lib/calc/reactance"),
   "resistor-drift": () => import("@/lib/calc/resistor-drift"),
+  "series-lamp": () => import("@/lib/calc/series-lamp"),
   "supply-ripple": () => import("@/lib/calc/supply-ripple"),
   "time-constant": () => import("@/lib/calc/time-constant"),
   "triode-stage": () => import("@/lib/calc/triode-stage"),

@@ -9,6 +9,7 @@ import { calculator as ohmsLaw } from "./ohms-law";
 import { calculator as preferredValue } from "./preferred-value";
 import { calculator as reactance } from "./reactance";
 import { calculator as resistorDrift } from "./resistor-drift";
+import { calculator as seriesLamp } from "./series-lamp";
 import { calculator as supplyRipple } from "./supply-ripple";
 import { calculator as timeConstant } from "./time-constant";
 import { calculator as triodeStage } from "./triode-stage";
@@ -22,6 +23,7 @@ export const calculators: readonly Calculator[] = [
   supplyRipple,
   timeConstant,
   bleeder,
+  seriesLamp,
   arcClearance,
   resistorDrift,
   preferredValue,
