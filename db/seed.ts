@@ -149,7 +149,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
         { jobId: radio, workshopId: w, kind: "resistor", designator: "R4", nominal: 470_000, measured: 655_000, tolerance: 0.2 },
         { jobId: radio, workshopId: w, kind: "resistor", designator: "R7", nominal: 2_200_000, measured: 3_150_000, tolerance: 0.2 },
         { jobId: radio, workshopId: w, kind: "resistor", designator: "R9", nominal: 150, measured: 148, tolerance: 0.1 },
-        { jobId: radio, workshopId: w, kind: "voltage", designator: "B+ after rectifier", nominal: 120, measured: 112, tolerance: 0.1 },
+        { jobId: radio, workshopId: w, kind: "voltage", designator: "B+ after rectifier", partDesignators: "C5a", nominal: 120, measured: 112, tolerance: 0.1 },
       ])
       .run();
     tx.insert(calculations)

@@ -13,7 +13,7 @@ const input = "w-full min-h-9 rounded-chip border border-rule bg-panel px-2 py-1
 const STATE_TONE: Record<PartState, string> = { "to-order": "text-caution", ordered: "text-signal", fitted: "text-ok" };
 
 /** One part, edited in place: click Edit, change the cells, Save (PATCH with only what changed). */
-export function PartRow({ jobId, part, canEdit, caution }: { jobId: number; part: Part; canEdit: boolean; caution: boolean }) {
+export function PartRow({ jobId, part, canEdit, caution, readingNote }: { jobId: number; part: Part; canEdit: boolean; caution: boolean; readingNote?: string }) {
   const router = useRouter();
   const [editing, setEditing] = useState(false);
   const [draft, setDraft] = useState(part);
@@ -76,7 +76,9 @@ export function PartRow({ jobId, part, canEdit, caution }: { jobId: number; part
       <td className={`${cell} font-mono font-bold`}>{part.designator}</td>
       <td className={cell}>{PART_KIND_LABELS[part.kind]}</td>
       <td className={cell}>{pair(part.originalValue, part.originalRating)}</td>
-      <td className={cell}>{pair(part.replacementValue, part.replacementRating)}{caution ? <span className="ml-2 font-bold text-caution" title="See the caution above">⚠</span> : null}</td>
+      <td className={cell}>{pair(part.replacementValue, part.replacementRating)}{caution ? <span className="ml-2 font-bold text-caution" title="See the caution above">⚠</span> : null}
+        {readingNote ? <span className="block text-note text-muted" data-testid={`reading-note-${part.designator}`}>{readingNote}</span> : null}
+      </td>
       <td className={cell}>
         {canEdit ? (
           <select aria-label={`State of ${part.designator}`} className={`${input} font-bold ${STATE_TONE[part.state]}`} value={part.state} onChange={(e) => save({ state: e.target.value as PartState })}>

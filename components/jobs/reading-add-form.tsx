@@ -10,10 +10,13 @@ import { SelectField } from "@/components/ui/select-field";
 import { sendJson } from "@/lib/client/fetch-json";
 import { readingSchema, type ReadingValues } from "@/lib/jobs/reading-schemas";
 
-type Form = { kind: "resistor" | "voltage"; designator: string; nominal: string; measured: string; tolerance: string };
-const EMPTY: Form = { kind: "resistor", designator: "", nominal: "", measured: "", tolerance: "" };
+type Form = { kind: "resistor" | "voltage"; designator: string; partDesignators: string; nominal: string; measured: string; tolerance: string };
+const EMPTY: Form = { kind: "resistor", designator: "", partDesignators: "", nominal: "", measured: "", tolerance: "" };
 
-/** Any member may add a reading; numbers take engineering notation ("470k", "4k7", "250 V"). */
+/**
+ * Any member may add a reading; numbers take engineering notation ("470k", "4k7", "250 V").
+ * A voltage may name the capacitor(s) it was measured across: only then is it compared with their ratings.
+ */
 export function ReadingAddForm({ jobId }: { jobId: number }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
@@ -39,6 +42,9 @@ export function ReadingAddForm({ jobId }: { jobId: number }) {
     <form onSubmit={onSubmit} noValidate aria-label="Add a reading" className="grid gap-x-3 sm:grid-cols-5">
       <SelectField id="reading-kind" label="Reading" options={[{ value: "resistor", label: "Resistor" }, { value: "voltage", label: "Voltage" }]} {...register("kind")} />
       <Field id="reading-designator" label={resistor ? "Ref." : "Test point"} placeholder={resistor ? "R4" : "B+ at C5a"} error={errors.designator?.message} {...register("designator")} />
+      {resistor ? null : (
+        <Field id="reading-parts" label="Across" placeholder="C5a, C5b" hint="Capacitors checked against this reading" error={errors.partDesignators?.message} {...register("partDesignators")} />
+      )}
       <Field id="reading-nominal" label={resistor ? "Marked value" : "Expected"} placeholder={resistor ? "470k" : "250 V"} suffix={resistor ? "Ω" : "V"} error={errors.nominal?.message} {...register("nominal")} />
       <Field id="reading-measured" label="Measured" placeholder={resistor ? "655k or open" : "240 V"} suffix={resistor ? "Ω" : "V"} error={errors.measured?.message} {...register("measured")} />
       <Field id="reading-tolerance" label="Tolerance" placeholder="0.2" hint="0.2 = ±20 %" error={errors.tolerance?.message} {...register("tolerance")} />

@@ -96,7 +96,10 @@ export function VoltageTable({ jobId, rows, canEdit }: { jobId: number; rows: Re
       <tbody className="divide-y divide-rule">
         {rows.map((r) => (
           <tr key={r.id} data-testid={`reading-${r.designator}`}>
-            <td className={`${td} font-bold`}>{r.designator}</td>
+            <td className={`${td} font-bold`}>
+              {r.designator}
+              {r.partDesignators ? <span className="block text-note font-normal text-muted">across <span className="font-mono">{r.partDesignators}</span></span> : null}
+            </td>
             <td className={`${td} font-mono`}>{formatQuantity(r.nominal, "V")} <span className="text-muted">±{Math.round(r.tolerance * 100)} %</span></td>
             <td className={`${td} font-mono`}>{r.measured === null ? "—" : formatQuantity(r.measured, "V")}</td>
             <td className={`${td} font-mono`}>{pct(r.deviation)}</td>

@@ -14,6 +14,7 @@ const readingColumns = {
   jobId: readings.jobId,
   kind: readings.kind,
   designator: readings.designator,
+  partDesignators: readings.partDesignators,
   nominal: readings.nominal,
   measured: readings.measured,
   tolerance: readings.tolerance,
@@ -44,6 +45,8 @@ function toRow(input: ReadingValues) {
   return {
     kind: input.kind,
     designator: input.designator,
+    // Only a voltage is compared with the ratings of the parts it was taken across.
+    partDesignators: input.kind === "voltage" ? (input.partDesignators ?? null) : null,
     nominal: input.nominal,
     measured: input.measured === "open" ? null : input.measured,
     tolerance: input.tolerance,

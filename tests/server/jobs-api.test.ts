@@ -149,6 +149,17 @@ describe("readings and log", () => {
     expect((await volts.json()).reading).toMatchObject({ verdict: "high" });
   });
 
+  test("a voltage reading names the capacitors it was taken across; a bad list is refused by field", async () => {
+    const res = await team.apprentice.post(`/api/jobs/${job}/readings`, { kind: "voltage", designator: "TP3", partDesignators: "C12;c13 ", nominal: "350 V", measured: "380 V" });
+    expect(res.status).toBe(201);
+    expect((await res.json()).reading).toMatchObject({ designator: "TP3", partDesignators: "C12, c13", measured: 380 });
+    const listed = (await (await t().get(`/api/jobs/${job}/readings`)).json()).readings;
+    expect(listed.find((r: { designator: string }) => r.designator === "TP3").partDesignators).toBe("C12, c13");
+    const bad = await team.apprentice.post(`/api/jobs/${job}/readings`, { kind: "voltage", designator: "TP4", partDesignators: 12, nominal: "1 V", measured: "1 V" });
+    expect(bad.status).toBe(400);
+    expect(Object.keys((await bad.json()).error.fields)).toEqual(["partDesignators"]);
+  });
+
   test("a power-up entry keeps the supply voltage and current drawn", async () => {
     const res = await team.apprentice.post(`/api/jobs/${job}/log`, { kind: "power-up", supplyVoltage: "60 V", currentDrawn: "180 mA", text: "Heaters lit; no smoke." });
     expect(res.status).toBe(201);

@@ -1,35 +1,62 @@
 import { describe, expect, test } from "vitest";
 import { latexToText, pdfText } from "@/lib/jobs/latex-text";
-import { capacitorCautions, highestMeasuredVoltage, ratingVolts } from "@/lib/jobs/part-cautions";
+import { capacitorCautions, capacitorChecks, ratingVolts, readingsAt } from "@/lib/jobs/part-cautions";
 import { parsePartsCsv, partsToCsv } from "@/lib/jobs/parts-csv";
 import { judgeReading } from "@/lib/jobs/reading-verdict";
 
 describe("capacitor rating cautions", () => {
-  test("reads voltage ratings as the bench writes them, and nothing else", () => {
+  test("reads voltage ratings as the bench writes them, through the unit parser, and nothing else", () => {
+    // Working-voltage markings as the trade writes them (common practice): V, VDC, WV, WVDC, kV, a decimal comma.
     expect(ratingVolts("400 V")).toBe(400);
     expect(ratingVolts("630VDC")).toBe(630);
+    expect(ratingVolts("250 V DC")).toBe(250);
     expect(ratingVolts("1.5 kV")).toBe(1500);
+    expect(ratingVolts("3 kv")).toBe(3000);
+    expect(ratingVolts("1,5 kV")).toBe(1500);
+    expect(ratingVolts("1,000 V")).toBe(1000);
     expect(ratingVolts("450 WV")).toBe(450);
+    expect(ratingVolts("500 WVDC")).toBe(500);
+    expect(ratingVolts("400 V / 525 V surge")).toBe(400);
+    expect(ratingVolts("350V 85°C")).toBe(350);
     expect(ratingVolts("250")).toBe(250);
     expect(ratingVolts("0.5 W")).toBeNull();
+    expect(ratingVolts("47 µF")).toBeNull();
     expect(ratingVolts("")).toBeNull();
   });
 
   const part = (id: number, kind: "paper" | "electrolytic" | "resistor", originalRating: string | null, replacementRating: string | null) => ({ id, designator: `X${id}`, kind, originalRating, replacementRating });
-  test("flags a replacement below the original or below the measured supply, for capacitors only", () => {
-    const cautions = capacitorCautions(
-      [part(1, "electrolytic", "450 V", "350 V"), part(2, "paper", "200 V", "250 V"), part(3, "paper", null, "630 V"), part(4, "resistor", "500 V", "100 V"), part(5, "paper", "400 V", null)],
-      300,
-    );
-    expect(cautions.map((c) => c.partId)).toEqual([1, 2]);
-    expect(cautions[0].message).toMatch(/below the original 450 V/);
-    expect(cautions[1].message).toMatch(/below the 300 V measured/);
-    expect(capacitorCautions([part(2, "paper", "200 V", "250 V")], null)).toEqual([]);
+  const volts = (designator: string, measured: number | null, partDesignators: string | null = null) => ({ kind: "voltage", designator, partDesignators, measured });
+
+  test("flags a replacement below the original whatever was measured, for capacitors only", () => {
+    const cautions = capacitorCautions([part(1, "electrolytic", "450 V", "350 V"), part(2, "paper", "200 V", "250 V"), part(4, "resistor", "500 V", "100 V")], []);
+    expect(cautions.map((c) => c.partId)).toEqual([1]);
+    expect(cautions[0].message).toMatch(/^X1: the replacement is rated 350 V, below the original 450 V/);
   });
 
-  test("the measured supply is the largest voltage reading, by magnitude", () => {
-    expect(highestMeasuredVoltage([{ kind: "voltage", measured: 120 }, { kind: "voltage", measured: -180 }, { kind: "resistor", measured: 470_000 }, { kind: "voltage", measured: null }])).toBe(180);
-    expect(highestMeasuredVoltage([])).toBeNull();
+  test("a reading elsewhere on the set flags nothing: the 6.6 kV anode against seven capacitors", () => {
+    const seven = [1, 2, 3, 4, 5, 6, 7].map((i) => part(i, i % 2 ? "paper" : "electrolytic", "400 V", "630 V"));
+    const { cautions, notes } = capacitorChecks(seven, [volts("CRT anode", 6600), volts("B+", 250)]);
+    expect(cautions).toEqual([]);
+    expect([...notes.values()]).toEqual(Array(7).fill("no reading at this capacitor"));
+  });
+
+  test("a capacitor is compared only with readings linked to it, by magnitude, case and spaces ignored", () => {
+    const parts = [part(1, "paper", "400 V", "350 V"), part(2, "electrolytic", "450 WV", null), part(3, "paper", null, "160 V"), part(4, "paper", null, "630 V")];
+    const readings = [volts("CRT anode", 6600), volts(" x1 ", 380), volts("TP3", 300, "X2, X4"), volts("Cathode", -180, "x3"), volts("X4", null)];
+    const { cautions, notes } = capacitorChecks(parts, readings);
+    expect(cautions.map((c) => c.partId)).toEqual([1, 3]);
+    expect(cautions[0].message).toMatch(/^X1: .*measured 380 V at X1 is above its 350 V rating/);
+    expect(cautions[1].message).toMatch(/measured 180 V at Cathode \(across X3\) is above its 160 V rating/);
+    // Below the rating: stated as a comparison, never as "safe".
+    expect(notes.get(2)).toBe("300 V measured at TP3 (across X2), not above the original part's 450 V rating");
+    expect(notes.get(4)).toMatch(/^300 V measured at TP3 \(across X4\), not above its 630 V rating$/);
+    expect([...notes.values()].join(" ")).not.toMatch(/safe/i);
+    expect(readingsAt("X4", readings).map((r) => r.designator)).toEqual(["TP3"]);
+  });
+
+  test("a reading equal to the rating is not above it; one a volt over is", () => {
+    expect(capacitorCautions([part(1, "paper", null, "350 V")], [volts("X1", 350)])).toEqual([]);
+    expect(capacitorCautions([part(1, "paper", null, "350 V")], [volts("X1", 351)])).toHaveLength(1);
   });
 });
 

@@ -7,15 +7,15 @@ import { Card, EmptyState } from "@/components/ui/card";
 import { listParts } from "@/db/queries/parts";
 import { listReadings } from "@/db/queries/readings";
 import { can } from "@/lib/auth/member";
-import { capacitorCautions, highestMeasuredVoltage } from "@/lib/jobs/part-cautions";
+import { capacitorChecks } from "@/lib/jobs/part-cautions";
 
 export const metadata: Metadata = { title: "Parts" };
 
 export default async function PartsPage({ params }: JobPageProps) {
   const { member, job } = await loadJobPage((await params).id, "parts");
   const parts = listParts(member, job.id);
-  const supply = highestMeasuredVoltage(listReadings(member, job.id));
-  const cautions = capacitorCautions(parts, supply);
+  // Each capacitor is compared only with voltage readings linked to it, never with the set's highest.
+  const { cautions, notes } = capacitorChecks(parts, listReadings(member, job.id));
   const flagged = new Set(cautions.map((c) => c.partId));
   const canEdit = can.editJobs(member);
   const count = (s: string) => parts.filter((p) => p.state === s).length;
@@ -36,6 +36,7 @@ export default async function PartsPage({ params }: JobPageProps) {
             {cautions.map((c) => <li key={c.partId}>{c.message}</li>)}
           </ul>
           <p className="mt-1 text-note text-muted">A capacitor run above its rating can fail short. Ratings here are read from what you typed; check them against the part itself.</p>
+          <p className="mt-1 text-note text-muted">A reading is one moment: with the set cold or lightly loaded, B+ can rise above its working figure, which a rating must also stand (common practice).</p>
         </div>
       ) : null}
       {parts.length === 0 ? (
@@ -54,11 +55,12 @@ export default async function PartsPage({ params }: JobPageProps) {
               </tr>
             </thead>
             <tbody className="divide-y divide-rule">
-              {parts.map((p) => <PartRow key={p.id} jobId={job.id} part={p} canEdit={canEdit} caution={flagged.has(p.id)} />)}
+              {parts.map((p) => <PartRow key={p.id} jobId={job.id} part={p} canEdit={canEdit} caution={flagged.has(p.id)} readingNote={notes.get(p.id)} />)}
             </tbody>
           </table>
         </div>
       )}
+      {notes.size ? <p className="text-note text-muted" data-testid="rating-basis">A capacitor&rsquo;s rating is compared only with a voltage reading taken at it: on Readings, name the capacitor(s) a test point is across.</p> : null}
       <PartsCsvTools jobId={job.id} canEdit={canEdit} />
       {canEdit ? (
         <Card>
