@@ -16,6 +16,7 @@ const LOADERS: Record<string, Loader> = {
   "ohms-law": () => import("@/lib/calc/ohms-law"),
   "preferred-value": () => import("@/lib/calc/preferred-value"),
   reactance: () => import("@/lib/calc/reactance"),
+  reforming: () => import("@/lib/calc/reforming"),
   "resistor-drift": () => import("@/lib/calc/resistor-drift"),
   "series-lamp": () => import("@/lib/calc/series-lamp"),
   "supply-ripple": () => import("@/lib/calc/supply-ripple"),

@@ -8,6 +8,7 @@ import { calculator as heaterString } from "./heater-string";
 import { calculator as ohmsLaw } from "./ohms-law";
 import { calculator as preferredValue } from "./preferred-value";
 import { calculator as reactance } from "./reactance";
+import { calculator as reforming } from "./reforming";
 import { calculator as resistorDrift } from "./resistor-drift";
 import { calculator as seriesLamp } from "./series-lamp";
 import { calculator as supplyRipple } from "./supply-ripple";
@@ -26,6 +27,7 @@ export const calculators: readonly Calculator[] = [
   seriesLamp,
   arcClearance,
   resistorDrift,
+  reforming,
   preferredValue,
   colourCode,
   ohmsLaw,
