@@ -12,6 +12,7 @@ const LOADERS: Record<string, Loader> = {
   "cathode-bias": () => import("@/lib/calc/cathode-bias"),
   "colour-code": () => import("@/lib/calc/colour-code"),
   "dropping-resistor": () => import("@/lib/calc/dropping-resistor"),
+  fuse: () => import("@/lib/calc/fuse"),
   "heater-string": () => import("@/lib/calc/heater-string"),
   "ohms-law": () => import("@/lib/calc/ohms-law"),
   "preferred-value": () => import("@/lib/calc/preferred-value"),

@@ -4,6 +4,7 @@ import { calculator as bleeder } from "./bleeder";
 import { calculator as cathodeBias } from "./cathode-bias";
 import { calculator as colourCode } from "./colour-code";
 import { calculator as droppingResistor } from "./dropping-resistor";
+import { calculator as fuse } from "./fuse";
 import { calculator as heaterString } from "./heater-string";
 import { calculator as ohmsLaw } from "./ohms-law";
 import { calculator as preferredValue } from "./preferred-value";
@@ -25,6 +26,7 @@ export const calculators: readonly Calculator[] = [
   timeConstant,
   bleeder,
   seriesLamp,
+  fuse,
   arcClearance,
   resistorDrift,
   reforming,

@@ -16,6 +16,7 @@ export const samples: Record<string, Record<string, unknown>> = {
   "time-constant": { resistance: "220k", capacitance: "47 uF", initialVoltage: "350 V", targetVoltage: "30 V", elapsed: "10 s" },
   bleeder: { capacitance: "40 uF", workingVoltage: "450 V", safeVoltage: 60, maxTime: 5, tolerance: 0.05 },
   "series-lamp": { lineVoltage: "120 V", lampPower: "60 W", setPower: "35 W" },
+  fuse: { loadPower: "85 W", lineVoltage: "120 V", powerFactor: 0.9, kind: "time-lag" },
   "supply-ripple": {
     loadCurrent: "80 mA",
     capacitance: "40 uF",
