@@ -9,6 +9,15 @@
 export const HEATER_SOURCE =
   "RCA receiving tube manual (RC-series) and tube data sheets; values recalled from memory, check the data sheet for critical work";
 
+/**
+ * Where the tap and warm-up figures come from. The 35Z5GT's 7.5 V lamp section of its 35 V heater was read
+ * in a period magazine note on that type ("Longer Life for Dial Lamps", about 1940, in a web reprint); the
+ * 35W4's tap is taken as the same 7.5 V from memory. The 11 s controlled warm-up of the television types
+ * ("A"/"B" variants for series strings) is from memory of their data sheets.
+ */
+export const TAP_SOURCE =
+  "35Z5GT lamp section 7.5 V of 35 V: period note \"Longer Life for Dial Lamps\" (read); 35W4 tap 7.5 V and the 11 s warm-up ratings: from memory of the data sheets";
+
 export interface HeaterEntry {
   /** Type numbers, first the one we show; the rest are variants with the same heater. */
   names: readonly string[];
@@ -17,15 +26,23 @@ export interface HeaterEntry {
   /** What the tube usually does, in a word or two. */
   use: string;
   note?: string;
+  /** The heater section a pilot lamp is wired across (35W4/35Z5-style rectifiers): its volts at rated current, and where that figure comes from. */
+  tap?: { voltage: number; from: string };
+  /** Controlled heater warm-up time (s) of types made for series strings; absent when the data gives none. */
+  warmUp?: number;
 }
 
-const e = (names: string[], voltage: number, current: number, use: string, note?: string): HeaterEntry => ({
+const e = (names: string[], voltage: number, current: number, use: string, note?: string, extra?: Pick<HeaterEntry, "tap" | "warmUp">): HeaterEntry => ({
   names,
   voltage,
   current,
   use,
   ...(note ? { note } : {}),
+  ...extra,
 });
+
+/** Controlled warm-up of the series-string television types (from memory of their data sheets). */
+const WARM_11S = { warmUp: 11 };
 
 export const HEATERS: readonly HeaterEntry[] = [
   // 150 mA series-string types (AC/DC radios)
@@ -42,15 +59,16 @@ export const HEATERS: readonly HeaterEntry[] = [
   e(["12SL7GT", "12SL7"], 12.6, 0.15, "twin triode"),
   e(["12AX7", "12AX7A", "ECC83"], 12.6, 0.15, "twin high-mu triode", "centre-tapped heater: 6.3 V at 0.3 A with the halves in parallel"),
   e(["12AT7", "ECC81"], 12.6, 0.15, "twin triode", "centre-tapped heater: 6.3 V at 0.3 A with the halves in parallel"),
-  e(["12AU7", "12AU7A", "ECC82"], 12.6, 0.15, "twin triode", "centre-tapped heater: 6.3 V at 0.3 A with the halves in parallel"),
+  e(["12AU7", "ECC82"], 12.6, 0.15, "twin triode", "centre-tapped heater: 6.3 V at 0.3 A with the halves in parallel"),
+  e(["12AU7A"], 12.6, 0.15, "twin triode", "centre-tapped heater; controlled warm-up for series strings", WARM_11S),
   e(["19T8"], 18.9, 0.15, "triple diode triode, FM/AM detector"),
   e(["50C5"], 50, 0.15, "beam power output"),
   e(["50B5"], 50, 0.15, "beam power output"),
   e(["50L6GT", "50L6"], 50, 0.15, "beam power output"),
   e(["35C5"], 35, 0.15, "beam power output"),
   e(["35L6GT", "35L6"], 35, 0.15, "beam power output"),
-  e(["35W4"], 35, 0.15, "half-wave rectifier", "heater tapped for a pilot lamp"),
-  e(["35Z5GT", "35Z5"], 35, 0.15, "half-wave rectifier", "heater tapped for a pilot lamp"),
+  e(["35W4"], 35, 0.15, "half-wave rectifier", "heater tapped for a pilot lamp", { tap: { voltage: 7.5, from: "recalled from memory" } }),
+  e(["35Z5GT", "35Z5"], 35, 0.15, "half-wave rectifier", "heater tapped for a pilot lamp", { tap: { voltage: 7.5, from: "read in a period note on the type" } }),
   e(["70L7GT"], 70, 0.15, "rectifier and beam power output"),
   // 300 mA series-string types
   e(["25L6GT", "25L6"], 25, 0.3, "beam power output"),
@@ -62,15 +80,18 @@ export const HEATERS: readonly HeaterEntry[] = [
   e(["117Z3"], 117, 0.04, "half-wave rectifier, heater straight across the mains"),
   e(["117Z6GT"], 117, 0.075, "voltage-doubler rectifier, heater straight across the mains"),
   // 600 mA series-string television types
-  e(["6SN7GTB", "6SN7GT", "6SN7GTA", "6SN7"], 6.3, 0.6, "twin triode", "the GTB has controlled heater warm-up for series strings"),
+  e(["6SN7GTB"], 6.3, 0.6, "twin triode", "controlled heater warm-up for series strings", WARM_11S),
+  e(["6SN7GT", "6SN7GTA", "6SN7"], 6.3, 0.6, "twin triode"),
   e(["6CG7"], 6.3, 0.6, "twin triode"),
-  e(["12AX4GTB", "12AX4GT"], 12.6, 0.6, "television damper diode"),
+  e(["12AX4GTB"], 12.6, 0.6, "television damper diode", "controlled heater warm-up for series strings", WARM_11S),
+  e(["12AX4GT"], 12.6, 0.6, "television damper diode"),
   // 6.3 V parallel-heater types
   e(["6BA6"], 6.3, 0.3, "remote-cutoff pentode, IF"),
   e(["6BE6"], 6.3, 0.3, "pentagrid converter"),
   e(["6AV6"], 6.3, 0.3, "duplex diode triode"),
   e(["6AT6"], 6.3, 0.3, "duplex diode triode"),
-  e(["6AU6", "6AU6A"], 6.3, 0.3, "sharp-cutoff pentode"),
+  e(["6AU6"], 6.3, 0.3, "sharp-cutoff pentode"),
+  e(["6AU6A"], 6.3, 0.3, "sharp-cutoff pentode", "controlled heater warm-up for series strings", WARM_11S),
   e(["6SQ7", "6SQ7GT"], 6.3, 0.3, "duplex diode triode"),
   e(["6SK7", "6SK7GT"], 6.3, 0.3, "remote-cutoff pentode"),
   e(["6SA7", "6SA7GT"], 6.3, 0.3, "pentagrid converter"),
@@ -82,12 +103,14 @@ export const HEATERS: readonly HeaterEntry[] = [
   e(["6A8", "6A8G"], 6.3, 0.3, "pentagrid converter"),
   e(["6J5", "6J5GT"], 6.3, 0.3, "triode"),
   e(["6AL5", "EB91"], 6.3, 0.3, "twin diode"),
-  e(["6CB6", "6CB6A"], 6.3, 0.3, "sharp-cutoff pentode, television IF"),
+  e(["6CB6"], 6.3, 0.3, "sharp-cutoff pentode, television IF"),
+  e(["6CB6A"], 6.3, 0.3, "sharp-cutoff pentode, television IF", "controlled heater warm-up for series strings", WARM_11S),
   e(["6AG5"], 6.3, 0.3, "sharp-cutoff pentode"),
   e(["6C4"], 6.3, 0.15, "triode"),
   e(["6AK5"], 6.3, 0.175, "sharp-cutoff pentode, VHF"),
   e(["6J6"], 6.3, 0.45, "twin triode, VHF"),
-  e(["6U8A", "6U8"], 6.3, 0.45, "triode-pentode, television"),
+  e(["6U8A"], 6.3, 0.45, "triode-pentode, television", "controlled heater warm-up for series strings", WARM_11S),
+  e(["6U8"], 6.3, 0.45, "triode-pentode, television"),
   e(["6T8"], 6.3, 0.45, "triple diode triode"),
   e(["6AC7"], 6.3, 0.45, "sharp-cutoff pentode"),
   e(["6K6GT", "6K6G"], 6.3, 0.4, "pentode power output"),
