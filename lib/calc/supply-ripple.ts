@@ -1,36 +1,32 @@
 import { z } from "zod";
 import { formatQuantity, texQuantity, tex } from "./format";
+import { DEFAULT_CHOKE_RESISTANCE, stageFigures, stageSchema, type LcStageResult, type StageInput, type StageResult } from "./ripple-stages";
 import { ALWAYS_DANGER } from "./safety";
+import { RECTIFIER_TYPES, findRectifier } from "./tables/rectifiers";
 import { defineCalculator, type OutputValue, type Step, type Warning } from "./types";
 import { quantity, quantityWithDefault } from "./units";
+import { rippleWarnings } from "./supply-ripple-warnings";
 
 /**
  * Ripple of a capacitor-input filter and the smoothing stages after it.
  * Reservoir: Vpp ≈ I/(f_ripple·C), a sawtooth with rms Vpp/(2√3) (Radiotron Designer's Handbook 4th ed.,
- * capacitor-input filters; ARRL Handbook, power supplies). Each stage is treated as a divider at the
- * ripple frequency: RC gives Xc/√(R²+Xc²), an ideal LC gives |Xc/(XL−Xc)| = 1/|ω²LC − 1|.
+ * capacitor-input filters; ARRL Handbook, power supplies). The stages are in lib/calc/ripple-stages.ts.
  */
 
 export const RECTIFIERS = ["full-wave", "half-wave"] as const;
 
-// An LC stage this close to resonance (|ω²LC − 1| below it) has no meaningful ideal answer.
-const RESONANCE_GUARD = 1e-3;
-
-const rcStage = z.object({
-  kind: z.literal("rc"),
-  resistance: quantity("resistance", { positive: true, min: 1e-3, max: 1e9, label: "Stage resistance" }),
-  capacitance: quantity("capacitance", { positive: true, min: 1e-12, max: 10, label: "Stage capacitance" }),
-});
-
-const lcStage = z.object({
-  kind: z.literal("lc"),
-  inductance: quantity("inductance", { positive: true, min: 1e-6, max: 1e4, label: "Choke inductance" }),
-  capacitance: quantity("capacitance", { positive: true, min: 1e-12, max: 10, label: "Stage capacitance" }),
-});
-
-const stage = z.discriminatedUnion("kind", [rcStage, lcStage], {
-  error: 'Each stage needs kind "rc" (resistance and capacitance) or "lc" (inductance and capacitance)',
-});
+const rectifierTubeField = z
+  .unknown()
+  .transform((raw, ctx): string | undefined => {
+    if (raw === undefined || raw === null || (typeof raw === "string" && raw.trim() === "")) return undefined;
+    const found = typeof raw === "string" ? findRectifier(raw) : undefined;
+    if (!found) {
+      ctx.addIssue({ code: "custom", message: `Rectifier tube is not in the built-in table; choose one of ${RECTIFIER_TYPES.join(", ")}` });
+      return z.NEVER;
+    }
+    return found.type;
+  })
+  .optional();
 
 export const supplyRippleSchema = z
   .object({
@@ -38,16 +34,17 @@ export const supplyRippleSchema = z
     capacitance: quantity("capacitance", { positive: true, min: 1e-9, max: 10, label: "Reservoir capacitance" }),
     lineFrequency: quantityWithDefault("frequency", 60, { positive: true, min: 1, max: 10_000, label: "Line frequency" }).default(60),
     rectifier: z.enum(RECTIFIERS, { error: 'Rectifier must be "full-wave" or "half-wave"' }),
-    stages: z.array(stage).max(10, { error: "At most 10 filter stages" }).optional(),
+    rectifierTube: rectifierTubeField,
+    stages: z.array(stageSchema).max(10, { error: "At most 10 filter stages" }).optional(),
   })
   .superRefine((v, ctx) => {
-    const omega = 2 * Math.PI * rippleFrequencyOf(v.lineFrequency, v.rectifier);
+    // The reservoir feeds every stage, so no stage can carry more than the whole load current.
     v.stages?.forEach((s, i) => {
-      if (s.kind === "lc" && Math.abs(omega * omega * s.inductance * s.capacitance - 1) < RESONANCE_GUARD) {
+      if (s.current !== undefined && s.current > v.loadCurrent) {
         ctx.addIssue({
           code: "custom",
-          path: ["stages", i, "inductance"],
-          message: `Stage ${i + 1}: this choke and capacitor resonate at the ripple frequency, where the filter would magnify ripple instead of removing it. Change the inductance or capacitance`,
+          path: ["stages", i, "current"],
+          message: `Stage ${i + 1} current cannot be more than the ${formatQuantity(v.loadCurrent, "A")} load current: the reservoir supplies every stage`,
         });
       }
     });
@@ -69,7 +66,11 @@ export const calculator = defineCalculator({
     { name: "capacitance", label: "Reservoir capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance", help: "The first capacitor after the rectifier." },
     { name: "lineFrequency", label: "Mains frequency", unit: "Hz", required: false, default: 60, control: "quantity", quantity: "frequency" },
     { name: "rectifier", label: "Rectifier", unit: "", required: true, control: "select", options: RECTIFIERS, help: "Full-wave (two diodes or a bridge, or a 5Y3-type tube) ripples at twice the mains frequency." },
-    { name: "stages", label: "Filter stages", unit: "", required: false, control: "list", help: 'Each stage: { kind: "rc", resistance, capacitance } or { kind: "lc", inductance, capacitance }, in order after the reservoir.' },
+    { name: "rectifierTube", label: "Rectifier tube (optional)", unit: "", required: false, control: "select", options: RECTIFIER_TYPES, help: "Checks the reservoir and load current against the tube's data-sheet limits." },
+    {
+      name: "stages", label: "Filter stages", unit: "", required: false, control: "list",
+      help: 'Each stage: { kind: "rc", resistance, capacitance } or { kind: "lc", inductance, capacitance, resistance (the choke\'s DC resistance, 100 Ω if blank) }, in order after the reservoir; each may give current (its own DC load, the whole load current if blank).',
+    },
   ],
   outputs: [
     { name: "rippleFrequency", label: "Ripple frequency", unit: "Hz" },
@@ -82,23 +83,26 @@ export const calculator = defineCalculator({
   formulas: [
     { label: "Ripple frequency", latex: tex`f_r = 2f \;(\text{full-wave}), \quad f_r = f \;(\text{half-wave})` },
     { label: "Reservoir ripple", latex: tex`V_{pp} = \frac{I}{f_r\,C}, \quad V_{rms} = \frac{V_{pp}}{2\sqrt{3}}` },
-    { label: "RC stage", latex: tex`\frac{V_{out}}{V_{in}} = \frac{X_C}{\sqrt{R^2 + X_C^2}}, \quad X_C = \frac{1}{2\pi f_r C}, \quad \Delta V_{dc} = I R` },
-    { label: "LC stage (ideal choke)", latex: tex`\frac{V_{out}}{V_{in}} = \left|\frac{X_C}{X_L - X_C}\right|, \quad X_L = 2\pi f_r L` },
+    { label: "RC stage", latex: tex`\frac{V_{out}}{V_{in}} = \frac{X_C}{\sqrt{R^2 + X_C^2}}, \quad X_C = \frac{1}{2\pi f_r C}, \quad \Delta V_{dc} = I_n R` },
+    { label: "LC stage (choke of resistance R)", latex: tex`\frac{V_{out}}{V_{in}} = \frac{1}{\sqrt{(1 - \omega^2 LC)^2 + (\omega R C)^2}}, \quad \omega = 2\pi f_r, \quad \Delta V_{dc} = I_n R` },
+    { label: "LC resonance and its peak", latex: tex`f_0 = \frac{1}{2\pi\sqrt{LC}}, \quad Q = \frac{1}{R}\sqrt{\frac{L}{C}}` },
   ],
   references: [
     {
       title: "Radiotron Designer's Handbook, 4th ed.",
-      detail: "Ch. 30, rectification: capacitor-input filter and reservoir ripple; ch. 31, filtering: RC and LC smoothing sections (chapter numbers from memory)",
+      detail: "Ch. 30, rectification: capacitor-input filter and reservoir ripple; ch. 34, smoothing filters: RC and LC sections, resonance of the LC section (chapter numbers from memory)",
     },
     {
       title: "The ARRL Handbook for Radio Communications",
-      detail: "Power supplies chapter: capacitor-input filters, ripple, choke-input filters and critical inductance",
+      detail: "Power supplies chapter: capacitor-input filters, ripple, choke resistance, choke-input filters and critical inductance",
     },
+    { title: "Rectifier tube data sheets (RCA receiving tube manual and makers' sheets)", detail: "Maximum filter-input capacitor and DC output current of each type (from memory)" },
   ],
   whyItMatters:
     "Hum in a restored set usually means too much ripple on B+: a dried-out reservoir or filter capacitor, or a " +
     "replacement that is too small. Knowing roughly how much ripple each stage should leave tells you whether a " +
-    "value is reasonable before you fit it, and which stage to suspect when the hum stays.",
+    "value is reasonable before you fit it, and which stage to suspect when the hum stays. A reservoir far larger " +
+    "than the original can also overwork a rectifier tube.",
   compute(input: SupplyRippleInput) {
     const { loadCurrent: i, capacitance: c, lineFrequency: f, rectifier } = input;
     const stagesIn = input.stages ?? [];
@@ -106,50 +110,17 @@ export const calculator = defineCalculator({
     const omega = 2 * Math.PI * fr;
     const vpp = i / (fr * c);
     const rippleRms = vpp / (2 * Math.sqrt(3));
-    const warnings: Warning[] = [ALWAYS_DANGER];
-
     let ripple = rippleRms;
-    const stages: { attenuation: number; rippleRms: number; dcDrop: number }[] = [];
-    stagesIn.forEach((s, n) => {
-      const xc = 1 / (omega * s.capacitance);
-      let attenuation: number;
-      let dcDrop: number;
-      if (s.kind === "rc") {
-        attenuation = xc / Math.hypot(s.resistance, xc);
-        dcDrop = i * s.resistance;
-      } else {
-        attenuation = Math.abs(xc / (omega * s.inductance - xc));
-        dcDrop = 0;
-        const f0 = 1 / (2 * Math.PI * Math.sqrt(s.inductance * s.capacitance));
-        if (f0 > fr / 3) {
-          const where = attenuation >= 1 ? "at or above" : "near";
-          warnings.push({
-            level: "caution",
-            message:
-              `Stage ${n + 1}: the choke and capacitor resonate at ${formatQuantity(f0, "Hz")}, ${where} the ${formatQuantity(fr, "Hz")} ripple frequency, ` +
-              `so this stage ${attenuation >= 1 ? "magnifies ripple rather than removing it" : "removes little ripple"}. Common practice keeps the resonance well below the ripple frequency (a third or less); use a larger choke or capacitor.`,
-          });
-        }
-      }
-      ripple *= attenuation;
-      stages.push({ attenuation, rippleRms: ripple, dcDrop });
-    });
-
-    if (stagesIn.some((s) => s.kind === "lc")) {
-      warnings.push({
-        level: "info",
-        message:
-          "Chokes are treated as ideal: a real choke's DC resistance (often 100–300 Ω) also drops I × R on the way to B+; subtract that yourself. " +
-          "A choke-input supply (choke straight after the rectifier, no reservoir capacitor) behaves differently and needs at least the critical inductance, " +
-          "about R_load/1000 henries at 60 Hz full-wave (common practice); this calculator does not model it.",
-      });
+    const stages: StageResult[] = [];
+    for (const s of stagesIn) {
+      // Each stage's own DC current (later stages usually feed only the preamp); blank means all of it.
+      const out = stageFigures(s, omega, s.current ?? i);
+      ripple *= out.attenuation;
+      out.rippleRms = ripple;
+      stages.push(out);
     }
-    warnings.push({
-      level: "info",
-      message:
-        "The reservoir estimate assumes the capacitor alone feeds the load for the whole ripple period, and ripple small beside the DC voltage; it errs on the high side.",
-    });
-
+    // No voltage is an input here, but a B+ filter is a high-voltage circuit by nature: always danger.
+    const warnings: Warning[] = [ALWAYS_DANGER, ...rippleWarnings(input, fr, stages)];
     return {
       outputs: { rippleFrequency: fr, ripplePeakToPeak: vpp, rippleRms, stages: stages as { [key: string]: OutputValue }[], finalRippleRms: ripple },
       warnings,
@@ -158,7 +129,6 @@ export const calculator = defineCalculator({
   explain(input: SupplyRippleInput, o) {
     const { loadCurrent: i, capacitance: c, lineFrequency: f, rectifier } = input;
     const { rippleFrequency: fr, ripplePeakToPeak: vpp, rippleRms } = o;
-    const omega = 2 * Math.PI * fr;
     const steps: Step[] = [
       {
         label: "Ripple frequency",
@@ -167,7 +137,7 @@ export const calculator = defineCalculator({
           : tex`f_r = f = ${texQuantity(fr, "Hz")}`,
       },
       {
-        label: "Ripple on the reservoir, peak to peak",
+        label: "Ripple on the reservoir, peak to peak: the whole load current drains it between charging peaks",
         latex: tex`V_{pp} = \frac{I}{f_r\,C} = \frac{${texQuantity(i, "A")}}{${texQuantity(fr, "Hz")} \times ${texQuantity(c, "F")}} = ${texQuantity(vpp, "V")}`,
       },
       {
@@ -177,25 +147,48 @@ export const calculator = defineCalculator({
     ];
     let before = rippleRms;
     (input.stages ?? []).forEach((s, n) => {
-      const out = o.stages[n] as { attenuation: number; rippleRms: number; dcDrop: number };
-      const xc = 1 / (omega * s.capacitance);
-      const tag = `Stage ${n + 1}`;
-      const att = out.attenuation.toPrecision(3);
-      if (s.kind === "rc") {
-        steps.push({
-          label: `${tag} (RC): attenuation`,
-          latex: tex`X_C = \frac{1}{2\pi f_r C} = ${texQuantity(xc, "Ω")}, \quad \frac{X_C}{\sqrt{R^2 + X_C^2}} = \frac{${texQuantity(xc, "Ω")}}{\sqrt{(${texQuantity(s.resistance, "Ω")})^2 + (${texQuantity(xc, "Ω")})^2}} = ${att}`,
-        });
-        steps.push({ label: `${tag} (RC): DC drop`, latex: tex`\Delta V = I R = ${texQuantity(i, "A")} \times ${texQuantity(s.resistance, "Ω")} = ${texQuantity(out.dcDrop, "V")}` });
-      } else {
-        steps.push({
-          label: `${tag} (LC): attenuation`,
-          latex: tex`X_L = ${texQuantity(omega * s.inductance, "Ω")}, \; X_C = ${texQuantity(xc, "Ω")}, \quad \left|\frac{X_C}{X_L - X_C}\right| = ${att}`,
-        });
-      }
-      steps.push({ label: `${tag}: ripple after it`, latex: tex`V_{rms} = ${texQuantity(before, "V")} \times ${att} = ${texQuantity(out.rippleRms, "V")}` });
+      const out = o.stages[n] as unknown as StageResult;
+      steps.push(...stageSteps(s, out, n + 1, 2 * Math.PI * fr, i));
+      steps.push({ label: `Stage ${n + 1}: ripple after it, the ripple reaching it times the fraction passed`, latex: tex`V_{rms} = ${texQuantity(before, "V")} \times ${out.attenuation.toPrecision(3)} = ${texQuantity(out.rippleRms, "V")}` });
       before = out.rippleRms;
     });
     return steps;
   },
 });
+
+/** The working of one stage, in words an apprentice can follow. */
+function stageSteps(s: StageInput, out: StageResult, n: number, omega: number, load: number): Step[] {
+  const att = out.attenuation.toPrecision(3);
+  const tI = texQuantity(out.current, "A");
+  const whose = s.current === undefined ? `the whole ${formatQuantity(load, "A")} load current, since no current was given for this stage` : "the current this stage carries";
+  const xc = 1 / (omega * s.capacitance);
+  if (s.kind === "rc") {
+    return [
+      {
+        label: `Stage ${n} (RC): the capacitor's reactance at the ripple frequency, and the share of ripple the resistor–capacitor divider lets through`,
+        latex: tex`X_C = \frac{1}{2\pi f_r C} = ${texQuantity(xc, "Ω")}, \quad \frac{X_C}{\sqrt{R^2 + X_C^2}} = \frac{${texQuantity(xc, "Ω")}}{\sqrt{(${texQuantity(s.resistance, "Ω")})^2 + (${texQuantity(xc, "Ω")})^2}} = ${att}`,
+      },
+      { label: `Stage ${n} (RC): DC drop across the resistor, Ohm's law with ${whose}`, latex: tex`\Delta V = I_{${n}} R = ${tI} \times ${texQuantity(s.resistance, "Ω")} = ${texQuantity(out.dcDrop, "V")}` },
+    ];
+  }
+  const lc = out as LcStageResult;
+  const r = lc.resistance;
+  const x = omega * omega * s.inductance * s.capacitance;
+  const y = omega * r * s.capacitance;
+  const rNote = s.resistance === undefined ? ` (not given: ${DEFAULT_CHOKE_RESISTANCE} Ω assumed, a typical filter choke)` : "";
+  return [
+    {
+      label: `Stage ${n} (LC): the choke's and the capacitor's reactances at the ripple frequency`,
+      latex: tex`X_L = 2\pi f_r L = ${texQuantity(omega * s.inductance, "Ω")}, \quad X_C = ${texQuantity(xc, "Ω")}`,
+    },
+    {
+      label: `Stage ${n} (LC): where choke and capacitor resonate. At f₀ they swap energy back and forth and the ripple grows instead of shrinking; only the choke's resistance R${rNote} limits the rise, to Q times`,
+      latex: tex`f_0 = \frac{1}{2\pi\sqrt{LC}} = ${texQuantity(lc.resonantFrequency, "Hz")}, \quad Q = \frac{1}{R}\sqrt{\frac{L}{C}} = ${texQuantity(lc.q, "")}`,
+    },
+    {
+      label: `Stage ${n} (LC): the share of ripple that gets through, the choke's resistance included. With the ripple frequency well above f₀ this is close to 1/(ω²LC − 1)`,
+      latex: tex`\frac{1}{\sqrt{(1 - \omega^2 LC)^2 + (\omega R C)^2}} = \frac{1}{\sqrt{(1 - ${texQuantity(x, "")})^2 + (${texQuantity(y, "")})^2}} = ${att}`,
+    },
+    { label: `Stage ${n} (LC): DC drop across the choke's winding resistance, Ohm's law with ${whose}`, latex: tex`\Delta V = I_{${n}} R = ${tI} \times ${texQuantity(r, "Ω")} = ${texQuantity(out.dcDrop, "V")}` },
+  ];
+}

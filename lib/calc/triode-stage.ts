@@ -3,6 +3,7 @@ import { formatQuantity, texQuantity, tex } from "./format";
 import { highVoltageWarning } from "./safety";
 import { TRIODE_NAMES, findTriode } from "./tables/triodes";
 import { solveOperatingPoint, type TriodeParams } from "./triode-model";
+import { regionWarnings } from "./triode-region";
 import { defineCalculator, type Computed, type Step, type Warning } from "./types";
 import { optionalQuantity, quantity } from "./units";
 
@@ -80,6 +81,7 @@ export type TriodeStageInput = z.output<typeof triodeStageSchema>;
 type N = number | null;
 export interface TriodeStageOutputs {
   [key: string]: N;
+  /** Plate to cathode (what the tube sees), V. */
   plateVoltage: N;
   plateCurrent: N;
   cathodeVoltage: N;
@@ -88,6 +90,8 @@ export interface TriodeStageOutputs {
   plateResistance: N;
   transconductance: N;
   gain: N;
+  /** Plate to chassis (what a meter from chassis reads): plate-to-cathode plus the cathode voltage, V. */
+  plateToChassisVoltage: N;
 }
 
 const MODEL_TEX = tex`E_1 = \frac{E_p}{K_P}\ln\!\left(1 + e^{K_P\left(\frac{1}{\mu} + \frac{E_g}{\sqrt{K_{VB} + E_p^2}}\right)}\right),\quad I_p = \frac{E_1^{E_X}}{K_{G1}}\left(1 + \operatorname{sgn} E_1\right)`;
@@ -123,7 +127,7 @@ export const calculator = defineCalculator({
     { name: "loadResistance", label: "Next stage's load (grid resistor)", unit: "Ω", required: false, control: "quantity", quantity: "resistance", help: "Optional: it sits in parallel with Ra for the signal." },
   ],
   outputs: [
-    { name: "plateVoltage", label: "Plate voltage (to cathode)", unit: "V" },
+    { name: "plateVoltage", label: "Plate voltage, plate to cathode (what the tube sees)", unit: "V" },
     { name: "plateCurrent", label: "Plate current", unit: "A" },
     { name: "cathodeVoltage", label: "Cathode voltage (bias)", unit: "V" },
     { name: "plateDissipation", label: "Plate dissipation", unit: "W" },
@@ -131,6 +135,7 @@ export const calculator = defineCalculator({
     { name: "plateResistance", label: "Plate resistance rp", unit: "Ω" },
     { name: "transconductance", label: "Transconductance gm", unit: "S" },
     { name: "gain", label: "Voltage gain (magnitude, inverting)", unit: "" },
+    { name: "plateToChassisVoltage", label: "Plate voltage, plate to chassis (what a meter reads)", unit: "V" },
   ],
   schema: triodeStageSchema,
   formulas: [
@@ -160,7 +165,7 @@ export const calculator = defineCalculator({
     }
     if (!solved.ok) {
       warnings.push({ level: "caution", message: solved.message });
-      const outputs: TriodeStageOutputs = { plateVoltage: null, plateCurrent: null, cathodeVoltage: null, plateDissipation: null, amplificationFactor: null, plateResistance: null, transconductance: null, gain: null };
+      const outputs: TriodeStageOutputs = { plateVoltage: null, plateCurrent: null, cathodeVoltage: null, plateDissipation: null, amplificationFactor: null, plateResistance: null, transconductance: null, gain: null, plateToChassisVoltage: null };
       return { outputs, warnings };
     }
 
@@ -183,12 +188,10 @@ export const calculator = defineCalculator({
     if (rk === 0) {
       warnings.push({ level: "info", message: "With no cathode resistor the grid sits at 0 V; a real tube then draws grid current on signal peaks, which the model ignores." });
     }
-    if (ip < 1e-6) {
-      warnings.push({ level: "caution", message: `The tube is close to cut-off (${formatQuantity(ip, "A")}); gain and linearity will be poor.` });
-    }
+    warnings.push(...regionWarnings(bPlus, ra, rk, ip, ep));
     warnings.push({ level: "info", message: "The model is a fit to typical curves; real tubes of one type differ by 20% or more, so expect your measured voltages to differ too." });
 
-    const outputs = { plateVoltage: ep, plateCurrent: ip, cathodeVoltage: vk, plateDissipation: dissipation, amplificationFactor: mu, plateResistance: rp, transconductance: gm, gain };
+    const outputs = { plateVoltage: ep, plateCurrent: ip, cathodeVoltage: vk, plateDissipation: dissipation, amplificationFactor: mu, plateResistance: rp, transconductance: gm, gain, plateToChassisVoltage: ep + vk };
     return { outputs, warnings };
   },
   explain(input: TriodeStageInput, o: TriodeStageOutputs) {
@@ -217,9 +220,9 @@ export const calculator = defineCalculator({
     const tGain = texQuantity(gain, "");
     const rpTex = rp === null ? tex`\infty` : texQuantity(rp, "Ω");
     steps.push(
-      { label: "Operating point (model current equals load-line current)", latex: tex`I_p = ${tIp4},\quad E_p = ${tB} - ${tIp4} \times ${texQuantity(ra + rk, "Ω", 4)} = ${texQuantity(ep, "V", 4)},\quad E_g = ${texQuantity(eg, "V", 4)}` },
+      { label: "Operating point (model current equals load-line current); E_p is plate to cathode, the voltage the tube itself sees", latex: tex`I_p = ${tIp4},\quad E_p = ${tB} - ${tIp4} \times ${texQuantity(ra + rk, "Ω", 4)} = ${texQuantity(ep, "V", 4)},\quad E_g = ${texQuantity(eg, "V", 4)}` },
       { label: "Cathode voltage", latex: tex`V_k = I_p R_k = ${tIp} \times ${tRk} = ${texQuantity(vk, "V")}` },
-      { label: "Plate to chassis, as a meter reads it", latex: tex`V_a = E_p + V_k = B^{+} - I_p R_a = ${texQuantity(ep + vk, "V", 4)}` },
+      { label: "Plate to chassis, as a meter from chassis reads it: the plate-to-cathode voltage above plus the cathode's own voltage", latex: tex`V_a = E_p + V_k = ${texQuantity(ep, "V", 4)} + ${texQuantity(vk, "V", 4)} = B^{+} - I_p R_a = ${texQuantity(ep + vk, "V", 4)}` },
       { label: "Plate dissipation", latex: tex`P_a = E_p I_p = ${texQuantity(ep, "V")} \times ${tIp} = ${texQuantity(dissipation, "W")}` },
       { label: "Small-signal parameters at the operating point", latex: tex`g_m = \frac{\partial I_p}{\partial E_g} = ${texQuantity(gm, "S")},\quad r_p = \left(\frac{\partial I_p}{\partial E_p}\right)^{-1} = ${rpTex},\quad \mu = g_m r_p = ${tMu}` },
     );
