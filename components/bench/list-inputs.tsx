@@ -5,6 +5,7 @@ import { Field } from "@/components/ui/field";
 import { buttonClass } from "@/components/ui/button";
 import type { InputMeta } from "@/lib/calc/types";
 import { errorAt } from "@/lib/bench/errors";
+import { DEFAULT_CHOKE_RESISTANCE } from "@/lib/calc/ripple-stages";
 
 /** The list inputs: filter stages, heaters, tube types and colour bands, each editable row by row. */
 
@@ -37,7 +38,7 @@ function ListFrame({ meta, children, actions }: { meta: InputMeta; children: Rea
 
 /** The module's help describes the JSON shape; on a form, say it in words. */
 function listHelp(meta: InputMeta): string {
-  if (meta.name === "stages") return "In order after the reservoir capacitor: a resistor or a choke, each followed by a capacitor to ground.";
+  if (meta.name === "stages") return "In order after the reservoir capacitor: a resistor or a choke, each followed by a capacitor to ground, and the current each one carries.";
   if (meta.name === "heaters") return "Each heater's rated voltage and current, from the tube's data.";
   if (meta.name === "bands") return "From the end nearest a lead; the tolerance band (gold, silver) last.";
   return meta.help ?? "";
@@ -52,10 +53,10 @@ function StagesInput({ meta }: { meta: InputMeta }) {
       meta={meta}
       actions={
         <>
-          <button type="button" className={small} onClick={() => append({ kind: "rc", resistance: "1k", inductance: "", capacitance: "20 uF" })}>
+          <button type="button" className={small} onClick={() => append({ kind: "rc", resistance: "1k", chokeResistance: "", inductance: "", capacitance: "20 uF", current: "" })}>
             Add RC stage
           </button>
-          <button type="button" className={small} onClick={() => append({ kind: "lc", resistance: "", inductance: "10 H", capacitance: "20 uF" })}>
+          <button type="button" className={small} onClick={() => append({ kind: "lc", resistance: "", chokeResistance: "", inductance: "10 H", capacitance: "20 uF", current: "" })}>
             Add LC stage
           </button>
         </>
@@ -88,6 +89,29 @@ function StagesInput({ meta }: { meta: InputMeta }) {
                 <Field id={`${idBase}-resistance`} label={`Stage ${i + 1} resistor`} suffix="Ω" autoComplete="off" error={errorAt(formState.errors, `${base}.resistance`)} {...register(`${base}.resistance`)} />
               )}
               <Field id={`${idBase}-capacitance`} label={`Stage ${i + 1} capacitor`} suffix="F" autoComplete="off" error={errorAt(formState.errors, `${base}.capacitance`)} {...register(`${base}.capacitance`)} />
+              {lc ? (
+                // The form keeps the winding apart from an RC stage's resistor; the schema calls both "resistance".
+                <Field
+                  id={`${idBase}-choke-resistance`}
+                  label={`Stage ${i + 1} choke resistance`}
+                  suffix="Ω"
+                  autoComplete="off"
+                  placeholder={`${DEFAULT_CHOKE_RESISTANCE}`}
+                  hint={`Measured across the choke, set off and discharged. Blank: ${DEFAULT_CHOKE_RESISTANCE} Ω, typical.`}
+                  error={errorAt(formState.errors, `${base}.resistance`)}
+                  {...register(`${base}.chokeResistance`)}
+                />
+              ) : null}
+              <Field
+                id={`${idBase}-current`}
+                label={`Stage ${i + 1} current`}
+                suffix="A"
+                autoComplete="off"
+                placeholder="whole load"
+                hint="Only what flows through this stage (later stages often feed just the preamp). Blank: the whole load current."
+                error={errorAt(formState.errors, `${base}.current`)}
+                {...register(`${base}.current`)}
+              />
             </div>
           </div>
         );

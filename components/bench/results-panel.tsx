@@ -81,6 +81,7 @@ function ListValue({ name, value }: { name: string; value: OutputValue[] }) {
             <th scope="col" className="pr-3 text-left font-normal">Stage</th>
             <th scope="col" className="pr-3 font-normal">Passes (fraction)</th>
             <th scope="col" className="pr-3 font-normal">Ripple after</th>
+            <th scope="col" className="pr-3 font-normal">Current</th>
             <th scope="col" className="font-normal">DC drop</th>
           </tr>
         </thead>
@@ -92,6 +93,7 @@ function ListValue({ name, value }: { name: string; value: OutputValue[] }) {
                 <th scope="row" className="pr-3 text-left">{i + 1}</th>
                 <td className="pr-3">{formatPlain(row.attenuation, "", 3)}</td>
                 <td className="pr-3">{formatPlain(row.rippleRms, "V")}</td>
+                <td className="pr-3">{row.current === undefined ? "" : formatPlain(row.current, "A")}</td>
                 <td>{formatPlain(row.dcDrop, "V")}</td>
               </tr>
             );

@@ -11,6 +11,8 @@ export const EXAMPLES: Record<string, Record<string, unknown>> = {
     loadCurrent: "60 mA",
     capacitance: "40 uF",
     rectifier: "full-wave",
+    // A 5Y3GT with the 40 µF a recap often fits: the page shows the data sheet's 20 µF limit straight away.
+    rectifierTube: "5Y3GT",
     stages: [{ kind: "rc", resistance: "470", capacitance: "20 uF" }],
   },
   "time-constant": { resistance: "220k", capacitance: "47 uF", initialVoltage: "350 V", targetVoltage: "30 V" },
