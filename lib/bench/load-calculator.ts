@@ -8,6 +8,7 @@ type Loader = () => Promise<{ calculator: unknown }>;
 
 const LOADERS: Record<string, Loader> = {
   "arc-clearance": () => import("@/lib/calc/arc-clearance"),
+  "b-plus": () => import("@/lib/calc/b-plus"),
   bleeder: () => import("@/lib/calc/bleeder"),
   "cathode-bias": () => import("@/lib/calc/cathode-bias"),
   "colour-code": () => import("@/lib/calc/colour-code"),

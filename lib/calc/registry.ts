@@ -1,5 +1,6 @@
 import type { Calculator } from "./types";
 import { calculator as arcClearance } from "./arc-clearance";
+import { calculator as bPlus } from "./b-plus";
 import { calculator as bleeder } from "./bleeder";
 import { calculator as cathodeBias } from "./cathode-bias";
 import { calculator as colourCode } from "./colour-code";
@@ -23,6 +24,7 @@ export const calculators: readonly Calculator[] = [
   droppingResistor,
   heaterString,
   supplyRipple,
+  bPlus,
   timeConstant,
   bleeder,
   seriesLamp,

@@ -1,0 +1,218 @@
+import { z } from "zod";
+import { formatQuantity, texQuantity, tex } from "./format";
+import { highVoltageWarning } from "./safety";
+import { findRectifier, RECTIFIERS, RECTIFIER_SOURCE, RECTIFIER_TYPES, type RectifierEntry } from "./tables/rectifiers";
+import { defineCalculator, type Step, type Warning } from "./types";
+import { optionalQuantity, quantity, quantityWithDefault } from "./units";
+
+/**
+ * B+ from a transformer, rectifier and reservoir capacitor: the textbook capacitor-input estimate
+ * V_dc ≈ √2·V_rms − rectifier drop − I·R_winding − V_pp/2, with V_pp = I/(f_r·C) (Radiotron Designer's
+ * Handbook 4th ed., rectification and capacitor-input filters; Floyd, Electronic Devices, the filtered
+ * rectifier). A tube's drop is its data-sheet figure scaled by Child's three-halves-power law,
+ * I ∝ V^(3/2), so V ∝ I^(2/3) (any electronics-physics text, from memory).
+ */
+
+export const B_PLUS_RECTIFIERS = ["full-wave", "bridge", "half-wave"] as const;
+type Circuit = (typeof B_PLUS_RECTIFIERS)[number];
+
+const TUBES = new Map<string, RectifierEntry>(RECTIFIERS.map((r) => [r.type, r]));
+/** Ripple this large beside the charged peak (peak-to-peak over peak after drops) puts the simple estimate out of its range. */
+const BIG_RIPPLE = 0.2;
+
+const tubeName = z
+  .unknown()
+  .transform((raw, ctx): string | undefined => {
+    if (raw === undefined || raw === null || (typeof raw === "string" && raw.trim() === "")) return undefined;
+    if (typeof raw !== "string") {
+      ctx.addIssue({ code: "custom", message: "Rectifier tube must be a type number such as 5Y3GT" });
+      return z.NEVER;
+    }
+    const row = findRectifier(raw);
+    if (!row) {
+      ctx.addIssue({ code: "custom", message: `Rectifier tube "${raw.trim()}" is not in the built-in table; give its drop under rectifierDrop instead` });
+      return z.NEVER;
+    }
+    return row.type;
+  })
+  .optional();
+
+export const bPlusSchema = z
+  .object({
+    secondaryVoltage: quantity("voltage", { positive: true, min: 1, max: 5000, label: "Secondary voltage" }),
+    rectifier: z.enum(B_PLUS_RECTIFIERS, { error: 'Rectifier must be "full-wave", "bridge" or "half-wave"' }),
+    rectifierTube: tubeName,
+    rectifierDrop: optionalQuantity("voltage", { nonNegative: true, max: 500, label: "Rectifier drop" }),
+    loadCurrent: quantity("current", { positive: true, min: 1e-6, max: 10, label: "Load current" }),
+    capacitance: quantity("capacitance", { positive: true, min: 1e-9, max: 10, label: "Reservoir capacitance" }),
+    lineFrequency: quantityWithDefault("frequency", 60, { positive: true, min: 1, max: 10_000, label: "Line frequency" }),
+    windingResistance: quantityWithDefault("resistance", 0, { nonNegative: true, max: 1e6, label: "Winding resistance" }),
+  })
+  .superRefine((v, ctx) => {
+    if (v.rectifierTube === undefined) return;
+    if (v.rectifierDrop !== undefined) {
+      ctx.addIssue({ code: "custom", path: ["rectifierTube"], message: "Rectifier tube: give either a tube or a rectifier drop, not both" });
+      return;
+    }
+    const circuit = TUBES.get(v.rectifierTube)!.circuit;
+    if (v.rectifier === "bridge") {
+      ctx.addIssue({ code: "custom", path: ["rectifierTube"], message: `Rectifier tube: one ${v.rectifierTube} cannot make a bridge; give the drop of each rectifier under rectifierDrop instead` });
+    } else if (circuit === "half-wave" && v.rectifier !== "half-wave") {
+      ctx.addIssue({ code: "custom", path: ["rectifierTube"], message: `Rectifier tube: the ${v.rectifierTube} is a half-wave rectifier; choose the half-wave circuit, or give a drop instead` });
+    }
+  });
+
+export type BPlusInput = z.output<typeof bPlusSchema>;
+
+const rippleFrequencyOf = (f: number, rectifier: Circuit) => (rectifier === "half-wave" ? f : 2 * f);
+/** Drop of one rectifier at the load current: the given figure, or the tube's scaled as I^(2/3). */
+function dropOf(input: BPlusInput, tube: RectifierEntry | undefined): number {
+  if (tube) return tube.tubeDrop * Math.cbrt((input.loadCurrent / tube.tubeDropCurrent) ** 2);
+  return input.rectifierDrop ?? 0;
+}
+
+const ESTIMATE: Warning = {
+  level: "info",
+  message:
+    "This is the textbook capacitor-input estimate: usually within 10–15 % of what a meter shows (common practice). It ignores the transformer's " +
+    "leakage reactance and the extra drop of the charging pulses, so loaded B+ often reads lower. With no load B+ rises toward the peak: " +
+    "compare the capacitors' voltage rating with the peak, not with the loaded figure.",
+};
+const NO_DROP: Warning = {
+  level: "info",
+  message: "No rectifier drop given, so none is taken. Silicon diodes drop about 1 V each; tube rectifiers 15–60 V (their data sheets give it).",
+};
+
+export const calculator = defineCalculator({
+  slug: "b-plus",
+  title: "B+ from the transformer",
+  purpose: "The DC a transformer, rectifier and reservoir capacitor give under load, and its ripple.",
+  group: "supplies",
+  inputs: [
+    { name: "secondaryVoltage", label: "Secondary voltage (rms)", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "For a centre-tapped full-wave circuit, each half (centre tap to one end, the 350 of 350-0-350)." },
+    { name: "rectifier", label: "Rectifier circuit", unit: "", required: true, control: "select", options: B_PLUS_RECTIFIERS, help: "Full-wave here means a centre-tapped winding with two rectifiers (or one two-plate tube)." },
+    { name: "rectifierTube", label: "Rectifier tube", unit: "", required: false, control: "select", options: RECTIFIER_TYPES, help: "From the built-in table: its drop, rated current and largest reservoir capacitor are used." },
+    { name: "rectifierDrop", label: "Rectifier drop", unit: "V", required: false, control: "quantity", quantity: "voltage", help: "Or the drop of one rectifier at this current (a bridge counts two)." },
+    { name: "loadCurrent", label: "Load current", unit: "A", required: true, control: "quantity", quantity: "current", help: "Total DC current: every plate, screen and bleeder." },
+    { name: "capacitance", label: "Reservoir capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance", help: "The first capacitor after the rectifier." },
+    { name: "lineFrequency", label: "Mains frequency", unit: "Hz", required: false, default: 60, control: "quantity", quantity: "frequency" },
+    { name: "windingResistance", label: "Winding resistance", unit: "Ω", required: false, default: 0, control: "quantity", quantity: "resistance", help: "DC resistance of the winding in the current's path (one half for centre-tapped)." },
+  ],
+  outputs: [
+    { name: "peakVoltage", label: "Peak of the secondary", unit: "V" },
+    { name: "rippleFrequency", label: "Ripple frequency", unit: "Hz" },
+    { name: "ripplePeakToPeak", label: "Ripple, peak to peak", unit: "V" },
+    { name: "rectifierVoltageDrop", label: "Rectifier drop at this current", unit: "V" },
+    { name: "dcOutput", label: "B+ under load (estimate)", unit: "V" },
+    { name: "maxReservoirCapacitance", label: "Largest reservoir the tube allows", unit: "F" },
+  ],
+  schema: bPlusSchema,
+  formulas: [
+    { label: "Peak", latex: tex`V_{pk} = \sqrt{2}\,V_{rms}` },
+    { label: "Ripple", latex: tex`f_r = 2f\ (\text{full-wave, bridge}),\ f\ (\text{half-wave}); \quad V_{pp} = \frac{I}{f_r\,C}` },
+    { label: "Tube drop at the load current", latex: tex`V_t = V_{t,0} \left(\frac{I}{I_0}\right)^{2/3}` },
+    { label: "B+ under load", latex: tex`V_{dc} \approx V_{pk} - n\,V_t - I\,R_w - \frac{V_{pp}}{2}, \quad n = 2\ \text{for a bridge}` },
+  ],
+  references: [
+    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Rectification chapter: capacitor-input filters, regulation and the rectifier's peak-current limits (chapter cited from memory)" },
+    { title: "Floyd, Electronic Devices", detail: "Power supplies chapter: the capacitor-input filter, V_r(pp) and V_DC ≈ V_p − V_r(pp)/2 (from memory)" },
+    { title: "Built-in rectifier table", detail: RECTIFIER_SOURCE },
+  ],
+  whyItMatters:
+    "A restored set's B+ is the first reading that says whether the supply is right. Knowing what to expect from the " +
+    "transformer, the rectifier and the reservoir tells you whether a low reading means a tired rectifier or a heavy load, " +
+    "and a larger reservoir than the rectifier tube's data sheet allows shortens the tube's life — or makes it arc.",
+  compute(input: BPlusInput) {
+    const { secondaryVoltage: vs, rectifier, loadCurrent: i, capacitance: c, lineFrequency: f, windingResistance: rw } = input;
+    const tube = input.rectifierTube === undefined ? undefined : TUBES.get(input.rectifierTube);
+    const peakVoltage = Math.SQRT2 * vs;
+    const rippleFrequency = rippleFrequencyOf(f, rectifier);
+    const ripplePeakToPeak = i / (rippleFrequency * c);
+    const rectifierVoltageDrop = (rectifier === "bridge" ? 2 : 1) * dropOf(input, tube);
+    const charged = peakVoltage - rectifierVoltageDrop - i * rw;
+    const raw = charged - ripplePeakToPeak / 2;
+    const dcOutput = raw > 0 ? raw : 0;
+
+    const warnings: Warning[] = highVoltageWarning(vs, peakVoltage);
+    warnings.push(ESTIMATE);
+    if (!tube && input.rectifierDrop === undefined) warnings.push(NO_DROP);
+    if (raw <= 0 || ripplePeakToPeak > BIG_RIPPLE * charged) {
+      warnings.push({
+        level: "caution",
+        message:
+          `The ripple (${formatQuantity(ripplePeakToPeak, "V")} peak to peak) is large beside the ${formatQuantity(charged > 0 ? charged : 0, "V")} the reservoir charges to, ` +
+          "outside the range where this estimate holds. A larger reservoir or a lighter load brings it back.",
+      });
+    }
+    if (tube) {
+      if (c > tube.maxInputCapacitance * (1 + 1e-9)) {
+        warnings.push({
+          level: "caution",
+          message:
+            `The ${formatQuantity(c, "F")} reservoir is more than the ${formatQuantity(tube.maxInputCapacitance, "F")} the ${tube.type} data sheet allows: the charging pulses ` +
+            "exceed its peak plate current, which shortens its life or makes it arc. Keep the first capacitor within the figure and put the rest after a choke or resistor.",
+        });
+      }
+      if (i > tube.maxCurrent * (1 + 1e-9)) {
+        warnings.push({
+          level: "caution",
+          message: `The load is more than the ${tube.type}'s rated ${formatQuantity(tube.maxCurrent, "A")} with a capacitor-input filter; the tube will run hot and wear out early. Use a larger rectifier or lighten the load.`,
+        });
+      }
+      // Peak inverse voltage (centre-tapped full-wave, or half-wave with a reservoir): the winding's negative
+      // peak plus the charged reservoir on the cathode; it approaches twice the peak with no load.
+      const piv = peakVoltage + (charged > 0 ? charged : 0);
+      if (tube.peakInverseVoltage !== undefined && piv > tube.peakInverseVoltage) {
+        warnings.push({
+          level: "caution",
+          message:
+            `Under this load each plate sees about ${formatQuantity(piv, "V")} in reverse (the peak plus the charged reservoir), more than the ${tube.type}'s rated ` +
+            `${formatQuantity(tube.peakInverseVoltage, "V")} peak inverse voltage; with no load it approaches twice the peak.`,
+        });
+      }
+    }
+    return {
+      outputs: {
+        peakVoltage,
+        rippleFrequency,
+        ripplePeakToPeak,
+        rectifierVoltageDrop,
+        dcOutput,
+        maxReservoirCapacitance: tube ? tube.maxInputCapacitance : null,
+      },
+      warnings,
+    };
+  },
+  explain(input: BPlusInput, o) {
+    const { secondaryVoltage: vs, rectifier, loadCurrent: i, capacitance: c, lineFrequency: f, windingResistance: rw } = input;
+    const tube = input.rectifierTube === undefined ? undefined : TUBES.get(input.rectifierTube);
+    const steps: Step[] = [
+      { label: "Peak of the secondary", latex: tex`V_{pk} = \sqrt{2} \times ${texQuantity(vs, "V", 4)} = ${texQuantity(o.peakVoltage, "V", 4)}` },
+      {
+        label: "Ripple frequency",
+        latex: rectifier === "half-wave" ? tex`f_r = f = ${texQuantity(f, "Hz")}` : tex`f_r = 2f = 2 \times ${texQuantity(f, "Hz")} = ${texQuantity(o.rippleFrequency, "Hz")}`,
+      },
+      {
+        label: "Ripple on the reservoir, peak to peak",
+        latex: tex`V_{pp} = \frac{I}{f_r\,C} = \frac{${texQuantity(i, "A")}}{${texQuantity(o.rippleFrequency, "Hz")} \times ${texQuantity(c, "F")}} = ${texQuantity(o.ripplePeakToPeak, "V")}`,
+      },
+    ];
+    const n = rectifier === "bridge" ? tex`2 \times ` : "";
+    steps.push(
+      tube
+        ? {
+            label: `${tube.type} drop at this current (data sheet: ${formatQuantity(tube.tubeDrop, "V")} at ${formatQuantity(tube.tubeDropCurrent, "A")})`,
+            latex: tex`V_t = ${texQuantity(tube.tubeDrop, "V")} \times \left(\frac{${texQuantity(i, "A")}}{${texQuantity(tube.tubeDropCurrent, "A")}}\right)^{2/3} = ${texQuantity(o.rectifierVoltageDrop, "V")}`,
+          }
+        : { label: "Rectifier drop", latex: tex`${n}${texQuantity(input.rectifierDrop ?? 0, "V")} = ${texQuantity(o.rectifierVoltageDrop, "V")}` },
+      {
+        label: "B+ under load (estimate)",
+        latex: tex`V_{dc} \approx ${texQuantity(o.peakVoltage, "V", 4)} - ${texQuantity(o.rectifierVoltageDrop, "V")} - ${texQuantity(i, "A")} \times ${texQuantity(rw, "Ω")} - \frac{${texQuantity(o.ripplePeakToPeak, "V")}}{2} = ${texQuantity(o.dcOutput, "V", 4)}`,
+      },
+    );
+    if (o.maxReservoirCapacitance !== null && tube) {
+      steps.push({ label: `Largest reservoir the ${tube.type} allows`, latex: tex`C \le ${texQuantity(o.maxReservoirCapacitance, "F")}` });
+    }
+    return steps;
+  },
+});
