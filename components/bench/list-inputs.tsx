@@ -6,6 +6,7 @@ import { buttonClass } from "@/components/ui/button";
 import type { InputMeta } from "@/lib/calc/types";
 import { errorAt } from "@/lib/bench/errors";
 import { DEFAULT_CHOKE_RESISTANCE } from "@/lib/calc/ripple-stages";
+import { PilotLampInput } from "./pilot-lamp-input";
 
 /** The list inputs: filter stages, heaters, tube types and colour bands, each editable row by row. */
 
@@ -16,6 +17,7 @@ export function ListInput({ meta }: { meta: InputMeta; slug: string }) {
   if (meta.name === "stages") return <StagesInput meta={meta} />;
   if (meta.name === "heaters") return <HeatersInput meta={meta} />;
   if (meta.name === "bands") return <BandsInput meta={meta} />;
+  if (meta.name === "pilotLamp") return <PilotLampInput meta={meta} />;
   return <NamesInput meta={meta} />;
 }
 

@@ -5,6 +5,7 @@ import type { OutputMeta, OutputValue, Warning } from "@/lib/calc/types";
 import { formatOutput, formatPlain, outputLabel } from "@/lib/bench/display";
 import { HEADLINES } from "@/lib/bench/examples";
 import { BAND_PAINT } from "./list-inputs";
+import { ShuntsTable } from "./shunts-table";
 
 /** Outputs whose value is bad news, so the figure is shown in the hazard or caution colour. */
 function tone(slug: string, name: string, value: OutputValue): string {
@@ -45,7 +46,7 @@ export function ResultsPanel({ slug, outputs, run }: { slug: string; outputs: re
       {rest.length ? (
         <dl className="divide-y divide-rule rounded-card border border-rule bg-panel">
           {rest.map((o) => (
-            <div key={o.name} className={`px-4 py-2.5 ${o.name === "stages" ? "" : "flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1"}`}>
+            <div key={o.name} className={`px-4 py-2.5 ${o.name === "stages" || o.name === "shunts" ? "" : "flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1"}`}>
               <dt className="text-muted">{outputLabel(slug, o)}</dt>
               <dd data-testid={`output-${o.name}`} className={`font-mono font-bold ${tone(slug, o.name, values[o.name])}`}>
                 {Array.isArray(values[o.name]) ? <ListValue name={o.name} value={values[o.name] as OutputValue[]} /> : formatOutput(slug, o, values[o.name])}
@@ -72,6 +73,7 @@ function ListValue({ name, value }: { name: string; value: OutputValue[] }) {
       </span>
     );
   }
+  if (name === "shunts") return <ShuntsTable value={value} />;
   if (name === "stages") {
     if (value.length === 0) return <span className="font-sans font-normal text-muted">no stages</span>;
     return (

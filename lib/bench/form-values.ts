@@ -49,6 +49,7 @@ export function initialValues(inputs: readonly InputMeta[], given: FormValues): 
   for (const meta of inputs) {
     const v = given[meta.name] ?? meta.default;
     if (meta.control === "boolean") out[meta.name] = v === undefined ? true : v === true || v === "true" || v === "on";
+    else if (meta.name === "pilotLamp") out[meta.name] = lampValue(v);
     else if (meta.control === "list") out[meta.name] = listValue(meta.name, v);
     else out[meta.name] = text(v);
   }
@@ -83,6 +84,9 @@ export function toRaw(slug: string, inputs: readonly InputMeta[], values: FormVa
     const v = values[meta.name];
     if (meta.control === "boolean") {
       out[meta.name] = Boolean(v);
+    } else if (meta.name === "pilotLamp") {
+      const lamp = cleanLamp(v);
+      if (lamp) out[meta.name] = lamp;
     } else if (meta.control === "list") {
       const list = cleanList(meta.name, Array.isArray(v) ? v : []);
       if (list.length) out[meta.name] = list;
@@ -111,9 +115,25 @@ function cleanList(name: string, arr: unknown[]): unknown[] {
   return arr.map((x) => String(x ?? "").trim()).filter(Boolean);
 }
 
+/** The heater string's pilot lamp: one object of three quantity texts, sent only when something is typed. */
+function lampValue(v: unknown): Record<string, string> {
+  const o = (v && typeof v === "object" ? v : {}) as Record<string, unknown>;
+  return { voltage: text(o.voltage), current: text(o.current), rectifierCurrent: text(o.rectifierCurrent) };
+}
+
+function cleanLamp(v: unknown): Record<string, string> | null {
+  const o = lampValue(v);
+  const voltage = o.voltage.trim();
+  const current = o.current.trim();
+  const rectifierCurrent = o.rectifierCurrent.trim();
+  if (!voltage && !current && !rectifierCurrent) return null;
+  return rectifierCurrent ? { voltage, current, rectifierCurrent } : { voltage, current };
+}
+
 /** Inputs most people leave alone, folded under "More figures" until needed. */
 export const ADVANCED: Record<string, { title: string; fields: readonly string[] }> = {
   "cathode-bias": { title: "Tube figures, for a better bypass estimate", fields: ["amplificationFactor", "plateResistance", "plateLoad", "transconductance"] },
   "triode-stage": { title: "Model parameters (to override the table or for another tube)", fields: ["mu", "ex", "kg1", "kp", "kvb"] },
+  "heater-string": { title: "Pilot lamp on the rectifier's heater tap", fields: ["pilotLamp"] },
   "arc-clearance": { title: "Air and safety factor", fields: ["pressure", "temperature", "safetyFactor"] },
 };
