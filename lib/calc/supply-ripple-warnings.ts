@@ -4,11 +4,25 @@ import type { SupplyRippleInput } from "./supply-ripple";
 import { RECTIFIER_SOURCE, findRectifier } from "./tables/rectifiers";
 import type { Warning } from "./types";
 
-/** Cautions and notes of the supply-ripple calculator (the danger warning is added by compute). */
-export function rippleWarnings(input: SupplyRippleInput, fr: number, stages: readonly StageResult[]): Warning[] {
-  const warnings: Warning[] = [];
+const CHOKE_MODEL: Warning = {
+  level: "info",
+  message:
+    "Each choke is modelled as its inductance in series with its DC resistance; the load's own resistance, which damps a resonance further, is left out, so a resonant peak here errs on the high side. " +
+    "A choke-input supply (choke straight after the rectifier, no reservoir capacitor) behaves differently and needs at least the critical inductance, " +
+    "about R_load/1000 henries at 60 Hz full-wave (common practice); this calculator does not model it.",
+};
+
+const RESERVOIR_MODEL: Warning = {
+  level: "info",
+  message:
+    "The reservoir estimate assumes the capacitor alone feeds the load for the whole ripple period, and ripple small beside the DC voltage; it errs on the high side.",
+};
+
+/** Cautions and notes of the supply-ripple calculator, pushed onto `warnings` (compute puts the danger warning first). */
+export function rippleWarnings(input: SupplyRippleInput, fr: number, stages: readonly StageResult[], warnings: Warning[]): void {
   const stagesIn = input.stages ?? [];
-  const assumed: number[] = [];
+  let assumed = "";
+  let hasChoke = false;
   let upstream = input.loadCurrent;
   for (let k = 0; k < stages.length; k++) {
     const s = stagesIn[k];
@@ -24,7 +38,8 @@ export function rippleWarnings(input: SupplyRippleInput, fr: number, stages: rea
     }
     upstream = out.current;
     if (s.kind !== "lc") continue;
-    if (s.resistance === undefined) assumed.push(k + 1);
+    hasChoke = true;
+    if (s.resistance === undefined) assumed += assumed ? `, ${k + 1}` : String(k + 1);
     const lc = out as LcStageResult;
     const f0 = lc.resonantFrequency;
     // Common practice: keep the LC resonance at a third of the ripple frequency or lower.
@@ -42,40 +57,26 @@ export function rippleWarnings(input: SupplyRippleInput, fr: number, stages: rea
       });
     }
   }
-  if (assumed.length) {
+  if (assumed) {
     warnings.push({
       level: "info",
       message:
-        `Choke resistance not given for stage ${assumed.join(", ")}: ${DEFAULT_CHOKE_RESISTANCE} Ω assumed, typical of a receiver filter choke (they measure roughly 50–300 Ω, common practice). ` +
+        `Choke resistance not given for stage ${assumed}: ${DEFAULT_CHOKE_RESISTANCE} Ω assumed, typical of a receiver filter choke (they measure roughly 50–300 Ω, common practice). ` +
         "Measure yours across the choke's leads with the set off and the capacitors discharged; it sets the DC drop and how high a resonance can peak.",
     });
   }
-  if (stagesIn.some((s) => s.kind === "lc")) {
-    warnings.push({
-      level: "info",
-      message:
-        "Each choke is modelled as its inductance in series with its DC resistance; the load's own resistance, which damps a resonance further, is left out, so a resonant peak here errs on the high side. " +
-        "A choke-input supply (choke straight after the rectifier, no reservoir capacitor) behaves differently and needs at least the critical inductance, " +
-        "about R_load/1000 henries at 60 Hz full-wave (common practice); this calculator does not model it.",
-    });
-  }
-  warnings.push(...tubeWarnings(input));
-  warnings.push({
-    level: "info",
-    message:
-      "The reservoir estimate assumes the capacitor alone feeds the load for the whole ripple period, and ripple small beside the DC voltage; it errs on the high side.",
-  });
-  return warnings;
+  if (hasChoke) warnings.push(CHOKE_MODEL);
+  if (input.rectifierTube) tubeWarnings(input, warnings);
+  warnings.push(RESERVOIR_MODEL);
 }
 
 /** The row's source up to its first remark, brackets flattened, for quoting inside a sentence. */
 const cite = (source: string) => source.split(";")[0].replace(/\s*\(([^)]*)\)/g, ", $1");
 
 /** The chosen rectifier tube against its data sheet: reservoir size, current, and circuit. */
-function tubeWarnings(input: SupplyRippleInput): Warning[] {
+function tubeWarnings(input: SupplyRippleInput, out: Warning[]): void {
   const tube = input.rectifierTube ? findRectifier(input.rectifierTube) : undefined;
-  if (!tube) return [];
-  const out: Warning[] = [];
+  if (!tube) return;
   const cMax = formatQuantity(tube.maxInputCapacitance, "F");
   const iMax = formatQuantity(tube.maxCurrent, "A");
   if (input.capacitance > tube.maxInputCapacitance * (1 + 1e-9)) {
@@ -102,5 +103,4 @@ function tubeWarnings(input: SupplyRippleInput): Warning[] {
       `${tube.type}, from its data sheet: filter-input capacitor up to ${cMax}, DC output up to ${iMax}, about ${formatQuantity(tube.tubeDrop, "V")} across the tube at ${formatQuantity(tube.tubeDropCurrent, "A")}. ` +
       `${RECTIFIER_SOURCE}.`,
   });
-  return out;
 }

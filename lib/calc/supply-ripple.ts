@@ -120,7 +120,8 @@ export const calculator = defineCalculator({
       stages.push(out);
     }
     // No voltage is an input here, but a B+ filter is a high-voltage circuit by nature: always danger.
-    const warnings: Warning[] = [ALWAYS_DANGER, ...rippleWarnings(input, fr, stages)];
+    const warnings: Warning[] = [ALWAYS_DANGER];
+    rippleWarnings(input, fr, stages, warnings);
     return {
       outputs: { rippleFrequency: fr, ripplePeakToPeak: vpp, rippleRms, stages: stages as { [key: string]: OutputValue }[], finalRippleRms: ripple },
       warnings,
