@@ -9,6 +9,7 @@ import { can } from "@/lib/auth/member";
 import { formatQuantity } from "@/lib/calc/format";
 import { getCalculator } from "@/lib/calc/registry";
 import { benchHref } from "@/lib/calc/share";
+import { reopenInputs } from "@/lib/bench/reopen-inputs";
 import { formatDateTime } from "@/lib/jobs/dates";
 
 export const metadata: Metadata = { title: "Calculations" };
@@ -62,7 +63,7 @@ export default async function CalculationsPage({ params }: JobPageProps) {
                 </div>
               ))}
             </dl>
-            <Link href={benchHref(c.slug, c.inputs)} className="mt-4 w-fit font-bold text-signal underline underline-offset-4">
+            <Link href={benchHref(c.slug, calc ? reopenInputs(calc.inputs, c.inputs) : c.inputs)} className="mt-4 w-fit font-bold text-signal underline underline-offset-4">
               Reopen in the Bench
             </Link>
           </li>
