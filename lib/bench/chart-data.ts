@@ -47,7 +47,8 @@ export function bleederDischarge(inputs: Rec, outputs: Rec): Discharge | null {
   const r = num(outputs.suggestedResistance) ?? num(outputs.maxResistance);
   const safe = num(inputs.safeVoltage);
   if (v0 === undefined || c === undefined || r === undefined || safe === undefined) return null;
-  return dischargeCurve(v0, r * c, safe, "Safe level", num(inputs.maxTime));
+  // The line is the residual-voltage limit the result is measured against (IEC 60204-1 §6.2.4 by default), never a "safe" level.
+  return dischargeCurve(v0, r * c, safe, "Residual-voltage limit", num(inputs.maxTime));
 }
 
 export interface Ripple {

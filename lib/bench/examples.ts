@@ -38,7 +38,8 @@ export const HEADLINES: Record<string, readonly string[]> = {
   "supply-ripple": ["rippleRms", "finalRippleRms"],
   "b-plus": ["dcOutput", "ripplePeakToPeak"],
   "time-constant": ["timeConstant", "timeToTarget"],
-  bleeder: ["suggestedResistance", "suggestedRating"],
+  // The rating that allows for the voltage as well as the power (a chain's cautions follow in the notes).
+  bleeder: ["suggestedResistance", "resistorRating"],
   "series-lamp": ["maxCurrent", "setVoltage"],
   fuse: ["suggestedRating", "runningCurrent"],
   "arc-clearance": ["minimumGap", "recommendedClearance"],

@@ -6,7 +6,7 @@ import { bleederDischarge, timeConstantDischarge } from "@/lib/bench/chart-data"
 import type { ChartProps } from "../chart-slot";
 import { C, ChartFrame, fmt, tick } from "./chart-frame";
 
-/** Capacitor voltage falling through the resistor, with the safe level (and the bleeder's deadline) marked. */
+/** Capacitor voltage falling through the resistor, with the limit or target level (and the bleeder's deadline) marked. */
 export default function DischargeChart({ slug, inputs, outputs }: ChartProps) {
   const d = slug === "bleeder" ? bleederDischarge(inputs, outputs) : timeConstantDischarge(inputs, outputs);
   if (!d) return null;
@@ -32,12 +32,13 @@ export default function DischargeChart({ slug, inputs, outputs }: ChartProps) {
             labelFormatter={(t) => formatQuantity(Number(t), "s")}
             contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
           />
-          <ReferenceLine y={d.safe} stroke={C.ok} strokeDasharray="6 4" strokeWidth={2} label={{ value: `${d.safeLabel} ${formatQuantity(d.safe, "V")}`, fill: C.ok, position: "insideTopRight", fontSize: 13 }} />
+          {/* A reference line in the neutral signal colour: green would read as "safe below here", which no limit is. */}
+          <ReferenceLine y={d.safe} stroke={C.signal} strokeDasharray="6 4" strokeWidth={2} label={{ value: `${d.safeLabel} (${formatQuantity(d.safe, "V")})`, fill: C.signal, position: "insideTopRight", fontSize: 13 }} />
           {d.deadline !== undefined ? (
             <ReferenceLine x={d.deadline} stroke={C.hazard} strokeDasharray="4 4" label={{ value: "Time allowed", fill: C.hazard, position: "insideTopLeft", fontSize: 13 }} />
           ) : null}
           <Line type="monotone" dataKey="v" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} name="Voltage" />
-          <ReferenceDot x={d.tSafe} y={d.safe} r={6} fill={late ? C.hazard : C.ok} stroke={C.panel} strokeWidth={2} />
+          <ReferenceDot x={d.tSafe} y={d.safe} r={6} fill={late ? C.hazard : C.signal} stroke={C.panel} strokeWidth={2} />
         </LineChart>
       </ResponsiveContainer>
     </ChartFrame>
