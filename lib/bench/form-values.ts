@@ -18,7 +18,7 @@ export const MODES: Record<string, { modes: readonly { id: string; label: string
   "colour-code": {
     modes: [
       { id: "bands", label: "Read the bands", fields: ["bands"] },
-      { id: "value", label: "Code a value", fields: ["resistance", "tolerance"] },
+      { id: "value", label: "Code a value", fields: ["resistance", "tolerance", "temperatureCoefficient"] },
     ],
   },
 };

@@ -1,100 +1,18 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity, tex } from "./format";
-import {
-  DIGIT,
-  MULTIPLIER_EXPONENT,
-  TOLERANCE,
-  digitColour,
-  multiplierColour,
-  parseColour,
-  toleranceColour,
-  type Colour,
-} from "./tables/colour-code";
+import { texQuantity, tex } from "./format";
+import { decodeBands, encodeFive, encodeResistance, type Decoded } from "./colour-code-bands";
+import { OLDER_CHARTS, TOLERANCE, TOLERANCE_LETTER, toleranceColour, type Colour } from "./tables/colour-code";
 import { defineCalculator, type Step, type Warning } from "./types";
 import { optionalQuantity, tidy } from "./units";
 
+export { decodeBands, encodeResistance } from "./colour-code-bands";
+
 /**
- * IEC 60062 resistor colour code, both ways: 3-, 4- or 5-band markings to a resistance and
- * tolerance, or a resistance and tolerance to the bands. Two significant figures give four
- * bands (every E6–E24 value), three give five (E48/E96 values); no band means ±20 %.
+ * IEC 60062:2016 resistor colour code, both ways: 3-, 4-, 5- or 6-band markings to a resistance,
+ * tolerance and (six bands) temperature coefficient, or a value to its bands. Two significant
+ * figures give four bands (every E6–E24 value), three give five (E48/E96 values), and a
+ * temperature coefficient adds a sixth; no band means ±20 %.
  */
-
-type Decoded = { ok: true; digits: number[]; exponent: number; resistance: number; tolerance: number; colours: Colour[] };
-type Failure = { ok: false; field: "bands" | "resistance" | "tolerance"; message: string };
-
-const ORDINAL = ["First", "Second", "Third", "Fourth", "Fifth"];
-
-/** Read a marking. Bands are listed from the end nearest a lead, the tolerance band last. */
-export function decodeBands(names: readonly string[]): Decoded | Failure {
-  const n = names.length;
-  if (n < 3 || n > 5) return { ok: false, field: "bands", message: `Bands: give 3, 4 or 5 colours (got ${n})` };
-  const colours: Colour[] = [];
-  for (let i = 0; i < n; i++) {
-    const c = parseColour(names[i]);
-    if (!c) return { ok: false, field: "bands", message: `${ORDINAL[i]} band "${names[i]}" is not a colour of the code` };
-    colours.push(c);
-  }
-  const digitCount = n === 5 ? 3 : 2;
-  const digits: number[] = [];
-  for (let i = 0; i < digitCount; i++) {
-    const d = DIGIT[colours[i]];
-    if (d === undefined) return { ok: false, field: "bands", message: `${ORDINAL[i]} band cannot be ${colours[i]}: figure bands run black to white` };
-    digits.push(d);
-  }
-  if (digits[0] === 0) {
-    return { ok: false, field: "bands", message: "First band cannot be black; the resistor may be read from the wrong end" };
-  }
-  const exponent = MULTIPLIER_EXPONENT[colours[digitCount]];
-  if (exponent === undefined) {
-    return { ok: false, field: "bands", message: `${ORDINAL[digitCount]} band (the multiplier) cannot be ${colours[digitCount]}` };
-  }
-  let tolerance = TOLERANCE.none as number;
-  if (n > 3) {
-    const t = TOLERANCE[colours[n - 1]];
-    if (t === undefined) {
-      return { ok: false, field: "bands", message: `${ORDINAL[n - 1]} band (the tolerance) cannot be ${colours[n - 1]}` };
-    }
-    tolerance = t;
-  }
-  let significand = 0;
-  for (const d of digits) significand = significand * 10 + d;
-  return { ok: true, digits, exponent, resistance: tidy(significand * 10 ** exponent), tolerance, colours };
-}
-
-/** Code a resistance: four bands for two significant figures, five for three. */
-export function encodeResistance(resistance: number, tolerance: number): Decoded | Failure {
-  const tolColour = toleranceColour(tolerance);
-  if (!tolColour) {
-    const list = Object.values(TOLERANCE).map((t) => `${(t as number) * 100} %`).join(", ");
-    return { ok: false, field: "tolerance", message: `Tolerance ±${tidy(tolerance * 100)} % has no colour; the code has ${list}` };
-  }
-  const [mant, exp] = resistance.toExponential(11).split("e");
-  const figures = mant.replace(".", "").replace(/0+$/, "");
-  if (figures.length > 3) {
-    return {
-      ok: false,
-      field: "resistance",
-      message: `Resistance ${formatQuantity(resistance, "Ω", 6)} needs more than three significant figures; the colour code cannot show it`,
-    };
-  }
-  const digitCount = figures.length === 3 ? 3 : 2;
-  const digits = figures.padEnd(digitCount, "0").split("").map(Number);
-  const exponent = Number(exp) - (digitCount - 1);
-  const multColour = multiplierColour(exponent);
-  if (!multColour) {
-    return {
-      ok: false,
-      field: "resistance",
-      message: `Resistance ${formatQuantity(resistance, "Ω")} is outside the colour code's range (multipliers run from ×0.001 to ×10⁹)`,
-    };
-  }
-  if (digitCount === 3 && tolColour === "none") {
-    return { ok: false, field: "tolerance", message: "A five-band (three-figure) marking always has a tolerance band; ±20 % has none" };
-  }
-  const colours: Colour[] = [...digits.map(digitColour), multColour];
-  if (tolColour !== "none") colours.push(tolColour);
-  return { ok: true, digits, exponent, resistance, tolerance, colours };
-}
 
 const bandsField = z.unknown().transform((raw, ctx): string[] | undefined => {
   if (raw === undefined || raw === null || (typeof raw === "string" && raw.trim() === "")) return undefined;
@@ -105,11 +23,23 @@ const bandsField = z.unknown().transform((raw, ctx): string[] | undefined => {
   return z.NEVER;
 }).optional(); // zod 4 treats an absent key as an error for a bare transform
 
+// "50", 50, "50 ppm", "50 ppm/K", "50ppm/°C": a temperature coefficient in ppm/K (1 ppm/K = 1 ppm/°C).
+const TC_TEXT = /^\s*(\d+(?:\.\d+)?)\s*(?:ppm(?:\s*\/\s*(?:K|°C|C))?)?\s*$/i;
+const tcField = z.unknown().transform((raw, ctx): number | undefined => {
+  if (raw === undefined || raw === null || (typeof raw === "string" && raw.trim() === "")) return undefined;
+  const m = typeof raw === "string" ? TC_TEXT.exec(raw) : null;
+  const value = typeof raw === "number" ? raw : m ? Number(m[1]) : Number.NaN;
+  if (Number.isFinite(value) && value > 0) return value;
+  ctx.addIssue({ code: "custom", message: "Temperature coefficient: expected a positive number of ppm/K, such as 50" });
+  return z.NEVER;
+}).optional();
+
 export const colourCodeSchema = z
   .object({
     bands: bandsField,
     resistance: optionalQuantity("resistance", { positive: true, max: 1e12, label: "Resistance" }).optional(),
     tolerance: optionalQuantity("ratio", { positive: true, max: 1, label: "Tolerance" }).optional(),
+    temperatureCoefficient: tcField,
   })
   .superRefine((v, ctx) => {
     if (v.bands && v.resistance !== undefined) {
@@ -121,7 +51,7 @@ export const colourCodeSchema = z
       ctx.addIssue({ code: "custom", path: ["resistance"], message: "Enter a resistance to code, or the colour bands" });
       return;
     }
-    const r = v.bands ? decodeBands(v.bands) : encodeResistance(v.resistance as number, v.tolerance ?? DEFAULT_TOLERANCE);
+    const r = v.bands ? decodeBands(v.bands) : encodeResistance(v.resistance as number, v.tolerance ?? DEFAULT_TOLERANCE, v.temperatureCoefficient);
     if (!r.ok) ctx.addIssue({ code: "custom", path: [r.field], message: r.message });
   });
 
@@ -132,6 +62,11 @@ export const DEFAULT_TOLERANCE = 0.05;
 
 function pct(t: number): string {
   return `${tidy(t * 100)}\\,\\%`;
+}
+
+/** Enough figures that the limits of a ±0.01 % part do not both round to the nominal value. */
+function limitFigures(tolerance: number): number {
+  return Math.max(3, Math.ceil(-Math.log10(tolerance)) + 2);
 }
 
 export const calculator = defineCalculator({
@@ -147,7 +82,7 @@ export const calculator = defineCalculator({
       required: false,
       control: "list",
       options: ["black", "brown", "red", "orange", "yellow", "green", "blue", "violet", "grey", "white", "gold", "silver", "pink", "none"],
-      help: "From the end the bands crowd towards, tolerance band last: 3, 4 or 5 colours. Leave empty to code a resistance instead.",
+      help: "From the end the bands crowd towards: 3, 4, 5 or 6 colours, the tolerance band after the multiplier and a temperature-coefficient band sixth. Leave empty to code a resistance instead.",
     },
     {
       name: "resistance",
@@ -166,22 +101,40 @@ export const calculator = defineCalculator({
       default: DEFAULT_TOLERANCE,
       control: "quantity",
       quantity: "ratio",
-      help: "As a fraction: 0.05 for ±5 %, 0.01 for ±1 %, 0.2 for no band. Used only when coding a resistance.",
+      help: "As a fraction: 0.05 for ±5 %, 0.01 for ±1 %, 0.0005 for ±0.05 %, 0.2 for no band. Used only when coding a resistance.",
+    },
+    {
+      name: "temperatureCoefficient",
+      label: "Temperature coefficient (optional)",
+      unit: "ppm/K",
+      required: false,
+      control: "quantity",
+      quantity: "ratio",
+      help: "In ppm/K, e.g. 50. Gives a six-band marking with a temperature-coefficient band. Used only when coding a resistance.",
     },
   ],
   outputs: [
     { name: "resistance", label: "Resistance", unit: "Ω" },
     { name: "tolerance", label: "Tolerance (fraction)", unit: "" },
     { name: "bands", label: "Bands", unit: "" },
+    { name: "temperatureCoefficient", label: "Temperature coefficient", unit: "ppm/K" },
+    { name: "toleranceLetter", label: "Tolerance letter (IEC 60062)", unit: "" },
   ],
   schema: colourCodeSchema,
   formulas: [
     { label: "Four bands", latex: tex`R = (10\,d_1 + d_2)\times 10^{m},\quad \pm t` },
     { label: "Five bands", latex: tex`R = (100\,d_1 + 10\,d_2 + d_3)\times 10^{m},\quad \pm t` },
+    { label: "Six bands", latex: tex`R = (100\,d_1 + 10\,d_2 + d_3)\times 10^{m},\quad \pm t,\quad \alpha\ \text{in ppm/K}` },
     { label: "Three bands", latex: tex`R = (10\,d_1 + d_2)\times 10^{m},\quad \pm 20\,\%` },
   ],
   references: [
-    { title: "IEC 60062, Marking codes for resistors and capacitors", detail: "Colour code table: figures, multipliers and tolerances" },
+    {
+      title: "IEC 60062:2016, Marking codes for resistors and capacitors",
+      detail:
+        "§3.2 code colours, §3.3 resistance value and tolerance, §3.4 temperature-coefficient (TCR) marking: figures, multipliers (pink ×0.001 new in 2016), " +
+        "tolerances with their letters (orange ±0.05 % W, yellow ±0.02 % P, grey ±0.01 % L) and TC bands in ppm/K (table values from memory). " +
+        "Charts older than this edition give grey as ±0.05 % and orange and yellow no tolerance.",
+    },
     { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Chapter on resistors: colour code (chapter cited from memory)" },
   ],
   whyItMatters:
@@ -190,47 +143,78 @@ export const calculator = defineCalculator({
     "If a reading makes no sense, try the bands from the other end — and when colours are doubtful, trust the schematic and your meter.",
   compute(input: ColourCodeInput) {
     const coded = code(input);
-    const { digits, resistance, tolerance, colours } = coded;
+    const { digits, resistance, tolerance, temperatureCoefficient, colours } = coded;
+    const tolColour = toleranceColour(tolerance);
     const warnings: Warning[] = [];
     if (input.bands && input.tolerance !== undefined && Math.abs(input.tolerance - tolerance) > 1e-12) {
-      warnings.push({ level: "info", message: "The tolerance field is ignored when reading bands; the last band sets it." });
+      warnings.push({ level: "info", message: "The tolerance field is ignored when reading bands; the band after the multiplier sets it." });
+    }
+    if (input.bands && input.temperatureCoefficient !== undefined && input.temperatureCoefficient !== temperatureCoefficient) {
+      warnings.push({ level: "info", message: "The temperature-coefficient field is ignored when reading bands; only a sixth band sets it." });
     }
     if (!input.bands && digits.length === 2 && tolerance <= 0.02) {
       const five = encodeFive(resistance, tolerance);
       if (five) warnings.push({ level: "info", message: `Close-tolerance parts are often marked with five bands instead: ${five.join(", ")}.` });
     }
-    warnings.push({
-      level: "info",
-      message: "Heat darkens old bands: red can pass for brown and orange for red. Check with a meter out of circuit.",
-    });
-    return { outputs: { resistance, tolerance, bands: colours as string[] }, warnings };
+    const older = tolColour && OLDER_NOTES[tolColour];
+    if (older) warnings.push(older);
+    warnings.push(HEAT_NOTE);
+    return {
+      outputs: {
+        resistance,
+        tolerance,
+        bands: colours as string[],
+        temperatureCoefficient,
+        toleranceLetter: (tolColour && TOLERANCE_LETTER[tolColour]) ?? null,
+      },
+      warnings,
+    };
   },
   explain(input: ColourCodeInput) {
-    const { digits, exponent, resistance, tolerance, colours } = code(input);
-    return [
+    const { digits, exponent, resistance, tolerance, temperatureCoefficient: tc, colours } = code(input);
+    const tolColour = toleranceColour(tolerance);
+    const letter = tolColour ? TOLERANCE_LETTER[tolColour] : undefined;
+    const sig = limitFigures(tolerance);
+    const steps: Step[] = [
       { label: "Bands", latex: tex`\text{${colours.join(", ")}}` },
       {
         label: "Figures and multiplier",
         latex: tex`R = ${digits.join("")}\times 10^{${exponent}}\,\Omega = ${texQuantity(resistance, "Ω")}`,
       },
-      { label: "Tolerance", latex: tex`\pm ${pct(tolerance)}\quad(${texQuantity(resistance * (1 - tolerance), "Ω")}\ \text{to}\ ${texQuantity(resistance * (1 + tolerance), "Ω")})` },
-    ] satisfies Step[];
+      {
+        label: "Tolerance",
+        latex: tex`\pm ${pct(tolerance)}${letter ? tex`\ (\text{${letter}})` : ""}\quad(${texQuantity(resistance * (1 - tolerance), "Ω", sig)}\ \text{to}\ ${texQuantity(resistance * (1 + tolerance), "Ω", sig)})`,
+      },
+    ];
+    if (tc !== null) {
+      steps.push({
+        label: "Temperature coefficient (sixth band): change per kelvin",
+        latex: tex`\Delta R = ${tc}\times 10^{-6}\,\mathrm{K^{-1}} \times ${texQuantity(resistance, "Ω")} = ${texQuantity(resistance * tc * 1e-6, "Ω")}/\mathrm{K}`,
+      });
+    }
+    return steps;
   },
 });
+
+/** Where charts older than IEC 60062:2016 read a tolerance band otherwise; made once, compute only picks one. */
+const OLDER_NOTES: Partial<Record<Colour, Warning>> = Object.fromEntries(
+  Object.entries(OLDER_CHARTS).map(([c, older]) => {
+    const colour = c as Colour;
+    const now = `±${tidy((TOLERANCE[colour] as number) * 100)} % (${TOLERANCE_LETTER[colour]})`;
+    const article = /^[aeiou]/.test(colour) ? "an" : "a";
+    return [colour, { level: "info", message: `In IEC 60062:2016 ${article} ${colour} tolerance band means ${now}; charts older than that edition give ${colour} ${older}. Check the part's age and maker's chart if it matters.` }];
+  }),
+);
+
+const HEAT_NOTE: Warning = {
+  level: "info",
+  message: "Heat darkens old bands: red can pass for brown and orange for red. Check with a meter out of circuit.",
+};
 
 function code(input: ColourCodeInput): Decoded {
   const coded = input.bands
     ? decodeBands(input.bands)
-    : encodeResistance(input.resistance as number, input.tolerance ?? DEFAULT_TOLERANCE);
+    : encodeResistance(input.resistance as number, input.tolerance ?? DEFAULT_TOLERANCE, input.temperatureCoefficient);
   if (!coded.ok) throw new Error(coded.message); // the schema has already refused this
   return coded;
-}
-
-/** The five-band form of a two-figure value (4.7 k → yellow, violet, black, brown, …). */
-function encodeFive(resistance: number, tolerance: number): Colour[] | null {
-  const [mant, exp] = resistance.toExponential(2).split("e");
-  const digits = mant.replace(".", "").split("").map(Number);
-  const m = multiplierColour(Number(exp) - 2);
-  const t = toleranceColour(tolerance);
-  return m && t && t !== "none" ? [...digits.map(digitColour), m, t] : null;
 }

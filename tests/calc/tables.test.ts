@@ -17,10 +17,14 @@ import { STANDARD_WATTAGES, nextRatingAtLeast, suggestedRating } from "@/lib/cal
 import {
   DIGIT,
   MULTIPLIER_EXPONENT,
+  OLDER_CHARTS,
+  TEMPERATURE_COEFFICIENT,
   TOLERANCE,
+  TOLERANCE_LETTER,
   digitColour,
   multiplierColour,
   parseColour,
+  temperatureCoefficientColour,
   toleranceColour,
 } from "@/lib/calc/tables/colour-code";
 
@@ -166,14 +170,33 @@ describe("IEC 60062 colour code", () => {
     expect(multiplierColour(10)).toBeNull();
   });
 
-  it("tolerance colours", () => {
-    // IEC 60062 tolerance letters/colours (from memory): brown F 1 %, red G 2 %, green D 0.5 %,
-    // blue C 0.25 %, violet B 0.1 %, grey 0.05 %, gold J 5 %, silver K 10 %, no band M 20 %
+  it("tolerance colours and letters, IEC 60062:2016", () => {
+    // IEC 60062:2016 tolerance colours/letters (from memory): brown F 1 %, red G 2 %, orange W 0.05 %,
+    // yellow P 0.02 %, green D 0.5 %, blue C 0.25 %, violet B 0.1 %, grey L 0.01 %, gold J 5 %,
+    // silver K 10 %, no band M 20 %
     expect(TOLERANCE).toEqual({
-      brown: 0.01, red: 0.02, green: 0.005, blue: 0.0025, violet: 0.001, grey: 0.0005, gold: 0.05, silver: 0.1, none: 0.2,
+      brown: 0.01, red: 0.02, orange: 0.0005, yellow: 0.0002, green: 0.005, blue: 0.0025, violet: 0.001, grey: 0.0001, gold: 0.05, silver: 0.1, none: 0.2,
+    });
+    expect(TOLERANCE_LETTER).toEqual({
+      brown: "F", red: "G", orange: "W", yellow: "P", green: "D", blue: "C", violet: "B", grey: "L", gold: "J", silver: "K", none: "M",
     });
     expect(toleranceColour(0.05)).toBe("gold");
+    expect(toleranceColour(0.0005)).toBe("orange");
     expect(toleranceColour(0.03)).toBeNull();
+  });
+
+  it("older charts differ on grey (±0.05 % before 2016)", () => {
+    // pre-2016 charts: grey ±0.05 %, orange and yellow no tolerance (common practice)
+    expect(OLDER_CHARTS.grey).toMatch(/±0\.05 %/);
+    expect(Object.keys(OLDER_CHARTS).sort()).toEqual(["grey", "orange", "yellow"]);
+  });
+
+  it("temperature-coefficient band, ppm/K", () => {
+    // IEC 60062:2016 §3.4 TCR colours (from memory): black 250, brown 100, red 50, orange 15,
+    // yellow 25, green 20, blue 10, violet 5, grey 1
+    expect(TEMPERATURE_COEFFICIENT).toEqual({ black: 250, brown: 100, red: 50, orange: 15, yellow: 25, green: 20, blue: 10, violet: 5, grey: 1 });
+    expect(temperatureCoefficientColour(50)).toBe("red");
+    expect(temperatureCoefficientColour(30)).toBeNull();
   });
 
   it("reads British and American spellings", () => {

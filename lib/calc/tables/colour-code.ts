@@ -1,6 +1,7 @@
 /**
- * IEC 60062 colour code for resistors. Glowbench spells the colours the British way
- * ("grey", "violet") and also reads "gray".
+ * IEC 60062:2016 colour code for resistors (§3.2 code colours, §3.3 value and tolerance, §3.4 TCR
+ * marking; clause names from the edition's published summary, table values from memory).
+ * Glowbench spells the colours the British way ("grey", "violet") and also reads "gray".
  */
 
 export const COLOURS = [
@@ -43,17 +44,61 @@ export const MULTIPLIER_EXPONENT: Readonly<Partial<Record<Colour, number>>> = {
   pink: -3,
 };
 
-/** Tolerance band as a fraction; "none" is a resistor with no tolerance band (±20 %). */
+/**
+ * Tolerance band as a fraction, as IEC 60062:2016 gives it; "none" is a resistor with no tolerance
+ * band (±20 %). The 2016 table has orange ±0.05 %, yellow ±0.02 % and grey ±0.01 %; charts before
+ * it gave grey as ±0.05 % and orange and yellow no tolerance (see OLDER_CHARTS).
+ */
 export const TOLERANCE: Readonly<Partial<Record<Colour, number>>> = {
   brown: 0.01,
   red: 0.02,
+  orange: 0.0005,
+  yellow: 0.0002,
   green: 0.005,
   blue: 0.0025,
   violet: 0.001,
-  grey: 0.0005,
+  grey: 0.0001,
   gold: 0.05,
   silver: 0.1,
   none: 0.2,
+};
+
+/** IEC 60062's letter for each tolerance (as printed in RKM markings such as "4K7J"). */
+export const TOLERANCE_LETTER: Readonly<Partial<Record<Colour, string>>> = {
+  brown: "F",
+  red: "G",
+  orange: "W",
+  yellow: "P",
+  green: "D",
+  blue: "C",
+  violet: "B",
+  grey: "L",
+  gold: "J",
+  silver: "K",
+  none: "M",
+};
+
+/**
+ * Tolerance bands that charts older than the 2016 edition read otherwise, with what most of them
+ * said (common practice: the trade's wall charts; a few give orange and yellow other figures).
+ */
+export const OLDER_CHARTS: Readonly<Partial<Record<Colour, string>>> = {
+  grey: "as ±0.05 % (which the 2016 table gives to orange)",
+  orange: "no tolerance (they show ±0.05 % as grey)",
+  yellow: "no tolerance",
+};
+
+/** Temperature-coefficient band (the sixth), ppm/K, IEC 60062:2016 §3.4 (from memory). */
+export const TEMPERATURE_COEFFICIENT: Readonly<Partial<Record<Colour, number>>> = {
+  black: 250,
+  brown: 100,
+  red: 50,
+  orange: 15,
+  yellow: 25,
+  green: 20,
+  blue: 10,
+  violet: 5,
+  grey: 1,
 };
 
 const ALIASES: Readonly<Record<string, Colour>> = { gray: "grey" };
@@ -73,6 +118,7 @@ function reverse(table: Readonly<Partial<Record<Colour, number>>>): [Colour, num
 const DIGIT_ENTRIES = reverse(DIGIT);
 const MULTIPLIER_ENTRIES = reverse(MULTIPLIER_EXPONENT);
 const TOLERANCE_ENTRIES = reverse(TOLERANCE);
+const TC_ENTRIES = reverse(TEMPERATURE_COEFFICIENT);
 
 /** The colour for a digit 0–9. */
 export function digitColour(digit: number): Colour {
@@ -86,8 +132,14 @@ export function multiplierColour(exponent: number): Colour | null {
   return null;
 }
 
-/** The tolerance colour for a fraction (0.05 → gold), or null when none is coded. */
+/** The tolerance colour for a fraction (0.05 → gold, 0.0005 → orange), or null when none is coded. */
 export function toleranceColour(tolerance: number): Colour | null {
   for (const [c, t] of TOLERANCE_ENTRIES) if (Math.abs(t - tolerance) <= 1e-12) return c;
+  return null;
+}
+
+/** The temperature-coefficient colour for ppm/K (50 → red), or null when none is coded. */
+export function temperatureCoefficientColour(ppmPerKelvin: number): Colour | null {
+  for (const [c, t] of TC_ENTRIES) if (t === ppmPerKelvin) return c;
   return null;
 }
