@@ -85,11 +85,16 @@ export function rippleData(inputs: Rec, outputs: Rec): Ripple | null {
 export interface Breakdown {
   points: { gap: number; kv: number }[];
   working: { gap: number; kv: number };
+  /** Gaps in mm. */
   minimum: number;
   recommended?: number;
+  /** IEC 60664-1's clearance for the voltage (mm), absent above its table. */
+  standard?: number;
+  /** What the standard's figure is, e.g. "IEC 60664-1 clearance, case A (non-uniform field)". */
+  standardLabel?: string;
 }
 
-/** Breakdown voltage against gap, the uniform-field law of the calculator, 0 to past the working gap. */
+/** Breakdown voltage against gap, the uniform-field law of the calculator, 0 to past the working gap and the standard's clearance. */
 export function breakdownData(inputs: Rec, outputs: Rec): Breakdown | null {
   const vp = num(inputs.peakVoltage);
   const delta = num(outputs.relativeAirDensity);
@@ -97,13 +102,22 @@ export function breakdownData(inputs: Rec, outputs: Rec): Breakdown | null {
   if (vp === undefined || delta === undefined || min === undefined) return null;
   const gap = num(inputs.gap);
   const rec = num(outputs.recommendedClearance);
-  const end = Math.max(gap ?? 0, rec ?? 0, min) * 1.5;
+  const std = num(outputs.standardClearance);
+  const end = Math.max(gap ?? 0, rec ?? 0, std ?? 0, min) * 1.5;
   const n = 60;
   const points = Array.from({ length: n }, (_, i) => {
     const g = (end * (i + 1)) / n;
     return { gap: g * 1000, kv: breakdownVolts(g, delta) / 1000 };
   });
-  return { points, working: { gap: (gap ?? min) * 1000, kv: vp / 1000 }, minimum: min * 1000, recommended: rec === undefined ? undefined : rec * 1000 };
+  const caseWords = inputs.electrode === "uniform" ? "case B (uniform field)" : "case A (non-uniform field)";
+  return {
+    points,
+    working: { gap: (gap ?? min) * 1000, kv: vp / 1000 },
+    minimum: min * 1000,
+    recommended: rec === undefined ? undefined : rec * 1000,
+    standard: std === undefined ? undefined : std * 1000,
+    standardLabel: std === undefined ? undefined : `IEC 60664-1 clearance, ${caseWords}`,
+  };
 }
 
 export interface PlateFamily {

@@ -42,7 +42,7 @@ export const HEADLINES: Record<string, readonly string[]> = {
   bleeder: ["suggestedResistance", "resistorRating"],
   "series-lamp": ["maxCurrent", "setVoltage"],
   fuse: ["suggestedRating", "runningCurrent"],
-  "arc-clearance": ["minimumGap", "recommendedClearance"],
+  "arc-clearance": ["recommendedClearance", "standardClearance"],
   "resistor-drift": ["verdict", "deviation"],
   reforming: ["leakageLimit", "resistorPower"],
   "preferred-value": ["nearest", "errorOfNearest"],

@@ -135,5 +135,5 @@ export const ADVANCED: Record<string, { title: string; fields: readonly string[]
   "cathode-bias": { title: "Tube figures, for a better bypass estimate", fields: ["amplificationFactor", "plateResistance", "plateLoad", "transconductance"] },
   "triode-stage": { title: "Model parameters (to override the table or for another tube)", fields: ["mu", "ex", "kg1", "kp", "kvb"] },
   "heater-string": { title: "Pilot lamp on the rectifier's heater tap", fields: ["pilotLamp"] },
-  "arc-clearance": { title: "Air and safety factor", fields: ["pressure", "temperature", "safetyFactor"] },
+  "arc-clearance": { title: "Air, altitude and safety factor", fields: ["pressure", "temperature", "altitude", "safetyFactor"] },
 };

@@ -1,22 +1,39 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity, tex } from "./format";
-import { ALWAYS_DANGER } from "./safety";
-import { defineCalculator, type Step, type Warning } from "./types";
+import * as notesModule from "./arc-clearance-notes";
+import { explainArcClearance } from "./arc-clearance-steps";
+import { tex } from "./format";
+import { ALWAYS_DANGER as ALWAYS_DANGER_NOTE } from "./safety";
+import { standardFigures as standardFiguresOf } from "./tables/iec60664-clearance";
+import { defineCalculator, type Warning } from "./types";
 import { optionalQuantity, quantity, quantityWithDefault } from "./units";
 
 /**
- * Uniform-field breakdown of air, corrected for relative air density:
- *   δ = (p/101325)·(293.15/T),   V_b [kV] = 24.22·δd + 6.08·√(δd),  d in cm
- * (Kuffel, Zaengl & Kuffel, High Voltage Engineering Fundamentals, 2nd ed., ch. 5, breakdown of
- * uniform-field gaps in air; constants recalled from memory). The inverse is a quadratic in √(δd).
+ * Two figures, and the recommendation is the larger:
+ * 1. Uniform-field breakdown of air, corrected for relative air density:
+ *      δ = (p/101325)·(293.15/T),   V_b [kV] = 24.22·δd + 6.08·√(δd),  d in cm
+ *    (Kuffel, Zaengl & Kuffel, High Voltage Engineering Fundamentals, 2nd ed., ch. 5, breakdown of
+ *    uniform-field gaps in air; constants recalled from memory). The inverse is a quadratic in √(δd).
+ *    The fit is for δ·d from about 0.01 cm (near the Paschen minimum) to about 10 cm (from memory):
+ *    not sub-millimetre gaps in thin air, not gaps of metres.
+ * 2. IEC 60664-1:2020 Table F.8 at the peak voltage, times Table A.2's altitude factor
+ *    (tables/iec60664-clearance.ts). PRODUCT.md: a clearance figure is never below the table's
+ *    non-uniform (case A) figure, so case A floors the recommendation whatever electrode is chosen.
  */
+
+// Module-level copies of what compute reads: under the CommonJS interop the benchmark runs in, every
+// read of an imported binding is a getter call, and a handful of them cost more than the arithmetic.
+const notes = { ...notesModule };
+const ALWAYS_DANGER = ALWAYS_DANGER_NOTE;
+const standardFigures = standardFiguresOf;
 
 const A = 24.22; // kV per cm
 const B = 6.08; // kV per √cm
 const P0 = 101_325;
 const T0 = 293.15;
-/** Below this δ·d (cm) the gap is down among the Paschen minimum, where the fit no longer holds. */
+/** Below this δ·d (cm) the gap is down among the Paschen minimum, where the fit no longer applies. */
 const FIT_MIN_REDUCED_GAP_CM = 0.01;
+/** Above this δ·d (cm) the fit is past the gaps it was made for (from memory, Kuffel et al. ch. 5). */
+const FIT_MAX_REDUCED_GAP_CM = 10;
 /** Smallest gap we compute at all. */
 const MIN_GAP_M = 10e-6;
 /** Minimum sparking voltage of air (Paschen minimum), Kuffel, Zaengl & Kuffel table of gases — from memory. */
@@ -26,6 +43,23 @@ const P_MIN = 10e3;
 const P_MAX = 1e6;
 const T_MIN = 150;
 const T_MAX = 1000;
+const ALTITUDE_MIN = -500;
+/** Table A.2 goes on to 20 000 m, but no workshop or set is above 10 km, and the shared length limits stop there. */
+const ALTITUDE_MAX = 10_000;
+
+export const ELECTRODES = ["non-uniform", "uniform"] as const;
+export type Electrode = (typeof ELECTRODES)[number];
+/** Words a person may use for the shape, read as the two cases of IEC 60664-1. */
+const ELECTRODE_WORDS: Record<string, Electrode> = {
+  uniform: "uniform", homogeneous: "uniform", flat: "uniform", rounded: "uniform", plate: "uniform", sphere: "uniform",
+  "non-uniform": "non-uniform", nonuniform: "non-uniform", "non uniform": "non-uniform", inhomogeneous: "non-uniform",
+  point: "non-uniform", edge: "non-uniform", lead: "non-uniform", wire: "non-uniform",
+};
+
+const electrodeInput = z.preprocess(
+  (v) => (v === undefined || v === null || (typeof v === "string" && v.trim() === "") ? undefined : typeof v === "string" ? (ELECTRODE_WORDS[v.trim().toLowerCase()] ?? v) : v),
+  z.enum(ELECTRODES, { error: 'Electrode must be "non-uniform" (points, edges, leads) or "uniform" (flat or rounded)' }).default("non-uniform"),
+);
 
 export const arcClearanceSchema = z
   .object({
@@ -34,13 +68,15 @@ export const arcClearanceSchema = z
     pressure: quantityWithDefault("pressure", P0, { positive: true, label: "Pressure" }).default(P0),
     temperature: quantityWithDefault("temperature", T0, { positive: true, label: "Temperature" }).default(T0),
     safetyFactor: quantityWithDefault("ratio", 2, { min: 1, max: 100, label: "Safety factor" }).default(2),
+    electrode: electrodeInput,
+    altitude: quantityWithDefault("length", 0, { min: ALTITUDE_MIN, max: ALTITUDE_MAX, label: "Altitude" }).default(0),
   })
   .superRefine((v, ctx) => {
     if (v.gap !== undefined && v.gap < MIN_GAP_M) {
       ctx.addIssue({
         code: "custom",
         path: ["gap"],
-        message: "Gap must be at least 10 µm: below a few tens of µm in air the uniform-field (Paschen) formula does not hold",
+        message: "Gap must be at least 10 µm: below a few tens of µm in air the uniform-field (Paschen) formula does not apply",
       });
     }
     if (v.pressure < P_MIN || v.pressure > P_MAX) {
@@ -71,80 +107,84 @@ export function gapForVolts(volts: number, delta: number): number {
   return (s * s) / delta / 100;
 }
 
+/**
+ * Pressure of the standard atmosphere at an altitude (ISO 2533 / ICAO: troposphere to 11 km, then
+ * isothermal; constants from memory). Only used to notice a sea-level pressure typed for a high workshop.
+ */
+export function standardAtmospherePressure(altitude: number): number {
+  if (altitude <= 11_000) return P0 * Math.pow(1 - 2.25577e-5 * altitude, 5.25588);
+  return 22_632 * Math.exp(-(altitude - 11_000) / 6341.6);
+}
+
 export const calculator = defineCalculator({
   slug: "arc-clearance",
   title: "Arc clearance in air",
-  purpose: "Whether a high-voltage gap will flash over, and the air gap a peak voltage needs.",
+  purpose: "The air gap a peak voltage needs: the uniform-field breakdown gap and IEC 60664-1's clearance, whichever is larger.",
   group: "safety",
   inputs: [
     { name: "peakVoltage", label: "Peak voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The highest instantaneous voltage across the gap; for sine-wave AC that is 1.414 × the rms value." },
     { name: "gap", label: "Gap", unit: "m", required: false, control: "quantity", quantity: "length", help: "Optional: the air gap to check, e.g. \"3 mm\"." },
     { name: "pressure", label: "Air pressure", unit: "Pa", required: false, default: P0, control: "quantity", quantity: "pressure", help: "101.325 kPa at sea level; lower at altitude, where air breaks down more easily." },
     { name: "temperature", label: "Air temperature", unit: "K", required: false, default: T0, control: "quantity", quantity: "temperature", help: "In kelvin, or in degrees Celsius such as \"20 °C\"." },
-    { name: "safetyFactor", label: "Safety factor", unit: "", required: false, default: 2, control: "quantity", quantity: "ratio", help: "Multiplies the bare minimum gap; at least 1." },
+    { name: "safetyFactor", label: "Safety factor", unit: "", required: false, default: 2, control: "quantity", quantity: "ratio", help: "Multiplies the uniform-field minimum gap; at least 1. The standard's clearance applies whatever it is." },
+    { name: "electrode", label: "Electrode shape", unit: "", required: false, default: "non-uniform", control: "select", options: ELECTRODES, help: "Non-uniform: a wire end, lead, solder joint, point or edge — nearly every gap in a set. Uniform: only large flat or well-rounded electrodes facing each other." },
+    { name: "altitude", label: "Altitude", unit: "m", required: false, default: 0, control: "quantity", quantity: "length", help: "Height of the workshop or the set's home above sea level; above 2000 m the standard's clearance grows (IEC 60664-1 Table A.2). Enter the local air pressure too." },
   ],
   outputs: [
     { name: "relativeAirDensity", label: "Relative air density δ", unit: "" },
-    { name: "breakdownVoltage", label: "Breakdown voltage of the gap", unit: "V" },
-    { name: "willArc", label: "Gap will arc", unit: "" },
+    { name: "breakdownVoltage", label: "Uniform-field breakdown voltage of the gap", unit: "V" },
+    { name: "willArc", label: "At or above the uniform-field breakdown voltage", unit: "" },
     { name: "minimumGap", label: "Minimum gap (uniform field)", unit: "m" },
     { name: "recommendedClearance", label: "Recommended clearance", unit: "m" },
+    { name: "standardClearance", label: "IEC 60664-1 clearance (altitude-corrected)", unit: "m" },
+    { name: "standardTable", label: "Standard's figure taken from", unit: "" },
   ],
   schema: arcClearanceSchema,
   formulas: [
     { label: "Relative air density", latex: tex`\delta = \frac{p}{101.325\,\mathrm{kPa}} \cdot \frac{293.15\,\mathrm{K}}{T}` },
-    { label: "Uniform-field breakdown (d in cm)", latex: tex`V_b = 24.22\,\delta d + 6.08\sqrt{\delta d}\;\mathrm{kV}` },
+    { label: "Uniform-field breakdown (d in cm; for δd from about 0.01 to 10 cm)", latex: tex`V_b = 24.22\,\delta d + 6.08\sqrt{\delta d}\;\mathrm{kV}` },
     { label: "Minimum gap", latex: tex`\sqrt{\delta d} = \frac{-6.08 + \sqrt{6.08^2 + 4 \cdot 24.22\,V}}{2 \cdot 24.22}, \quad d = \frac{(\sqrt{\delta d})^2}{\delta}` },
-    { label: "Recommended clearance", latex: tex`d_{rec} = k\,d_{min}` },
+    { label: "Standard's clearance", latex: tex`d_{std} = d_{\text{Table F.8}}(V) \times k_{alt}` },
+    { label: "Recommended clearance", latex: tex`d_{rec} = \max\left(k\,d_{min},\; d_{std},\; d_{\text{case A}}\,k_{alt}\right)` },
   ],
   references: [
     {
       title: "Kuffel, Zaengl & Kuffel, High Voltage Engineering Fundamentals, 2nd ed.",
-      detail: "Ch. 5, electrical breakdown in gases: Paschen's law, breakdown of uniform-field gaps in air, V_b = 24.22·δd + 6.08·√(δd) kV with d in cm, relative air density δ (constants and chapter cited from memory)",
+      detail: "Ch. 5, electrical breakdown in gases: Paschen's law, breakdown of uniform-field gaps in air, V_b = 24.22·δd + 6.08·√(δd) kV with d in cm, relative air density δ (constants, chapter and the fit's range recalled from memory)",
     },
     {
-      title: "IEC 60664-1, Insulation coordination for equipment within low-voltage systems",
-      detail: "Clearance and creepage distances: the rules that govern a real layout, which this estimate does not replace",
+      title: "IEC 60664-1:2020, Insulation coordination for equipment within low-voltage supply systems — Part 1",
+      detail: "Table F.8, clearances to withstand steady-state voltages, temporary overvoltages or recurring peak voltages (case A inhomogeneous, case B homogeneous field; Table F.7 in the 2007 edition); Table A.2, altitude correction factors; Table F.2, minimum clearance for pollution degree 2. Creepage (Table F.5) is not covered",
     },
   ],
   whyItMatters:
     "A television's picture-tube supply runs at many kilovolts, and even a radio's B+ can jump a surprisingly " +
-    "small gap when the air is thin or the surface is dirty. This gives the gap at which clean air between flat " +
-    "electrodes would just break down — the best case. Real wiring has points and edges, so treat the figure as " +
-    "a floor, keep well clear of it, and follow the safety standard's clearances.",
+    "small gap when the air is thin or the surface is dirty. Clean air between flat electrodes gives the best case; a real " +
+    "lead, a solder spike or a corona ring concentrates the field and breaks down far sooner. So the recommendation never " +
+    "goes below the clearance the safety standard tables for that voltage with a non-uniform field, corrected for altitude.",
   compute(input: ArcClearanceInput) {
-    const { peakVoltage: v, gap, pressure: p, temperature: t, safetyFactor: k } = input;
+    const { peakVoltage: v, gap, pressure: p, temperature: t, safetyFactor: k, electrode, altitude } = input;
     const delta = relativeAirDensity(p, t);
     const minimumGap = gapForVolts(v, delta);
-    const recommendedClearance = minimumGap * k;
+    const s = standardFigures(v, electrode, altitude);
+    const byFactor = minimumGap * k;
+    const recommendedClearance = byFactor > s.floor ? byFactor : s.floor;
     const breakdownVoltage = gap === undefined ? null : breakdownVolts(gap, delta);
     const willArc = breakdownVoltage === null ? null : v >= breakdownVoltage;
 
-    const warnings: Warning[] = [
-      ALWAYS_DANGER,
-      {
-        level: "caution",
-        message:
-          "Sharp points, dust, dirt and humidity lower the breakdown voltage, and real layouts are non-uniform fields that break down " +
-          "well below these figures. This is no substitute for the clearance and creepage rules of the applicable safety standard " +
-          "(e.g. IEC 60664-1) and local codes, and never a guarantee.",
-      },
-    ];
-    if (willArc) {
-      warnings.push({
-        level: "danger",
-        message: `This gap is expected to arc even in clean air between flat electrodes: it breaks down at about ${formatQuantity(breakdownVoltage!, "V")}.`,
-      });
+    const warnings: Warning[] = [ALWAYS_DANGER, notes.LIMITS, notes.TABLE_ASSUMPTIONS];
+    if (s.caseARow < 0) warnings.push(notes.OUT_OF_TABLE);
+    if (s.field === "B") warnings.push(notes.UNIFORM_CHOSEN);
+    if (willArc) warnings.push(notes.ARCS);
+    if (gap !== undefined) {
+      if (gap < s.floor) warnings.push(notes.GAP_BELOW_STANDARD);
+      else if (gap < recommendedClearance) warnings.push(notes.GAP_BELOW_FACTOR);
+      else warnings.push(notes.GAP_AT_LEAST_RECOMMENDED);
     }
-    const smallest = Math.min(delta * minimumGap, gap === undefined ? Infinity : delta * gap) * 100;
-    if (smallest < FIT_MIN_REDUCED_GAP_CM) {
-      warnings.push({
-        level: "caution",
-        message:
-          "At this spacing (under about 0.1 mm in sea-level air) the gap is near the Paschen minimum, where the formula no longer holds; " +
-          "below a few tens of µm breakdown does not follow Paschen's law at all.",
-      });
-    }
+    const smallest = delta * (gap === undefined || minimumGap < gap ? minimumGap : gap) * 100;
+    const largest = delta * (gap === undefined || minimumGap > gap ? minimumGap : gap) * 100;
+    if (smallest < FIT_MIN_REDUCED_GAP_CM) warnings.push(notes.NEAR_PASCHEN_MINIMUM);
+    if (largest > FIT_MAX_REDUCED_GAP_CM) warnings.push(notes.BEYOND_FIT);
     if (v < PASCHEN_MIN_V) {
       warnings.push({
         level: "info",
@@ -153,42 +193,28 @@ export const calculator = defineCalculator({
           "the small gap shown is the formula's, and surfaces can still fail by tracking.",
       });
     }
-
-    return { outputs: { relativeAirDensity: delta, breakdownVoltage, willArc, minimumGap, recommendedClearance }, warnings };
-  },
-  explain(input: ArcClearanceInput, o) {
-    const { peakVoltage: v, gap, pressure: p, temperature: t, safetyFactor: k } = input;
-    const { relativeAirDensity: delta, breakdownVoltage, willArc, minimumGap, recommendedClearance } = o;
-    const sqrtDd = Math.sqrt(delta * minimumGap * 100);
-    const steps: Step[] = [
-      {
-        label: "Relative air density",
-        latex: tex`\delta = \frac{${texQuantity(p / 1000, "kPa", 6)}}{101.325\,\mathrm{kPa}} \cdot \frac{293.15\,\mathrm{K}}{${texQuantity(t, "K", 5)}} = ${delta.toPrecision(4)}`,
-      },
-    ];
-    if (gap !== undefined && breakdownVoltage !== null) {
-      const dcm = gap * 100;
-      steps.push(
-        {
-          label: "Breakdown voltage of the gap",
-          latex: tex`V_b = 24.22 \times ${delta.toPrecision(4)} \times ${dcm.toPrecision(4)} + 6.08\sqrt{${delta.toPrecision(4)} \times ${dcm.toPrecision(4)}} = ${texQuantity(breakdownVoltage, "V")}`,
-        },
-        {
-          label: willArc ? "The gap arcs" : "The gap holds",
-          latex: tex`${texQuantity(v, "V")} ${willArc ? "\\ge" : "<"} ${texQuantity(breakdownVoltage, "V")}`,
-        },
-      );
+    if (altitude > 0 && p > 1.05 * standardAtmospherePressure(altitude)) {
+      const isa = standardAtmospherePressure(altitude);
+      warnings.push({
+        level: "caution",
+        message:
+          `The air pressure given (${(p / 1000).toPrecision(4)} kPa) is well above the standard atmosphere at ${Math.round(altitude)} m ` +
+          `(about ${(isa / 1000).toPrecision(3)} kPa). The uniform-field figures use the pressure given, so they may be too small: enter the local pressure.`,
+      });
     }
-    steps.push(
-      {
-        label: "Minimum gap for the peak voltage",
-        latex: tex`\sqrt{\delta d} = \frac{-6.08 + \sqrt{6.08^2 + 4 \times 24.22 \times ${(v / 1000).toPrecision(4)}}}{2 \times 24.22} = ${sqrtDd.toPrecision(4)}, \quad d = \frac{${sqrtDd.toPrecision(4)}^2}{${delta.toPrecision(4)}}\,\mathrm{cm} = ${texQuantity(minimumGap, "m")}`,
+
+    return {
+      outputs: {
+        relativeAirDensity: delta,
+        breakdownVoltage,
+        willArc,
+        minimumGap,
+        recommendedClearance,
+        standardClearance: s.standardClearance,
+        standardTable: s.name,
       },
-      {
-        label: "Recommended clearance",
-        latex: tex`d_{rec} = ${k} \times ${texQuantity(minimumGap, "m")} = ${texQuantity(recommendedClearance, "m")}`,
-      },
-    );
-    return steps;
+      warnings,
+    };
   },
+  explain: explainArcClearance,
 });
