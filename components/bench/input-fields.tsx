@@ -72,7 +72,7 @@ export function InputControl({ meta, slug }: { meta: InputMeta; slug: string }) 
           className={`${inputClass} ${error ? "border-hazard" : "border-rule"}`}
           {...register(meta.name)}
         >
-          {!meta.required ? <option value="">None (enter the figures below)</option> : null}
+          {!meta.required && meta.default === undefined ? <option value="">{meta.blankLabel ?? "None"}</option> : null}
           {(meta.options ?? []).map((o) => (
             <option key={o} value={o}>
               {o.charAt(0).toUpperCase() + o.slice(1)}

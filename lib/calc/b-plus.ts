@@ -91,7 +91,7 @@ export const calculator = defineCalculator({
   inputs: [
     { name: "secondaryVoltage", label: "Secondary voltage (rms)", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "For a centre-tapped full-wave circuit, each half (centre tap to one end, the 350 of 350-0-350)." },
     { name: "rectifier", label: "Rectifier circuit", unit: "", required: true, control: "select", options: B_PLUS_RECTIFIERS, help: "Full-wave here means a centre-tapped winding with two rectifiers (or one two-plate tube)." },
-    { name: "rectifierTube", label: "Rectifier tube", unit: "", required: false, control: "select", options: RECTIFIER_TYPES, help: "From the built-in table: its drop, rated current and largest reservoir capacitor are used." },
+    { name: "rectifierTube", label: "Rectifier tube", unit: "", required: false, control: "select", options: RECTIFIER_TYPES, blankLabel: "None: enter the drop below", help: "From the built-in table: its drop, rated current and largest reservoir capacitor are used." },
     { name: "rectifierDrop", label: "Rectifier drop", unit: "V", required: false, control: "quantity", quantity: "voltage", help: "Or the drop of one rectifier at this current (a bridge counts two)." },
     { name: "loadCurrent", label: "Load current", unit: "A", required: true, control: "quantity", quantity: "current", help: "Total DC current: every plate, screen and bleeder." },
     { name: "capacitance", label: "Reservoir capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance", help: "The first capacitor after the rectifier." },

@@ -66,7 +66,7 @@ export const calculator = defineCalculator({
     { name: "capacitance", label: "Reservoir capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance", help: "The first capacitor after the rectifier." },
     { name: "lineFrequency", label: "Mains frequency", unit: "Hz", required: false, default: 60, control: "quantity", quantity: "frequency" },
     { name: "rectifier", label: "Rectifier", unit: "", required: true, control: "select", options: RECTIFIERS, help: "Full-wave (two diodes or a bridge, or a 5Y3-type tube) ripples at twice the mains frequency." },
-    { name: "rectifierTube", label: "Rectifier tube (optional)", unit: "", required: false, control: "select", options: RECTIFIER_TYPES, help: "Checks the reservoir and load current against the tube's data-sheet limits." },
+    { name: "rectifierTube", label: "Rectifier tube (optional)", unit: "", required: false, control: "select", options: RECTIFIER_TYPES, blankLabel: "Not given", help: "Checks the reservoir and load current against the tube's data-sheet limits." },
     {
       name: "stages", label: "Filter stages", unit: "", required: false, control: "list",
       help: 'Each stage: { kind: "rc", resistance, capacitance } or { kind: "lc", inductance, capacitance, resistance (the choke\'s DC resistance, 100 Ω if blank) }, in order after the reservoir; each may give current (its own DC load, the whole load current if blank).',

@@ -114,7 +114,7 @@ export const calculator = defineCalculator({
   purpose: "Operating point, plate dissipation and voltage gain of a cathode-biased triode stage.",
   group: "stages",
   inputs: [
-    { name: "tube", label: "Tube type", unit: "", required: false, control: "select", options: TRIODE_NAMES, help: "Pick a type from the built-in table, or leave it blank and enter the five model parameters." },
+    { name: "tube", label: "Tube type", unit: "", required: false, control: "select", options: TRIODE_NAMES, blankLabel: "None (enter the figures below)", help: "Pick a type from the built-in table, or leave it blank and enter the five model parameters." },
     { name: "mu", label: "Model µ", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Koren model amplification factor. With a tube chosen, any parameter you enter replaces the table's." },
     { name: "ex", label: "Model EX", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Exponent, between 1 and 3 (usually 1.2–1.4)." },
     { name: "kg1", label: "Model KG1", unit: "", required: false, control: "quantity", quantity: "ratio" },

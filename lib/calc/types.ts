@@ -38,6 +38,8 @@ export interface InputMeta {
   control: "quantity" | "select" | "boolean" | "list" | "text";
   quantity?: QuantityKind;
   options?: readonly string[];
+  /** What an optional select's empty choice reads ("None" when absent); selects with a default have no empty choice. */
+  blankLabel?: string;
   help?: string;
 }
 
