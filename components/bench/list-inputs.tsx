@@ -42,7 +42,7 @@ function ListFrame({ meta, children, actions }: { meta: InputMeta; children: Rea
 function listHelp(meta: InputMeta): string {
   if (meta.name === "stages") return "In order after the reservoir capacitor: a resistor or a choke, each followed by a capacitor to ground, and the current each one carries.";
   if (meta.name === "heaters") return "Each heater's rated voltage and current, from the tube's data.";
-  if (meta.name === "bands") return "From the end nearest a lead; the tolerance band (gold, silver) last.";
+  if (meta.name === "bands") return "From the end nearest a lead: figures, multiplier, then the tolerance band (gold, silver, …) and, on six-band parts, the temperature-coefficient band last.";
   return meta.help ?? "";
 }
 
@@ -216,10 +216,10 @@ function BandsInput({ meta }: { meta: InputMeta }) {
       meta={meta}
       actions={
         <>
-          <button type="button" className={small} disabled={list.length >= 5} onClick={() => set(list.length === 3 ? [...list, "gold"] : [...list.slice(0, 2), "black", ...list.slice(2)])}>
+          <button type="button" className={small} disabled={list.length >= 6} onClick={() => set(addBand(list))}>
             Add band
           </button>
-          <button type="button" className={small} disabled={list.length <= 3} onClick={() => set(list.length === 5 ? list.filter((_, j) => j !== 2) : list.slice(0, 3))}>
+          <button type="button" className={small} disabled={list.length <= 3} onClick={() => set(removeBand(list))}>
             Remove band
           </button>
         </>
@@ -256,17 +256,33 @@ function BandsInput({ meta }: { meta: InputMeta }) {
   );
 }
 
+/** 3 → 4 bands adds a tolerance band, 4 → 5 a third figure, 5 → 6 a temperature-coefficient band (IEC 60062:2016). */
+function addBand(list: string[]): string[] {
+  if (list.length === 3) return [...list, "gold"];
+  if (list.length === 4) return [...list.slice(0, 2), "black", ...list.slice(2)];
+  return [...list, "brown"];
+}
+
+function removeBand(list: string[]): string[] {
+  if (list.length === 6) return list.slice(0, 5);
+  if (list.length === 5) return list.filter((_, j) => j !== 2);
+  return list.slice(0, 3);
+}
+
 function bandName(i: number, n: number): string {
-  const figures = n === 5 ? 3 : 2;
+  const figures = n >= 5 ? 3 : 2;
   if (i < figures) return `Band ${i + 1}: figure`;
   if (i === figures) return `Band ${i + 1}: multiplier`;
-  return `Band ${i + 1}: tolerance`;
+  if (i === figures + 1) return `Band ${i + 1}: tolerance`;
+  return `Band ${i + 1}: temperature coefficient`;
 }
 
 /** A resistor body with its bands, drawn from the chosen colours. */
 export function ResistorPicture({ bands }: { bands: readonly string[] }) {
   // Figure and multiplier bands bunched at one end, the tolerance band apart at the other, as on the part.
-  const x = (i: number) => (bands.length > 3 && i === bands.length - 1 ? 142 : 54 + i * 16);
+  // Six bands: tolerance and temperature coefficient both sit apart.
+  const apart = bands.length === 6 ? 2 : bands.length > 3 ? 1 : 0;
+  const x = (i: number) => (i >= bands.length - apart ? 142 - (bands.length - 1 - i) * 14 : 54 + i * 14);
   return (
     <svg viewBox="0 0 200 44" className="h-12 w-full max-w-xs" role="img" aria-label={`Resistor with bands ${bands.join(", ")}`}>
       <line x1="0" y1="22" x2="200" y2="22" stroke="rgb(var(--gb-muted))" strokeWidth="3" />

@@ -5,6 +5,7 @@ function show(value: unknown, unit: string): string {
     return value.map((v) => (typeof v === "object" && v ? Object.entries(v).map(([k, x]) => `${k} ${x}`).join(" ") : String(v))).join("; ");
   }
   if (typeof value === "boolean") return value ? "yes" : "no";
+  if (typeof value === "object" && value) return Object.entries(value).map(([k, x]) => `${k} ${String(x)}`).join(", ");
   const text = String(value);
   // A bare number is in the field's unit; text that carries its own unit is shown as typed.
   return unit && /[\d.]$/.test(text) && !/[a-zA-ZµΩ°]/.test(text.replace(/[eE][+-]?\d+$/, "")) ? `${text} ${unit}` : /[kmuµnpMG]$/.test(text) && unit ? `${text}${unit}` : text;
