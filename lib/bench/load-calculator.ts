@@ -14,6 +14,7 @@ const LOADERS: Record<string, Loader> = {
   "colour-code": () => import("@/lib/calc/colour-code"),
   "dropping-resistor": () => import("@/lib/calc/dropping-resistor"),
   fuse: () => import("@/lib/calc/fuse"),
+  "meter-loading": () => import("@/lib/calc/meter-loading"),
   "heater-string": () => import("@/lib/calc/heater-string"),
   "ohms-law": () => import("@/lib/calc/ohms-law"),
   "preferred-value": () => import("@/lib/calc/preferred-value"),

@@ -6,6 +6,7 @@ import { calculator as cathodeBias } from "./cathode-bias";
 import { calculator as colourCode } from "./colour-code";
 import { calculator as droppingResistor } from "./dropping-resistor";
 import { calculator as fuse } from "./fuse";
+import { calculator as meterLoading } from "./meter-loading";
 import { calculator as heaterString } from "./heater-string";
 import { calculator as ohmsLaw } from "./ohms-law";
 import { calculator as preferredValue } from "./preferred-value";
@@ -31,6 +32,7 @@ export const calculators: readonly Calculator[] = [
   fuse,
   arcClearance,
   resistorDrift,
+  meterLoading,
   reforming,
   preferredValue,
   colourCode,

@@ -32,6 +32,7 @@ export const samples: Record<string, Record<string, unknown>> = {
   "heater-string": { lineVoltage: "120 V", tubes: ["12BE6", "12BA6", "12AV6", "50C5", "35W4"] },
   "arc-clearance": { peakVoltage: "15 kV", gap: "5 mm", pressure: 101325, temperature: 293.15, safetyFactor: 2 },
   "resistor-drift": { nominal: "100k", measured: "128k", tolerance: 0.2 },
+  "meter-loading": { trueVoltage: "100 V", sourceResistance: "1M", ohmsPerVolt: "20k", range: "250 V" },
   reforming: { capacitance: "40 uF", ratedVoltage: "450 V", seriesResistance: "10k", leakageFactor: 0.01, leakageFloor: "3 uA" },
   "ohms-law": { voltage: "250 V", resistance: "100k" },
   reactance: { frequency: "1 kHz", capacitance: "100 nF", inductance: "10 mH" },
