@@ -1,5 +1,5 @@
 import { desc, eq } from "drizzle-orm";
-import { assertRole, type Member } from "@/lib/auth/member";
+import { assertCan, type Member } from "@/lib/auth/can";
 import { getDb, type Db } from "../client";
 import { auditEvents, users } from "../schema";
 
@@ -27,7 +27,7 @@ export function recordAudit(
 
 /** The owner's view of the workshop's recent audit trail, newest first. */
 export function listAuditEvents(member: Member, limit = 50) {
-  assertRole(member, ["owner"], "see the workshop's audit trail");
+  assertCan(member, "manageWorkshop", "see the workshop's audit trail");
   return getDb()
     .select({
       id: auditEvents.id,

@@ -1,6 +1,6 @@
 import { and, desc, eq } from "drizzle-orm";
-import { can, type Member } from "@/lib/auth/member";
-import { forbidden, notFound } from "@/lib/auth/errors";
+import { assertCan, type Member } from "@/lib/auth/can";
+import { notFound } from "@/lib/auth/errors";
 import { getCalculator } from "@/lib/calc/registry";
 import { runCalculator } from "@/lib/calc/run";
 import { HttpError } from "@/lib/http/api";
@@ -45,7 +45,7 @@ export function listCalculations(member: Member, jobId: number): SavedCalculatio
 
 /** 404 for an unknown calculator or a job outside the workshop; 400 with field messages for bad inputs. */
 export function saveCalculation(member: Member, jobId: number, input: CalculationSave): SavedCalculation {
-  if (!can.addNotes(member)) throw forbidden("save calculations");
+  assertCan(member, "addNotes", "save calculations");
   assertJobInWorkshop(member, jobId);
   const calc = getCalculator(input.slug);
   if (!calc) throw new HttpError(404, `There is no calculator called "${input.slug}".`);
@@ -67,7 +67,7 @@ export function saveCalculation(member: Member, jobId: number, input: Calculatio
 }
 
 export function deleteCalculation(member: Member, jobId: number, calculationId: number) {
-  if (!can.editJobs(member)) throw forbidden("remove saved calculations");
+  assertCan(member, "editJobs", "remove saved calculations");
   getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
     const gone = tx

@@ -1,6 +1,6 @@
 import { and, asc, desc, eq } from "drizzle-orm";
 import { createHash, randomBytes } from "node:crypto";
-import { assertRole, type Member } from "@/lib/auth/member";
+import { assertCan, type Member } from "@/lib/auth/can";
 import { notFound } from "@/lib/auth/errors";
 import type { LinesValues } from "@/lib/estimates/schemas";
 import { HttpError } from "@/lib/http/api";
@@ -15,7 +15,6 @@ import { jobInWorkshop, jobPartsForPricing, moneySettings, priceLines } from "./
  */
 
 export const APPROVAL_LINK_DAYS = 14;
-const PREPARERS = ["owner", "technician"] as const;
 
 export const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
 
@@ -42,7 +41,7 @@ function withTotals<E extends { taxRateBp: number }, L extends { quantityMilli: 
 
 /** The job's estimate (latest), its priced lines and totals, plus what the editor needs. */
 export function getEstimateForJob(member: Member, jobId: number) {
-  assertRole(member, PREPARERS, "see estimates");
+  assertCan(member, "prepareEstimates", "see estimates");
   const db = getDb();
   const job = jobInWorkshop(db, member.workshopId, jobId);
   if (!job) throw notFound("That job");
@@ -59,7 +58,7 @@ export function getEstimateForJob(member: Member, jobId: number) {
 
 /** Save the editor's lines. Approved estimates stay as the customer saw them; a sent one returns to draft. */
 export function saveEstimate(member: Member, jobId: number, input: LinesValues) {
-  assertRole(member, PREPARERS, "prepare estimates");
+  assertCan(member, "prepareEstimates", "prepare estimates");
   getDb().transaction((tx) => {
     if (!jobInWorkshop(tx, member.workshopId, jobId)) throw notFound("That job");
     const settings = moneySettings(tx, member.workshopId);
@@ -80,7 +79,7 @@ export function saveEstimate(member: Member, jobId: number, input: LinesValues) 
  * for the e-mail only; it is never stored or answered in an API response.
  */
 export function issueApprovalLink(member: Member, jobId: number) {
-  assertRole(member, PREPARERS, "send estimates");
+  assertCan(member, "prepareEstimates", "send estimates");
   return getDb().transaction((tx) => {
     const job = jobInWorkshop(tx, member.workshopId, jobId);
     if (!job) throw notFound("That job");

@@ -1,6 +1,6 @@
 import { and, desc, eq } from "drizzle-orm";
-import { can, type Member } from "@/lib/auth/member";
-import { forbidden, notFound } from "@/lib/auth/errors";
+import { assertCan, type Member } from "@/lib/auth/can";
+import { notFound } from "@/lib/auth/errors";
 import { getDb } from "../client";
 import { files, users } from "../schema";
 import { assertJobInWorkshop, touchJob } from "./job-access";
@@ -34,7 +34,7 @@ export function listFiles(member: Member, jobId: number) {
 
 /** Called before the upload is read, so a refused member never costs a disk write. */
 export function assertCanUpload(member: Member, jobId: number) {
-  if (!can.editJobs(member)) throw forbidden("attach files");
+  assertCan(member, "editJobs", "attach files");
   assertJobInWorkshop(member, jobId);
 }
 
@@ -69,7 +69,7 @@ export function getFileRow(member: Member, jobId: number, fileId: number) {
 
 /** Returns the stored name so the caller can remove the bytes after the row is gone. */
 export function deleteFileRecord(member: Member, jobId: number, fileId: number): string {
-  if (!can.editJobs(member)) throw forbidden("remove files");
+  assertCan(member, "editJobs", "remove files");
   return getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
     const gone = tx

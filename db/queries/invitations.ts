@@ -1,7 +1,7 @@
 import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import type { Role } from "@/db/enums";
 import { notFound } from "@/lib/auth/errors";
-import { assertRole, type Member } from "@/lib/auth/member";
+import { assertCan, type Member } from "@/lib/auth/can";
 import { hashToken, newToken } from "@/lib/auth/tokens";
 import { HttpError } from "@/lib/http/api";
 import { getDb } from "../client";
@@ -22,7 +22,7 @@ function stateOf(row: { expiresAt: Date; acceptedAt: Date | null; revokedAt: Dat
 
 /** Invitations not yet accepted or revoked, newest first (expired ones too, so the owner can send again). */
 export function listInvitations(member: Member) {
-  assertRole(member, ["owner"], "see invitations");
+  assertCan(member, "manageMembers", "see invitations");
   return getDb()
     .select({ id: invitations.id, email: invitations.email, role: invitations.role, expiresAt: invitations.expiresAt, createdAt: invitations.createdAt, acceptedAt: invitations.acceptedAt, revokedAt: invitations.revokedAt, invitedBy: users.name })
     .from(invitations)
@@ -37,7 +37,7 @@ export type InvitationRow = ReturnType<typeof listInvitations>[number];
 
 /** A new invitation; an earlier pending one to the same address stops working, so only the newest link joins. */
 export function createInvitation(member: Member, input: { email: string; role: Role }) {
-  assertRole(member, ["owner"], "invite members");
+  assertCan(member, "manageMembers", "invite members");
   const { token, hash } = newToken();
   const expiresAt = new Date(Date.now() + INVITATION_TTL_MS);
   return getDb().transaction(
@@ -64,7 +64,7 @@ export function createInvitation(member: Member, input: { email: string; role: R
 }
 
 export function revokeInvitation(member: Member, invitationId: number, reason: "revoked" | "undeliverable" = "revoked") {
-  assertRole(member, ["owner"], "revoke invitations");
+  assertCan(member, "manageMembers", "revoke invitations");
   return getDb().transaction((tx) => {
     const row = tx
       .select({ id: invitations.id, email: invitations.email, role: invitations.role, acceptedAt: invitations.acceptedAt, revokedAt: invitations.revokedAt })

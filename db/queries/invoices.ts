@@ -1,5 +1,5 @@
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
-import { assertRole, type Member } from "@/lib/auth/member";
+import { assertCan, type Member } from "@/lib/auth/can";
 import { notFound } from "@/lib/auth/errors";
 import type { LinesValues } from "@/lib/estimates/schemas";
 import { HttpError } from "@/lib/http/api";
@@ -13,11 +13,10 @@ import { jobInWorkshop, priceLines, type PricedLineRow } from "./money-lines";
  * workshop without gaps: the counter is bumped inside the same transaction that inserts the invoice.
  */
 
-const OWNERS = ["owner"] as const;
 const INVOICEABLE = ["ready", "returned"] as const;
 
 export function listInvoicesForJob(member: Member, jobId: number) {
-  assertRole(member, OWNERS, "see invoices");
+  assertCan(member, "seeMoney", "see invoices");
   if (!jobInWorkshop(getDb(), member.workshopId, jobId)) throw notFound("That job");
   return getDb()
     .select({ id: invoices.id, number: invoices.number, status: invoices.status, currency: invoices.currency, totalMinor: invoices.totalMinor, issuedAt: invoices.issuedAt, paidAt: invoices.paidAt })
@@ -28,7 +27,7 @@ export function listInvoicesForJob(member: Member, jobId: number) {
 }
 
 export function getInvoice(member: Member, invoiceId: number) {
-  assertRole(member, OWNERS, "see invoices");
+  assertCan(member, "seeMoney", "see invoices");
   const db = getDb();
   const row = db
     .select({
@@ -61,7 +60,7 @@ function approvedEstimateLines(tx: Pick<ReturnType<typeof getDb>, "select">, wor
 
 /** Issue the job's invoice: from the given lines (the estimate plus changes) or the approved estimate as it stands. */
 export function issueInvoice(member: Member, jobId: number, input: { lines?: LinesValues["lines"] }) {
-  assertRole(member, OWNERS, "issue invoices");
+  assertCan(member, "seeMoney", "issue invoices");
   const id = getDb().transaction((tx) => {
     const job = jobInWorkshop(tx, member.workshopId, jobId);
     if (!job) throw notFound("That job");
@@ -113,7 +112,7 @@ export function issueInvoice(member: Member, jobId: number, input: { lines?: Lin
 }
 
 export function voidInvoice(member: Member, invoiceId: number) {
-  assertRole(member, OWNERS, "void invoices");
+  assertCan(member, "seeMoney", "void invoices");
   getDb().transaction((tx) => {
     const invoice = tx.select().from(invoices).where(and(eq(invoices.id, invoiceId), eq(invoices.workshopId, member.workshopId))).get();
     if (!invoice) throw notFound("That invoice");
@@ -128,7 +127,7 @@ export function voidInvoice(member: Member, invoiceId: number) {
 
 /** What checkout needs, for the owner only; includes the current session id, never sent to the browser. */
 export function invoiceForCheckout(member: Member, invoiceId: number) {
-  assertRole(member, OWNERS, "take payments");
+  assertCan(member, "seeMoney", "take payments");
   const invoice = getDb()
     .select({ id: invoices.id, number: invoices.number, status: invoices.status, currency: invoices.currency, totalMinor: invoices.totalMinor, checkoutSessionId: invoices.checkoutSessionId, customerEmail: jobs.customerEmail, workshopId: invoices.workshopId })
     .from(invoices)
@@ -141,7 +140,7 @@ export function invoiceForCheckout(member: Member, invoiceId: number) {
 }
 
 export function recordCheckoutSession(member: Member, invoiceId: number, sessionId: string) {
-  assertRole(member, OWNERS, "take payments");
+  assertCan(member, "seeMoney", "take payments");
   getDb()
     .update(invoices)
     .set({ checkoutSessionId: sessionId })

@@ -1,5 +1,5 @@
 import { and, eq, sql } from "drizzle-orm";
-import type { Member } from "@/lib/auth/member";
+import type { Member } from "@/lib/auth/can";
 import { notFound } from "@/lib/auth/errors";
 import type { Db } from "../client";
 import { getDb } from "../client";

@@ -1,4 +1,4 @@
-import type { Member } from "@/lib/auth/member";
+import type { Member } from "@/lib/auth/can";
 import { listCalculations } from "./calculations";
 import { listFiles } from "./files";
 import { getJob } from "./jobs";

@@ -1,8 +1,8 @@
 import { and, asc, desc, eq, inArray, or, sql, type AnyColumn, type SQL } from "drizzle-orm";
 import type { JobStatus } from "@/db/enums";
 import { JOB_STATUS_LABELS } from "@/db/enums";
-import { assertRole, can, type Member } from "@/lib/auth/member";
-import { forbidden, notFound } from "@/lib/auth/errors";
+import { assertCan, type Member } from "@/lib/auth/can";
+import { notFound } from "@/lib/auth/errors";
 import type { JobCreate, JobListQuery, JobUpdate } from "@/lib/jobs/job-schemas";
 import { getDb } from "../client";
 import { files, jobs, logEntries } from "../schema";
@@ -88,7 +88,7 @@ export function getJob(member: Member, jobId: number) {
 }
 
 export function createJob(member: Member, input: JobCreate) {
-  if (!can.editJobs(member)) throw forbidden("book in jobs");
+  assertCan(member, "editJobs", "book in jobs");
   return getDb().transaction((tx) => {
     const job = tx
       .insert(jobs)
@@ -103,7 +103,7 @@ export function createJob(member: Member, input: JobCreate) {
 }
 
 export function updateJob(member: Member, jobId: number, input: JobUpdate) {
-  if (!can.editJobs(member)) throw forbidden("edit job details");
+  assertCan(member, "editJobs", "edit job details");
   getJob(member, jobId);
   const changes = Object.fromEntries(Object.entries(input).filter(([, v]) => v !== undefined));
   return getDb()
@@ -116,7 +116,7 @@ export function updateJob(member: Member, jobId: number, input: JobUpdate) {
 
 /** Moves a job along the workflow and writes the change to its log, in one transaction. */
 export function changeJobStatus(member: Member, jobId: number, status: JobStatus) {
-  if (!can.changeStatus(member)) throw forbidden("change a job's status");
+  assertCan(member, "changeStatus", "change a job's status");
   return getDb().transaction((tx) => {
     const before = tx
       .select({ status: jobs.status })
@@ -148,7 +148,7 @@ export function changeJobStatus(member: Member, jobId: number, status: JobStatus
 
 /** Owners only. Parts, readings, calculations, files and log go with it (foreign-key cascade). */
 export function deleteJob(member: Member, jobId: number): { storedNames: string[] } {
-  assertRole(member, ["owner"], "delete jobs");
+  assertCan(member, "deleteJobs");
   return getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
     const stored = tx

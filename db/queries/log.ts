@@ -1,6 +1,5 @@
 import { and, desc, eq } from "drizzle-orm";
-import { can, type Member } from "@/lib/auth/member";
-import { forbidden } from "@/lib/auth/errors";
+import { assertCan, type Member } from "@/lib/auth/can";
 import type { LogEntryValues } from "@/lib/jobs/log-schemas";
 import { getDb } from "../client";
 import { logEntries, users } from "../schema";
@@ -32,7 +31,7 @@ export function listLog(member: Member, jobId: number) {
 export type LogRow = ReturnType<typeof listLog>[number];
 
 export function addLogEntry(member: Member, jobId: number, input: LogEntryValues) {
-  if (!can.addNotes(member)) throw forbidden("write in the log");
+  assertCan(member, "addNotes", "write in the log");
   return getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
     const data = input.kind === "power-up" ? { supplyVoltage: input.supplyVoltage, currentDrawn: input.currentDrawn } : null;

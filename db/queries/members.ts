@@ -1,7 +1,7 @@
 import { and, asc, count, eq } from "drizzle-orm";
 import type { Role } from "@/db/enums";
 import { notFound } from "@/lib/auth/errors";
-import { assertRole, type Member } from "@/lib/auth/member";
+import { assertCan, type Member } from "@/lib/auth/can";
 import { HttpError } from "@/lib/http/api";
 import { getDb, type Db } from "../client";
 import { memberships, users } from "../schema";
@@ -44,7 +44,7 @@ function ownerCount(tx: Tx, workshopId: number): number {
 }
 
 export function changeMemberRole(member: Member, membershipId: number, role: Role) {
-  assertRole(member, ["owner"], "change members' roles");
+  assertCan(member, "manageMembers", "change members' roles");
   // Immediate transaction: the owner count and the update see the same state even with two owners acting at once.
   return getDb().transaction(
     (tx) => {
@@ -65,7 +65,7 @@ export function changeMemberRole(member: Member, membershipId: number, role: Rol
 }
 
 export function removeMember(member: Member, membershipId: number) {
-  assertRole(member, ["owner"], "remove members");
+  assertCan(member, "manageMembers", "remove members");
   return getDb().transaction(
     (tx) => {
       const target = findMembership(tx, member, membershipId);

@@ -1,6 +1,6 @@
 import { and, asc, eq } from "drizzle-orm";
-import { can, type Member } from "@/lib/auth/member";
-import { forbidden, notFound } from "@/lib/auth/errors";
+import { assertCan, type Member } from "@/lib/auth/can";
+import { notFound } from "@/lib/auth/errors";
 import type { PartUpdate, PartValues } from "@/lib/jobs/part-schemas";
 import { getDb } from "../client";
 import { parts } from "../schema";
@@ -34,7 +34,7 @@ export function listParts(member: Member, jobId: number) {
 }
 
 function assertCanEdit(member: Member) {
-  if (!can.editJobs(member)) throw forbidden("edit the parts list");
+  assertCan(member, "editJobs", "edit the parts list");
 }
 
 export function createPart(member: Member, jobId: number, input: PartValues) {
@@ -78,7 +78,7 @@ export function updatePart(member: Member, jobId: number, partId: number, input:
 }
 
 export function deletePart(member: Member, jobId: number, partId: number) {
-  if (!can.editJobs(member)) throw forbidden("remove parts");
+  assertCan(member, "editJobs", "remove parts");
   getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
     const gone = tx

@@ -1,5 +1,5 @@
 import { and, asc, eq } from "drizzle-orm";
-import { can, type Member } from "@/lib/auth/member";
+import { can, type Member } from "@/lib/auth/can";
 import { forbidden, notFound } from "@/lib/auth/errors";
 import { judgeReading } from "@/lib/jobs/reading-verdict";
 import type { ReadingValues } from "@/lib/jobs/reading-schemas";

@@ -1,7 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import { JOB_STATUS_LABELS } from "@/db/enums";
 import { notFound } from "@/lib/auth/errors";
-import { can, type Member } from "@/lib/auth/member";
+import { can, type Member } from "@/lib/auth/can";
 import { readySubject, renderReadyMessage } from "@/lib/mail/ready-message";
 import { getDb } from "../client";
 import { jobs, logEntries, workshops } from "../schema";
@@ -41,7 +41,7 @@ export function readyMessageDraft(member: Member, jobId: number): ReadyDraft {
   });
   const subject = readySubject(row.workshopName, row.title);
   const base = { to: row.customerEmail, subject, text };
-  if (!can.changeStatus(member)) return { canSend: false, blocked: "role", reason: "Technicians and owners send customers their messages.", ...base };
+  if (!can(member, "changeStatus")) return { canSend: false, blocked: "role", reason: "Technicians and owners send customers their messages.", ...base };
   if (row.status !== "ready") return { canSend: false, blocked: "status", reason: `The job is at “${JOB_STATUS_LABELS[row.status]}”; the message can go when it reaches “${JOB_STATUS_LABELS.ready}”.`, ...base };
   if (!row.customerEmail) return { canSend: false, blocked: "no-email", reason: "Add the customer's e-mail to the job first.", ...base };
   return { canSend: true, ...base, to: row.customerEmail };

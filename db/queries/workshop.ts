@@ -1,5 +1,5 @@
 import { and, eq, ne } from "drizzle-orm";
-import { assertRole, type Member } from "@/lib/auth/member";
+import { assertCan, type Member } from "@/lib/auth/can";
 import { HttpError } from "@/lib/http/api";
 import type { ChargesInput } from "@/lib/workshop/charges-schema";
 import type { WorkshopSettingsInput } from "@/lib/workshop/schemas";
@@ -25,7 +25,7 @@ export function getWorkshopSettings(member: Member) {
 export type WorkshopSettings = ReturnType<typeof getWorkshopSettings>;
 
 export function updateWorkshopSettings(member: Member, input: WorkshopSettingsInput) {
-  assertRole(member, ["owner"], "change the workshop's settings");
+  assertCan(member, "manageWorkshop", "change the workshop's settings");
   return getDb().transaction((tx) => {
     const before = tx.select(settingsColumns).from(workshops).where(eq(workshops.id, member.workshopId)).get();
     const updated = tx.update(workshops).set(input).where(eq(workshops.id, member.workshopId)).returning(settingsColumns).get();
@@ -51,7 +51,7 @@ function documentCurrency(tx: Reader, workshopId: number, except?: string): stri
 
 /** Currency, hourly rate and tax rate. Technicians prepare estimates, so they may read them; apprentices see no prices. */
 export function getCharges(member: Member) {
-  assertRole(member, ["owner", "technician"], "see the workshop's charges");
+  assertCan(member, "seeCharges");
   const db = getDb();
   const row = db.select(chargesColumns).from(workshops).where(eq(workshops.id, member.workshopId)).get();
   if (!row) throw new Error("Member's workshop is missing");
@@ -65,7 +65,7 @@ export type Charges = ReturnType<typeof getCharges>;
  * workshop's documents in two).
  */
 export function updateCharges(member: Member, input: ChargesInput) {
-  assertRole(member, ["owner"], "change the workshop's charges");
+  assertCan(member, "manageWorkshop", "change the workshop's charges");
   return getDb().transaction((tx) => {
     const before = tx.select(chargesColumns).from(workshops).where(eq(workshops.id, member.workshopId)).get();
     if (!before) throw new Error("Member's workshop is missing");

@@ -1,20 +1,10 @@
 import { asc, eq, sql } from "drizzle-orm";
 import { cache } from "react";
 import { getDb } from "@/db/client";
-import type { Role } from "@/db/enums";
 import { memberships, users, workshops } from "@/db/schema";
-import { forbidden, notSignedIn } from "./errors";
+import type { Member } from "./can";
+import { notSignedIn } from "./errors";
 import { SESSION_MAX_AGE_SECONDS, getSession } from "./session";
-
-/** The signed-in person as every query function sees them. Never carries the password hash. */
-export interface Member {
-  userId: number;
-  email: string;
-  name: string;
-  workshopId: number;
-  workshopName: string;
-  role: Role;
-}
 
 /** Load the member for a user id, checking nothing else: the preferred workshop if they belong to it, else their first. */
 export function loadMember(userId: number, preferredWorkshopId?: number): (Member & { sessionVersion: number }) | null {
@@ -55,26 +45,8 @@ export async function requireMember(): Promise<Member> {
   return member;
 }
 
-export function assertRole(member: Member, roles: readonly Role[], what?: string): void {
-  if (!roles.includes(member.role)) throw forbidden(what);
-}
-
-export async function requireRole(roles: readonly Role[], what?: string): Promise<Member> {
-  const member = await requireMember();
-  assertRole(member, roles, what);
-  return member;
-}
-
-/** Role capabilities of PRODUCT.md, named so call sites read as the rule they apply. */
-export const can = {
-  editJobs: (m: Member) => m.role === "owner" || m.role === "technician",
-  changeStatus: (m: Member) => m.role === "owner" || m.role === "technician",
-  deleteJobs: (m: Member) => m.role === "owner",
-  manageMembers: (m: Member) => m.role === "owner",
-  seeMoney: (m: Member) => m.role === "owner",
-  prepareEstimates: (m: Member) => m.role === "owner" || m.role === "technician",
-  addNotes: (_m: Member) => true,
-};
+// The role rules live in ./can; re-exported here for the pages that load the member and ask in one import.
+export { can, type Member } from "./can";
 
 export async function bumpSessionVersion(userId: number): Promise<void> {
   getDb()

@@ -1,31 +1,39 @@
 import { describe, expect, test } from "vitest";
-import { assertRole, can, type Member } from "@/lib/auth/member";
+import { assertCan, can, type Action, type Member } from "@/lib/auth/can";
 import { AuthError } from "@/lib/auth/errors";
 
 const member = (role: Member["role"]): Member => ({ userId: 1, email: "a@b.test", name: "A", workshopId: 1, workshopName: "W", role });
 
-// The role rules of PRODUCT.md, "Users and roles".
-describe("role capabilities", () => {
-  test.each([
-    ["owner", true, true, true, true],
-    ["technician", true, true, false, false],
-    ["apprentice", false, false, false, false],
-  ] as const)("%s: edit jobs %s, change status %s, delete %s, members %s", (role, edit, status, del, members) => {
-    const m = member(role);
-    expect(can.editJobs(m)).toBe(edit);
-    expect(can.changeStatus(m)).toBe(status);
-    expect(can.deleteJobs(m)).toBe(del);
-    expect(can.manageMembers(m)).toBe(members);
-    expect(can.seeMoney(m)).toBe(role === "owner");
+// The role rules of PRODUCT.md, "Users and roles": owners everything; technicians edit jobs, change status and
+// prepare estimates but neither delete nor see invoices; apprentices add to the record and nothing more.
+const EXPECTED: Record<Action, [owner: boolean, technician: boolean, apprentice: boolean]> = {
+  editJobs: [true, true, false],
+  changeStatus: [true, true, false],
+  deleteJobs: [true, false, false],
+  addNotes: [true, true, true],
+  prepareEstimates: [true, true, false],
+  seeCharges: [true, true, false],
+  seeMoney: [true, false, false],
+  manageMembers: [true, false, false],
+  manageWorkshop: [true, false, false],
+};
+
+describe("role rules", () => {
+  test.each(Object.entries(EXPECTED) as [Action, [boolean, boolean, boolean]][])("%s", (action, [owner, technician, apprentice]) => {
+    expect([can(member("owner"), action), can(member("technician"), action), can(member("apprentice"), action)]).toEqual([owner, technician, apprentice]);
+    // The by-name form reads the same table.
+    for (const role of ["owner", "technician", "apprentice"] as const) expect(can[action](member(role))).toBe(can(member(role), action));
   });
 
-  test("assertRole throws a 403 for a role not allowed", () => {
-    expect(() => assertRole(member("apprentice"), ["owner", "technician"])).toThrow(AuthError);
+  test("assertCan throws a 403 naming what was refused, and passes an allowed role", () => {
+    expect(() => assertCan(member("apprentice"), "editJobs", "remove parts")).toThrow(AuthError);
     try {
-      assertRole(member("apprentice"), ["owner"]);
+      assertCan(member("technician"), "seeMoney");
+      expect.unreachable();
     } catch (e) {
       expect((e as AuthError).status).toBe(403);
+      expect((e as AuthError).message).toBe("Your role does not allow you to see invoices.");
     }
-    expect(() => assertRole(member("owner"), ["owner"])).not.toThrow();
+    expect(() => assertCan(member("owner"), "deleteJobs")).not.toThrow();
   });
 });

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { describeCalculators } from "@/lib/calc/registry";
-import { handle } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 
 /** Public: the calculators and their inputs and outputs, as PRODUCT.md's contract gives them. */
-export const GET = handle(() => NextResponse.json(describeCalculators()));
+export const GET = route({ auth: "public" }, () => NextResponse.json(describeCalculators()));

@@ -1,12 +1,10 @@
 import { NextResponse } from "next/server";
-import { requireMember } from "@/lib/auth/member";
-import { handle } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 
-export const GET = handle(async () => {
-  const m = await requireMember();
-  return NextResponse.json({
+export const GET = route({}, ({ member: m }) =>
+  NextResponse.json({
     user: { id: m.userId, email: m.email, name: m.name },
     workshop: { id: m.workshopId, name: m.workshopName },
     role: m.role,
-  });
-});
+  }),
+);

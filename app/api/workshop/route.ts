@@ -1,16 +1,10 @@
 import { NextResponse } from "next/server";
 import { getWorkshopSettings, updateWorkshopSettings } from "@/db/queries/workshop";
-import { requireMember } from "@/lib/auth/member";
-import { handle, parseJson } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 import { workshopSettingsSchema } from "@/lib/workshop/schemas";
 
-export const GET = handle(async () => {
-  const member = await requireMember();
-  return NextResponse.json({ workshop: getWorkshopSettings(member) });
-});
+export const GET = route({}, ({ member }) => NextResponse.json({ workshop: getWorkshopSettings(member) }));
 
-export const PATCH = handle(async (request: Request) => {
-  const member = await requireMember();
-  const input = await parseJson(request, workshopSettingsSchema);
-  return NextResponse.json({ workshop: updateWorkshopSettings(member, input) });
-});
+export const PATCH = route({ role: "manageWorkshop", body: workshopSettingsSchema }, ({ member, body }) =>
+  NextResponse.json({ workshop: updateWorkshopSettings(member, body) }),
+);

@@ -8,6 +8,7 @@ import { Card, EmptyState } from "@/components/ui/card";
 import { getInvoice } from "@/db/queries/invoices";
 import { AuthError } from "@/lib/auth/errors";
 import { can, getMember } from "@/lib/auth/member";
+import { parseId } from "@/lib/ids";
 
 export const metadata: Metadata = { title: "Invoice" };
 
@@ -23,7 +24,8 @@ export default async function InvoicePage({ params, searchParams }: { params: Pr
   }
   let invoice;
   try {
-    invoice = /^[1-9]\d{0,12}$/.test(id) ? getInvoice(member, Number(id)) : null;
+    const invoiceId = parseId(id);
+    invoice = invoiceId === null ? null : getInvoice(member, invoiceId);
   } catch (err) {
     if (err instanceof AuthError && err.status === 404) notFound();
     throw err;

@@ -2,7 +2,8 @@ import { NextResponse, after } from "next/server";
 import { createPasswordReset } from "@/db/queries/password-resets";
 import { RateLimiter, clientAddress } from "@/lib/auth/rate-limit";
 import { RESET_ANSWER, resetRequestSchema } from "@/lib/auth/reset-schemas";
-import { HttpError, handle, parseJson } from "@/lib/http/api";
+import { HttpError } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 import { appUrl } from "@/lib/mail/config";
 import { passwordResetMail } from "@/lib/mail/messages";
 import { sendMail } from "@/lib/mail/send";
@@ -14,8 +15,7 @@ const resetLimits = (limits.__glowbenchResetLimits ??= {
 });
 
 /** Same answer, same timing, whether or not the address exists: the e-mail goes out after the response. */
-export const POST = handle(async (request: Request) => {
-  const { email } = await parseJson(request, resetRequestSchema);
+export const POST = route({ auth: "public", body: resetRequestSchema }, async ({ request, body: { email } }) => {
   const address = clientAddress(request);
   const wait = resetLimits.address.retryAfter(address);
   if (wait > 0) throw new HttpError(429, `Too many requests. Try again in ${Math.ceil(wait / 60)} minute(s).`, {}, { "Retry-After": String(wait) });

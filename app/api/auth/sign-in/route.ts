@@ -5,12 +5,12 @@ import { burnPasswordCheck, verifyPassword } from "@/lib/auth/password";
 import { clientAddress, signInLimits } from "@/lib/auth/rate-limit";
 import { signInSchema } from "@/lib/auth/schemas";
 import { startSession } from "@/lib/auth/session";
-import { HttpError, handle, parseJson } from "@/lib/http/api";
+import { HttpError } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 
 const WRONG = "E-mail or password is wrong.";
 
-export const POST = handle(async (request: Request) => {
-  const { email, password } = await parseJson(request, signInSchema);
+export const POST = route({ auth: "public", body: signInSchema }, async ({ request, body: { email, password } }) => {
   const address = clientAddress(request);
 
   // Throttle before any hashing, so a flood costs us nothing.

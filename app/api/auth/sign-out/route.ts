@@ -1,15 +1,13 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
-import { bumpSessionVersion, getMember } from "@/lib/auth/member";
+import { bumpSessionVersion } from "@/lib/auth/member";
 import { endSession } from "@/lib/auth/session";
-import { handle, parseJson } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 
 const signOutSchema = z.object({ everywhere: z.boolean().optional() }).strict();
 
 /** Signs out this browser; with `{ everywhere: true }` every other session of the user ends too. */
-export const POST = handle(async (request: Request) => {
-  const { everywhere } = await parseJson(request, signOutSchema);
-  const member = await getMember();
+export const POST = route({ auth: "optional", body: signOutSchema }, async ({ member, body: { everywhere } }) => {
   if (member && everywhere) await bumpSessionVersion(member.userId);
   await endSession();
   return NextResponse.json({ ok: true });

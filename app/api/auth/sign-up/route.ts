@@ -3,10 +3,10 @@ import { createWorkshopWithOwner, emailTaken } from "@/db/queries/auth";
 import { hashPassword } from "@/lib/auth/password";
 import { signUpSchema } from "@/lib/auth/schemas";
 import { startSession } from "@/lib/auth/session";
-import { HttpError, handle, parseJson } from "@/lib/http/api";
+import { HttpError } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 
-export const POST = handle(async (request: Request) => {
-  const input = await parseJson(request, signUpSchema);
+export const POST = route({ auth: "public", body: signUpSchema }, async ({ body: input }) => {
   if (emailTaken(input.email)) {
     throw new HttpError(409, "That e-mail already has an account.", { email: "That e-mail already has an account; sign in instead." });
   }

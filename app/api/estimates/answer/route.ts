@@ -2,11 +2,10 @@ import { NextResponse } from "next/server";
 import { answerEstimate } from "@/db/queries/estimates";
 import { answerSchema } from "@/lib/estimates/schemas";
 import { notifyPreparer } from "@/lib/estimates/mail";
-import { handle, parseJson } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 
 /** The customer's answer from the e-mailed link: no account, the single-use token is the credential. */
-export const POST = handle(async (request: Request) => {
-  const input = await parseJson(request, answerSchema);
+export const POST = route({ auth: "public", body: answerSchema }, async ({ body: input }) => {
   const answered = answerEstimate(input.token, input.decision, input.note);
   await notifyPreparer(answered);
   return NextResponse.json({ status: answered.status });

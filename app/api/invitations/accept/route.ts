@@ -1,16 +1,16 @@
 import { NextResponse } from "next/server";
 import { findCredentials } from "@/db/queries/auth";
 import { INVITATION_GONE, acceptInvitation, findInvitation } from "@/db/queries/invitations";
-import { requireMember } from "@/lib/auth/member";
+import { notSignedIn } from "@/lib/auth/errors";
 import { hashPassword, verifyPassword } from "@/lib/auth/password";
 import { clientAddress, signInLimits } from "@/lib/auth/rate-limit";
 import { startSession } from "@/lib/auth/session";
-import { HttpError, handle, parseJson } from "@/lib/http/api";
+import { HttpError } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 import { acceptInvitationSchema } from "@/lib/workshop/schemas";
 
 /** Joins a workshop from an invitation link: as a new account, with an existing account's password, or as the signed-in invitee. */
-export const POST = handle(async (request: Request) => {
-  const input = await parseJson(request, acceptInvitationSchema);
+export const POST = route({ auth: "optional", body: acceptInvitationSchema }, async ({ request, member, body: input }) => {
   const invitation = findInvitation(input.token);
   if (!invitation) throw new HttpError(404, "That invitation link is not valid. Check you opened the whole link from the e-mail.");
   if (invitation.state !== "pending") throw new HttpError(410, INVITATION_GONE[invitation.state]);
@@ -33,7 +33,7 @@ export const POST = handle(async (request: Request) => {
     signInLimits.account.clear(invitation.email);
     joined = acceptInvitation(input.token, { userId: credentials.id });
   } else {
-    const member = await requireMember();
+    if (!member) throw notSignedIn();
     joined = acceptInvitation(input.token, { userId: member.userId });
   }
   await startSession(joined.userId, joined.sessionVersion, joined.workshopId);

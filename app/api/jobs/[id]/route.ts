@@ -1,30 +1,19 @@
 import { NextResponse } from "next/server";
 import { getJobRecord } from "@/db/queries/job-record";
 import { deleteJob, updateJob } from "@/db/queries/jobs";
-import { requireMember } from "@/lib/auth/member";
-import { handle, parseJson } from "@/lib/http/api";
-import { idParam, type JobParams } from "@/lib/http/ids";
+import { route } from "@/lib/http/route";
 import { jobUpdateSchema } from "@/lib/jobs/job-schemas";
 import { removeStored } from "@/lib/jobs/uploads";
 
+const ids = { id: "That job" };
+
 /** GET: the whole record of one job (details, parts, readings with verdicts, calculations, files, log). */
-export const GET = handle(async (_request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  const jobId = idParam((await params).id, "That job");
-  return NextResponse.json(getJobRecord(member, jobId));
-});
+export const GET = route({ ids }, ({ member, ids }) => NextResponse.json(getJobRecord(member, ids.id)));
 
-export const PATCH = handle(async (request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  const jobId = idParam((await params).id, "That job");
-  const input = await parseJson(request, jobUpdateSchema);
-  return NextResponse.json({ job: updateJob(member, jobId, input) });
-});
+export const PATCH = route({ role: "editJobs", ids, body: jobUpdateSchema }, ({ member, ids, body }) => NextResponse.json({ job: updateJob(member, ids.id, body) }));
 
-export const DELETE = handle(async (_request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  const jobId = idParam((await params).id, "That job");
-  const { storedNames } = deleteJob(member, jobId);
+export const DELETE = route({ role: "deleteJobs", ids }, async ({ member, ids }) => {
+  const { storedNames } = deleteJob(member, ids.id);
   await Promise.all(storedNames.map(removeStored));
   return NextResponse.json({ deleted: true });
 });

@@ -1,9 +1,5 @@
 import { NextResponse } from "next/server";
 import { listAuditEvents } from "@/db/queries/audit";
-import { requireMember } from "@/lib/auth/member";
-import { handle } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 
-export const GET = handle(async () => {
-  const member = await requireMember();
-  return NextResponse.json({ events: listAuditEvents(member) });
-});
+export const GET = route({ role: "manageWorkshop" }, ({ member }) => NextResponse.json({ events: listAuditEvents(member) }));

@@ -1,21 +1,15 @@
 import { NextResponse } from "next/server";
 import { createInvitation, listInvitations, revokeInvitation } from "@/db/queries/invitations";
-import { assertRole, requireMember } from "@/lib/auth/member";
-import { HttpError, handle, parseJson } from "@/lib/http/api";
+import { HttpError } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 import { appUrl } from "@/lib/mail/config";
 import { invitationMail } from "@/lib/mail/messages";
 import { sendMail } from "@/lib/mail/send";
 import { invitationSchema } from "@/lib/workshop/schemas";
 
-export const GET = handle(async () => {
-  const member = await requireMember();
-  return NextResponse.json({ invitations: listInvitations(member) });
-});
+export const GET = route({ role: "manageMembers" }, ({ member }) => NextResponse.json({ invitations: listInvitations(member) }));
 
-export const POST = handle(async (request: Request) => {
-  const member = await requireMember();
-  assertRole(member, ["owner"], "invite members");
-  const input = await parseJson(request, invitationSchema);
+export const POST = route({ role: "manageMembers", body: invitationSchema }, async ({ request, member, body: input }) => {
   const invitation = createInvitation(member, input);
   const link = `${appUrl(request)}/invite/${invitation.token}`;
   try {

@@ -1,9 +1,5 @@
 import { NextResponse } from "next/server";
 import { listMembers } from "@/db/queries/members";
-import { requireMember } from "@/lib/auth/member";
-import { handle } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 
-export const GET = handle(async () => {
-  const member = await requireMember();
-  return NextResponse.json({ members: listMembers(member) });
-});
+export const GET = route({}, ({ member }) => NextResponse.json({ members: listMembers(member) }));

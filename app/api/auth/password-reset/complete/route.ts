@@ -3,11 +3,11 @@ import { RESET_GONE, completePasswordReset, findPasswordReset } from "@/db/queri
 import { hashPassword } from "@/lib/auth/password";
 import { resetPasswordSchema } from "@/lib/auth/reset-schemas";
 import { endSession } from "@/lib/auth/session";
-import { HttpError, handle, parseJson } from "@/lib/http/api";
+import { HttpError } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 
 /** Sets the new password; every session of the user ends, this browser's too, so they sign in afresh. */
-export const POST = handle(async (request: Request) => {
-  const { token, password } = await parseJson(request, resetPasswordSchema);
+export const POST = route({ auth: "public", body: resetPasswordSchema }, async ({ body: { token, password } }) => {
   // Check the link before spending a hash on it; completePasswordReset checks again atomically.
   const state = findPasswordReset(token);
   if (state === "unknown") throw new HttpError(404, "That reset link is not valid. Check you opened the whole link from the e-mail.");

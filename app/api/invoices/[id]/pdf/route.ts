@@ -2,15 +2,12 @@ import { renderToBuffer } from "@react-pdf/renderer";
 import { createElement } from "react";
 import { InvoicePdf } from "@/components/invoices/invoice-pdf";
 import { getInvoice } from "@/db/queries/invoices";
-import { requireMember } from "@/lib/auth/member";
-import { handle } from "@/lib/http/api";
-import { idParam } from "@/lib/http/ids";
+import { route } from "@/lib/http/route";
 
 export const runtime = "nodejs";
 
-export const GET = handle(async (_request: Request, { params }: { params: Promise<{ id: string }> }) => {
-  const member = await requireMember();
-  const invoice = getInvoice(member, idParam((await params).id, "That invoice"));
+export const GET = route({ role: "seeMoney", ids: { id: "That invoice" } }, async ({ member, ids }) => {
+  const invoice = getInvoice(member, ids.id);
   const pdf = await renderToBuffer(createElement(InvoicePdf, { invoice }) as Parameters<typeof renderToBuffer>[0]);
   return new Response(new Uint8Array(pdf), {
     headers: {

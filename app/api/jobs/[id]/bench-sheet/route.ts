@@ -1,15 +1,11 @@
-import { requireMember } from "@/lib/auth/member";
-import { handle } from "@/lib/http/api";
-import { idParam, type JobParams } from "@/lib/http/ids";
+import { route } from "@/lib/http/route";
 import { renderBenchSheet } from "@/lib/jobs/bench-sheet";
 import { downloadName } from "@/lib/jobs/download-name";
 
 export const runtime = "nodejs";
 
 /** The job's printable bench sheet (PDF), for any member of its workshop. */
-export const GET = handle(async (request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  const jobId = idParam((await params).id, "That job");
+export const GET = route({ ids: { id: "That job" } }, async ({ request, member, ids: { id: jobId } }) => {
   const pdf = await renderBenchSheet(member, jobId);
   const inline = new URL(request.url).searchParams.get("inline") === "1";
   return new Response(new Uint8Array(pdf), {

@@ -1,20 +1,10 @@
 import { NextResponse } from "next/server";
 import { getEstimateForJob, saveEstimate } from "@/db/queries/estimates";
-import { requireMember } from "@/lib/auth/member";
 import { linesSchema } from "@/lib/estimates/schemas";
-import { handle, parseJson } from "@/lib/http/api";
-import { idParam } from "@/lib/http/ids";
+import { route } from "@/lib/http/route";
 
-type Ctx = { params: Promise<{ id: string }> };
+export const GET = route({ role: "prepareEstimates", ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json(getEstimateForJob(member, ids.id)));
 
-export const GET = handle(async (_request: Request, { params }: Ctx) => {
-  const member = await requireMember();
-  return NextResponse.json(getEstimateForJob(member, idParam((await params).id, "That job")));
-});
-
-export const PUT = handle(async (request: Request, { params }: Ctx) => {
-  const member = await requireMember();
-  const jobId = idParam((await params).id, "That job");
-  const input = await parseJson(request, linesSchema);
-  return NextResponse.json(saveEstimate(member, jobId, input));
-});
+export const PUT = route({ role: "prepareEstimates", ids: { id: "That job" }, body: linesSchema }, ({ member, ids, body }) =>
+  NextResponse.json(saveEstimate(member, ids.id, body)),
+);

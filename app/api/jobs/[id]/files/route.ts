@@ -1,34 +1,20 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { assertCanUpload, createFileRecord, listFiles } from "@/db/queries/files";
-import { requireMember } from "@/lib/auth/member";
-import { HttpError, handle, sameOrigin } from "@/lib/http/api";
-import { idParam, type JobParams } from "@/lib/http/ids";
+import { HttpError } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 import { MAX_UPLOAD_BYTES, checkOriginalName, prepareUpload, removeStored, storeUpload } from "@/lib/jobs/uploads";
 
-export const GET = handle(async (_request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  return NextResponse.json({ files: listFiles(member, idParam((await params).id, "That job")) });
-});
+export const GET = route({ ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json({ files: listFiles(member, ids.id) }));
 
 const kindField = z.enum(["photo", "schematic"], { error: "Kind must be photo or schematic." }).default("photo");
 
+/** The file itself may be up to 20 MB; the form around it gets 64 KiB of room. */
+const uploadLimit = { bytes: MAX_UPLOAD_BYTES + 64 * 1024, message: "Files may be up to 20 MB.", fields: { file: "This file is over 20 MB; export a smaller copy." } };
+
 /** multipart/form-data with `file` and optional `kind`. Every check runs before anything is written. */
-export const POST = handle(async (request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  const jobId = idParam((await params).id, "That job");
+export const POST = route({ role: "editJobs", ids: { id: "That job" }, body: "form", limit: uploadLimit }, async ({ member, ids: { id: jobId }, body: form }) => {
   assertCanUpload(member, jobId);
-  if (!sameOrigin(request)) throw new HttpError(403, "Cross-site requests are not accepted.");
-  if (!/^multipart\/form-data\b/i.test(request.headers.get("content-type") ?? "")) throw new HttpError(415, "Send the file as multipart/form-data.");
-  if (Number(request.headers.get("content-length") ?? "0") > MAX_UPLOAD_BYTES + 64 * 1024) {
-    throw new HttpError(413, "Files may be up to 20 MB.", { file: "This file is over 20 MB; export a smaller copy." });
-  }
-  let form: FormData;
-  try {
-    form = await request.formData();
-  } catch {
-    throw new HttpError(400, "The upload could not be read.", { file: "Choose the file again and retry." });
-  }
   const file = form.get("file");
   if (!(file instanceof File)) throw new HttpError(400, "Choose a file to attach.", { file: "Choose a file to attach." });
   const kind = kindField.safeParse(form.get("kind") ?? undefined);

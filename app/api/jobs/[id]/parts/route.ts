@@ -1,18 +1,10 @@
 import { NextResponse } from "next/server";
 import { createPart, listParts } from "@/db/queries/parts";
-import { requireMember } from "@/lib/auth/member";
-import { handle, parseJson } from "@/lib/http/api";
-import { idParam, type JobParams } from "@/lib/http/ids";
+import { route } from "@/lib/http/route";
 import { partSchema } from "@/lib/jobs/part-schemas";
 
-export const GET = handle(async (_request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  return NextResponse.json({ parts: listParts(member, idParam((await params).id, "That job")) });
-});
+export const GET = route({ ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json({ parts: listParts(member, ids.id) }));
 
-export const POST = handle(async (request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  const jobId = idParam((await params).id, "That job");
-  const input = await parseJson(request, partSchema);
-  return NextResponse.json({ part: createPart(member, jobId, input) }, { status: 201 });
-});
+export const POST = route({ role: "editJobs", ids: { id: "That job" }, body: partSchema }, ({ member, ids, body }) =>
+  NextResponse.json({ part: createPart(member, ids.id, body) }, { status: 201 }),
+);

@@ -1,19 +1,11 @@
 import { NextResponse } from "next/server";
 import { createReading, listReadings } from "@/db/queries/readings";
-import { requireMember } from "@/lib/auth/member";
-import { handle, parseJson } from "@/lib/http/api";
-import { idParam, type JobParams } from "@/lib/http/ids";
+import { route } from "@/lib/http/route";
 import { readingSchema } from "@/lib/jobs/reading-schemas";
 
-export const GET = handle(async (_request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  return NextResponse.json({ readings: listReadings(member, idParam((await params).id, "That job")) });
-});
+export const GET = route({ ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json({ readings: listReadings(member, ids.id) }));
 
 /** Every member, apprentices included, may add a reading; its verdict comes back with it. */
-export const POST = handle(async (request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  const jobId = idParam((await params).id, "That job");
-  const input = await parseJson(request, readingSchema);
-  return NextResponse.json({ reading: createReading(member, jobId, input) }, { status: 201 });
-});
+export const POST = route({ role: "addNotes", ids: { id: "That job" }, body: readingSchema }, ({ member, ids, body }) =>
+  NextResponse.json({ reading: createReading(member, ids.id, body) }, { status: 201 }),
+);

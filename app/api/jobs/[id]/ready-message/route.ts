@@ -1,9 +1,7 @@
 import { NextResponse } from "next/server";
 import { readyMessageDraft, recordReadyMessageSent } from "@/db/queries/ready-message";
-import { requireMember } from "@/lib/auth/member";
-import { forbidden } from "@/lib/auth/errors";
-import { HttpError, handle, parseJson } from "@/lib/http/api";
-import { idParam, type JobParams } from "@/lib/http/ids";
+import { HttpError } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 import { renderBenchSheet } from "@/lib/jobs/bench-sheet";
 import { readyMessageSchema } from "@/lib/mail/ready-schemas";
 import { sendMail } from "@/lib/mail/send";
@@ -11,18 +9,11 @@ import { sendMail } from "@/lib/mail/send";
 export const runtime = "nodejs";
 
 /** The draft: the workshop's template filled in for this job, and whether it may be sent now. */
-export const GET = handle(async (_request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  return NextResponse.json({ draft: readyMessageDraft(member, idParam((await params).id, "That job")) });
-});
+export const GET = route({ ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json({ draft: readyMessageDraft(member, ids.id) }));
 
 /** Sends the (possibly edited) message to the job's customer with the bench sheet attached. */
-export const POST = handle(async (request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  const jobId = idParam((await params).id, "That job");
+export const POST = route({ role: "changeStatus", ids: { id: "That job" }, body: readyMessageSchema }, async ({ member, ids: { id: jobId }, body: input }) => {
   const draft = readyMessageDraft(member, jobId);
-  if (!draft.canSend && draft.blocked === "role") throw forbidden("send customers messages");
-  const input = await parseJson(request, readyMessageSchema);
   if (!draft.canSend) throw new HttpError(409, draft.reason);
   const pdf = await renderBenchSheet(member, jobId);
   const attachment = `bench-sheet-job-${jobId}.pdf`;

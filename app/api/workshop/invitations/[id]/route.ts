@@ -1,12 +1,7 @@
 import { NextResponse } from "next/server";
 import { revokeInvitation } from "@/db/queries/invitations";
-import { requireMember } from "@/lib/auth/member";
-import { assertSameOrigin, handle } from "@/lib/http/api";
-import { idParam } from "@/lib/http/ids";
+import { route } from "@/lib/http/route";
 
-export const DELETE = handle(async (request: Request, { params }: { params: Promise<{ id: string }> }) => {
-  assertSameOrigin(request);
-  const member = await requireMember();
-  const revoked = revokeInvitation(member, idParam((await params).id, "That invitation"));
-  return NextResponse.json({ revoked });
-});
+export const DELETE = route({ role: "manageMembers", ids: { id: "That invitation" } }, ({ member, ids }) =>
+  NextResponse.json({ revoked: revokeInvitation(member, ids.id) }),
+);

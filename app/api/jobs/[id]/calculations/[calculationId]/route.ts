@@ -1,14 +1,8 @@
 import { NextResponse } from "next/server";
 import { deleteCalculation } from "@/db/queries/calculations";
-import { requireMember } from "@/lib/auth/member";
-import { handle } from "@/lib/http/api";
-import { idParam } from "@/lib/http/ids";
+import { route } from "@/lib/http/route";
 
-type Params = { params: Promise<{ id: string; calculationId: string }> };
-
-export const DELETE = handle(async (_request: Request, { params }: Params) => {
-  const member = await requireMember();
-  const { id, calculationId } = await params;
-  deleteCalculation(member, idParam(id, "That job"), idParam(calculationId, "That calculation"));
+export const DELETE = route({ role: "editJobs", ids: { id: "That job", calculationId: "That calculation" } }, ({ member, ids }) => {
+  deleteCalculation(member, ids.id, ids.calculationId);
   return NextResponse.json({ deleted: true });
 });

@@ -1,18 +1,14 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { issueApprovalLink } from "@/db/queries/estimates";
-import { requireMember } from "@/lib/auth/member";
 import { sendApprovalLink } from "@/lib/estimates/mail";
-import { HttpError, handle, parseJson } from "@/lib/http/api";
-import { idParam, type JobParams } from "@/lib/http/ids";
+import { HttpError } from "@/lib/http/api";
 import { publicOrigin } from "@/lib/http/public-origin";
+import { route } from "@/lib/http/route";
 
 /** E-mails the customer a single-use approval link. The token is only ever in that e-mail. */
-export const POST = handle(async (request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  const jobId = idParam((await params).id, "That job");
-  await parseJson(request, z.object({}));
-  const issued = issueApprovalLink(member, jobId);
+export const POST = route({ role: "prepareEstimates", ids: { id: "That job" }, body: z.object({}) }, async ({ request, member, ids }) => {
+  const issued = issueApprovalLink(member, ids.id);
   try {
     await sendApprovalLink({
       workshopId: member.workshopId,

@@ -1,18 +1,15 @@
 import { NextResponse } from "next/server";
 import { deleteFileRecord, getFileRow } from "@/db/queries/files";
-import { requireMember } from "@/lib/auth/member";
-import { HttpError, handle } from "@/lib/http/api";
-import { idParam } from "@/lib/http/ids";
+import { HttpError } from "@/lib/http/api";
+import { route } from "@/lib/http/route";
 import { downloadName } from "@/lib/jobs/download-name";
 import { readStored, removeStored } from "@/lib/jobs/uploads";
 
-type Params = { params: Promise<{ id: string; fileId: string }> };
+const ids = { id: "That job", fileId: "That file" };
 
 /** The only way to a stored file: member of the workshop, the sniffed type, and no sniffing by the browser. */
-export const GET = handle(async (request: Request, { params }: Params) => {
-  const member = await requireMember();
-  const { id, fileId } = await params;
-  const row = getFileRow(member, idParam(id, "That job"), idParam(fileId, "That file"));
+export const GET = route({ ids }, async ({ request, member, ids }) => {
+  const row = getFileRow(member, ids.id, ids.fileId);
   const url = new URL(request.url);
   const thumb = url.searchParams.get("thumb") === "1" && row.hasThumbnail;
   const bytes = await readStored(row.storedName, thumb);
@@ -30,10 +27,8 @@ export const GET = handle(async (request: Request, { params }: Params) => {
   });
 });
 
-export const DELETE = handle(async (_request: Request, { params }: Params) => {
-  const member = await requireMember();
-  const { id, fileId } = await params;
-  const storedName = deleteFileRecord(member, idParam(id, "That job"), idParam(fileId, "That file"));
+export const DELETE = route({ role: "editJobs", ids }, async ({ member, ids }) => {
+  const storedName = deleteFileRecord(member, ids.id, ids.fileId);
   await removeStored(storedName);
   return NextResponse.json({ deleted: true });
 });

@@ -1,22 +1,15 @@
 import { NextResponse } from "next/server";
 import { deletePart, updatePart } from "@/db/queries/parts";
-import { requireMember } from "@/lib/auth/member";
-import { handle, parseJson } from "@/lib/http/api";
-import { idParam } from "@/lib/http/ids";
+import { route } from "@/lib/http/route";
 import { partUpdateSchema } from "@/lib/jobs/part-schemas";
 
-type Params = { params: Promise<{ id: string; partId: string }> };
+const ids = { id: "That job", partId: "That part" };
 
-export const PATCH = handle(async (request: Request, { params }: Params) => {
-  const member = await requireMember();
-  const { id, partId } = await params;
-  const input = await parseJson(request, partUpdateSchema);
-  return NextResponse.json({ part: updatePart(member, idParam(id, "That job"), idParam(partId, "That part"), input) });
-});
+export const PATCH = route({ role: "editJobs", ids, body: partUpdateSchema }, ({ member, ids, body }) =>
+  NextResponse.json({ part: updatePart(member, ids.id, ids.partId, body) }),
+);
 
-export const DELETE = handle(async (_request: Request, { params }: Params) => {
-  const member = await requireMember();
-  const { id, partId } = await params;
-  deletePart(member, idParam(id, "That job"), idParam(partId, "That part"));
+export const DELETE = route({ role: "editJobs", ids }, ({ member, ids }) => {
+  deletePart(member, ids.id, ids.partId);
   return NextResponse.json({ deleted: true });
 });

@@ -1,17 +1,13 @@
 import { getJob } from "@/db/queries/jobs";
 import { listParts } from "@/db/queries/parts";
-import { requireMember } from "@/lib/auth/member";
-import { handle } from "@/lib/http/api";
-import { idParam, type JobParams } from "@/lib/http/ids";
+import { route } from "@/lib/http/route";
 import { partsToCsv } from "@/lib/jobs/parts-csv";
 import { downloadName } from "@/lib/jobs/download-name";
 
 /** The parts list as a CSV download, in the columns the import takes back. */
-export const GET = handle(async (_request: Request, { params }: JobParams) => {
-  const member = await requireMember();
-  const jobId = idParam((await params).id, "That job");
-  const job = getJob(member, jobId);
-  const csv = partsToCsv(listParts(member, jobId));
+export const GET = route({ ids: { id: "That job" } }, ({ member, ids }) => {
+  const job = getJob(member, ids.id);
+  const csv = partsToCsv(listParts(member, ids.id));
   return new Response(`\uFEFF${csv}\r\n`, {
     headers: {
       "content-type": "text/csv; charset=utf-8",
