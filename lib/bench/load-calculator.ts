@@ -12,6 +12,7 @@ const LOADERS: Record<string, Loader> = {
   bleeder: () => import("@/lib/calc/bleeder"),
   "cathode-bias": () => import("@/lib/calc/cathode-bias"),
   "colour-code": () => import("@/lib/calc/colour-code"),
+  "coupling-cap": () => import("@/lib/calc/coupling-cap"),
   "dropping-resistor": () => import("@/lib/calc/dropping-resistor"),
   fuse: () => import("@/lib/calc/fuse"),
   "meter-loading": () => import("@/lib/calc/meter-loading"),

@@ -4,6 +4,7 @@ import { calculator as bPlus } from "./b-plus";
 import { calculator as bleeder } from "./bleeder";
 import { calculator as cathodeBias } from "./cathode-bias";
 import { calculator as colourCode } from "./colour-code";
+import { calculator as couplingCap } from "./coupling-cap";
 import { calculator as droppingResistor } from "./dropping-resistor";
 import { calculator as fuse } from "./fuse";
 import { calculator as meterLoading } from "./meter-loading";
@@ -23,6 +24,7 @@ export const calculators: readonly Calculator[] = [
   cathodeBias,
   triodeStage,
   droppingResistor,
+  couplingCap,
   heaterString,
   supplyRipple,
   bPlus,
