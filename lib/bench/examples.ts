@@ -17,6 +17,7 @@ export const EXAMPLES: Record<string, Record<string, unknown>> = {
     stages: [{ kind: "rc", resistance: "470", capacitance: "20 uF" }],
   },
   "b-plus": { secondaryVoltage: "350 V", rectifier: "full-wave", rectifierTube: "5Y3GT", loadCurrent: "90 mA", capacitance: "20 uF" },
+  "vr-tube": { supplyVoltage: "250 V", tube: "0A2", loadCurrentMax: "20 mA" },
   "time-constant": { resistance: "220k", capacitance: "47 uF", initialVoltage: "350 V", targetVoltage: "30 V" },
   bleeder: { capacitance: "40 uF", workingVoltage: "450 V" },
   "series-lamp": { lineVoltage: "120 V", lampPower: "60 W", setPower: "35 W" },
@@ -40,6 +41,7 @@ export const HEADLINES: Record<string, readonly string[]> = {
   "heater-string": ["droppingResistance", "suggestedRating"],
   "supply-ripple": ["rippleRms", "finalRippleRms"],
   "b-plus": ["dcOutput", "ripplePeakToPeak"],
+  "vr-tube": ["seriesResistance", "tubeCurrentAtMinLoad"],
   "time-constant": ["timeConstant", "timeToTarget"],
   // The rating that allows for the voltage as well as the power (a chain's cautions follow in the notes).
   bleeder: ["suggestedResistance", "resistorRating"],

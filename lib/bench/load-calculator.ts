@@ -26,6 +26,7 @@ const LOADERS: Record<string, Loader> = {
   "supply-ripple": () => import("@/lib/calc/supply-ripple"),
   "time-constant": () => import("@/lib/calc/time-constant"),
   "triode-stage": () => import("@/lib/calc/triode-stage"),
+  "vr-tube": () => import("@/lib/calc/vr-tube"),
 };
 
 export const LOADABLE_SLUGS = Object.keys(LOADERS);

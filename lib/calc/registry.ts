@@ -18,6 +18,7 @@ import { calculator as seriesLamp } from "./series-lamp";
 import { calculator as supplyRipple } from "./supply-ripple";
 import { calculator as timeConstant } from "./time-constant";
 import { calculator as triodeStage } from "./triode-stage";
+import { calculator as vrTube } from "./vr-tube";
 
 /** Every calculator of the Bench, in the order the index shows them. */
 export const calculators: readonly Calculator[] = [
@@ -28,6 +29,7 @@ export const calculators: readonly Calculator[] = [
   heaterString,
   supplyRipple,
   bPlus,
+  vrTube,
   timeConstant,
   bleeder,
   seriesLamp,
