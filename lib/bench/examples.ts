@@ -7,6 +7,7 @@ export const EXAMPLES: Record<string, Record<string, unknown>> = {
   "triode-stage": { tube: "12AX7", supplyVoltage: "250 V", plateResistor: "100k", cathodeResistor: "1.5k", cathodeBypassed: true, loadResistance: "470k" },
   "dropping-resistor": { supplyVoltage: "300 V", loadVoltage: "250 V", loadCurrent: "10 mA" },
   "coupling-cap": { capacitance: ".05 mfd", gridResistance: "470k", sourceResistance: "47k", leakageCurrent: "2 uA" },
+  "plate-dissipation": { plateVoltage: "250 V", cathodeVoltage: "12.5 V", plateCurrent: "45 mA", tube: "6V6GT" },
   "heater-string": { lineVoltage: "120 V", tubes: ["12BE6", "12BA6", "12AV6", "35C5", "35W4"] },
   "supply-ripple": {
     loadCurrent: "60 mA",
@@ -38,6 +39,7 @@ export const HEADLINES: Record<string, readonly string[]> = {
   "triode-stage": ["plateVoltage", "gain"],
   "dropping-resistor": ["resistance", "suggestedRating"],
   "coupling-cap": ["cornerFrequency", "gridShift"],
+  "plate-dissipation": ["dissipation", "fractionOfMax"],
   "heater-string": ["droppingResistance", "suggestedRating"],
   "supply-ripple": ["rippleRms", "finalRippleRms"],
   "b-plus": ["dcOutput", "ripplePeakToPeak"],
