@@ -1,9 +1,8 @@
 import { and, desc, eq } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
-import { notFound } from "@/lib/auth/errors";
 import { getCalculator } from "@/lib/calc/registry";
 import { runCalculator } from "@/lib/calc/run";
-import { HttpError } from "@/lib/http/api";
+import { NotFoundError, ValidationError, notFound } from "@/lib/errors";
 import type { CalculationSave } from "@/lib/jobs/calculation-schemas";
 import { getDb } from "../client";
 import { calculations, users } from "../schema";
@@ -43,14 +42,14 @@ export function listCalculations(member: Member, jobId: number): SavedCalculatio
     .map(shape);
 }
 
-/** 404 for an unknown calculator or a job outside the workshop; 400 with field messages for bad inputs. */
+/** NotFoundError for an unknown calculator or a job outside the workshop; ValidationError with field messages for bad inputs. */
 export function saveCalculation(member: Member, jobId: number, input: CalculationSave): SavedCalculation {
   assertCan(member, "addNotes", "save calculations");
   assertJobInWorkshop(member, jobId);
   const calc = getCalculator(input.slug);
-  if (!calc) throw new HttpError(404, `There is no calculator called "${input.slug}".`);
+  if (!calc) throw new NotFoundError(`There is no calculator called "${input.slug}".`);
   const run = runCalculator(calc, input.inputs);
-  if (!run.ok) throw new HttpError(400, run.error.message, run.error.fields);
+  if (!run.ok) throw new ValidationError(run.error.message, run.error.fields);
   // JSON round-trip: what is stored is exactly what a later read gives back.
   const inputs = JSON.parse(JSON.stringify(run.result.inputs)) as Record<string, unknown>;
   const outputs = JSON.parse(JSON.stringify(run.result.outputs)) as Record<string, unknown>;

@@ -1,9 +1,8 @@
 import { and, asc, desc, eq } from "drizzle-orm";
 import { createHash, randomBytes } from "node:crypto";
 import { assertCan, type Member } from "@/lib/auth/can";
-import { notFound } from "@/lib/auth/errors";
 import type { LinesValues } from "@/lib/estimates/schemas";
-import { HttpError } from "@/lib/http/api";
+import { ConflictError, GoneError, NotFoundError, notFound } from "@/lib/errors";
 import { computeTotals, formatMoney } from "@/lib/money";
 import { getDb } from "../client";
 import { estimateLines, estimates, logEntries, users, workshops } from "../schema";
@@ -64,7 +63,7 @@ export function saveEstimate(member: Member, jobId: number, input: LinesValues) 
     const settings = moneySettings(tx, member.workshopId);
     const priced = priceLines(tx, member.workshopId, jobId, input.lines);
     let current = latestEstimate(tx, member.workshopId, jobId);
-    if (current?.status === "approved") throw new HttpError(409, "The customer approved this estimate; put further changes on the invoice.");
+    if (current?.status === "approved") throw new ConflictError("The customer approved this estimate; put further changes on the invoice.");
     const values = { status: "draft" as const, currency: settings.currency, taxRateBp: settings.taxRateBp, approvalTokenHash: null, tokenExpiresAt: null, respondedAt: null };
     if (current) tx.update(estimates).set(values).where(eq(estimates.id, current.id)).run();
     else current = tx.insert(estimates).values({ ...values, jobId, workshopId: member.workshopId, createdBy: member.userId }).returning().get();
@@ -84,11 +83,11 @@ export function issueApprovalLink(member: Member, jobId: number) {
     const job = jobInWorkshop(tx, member.workshopId, jobId);
     if (!job) throw notFound("That job");
     const current = latestEstimate(tx, member.workshopId, jobId);
-    if (!current) throw new HttpError(409, "Save an estimate before sending it.");
-    if (current.status === "approved") throw new HttpError(409, "The customer has already approved this estimate.");
-    if (!job.customerEmail) throw new HttpError(409, "Add the customer's e-mail to the job before sending the estimate.");
+    if (!current) throw new ConflictError("Save an estimate before sending it.");
+    if (current.status === "approved") throw new ConflictError("The customer has already approved this estimate.");
+    if (!job.customerEmail) throw new ConflictError("Add the customer's e-mail to the job before sending the estimate.");
     const lines = linesOf(tx, current.id);
-    if (!lines.length) throw new HttpError(409, "Add at least one line before sending the estimate.");
+    if (!lines.length) throw new ConflictError("Add at least one line before sending the estimate.");
     const token = randomBytes(32).toString("base64url");
     const expiresAt = new Date(Date.now() + APPROVAL_LINK_DAYS * 86_400_000);
     tx.update(estimates).set({ status: "sent", approvalTokenHash: hashToken(token), tokenExpiresAt: expiresAt, respondedAt: null }).where(eq(estimates.id, current.id)).run();
@@ -128,14 +127,14 @@ export function findEstimateByToken(token: string) {
 export function answerEstimate(token: string, decision: "approve" | "decline", note?: string) {
   return getDb().transaction((tx) => {
     const estimate = tx.select().from(estimates).where(eq(estimates.approvalTokenHash, hashToken(token))).get();
-    if (!estimate) throw new HttpError(404, "This link is not valid. Ask the workshop to send the estimate again.");
-    if (estimate.status !== "sent") throw new HttpError(410, "This estimate has already been answered.");
-    if (!estimate.tokenExpiresAt || estimate.tokenExpiresAt.getTime() < Date.now()) throw new HttpError(410, "This link has expired. Ask the workshop for a new one.");
+    if (!estimate) throw new NotFoundError("This link is not valid. Ask the workshop to send the estimate again.");
+    if (estimate.status !== "sent") throw new GoneError("This estimate has already been answered.");
+    if (!estimate.tokenExpiresAt || estimate.tokenExpiresAt.getTime() < Date.now()) throw new GoneError("This link has expired. Ask the workshop for a new one.");
     const status = decision === "approve" ? "approved" : "declined";
     const respondedAt = new Date();
     // The status guard makes a concurrent second answer update nothing.
     const changed = tx.update(estimates).set({ status, respondedAt }).where(and(eq(estimates.id, estimate.id), eq(estimates.status, "sent"))).run();
-    if (changed.changes !== 1) throw new HttpError(410, "This estimate has already been answered.");
+    if (changed.changes !== 1) throw new GoneError("This estimate has already been answered.");
     const job = jobInWorkshop(tx, estimate.workshopId, estimate.jobId)!;
     const who = job.customerName ?? "The customer";
     const text = `${who} ${status} the estimate.${note ? ` Their note: “${note}”` : ""}`;

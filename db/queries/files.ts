@@ -1,6 +1,6 @@
 import { and, desc, eq } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
-import { notFound } from "@/lib/auth/errors";
+import { notFound } from "@/lib/errors";
 import { getDb } from "../client";
 import { files, users } from "../schema";
 import { assertJobInWorkshop, touchJob } from "./job-access";

@@ -1,9 +1,8 @@
 import { and, desc, eq, gt, isNull } from "drizzle-orm";
 import type { Role } from "@/db/enums";
-import { notFound } from "@/lib/auth/errors";
 import { assertCan, type Member } from "@/lib/auth/can";
 import { hashToken, newToken } from "@/lib/auth/tokens";
-import { HttpError } from "@/lib/http/api";
+import { ConflictError, ForbiddenError, GoneError, NotFoundError, notFound } from "@/lib/errors";
 import { getDb } from "../client";
 import { invitations, memberships, users, workshops } from "../schema";
 import { recordAudit } from "./audit";
@@ -44,7 +43,7 @@ export function createInvitation(member: Member, input: { email: string; role: R
     (tx) => {
       const existing = tx.select({ id: users.id }).from(users).where(eq(users.email, input.email)).get();
       if (existing && isMemberOf(tx, member.workshopId, existing.id)) {
-        throw new HttpError(409, "That person is already a member.", { email: "Already a member of this workshop; change their role in the list instead." });
+        throw new ConflictError("That person is already a member.", { email: "Already a member of this workshop; change their role in the list instead." });
       }
       const now = new Date();
       tx.update(invitations)
@@ -72,7 +71,7 @@ export function revokeInvitation(member: Member, invitationId: number, reason: "
       .where(and(eq(invitations.id, invitationId), eq(invitations.workshopId, member.workshopId)))
       .get();
     if (!row) throw notFound("That invitation");
-    if (row.acceptedAt) throw new HttpError(409, "That invitation was already accepted; remove the member instead.");
+    if (row.acceptedAt) throw new ConflictError("That invitation was already accepted; remove the member instead.");
     if (row.revokedAt) return { id: row.id, email: row.email };
     tx.update(invitations).set({ revokedAt: new Date() }).where(eq(invitations.id, row.id)).run();
     recordAudit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "invitation.revoked", detail: { email: row.email, role: row.role, reason } });
@@ -109,29 +108,29 @@ export function acceptInvitation(token: string, who: { userId: number } | { name
   return getDb().transaction(
     (tx) => {
       const inv = tx.select().from(invitations).where(eq(invitations.tokenHash, hashToken(token))).get();
-      if (!inv) throw new HttpError(404, "That invitation link is not valid. Check you opened the whole link from the e-mail.");
+      if (!inv) throw new NotFoundError("That invitation link is not valid. Check you opened the whole link from the e-mail.");
       const state = stateOf(inv);
-      if (state !== "pending") throw new HttpError(410, INVITATION_GONE[state]);
+      if (state !== "pending") throw new GoneError(INVITATION_GONE[state]);
 
       let user: { id: number; name: string; sessionVersion: number };
       if ("userId" in who) {
         const found = tx.select({ id: users.id, name: users.name, email: users.email, sessionVersion: users.sessionVersion }).from(users).where(eq(users.id, who.userId)).get();
-        if (!found || found.email !== inv.email) throw new HttpError(403, `This invitation is for ${inv.email}.`);
+        if (!found || found.email !== inv.email) throw new ForbiddenError(`This invitation is for ${inv.email}.`);
         user = found;
       } else {
         if (tx.select({ id: users.id }).from(users).where(eq(users.email, inv.email)).get()) {
-          throw new HttpError(409, "That e-mail already has an account; join with its password instead.");
+          throw new ConflictError("That e-mail already has an account; join with its password instead.");
         }
         user = tx.insert(users).values({ email: inv.email, name: who.name, passwordHash: who.passwordHash }).returning({ id: users.id, name: users.name, sessionVersion: users.sessionVersion }).get();
       }
-      if (isMemberOf(tx, inv.workshopId, user.id)) throw new HttpError(409, "You already belong to this workshop. Sign in to reach it.");
+      if (isMemberOf(tx, inv.workshopId, user.id)) throw new ConflictError("You already belong to this workshop. Sign in to reach it.");
 
       const used = tx
         .update(invitations)
         .set({ acceptedAt: new Date() })
         .where(and(eq(invitations.id, inv.id), isNull(invitations.acceptedAt), isNull(invitations.revokedAt), gt(invitations.expiresAt, new Date())))
         .run();
-      if (used.changes !== 1) throw new HttpError(410, INVITATION_GONE.accepted);
+      if (used.changes !== 1) throw new GoneError(INVITATION_GONE.accepted);
       tx.insert(memberships).values({ workshopId: inv.workshopId, userId: user.id, role: inv.role }).run();
       recordAudit(tx, { workshopId: inv.workshopId, actorUserId: user.id, action: "member.joined", detail: { name: user.name, email: inv.email, role: inv.role } });
       return { userId: user.id, sessionVersion: user.sessionVersion, workshopId: inv.workshopId, role: inv.role };

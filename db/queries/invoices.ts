@@ -1,8 +1,7 @@
 import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
-import { notFound } from "@/lib/auth/errors";
 import type { LinesValues } from "@/lib/estimates/schemas";
-import { HttpError } from "@/lib/http/api";
+import { ConflictError, notFound } from "@/lib/errors";
 import { computeTotals } from "@/lib/money";
 import { getDb } from "../client";
 import { estimateLines, estimates, invoiceLines, invoices, jobs, logEntries, workshops } from "../schema";
@@ -64,16 +63,16 @@ export function issueInvoice(member: Member, jobId: number, input: { lines?: Lin
   const id = getDb().transaction((tx) => {
     const job = jobInWorkshop(tx, member.workshopId, jobId);
     if (!job) throw notFound("That job");
-    if (!(INVOICEABLE as readonly string[]).includes(job.status)) throw new HttpError(409, "Invoice a job once it is ready to collect.");
+    if (!(INVOICEABLE as readonly string[]).includes(job.status)) throw new ConflictError("Invoice a job once it is ready to collect.");
     const open = tx
       .select({ number: invoices.number })
       .from(invoices)
       .where(and(eq(invoices.workshopId, member.workshopId), eq(invoices.jobId, jobId), inArray(invoices.status, ["issued", "paid"])))
       .get();
-    if (open) throw new HttpError(409, `This job already has invoice ${open.number}; void it before issuing another.`);
+    if (open) throw new ConflictError(`This job already has invoice ${open.number}; void it before issuing another.`);
     const approved = approvedEstimateLines(tx, member.workshopId, jobId);
     const lines = input.lines ? priceLines(tx, member.workshopId, jobId, input.lines) : approved?.lines;
-    if (!lines?.length) throw new HttpError(409, "There is no approved estimate to invoice; enter the lines to invoice.");
+    if (!lines?.length) throw new ConflictError("There is no approved estimate to invoice; enter the lines to invoice.");
     // The counter and the invoice move together: a failure below rolls the number back, so there are no gaps.
     const counter = tx
       .update(workshops)
@@ -116,7 +115,7 @@ export function voidInvoice(member: Member, invoiceId: number) {
   getDb().transaction((tx) => {
     const invoice = tx.select().from(invoices).where(and(eq(invoices.id, invoiceId), eq(invoices.workshopId, member.workshopId))).get();
     if (!invoice) throw notFound("That invoice");
-    if (invoice.status !== "issued") throw new HttpError(409, invoice.status === "paid" ? "A paid invoice cannot be voided." : "This invoice is already void.");
+    if (invoice.status !== "issued") throw new ConflictError(invoice.status === "paid" ? "A paid invoice cannot be voided." : "This invoice is already void.");
     tx.update(invoices).set({ status: "void" }).where(eq(invoices.id, invoiceId)).run();
     tx.insert(logEntries)
       .values({ jobId: invoice.jobId, workshopId: member.workshopId, authorId: member.userId, kind: "invoice", text: `Invoice ${invoice.number} voided.`, data: { invoiceId, event: "void" } })
@@ -135,7 +134,7 @@ export function invoiceForCheckout(member: Member, invoiceId: number) {
     .where(and(eq(invoices.id, invoiceId), eq(invoices.workshopId, member.workshopId)))
     .get();
   if (!invoice) throw notFound("That invoice");
-  if (invoice.status !== "issued") throw new HttpError(409, invoice.status === "paid" ? "This invoice is already paid." : "This invoice is void.");
+  if (invoice.status !== "issued") throw new ConflictError(invoice.status === "paid" ? "This invoice is already paid." : "This invoice is void.");
   return invoice;
 }
 

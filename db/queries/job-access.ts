@@ -1,11 +1,11 @@
 import { and, eq, sql } from "drizzle-orm";
 import type { Member } from "@/lib/auth/can";
-import { notFound } from "@/lib/auth/errors";
+import { notFound } from "@/lib/errors";
 import type { Db } from "../client";
 import { getDb } from "../client";
 import { jobs } from "../schema";
 
-/** Shared by the job-area query modules: the job must be in the member's workshop, else 404. */
+/** Shared by the job-area query modules: the job must be in the member's workshop, else NotFoundError. */
 
 export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 

@@ -2,7 +2,7 @@ import { and, asc, desc, eq, inArray, or, sql, type AnyColumn, type SQL } from "
 import type { JobStatus } from "@/db/enums";
 import { JOB_STATUS_LABELS } from "@/db/enums";
 import { assertCan, type Member } from "@/lib/auth/can";
-import { notFound } from "@/lib/auth/errors";
+import { notFound } from "@/lib/errors";
 import type { JobCreate, JobListQuery, JobUpdate } from "@/lib/jobs/job-schemas";
 import { getDb } from "../client";
 import { files, jobs, logEntries } from "../schema";

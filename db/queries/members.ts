@@ -1,18 +1,17 @@
 import { and, asc, count, eq } from "drizzle-orm";
 import type { Role } from "@/db/enums";
-import { notFound } from "@/lib/auth/errors";
 import { assertCan, type Member } from "@/lib/auth/can";
-import { HttpError } from "@/lib/http/api";
+import { ConflictError, notFound } from "@/lib/errors";
 import { getDb, type Db } from "../client";
 import { memberships, users } from "../schema";
 import { recordAudit } from "./audit";
 
 type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
-/** Raised when a change would leave the workshop without an owner: a 409. */
-export class LastOwnerError extends HttpError {
+/** Raised when a change would leave the workshop without an owner. */
+export class LastOwnerError extends ConflictError {
   constructor(what: string) {
-    super(409, `The workshop needs at least one owner; make someone else owner before you ${what}.`);
+    super(`The workshop needs at least one owner; make someone else owner before you ${what}.`);
   }
 }
 

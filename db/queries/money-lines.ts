@@ -1,5 +1,5 @@
 import { and, eq } from "drizzle-orm";
-import { HttpError } from "@/lib/http/api";
+import { NotFoundError, ValidationError } from "@/lib/errors";
 import type { LinesValues } from "@/lib/estimates/schemas";
 import { lineAmountMinor, minorExponent, parseMoney, parseQuantityMilli } from "@/lib/money";
 import type { Db } from "../client";
@@ -24,7 +24,7 @@ export function moneySettings(tx: Tx, workshopId: number) {
     .from(workshops)
     .where(eq(workshops.id, workshopId))
     .get();
-  if (!row) throw new HttpError(404, "Workshop not found.");
+  if (!row) throw new NotFoundError("Workshop not found.");
   return row;
 }
 
@@ -95,6 +95,6 @@ export function priceLines(tx: Tx, workshopId: number, jobId: number, input: Lin
       fields[`lines.${i}.quantity`] ??= "This line is too large.";
     }
   }
-  if (Object.keys(fields).length) throw new HttpError(400, "Some lines need attention.", fields);
+  if (Object.keys(fields).length) throw new ValidationError("Some lines need attention.", fields);
   return rows;
 }

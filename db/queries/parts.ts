@@ -1,6 +1,6 @@
 import { and, asc, eq } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
-import { notFound } from "@/lib/auth/errors";
+import { notFound } from "@/lib/errors";
 import type { PartUpdate, PartValues } from "@/lib/jobs/part-schemas";
 import { getDb } from "../client";
 import { parts } from "../schema";

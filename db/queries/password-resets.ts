@@ -1,6 +1,6 @@
 import { and, asc, eq, gt, isNull, sql } from "drizzle-orm";
 import { hashToken, newToken } from "@/lib/auth/tokens";
-import { HttpError } from "@/lib/http/api";
+import { GoneError, NotFoundError } from "@/lib/errors";
 import { getDb, type Db } from "../client";
 import { memberships, passwordResets, users } from "../schema";
 import { recordAudit, type AuditAction } from "./audit";
@@ -48,14 +48,14 @@ export function completePasswordReset(token: string, passwordHash: string) {
   return getDb().transaction(
     (tx) => {
       const row = tx.select({ id: passwordResets.id, userId: passwordResets.userId }).from(passwordResets).where(eq(passwordResets.tokenHash, hashToken(token))).get();
-      if (!row) throw new HttpError(404, "That reset link is not valid. Check you opened the whole link from the e-mail.");
+      if (!row) throw new NotFoundError("That reset link is not valid. Check you opened the whole link from the e-mail.");
       const now = new Date();
       const used = tx
         .update(passwordResets)
         .set({ usedAt: now })
         .where(and(eq(passwordResets.id, row.id), isNull(passwordResets.usedAt), gt(passwordResets.expiresAt, now)))
         .run();
-      if (used.changes !== 1) throw new HttpError(410, RESET_GONE);
+      if (used.changes !== 1) throw new GoneError(RESET_GONE);
       // Bumping the session version ends every session of this user, everywhere (lib/auth/member.ts).
       const user = tx
         .update(users)

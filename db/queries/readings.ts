@@ -1,6 +1,6 @@
 import { and, asc, eq } from "drizzle-orm";
 import { can, type Member } from "@/lib/auth/can";
-import { forbidden, notFound } from "@/lib/auth/errors";
+import { forbidden, notFound } from "@/lib/errors";
 import { judgeReading } from "@/lib/jobs/reading-verdict";
 import type { ReadingValues } from "@/lib/jobs/reading-schemas";
 import { getDb } from "../client";

@@ -1,6 +1,6 @@
 import { and, eq } from "drizzle-orm";
 import { JOB_STATUS_LABELS } from "@/db/enums";
-import { notFound } from "@/lib/auth/errors";
+import { notFound } from "@/lib/errors";
 import { can, type Member } from "@/lib/auth/can";
 import { readySubject, renderReadyMessage } from "@/lib/mail/ready-message";
 import { getDb } from "../client";

@@ -1,6 +1,6 @@
 import { and, eq, ne } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
-import { HttpError } from "@/lib/http/api";
+import { ConflictError } from "@/lib/errors";
 import type { ChargesInput } from "@/lib/workshop/charges-schema";
 import type { WorkshopSettingsInput } from "@/lib/workshop/schemas";
 import { getDb } from "../client";
@@ -73,7 +73,7 @@ export function updateCharges(member: Member, input: ChargesInput) {
       const held = documentCurrency(tx, member.workshopId, input.currency);
       if (held) {
         const message = `The workshop already has estimates or invoices in ${held}, so the currency stays ${before.currency}.`;
-        throw new HttpError(409, message, { currency: message });
+        throw new ConflictError(message, { currency: message });
       }
     }
     const updated = tx.update(workshops).set(input).where(eq(workshops.id, member.workshopId)).returning(chargesColumns).get();

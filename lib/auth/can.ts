@@ -1,5 +1,5 @@
 import type { Role } from "@/db/enums";
-import { forbidden } from "./errors";
+import { forbidden } from "@/lib/errors";
 
 /** The signed-in person as every query function sees them. Never carries the password hash. */
 export interface Member {

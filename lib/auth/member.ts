@@ -3,7 +3,7 @@ import { cache } from "react";
 import { getDb } from "@/db/client";
 import { memberships, users, workshops } from "@/db/schema";
 import type { Member } from "./can";
-import { notSignedIn } from "./errors";
+import { notSignedIn } from "@/lib/errors";
 import { SESSION_MAX_AGE_SECONDS, getSession } from "./session";
 
 /** Load the member for a user id, checking nothing else: the preferred workshop if they belong to it, else their first. */

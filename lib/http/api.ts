@@ -1,6 +1,18 @@
 import { NextResponse } from "next/server";
 import type { z } from "zod";
-import { AuthError } from "@/lib/auth/errors";
+import {
+  ConflictError,
+  DomainError,
+  ForbiddenError,
+  GoneError,
+  NotConfiguredError,
+  NotFoundError,
+  NotSignedInError,
+  TooLargeError,
+  UnsupportedTypeError,
+  UpstreamError,
+  ValidationError,
+} from "@/lib/errors";
 
 /** PRODUCT.md's error shape, and the one place a thrown error becomes an HTTP answer. */
 
@@ -39,10 +51,27 @@ export function fieldErrors(error: z.ZodError): Record<string, string> {
   return fields;
 }
 
+/** The one mapping from the data layer's errors to HTTP statuses (PRODUCT.md, DEVELOPERS.md "Errors"). */
+const STATUS_OF: [new (...args: never[]) => DomainError, number][] = [
+  [ValidationError, 400],
+  [NotSignedInError, 401],
+  [ForbiddenError, 403],
+  [NotFoundError, 404],
+  [ConflictError, 409],
+  [GoneError, 410],
+  [TooLargeError, 413],
+  [UnsupportedTypeError, 415],
+  [UpstreamError, 502],
+  [NotConfiguredError, 503],
+];
+
 /** Known errors become their JSON answer; anything else a JSON 500, never an HTML page. */
 export function errorResponse(err: unknown): Response {
   if (err instanceof HttpError) return apiError(err.status, err.message, err.fields, err.headers);
-  if (err instanceof AuthError) return apiError(err.status, err.message);
+  if (err instanceof DomainError) {
+    const status = STATUS_OF.find(([kind]) => err instanceof kind)?.[1];
+    if (status) return apiError(status, err.message, err.fields);
+  }
   console.error("Unhandled route error", err);
   return apiError(500, "Something went wrong on our side; please try again.");
 }

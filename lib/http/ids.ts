@@ -1,4 +1,4 @@
-import { notFound } from "@/lib/auth/errors";
+import { notFound } from "@/lib/errors";
 import { parseId } from "@/lib/ids";
 
 /** A route's numeric id segment; anything else is simply not found (never a 500). */

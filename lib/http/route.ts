@@ -2,7 +2,7 @@ import type { NextRequest } from "next/server";
 import type { z } from "zod";
 import { assertCan, type Action, type Member } from "@/lib/auth/can";
 import { getMember } from "@/lib/auth/member";
-import { notSignedIn } from "@/lib/auth/errors";
+import { notSignedIn } from "@/lib/errors";
 import { HttpError, errorResponse, fieldErrors } from "./api";
 import { MAX_JSON_BYTES, assertContentType, assertSameOrigin, readBounded } from "./body";
 import { idParam } from "./ids";

@@ -4,7 +4,7 @@ import path from "node:path";
 import { fileTypeFromBuffer } from "file-type";
 import sharp from "sharp";
 import { databasePath } from "@/db/client";
-import { HttpError } from "@/lib/http/api";
+import { TooLargeError, UnsupportedTypeError, ValidationError } from "@/lib/errors";
 
 /**
  * Photos and schematics of a job, kept outside public/ under random names. The type is sniffed
@@ -30,7 +30,7 @@ export function checkOriginalName(name: string): string {
   const trimmed = name.trim();
   // eslint-disable-next-line no-control-regex
   if (!trimmed || /[\/\\\u0000-\u001f\u007f]/.test(trimmed) || trimmed.includes("..") || trimmed.length > 200) {
-    throw new HttpError(400, "That file name is not accepted: use a plain name without folders or “..”, up to 200 characters.", {
+    throw new ValidationError("That file name is not accepted: use a plain name without folders or “..”, up to 200 characters.", {
       file: "Rename the file to a plain name (letters, numbers, dashes) and try again.",
     });
   }
@@ -46,13 +46,13 @@ export interface PreparedUpload {
 
 /** Checks size and content; nothing is written until every check has passed. */
 export async function prepareUpload(file: File): Promise<PreparedUpload> {
-  if (file.size === 0) throw new HttpError(400, "The file is empty.", { file: "Choose a file that is not empty." });
-  if (file.size > MAX_UPLOAD_BYTES) throw new HttpError(413, "Files may be up to 20 MB.", { file: "This file is over 20 MB; export a smaller copy." });
+  if (file.size === 0) throw new ValidationError("The file is empty.", { file: "Choose a file that is not empty." });
+  if (file.size > MAX_UPLOAD_BYTES) throw new TooLargeError("Files may be up to 20 MB.", { file: "This file is over 20 MB; export a smaller copy." });
   const bytes = Buffer.from(await file.arrayBuffer());
   const sniffed = await fileTypeFromBuffer(bytes);
   const type = sniffed?.mime;
   if (!type || !ALLOWED_TYPES[type]) {
-    throw new HttpError(415, "Only JPEG, PNG or WebP photos and PDF or image schematics can be attached.", {
+    throw new UnsupportedTypeError("Only JPEG, PNG or WebP photos and PDF or image schematics can be attached.", {
       file: `This file's content is ${sniffed ? sniffed.mime : "not a photo or PDF"}, whatever its name says.`,
     });
   }
@@ -61,7 +61,7 @@ export async function prepareUpload(file: File): Promise<PreparedUpload> {
     try {
       thumbnail = await sharp(bytes).rotate().resize(480, 480, { fit: "inside", withoutEnlargement: true }).webp({ quality: 78 }).toBuffer();
     } catch {
-      throw new HttpError(415, "That image could not be read; it may be damaged.", { file: "The image could not be opened; save it again and retry." });
+      throw new UnsupportedTypeError("That image could not be read; it may be damaged.", { file: "The image could not be opened; save it again and retry." });
     }
   }
   return { type, ext: ALLOWED_TYPES[type], bytes, thumbnail };

@@ -1,6 +1,6 @@
 import { invoiceForCheckout, recordCheckoutSession } from "@/db/queries/invoices";
 import type { Member } from "@/lib/auth/member";
-import { HttpError } from "@/lib/http/api";
+import { DomainError, NotConfiguredError, UpstreamError } from "@/lib/errors";
 import { PaymentsNotConfigured, getStripe } from "./stripe";
 
 /**
@@ -13,7 +13,7 @@ export async function checkoutUrlForInvoice(member: Member, invoiceId: number, o
   try {
     stripe = getStripe();
   } catch (err) {
-    if (err instanceof PaymentsNotConfigured) throw new HttpError(503, "Card payments are not set up for this Glowbench.");
+    if (err instanceof PaymentsNotConfigured) throw new NotConfiguredError("Card payments are not set up for this Glowbench.");
     throw err;
   }
   try {
@@ -39,8 +39,8 @@ export async function checkoutUrlForInvoice(member: Member, invoiceId: number, o
     recordCheckoutSession(member, invoice.id, session.id);
     return session.url;
   } catch (err) {
-    if (err instanceof HttpError) throw err;
+    if (err instanceof DomainError) throw err;
     console.error("Checkout session failed", err);
-    throw new HttpError(502, "The payment service did not answer; try again in a moment.");
+    throw new UpstreamError("The payment service did not answer; try again in a moment.");
   }
 }

@@ -2,6 +2,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { ForbiddenError, NotFoundError, ValidationError } from "@/lib/errors";
 
 // The query functions use the process's one client (getDb): point it at a fresh migrated file first.
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-jobs-"));
@@ -75,13 +76,13 @@ describe("jobs queries", () => {
 
   test("apprentices cannot book in, edit, change status or delete; another workshop gets 404", () => {
     const job = newJob(tech, "Role check set");
-    expect(() => newJob(apprentice, "nope")).toThrow(expect.objectContaining({ status: 403 }));
-    expect(() => jobsQ.updateJob(apprentice, job.id, { title: "x" } as never)).toThrow(expect.objectContaining({ status: 403 }));
-    expect(() => jobsQ.changeJobStatus(apprentice, job.id, "ready")).toThrow(expect.objectContaining({ status: 403 }));
-    expect(() => jobsQ.deleteJob(tech, job.id)).toThrow(expect.objectContaining({ status: 403 }));
-    expect(() => jobsQ.getJob(other, job.id)).toThrow(expect.objectContaining({ status: 404 }));
-    expect(() => jobsQ.changeJobStatus(other, job.id, "ready")).toThrow(expect.objectContaining({ status: 404 }));
-    expect(() => jobsQ.deleteJob(other, job.id)).toThrow(expect.objectContaining({ status: 404 }));
+    expect(() => newJob(apprentice, "nope")).toThrow(ForbiddenError);
+    expect(() => jobsQ.updateJob(apprentice, job.id, { title: "x" } as never)).toThrow(ForbiddenError);
+    expect(() => jobsQ.changeJobStatus(apprentice, job.id, "ready")).toThrow(ForbiddenError);
+    expect(() => jobsQ.deleteJob(tech, job.id)).toThrow(ForbiddenError);
+    expect(() => jobsQ.getJob(other, job.id)).toThrow(NotFoundError);
+    expect(() => jobsQ.changeJobStatus(other, job.id, "ready")).toThrow(NotFoundError);
+    expect(() => jobsQ.deleteJob(other, job.id)).toThrow(NotFoundError);
     expect(jobsQ.deleteJob(owner, job.id)).toEqual({ storedNames: [] });
     expect(jobsQ.findJob(owner, job.id)).toBeUndefined();
   });
@@ -104,8 +105,8 @@ describe("parts, readings, calculations", () => {
     expect(() => partsQ.createParts(tech, job.id, [good, { ...good, designator: null as unknown as string }])).toThrow();
     expect(partsQ.listParts(tech, job.id)).toEqual([]);
     expect(partsQ.createParts(tech, job.id, [good, { ...good, designator: "C2" }])).toHaveLength(2);
-    expect(() => partsQ.createParts(apprentice, job.id, [good])).toThrow(expect.objectContaining({ status: 403 }));
-    expect(() => partsQ.listParts(other, job.id)).toThrow(expect.objectContaining({ status: 404 }));
+    expect(() => partsQ.createParts(apprentice, job.id, [good])).toThrow(ForbiddenError);
+    expect(() => partsQ.listParts(other, job.id)).toThrow(NotFoundError);
   });
 
   test("an apprentice adds readings whose verdicts come from resistor-drift; only technicians fix them", () => {
@@ -117,7 +118,7 @@ describe("parts, readings, calculations", () => {
     expect(open).toMatchObject({ measured: null, verdict: "open", deviation: null });
     const v = readingsQ.createReading(apprentice, job.id, readingSchema.parse({ kind: "voltage", designator: "B+", nominal: "250", measured: "240 V", tolerance: "0.1" }));
     expect(v.verdict).toBe("within");
-    expect(() => readingsQ.deleteReading(apprentice, job.id, r.id)).toThrow(expect.objectContaining({ status: 403 }));
+    expect(() => readingsQ.deleteReading(apprentice, job.id, r.id)).toThrow(ForbiddenError);
     readingsQ.deleteReading(tech, job.id, r.id);
     expect(readingsQ.listReadings(owner, job.id).map((x) => x.designator)).toEqual(["R9", "B+"]);
   });
@@ -128,9 +129,9 @@ describe("parts, readings, calculations", () => {
     expect(saved.inputs).toMatchObject({ voltage: 250, resistance: 50_000 });
     expect(saved.outputs.current).toBeCloseTo(0.005, 12);
     expect(saved.author).toEqual({ id: apprentice.userId, name: apprentice.name });
-    expect(() => calcQ.saveCalculation(apprentice, job.id, { slug: "no-such", inputs: {}, note: null })).toThrow(expect.objectContaining({ status: 404 }));
-    expect(() => calcQ.saveCalculation(apprentice, job.id, { slug: "ohms-law", inputs: { voltage: "-3 A" }, note: null })).toThrow(expect.objectContaining({ status: 400 }));
-    expect(() => calcQ.saveCalculation(other, job.id, { slug: "ohms-law", inputs: { voltage: 1, current: 1 }, note: null })).toThrow(expect.objectContaining({ status: 404 }));
+    expect(() => calcQ.saveCalculation(apprentice, job.id, { slug: "no-such", inputs: {}, note: null })).toThrow(NotFoundError);
+    expect(() => calcQ.saveCalculation(apprentice, job.id, { slug: "ohms-law", inputs: { voltage: "-3 A" }, note: null })).toThrow(ValidationError);
+    expect(() => calcQ.saveCalculation(other, job.id, { slug: "ohms-law", inputs: { voltage: 1, current: 1 }, note: null })).toThrow(NotFoundError);
     expect(calcQ.listCalculations(owner, job.id).map((c) => c.note)).toEqual(["screen feed"]);
   });
 
@@ -145,6 +146,6 @@ describe("parts, readings, calculations", () => {
     expect(data.caution).toMatch(/Lethal voltage/);
     const pdf = await renderBenchSheet(owner, radio.id);
     expect(pdf.subarray(0, 5).toString()).toBe("%PDF-");
-    await expect(renderBenchSheet(other, radio.id)).rejects.toMatchObject({ status: 404 });
+    await expect(renderBenchSheet(other, radio.id)).rejects.toBeInstanceOf(NotFoundError);
   }, 60_000);
 });

@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
 import { assertCan, can, type Action, type Member } from "@/lib/auth/can";
-import { AuthError } from "@/lib/auth/errors";
+import { ForbiddenError } from "@/lib/errors";
 
 const member = (role: Member["role"]): Member => ({ userId: 1, email: "a@b.test", name: "A", workshopId: 1, workshopName: "W", role });
 
@@ -25,14 +25,14 @@ describe("role rules", () => {
     for (const role of ["owner", "technician", "apprentice"] as const) expect(can[action](member(role))).toBe(can(member(role), action));
   });
 
-  test("assertCan throws a 403 naming what was refused, and passes an allowed role", () => {
-    expect(() => assertCan(member("apprentice"), "editJobs", "remove parts")).toThrow(AuthError);
+  test("assertCan refuses with a ForbiddenError naming what was refused, and passes an allowed role", () => {
+    expect(() => assertCan(member("apprentice"), "editJobs", "remove parts")).toThrow(ForbiddenError);
     try {
       assertCan(member("technician"), "seeMoney");
       expect.unreachable();
     } catch (e) {
-      expect((e as AuthError).status).toBe(403);
-      expect((e as AuthError).message).toBe("Your role does not allow you to see invoices.");
+      expect(e).toBeInstanceOf(ForbiddenError);
+      expect((e as ForbiddenError).message).toBe("Your role does not allow you to see invoices.");
     }
     expect(() => assertCan(member("owner"), "deleteJobs")).not.toThrow();
   });

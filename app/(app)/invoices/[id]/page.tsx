@@ -6,7 +6,7 @@ import { InvoiceActions } from "@/components/invoices/invoice-actions";
 import { InvoiceStatus } from "@/components/invoices/invoice-status";
 import { Card, EmptyState } from "@/components/ui/card";
 import { getInvoice } from "@/db/queries/invoices";
-import { AuthError } from "@/lib/auth/errors";
+import { NotFoundError } from "@/lib/errors";
 import { can, getMember } from "@/lib/auth/member";
 import { parseId } from "@/lib/ids";
 
@@ -27,7 +27,7 @@ export default async function InvoicePage({ params, searchParams }: { params: Pr
     const invoiceId = parseId(id);
     invoice = invoiceId === null ? null : getInvoice(member, invoiceId);
   } catch (err) {
-    if (err instanceof AuthError && err.status === 404) notFound();
+    if (err instanceof NotFoundError) notFound();
     throw err;
   }
   if (!invoice) notFound();

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { findCredentials } from "@/db/queries/auth";
 import { INVITATION_GONE, acceptInvitation, findInvitation } from "@/db/queries/invitations";
-import { notSignedIn } from "@/lib/auth/errors";
+import { notSignedIn } from "@/lib/errors";
 import { hashPassword, verifyPassword } from "@/lib/auth/password";
 import { clientAddress, signInLimits } from "@/lib/auth/rate-limit";
 import { startSession } from "@/lib/auth/session";
