@@ -5,6 +5,7 @@
 export const EXAMPLES: Record<string, Record<string, unknown>> = {
   "cathode-bias": { biasVoltage: "1.5 V", plateCurrent: "1 mA", bypassCapacitance: "25 uF" },
   "triode-stage": { tube: "12AX7", supplyVoltage: "250 V", plateResistor: "100k", cathodeResistor: "1.5k", cathodeBypassed: true, loadResistance: "470k" },
+  superhet: { signalFrequency: "1000 kHz", intermediateFrequency: "455 kHz", loadedQ: "100" },
   "dropping-resistor": { supplyVoltage: "300 V", loadVoltage: "250 V", loadCurrent: "10 mA" },
   "coupling-cap": { capacitance: ".05 mfd", gridResistance: "470k", sourceResistance: "47k", leakageCurrent: "2 uA" },
   "plate-dissipation": { plateVoltage: "250 V", cathodeVoltage: "12.5 V", plateCurrent: "45 mA", tube: "6V6GT" },
@@ -37,6 +38,7 @@ export const EXAMPLES: Record<string, Record<string, unknown>> = {
 export const HEADLINES: Record<string, readonly string[]> = {
   "cathode-bias": ["cathodeResistance", "suggestedRating"],
   "triode-stage": ["plateVoltage", "gain"],
+  superhet: ["oscillatorFrequency", "imageFrequency"],
   "dropping-resistor": ["resistance", "suggestedRating"],
   "coupling-cap": ["cornerFrequency", "gridShift"],
   "plate-dissipation": ["dissipation", "fractionOfMax"],

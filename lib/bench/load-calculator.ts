@@ -24,6 +24,7 @@ const LOADERS: Record<string, Loader> = {
   reforming: () => import("@/lib/calc/reforming"),
   "resistor-drift": () => import("@/lib/calc/resistor-drift"),
   "series-lamp": () => import("@/lib/calc/series-lamp"),
+  superhet: () => import("@/lib/calc/superhet"),
   "supply-ripple": () => import("@/lib/calc/supply-ripple"),
   "time-constant": () => import("@/lib/calc/time-constant"),
   "triode-stage": () => import("@/lib/calc/triode-stage"),

@@ -16,6 +16,7 @@ import { calculator as reactance } from "./reactance";
 import { calculator as reforming } from "./reforming";
 import { calculator as resistorDrift } from "./resistor-drift";
 import { calculator as seriesLamp } from "./series-lamp";
+import { calculator as superhet } from "./superhet";
 import { calculator as supplyRipple } from "./supply-ripple";
 import { calculator as timeConstant } from "./time-constant";
 import { calculator as triodeStage } from "./triode-stage";
@@ -25,6 +26,7 @@ import { calculator as vrTube } from "./vr-tube";
 export const calculators: readonly Calculator[] = [
   cathodeBias,
   triodeStage,
+  superhet,
   droppingResistor,
   couplingCap,
   plateDissipation,

@@ -39,6 +39,7 @@ export const samples: Record<string, Record<string, unknown>> = {
   reforming: { capacitance: "40 uF", ratedVoltage: "450 V", seriesResistance: "10k", leakageFactor: 0.01, leakageFloor: "3 uA" },
   "ohms-law": { voltage: "250 V", resistance: "100k" },
   reactance: { frequency: "1 kHz", capacitance: "100 nF", inductance: "10 mH" },
+  superhet: { signalFrequency: "1000 kHz", intermediateFrequency: "455 kHz", oscillatorAbove: true, loadedQ: "100" },
   "triode-stage": { tube: "12AX7", supplyVoltage: "250 V", plateResistor: "100k", cathodeResistor: "1.5k", cathodeBypassed: true, loadResistance: "470k" },
   "colour-code": { bands: ["yellow", "violet", "red", "gold"] },
   "preferred-value": { value: "5.13k", series: "E12" },
