@@ -9,6 +9,7 @@ export const EXAMPLES: Record<string, Record<string, unknown>> = {
   "dropping-resistor": { supplyVoltage: "300 V", loadVoltage: "250 V", loadCurrent: "10 mA" },
   "coupling-cap": { capacitance: ".05 mfd", gridResistance: "470k", sourceResistance: "47k", leakageCurrent: "2 uA" },
   "plate-dissipation": { plateVoltage: "250 V", cathodeVoltage: "12.5 V", plateCurrent: "45 mA", tube: "6V6GT" },
+  "output-transformer": { primaryImpedance: "5k", secondaryImpedance: "8 ohm", newLoad: "4 ohm" },
   "heater-string": { lineVoltage: "120 V", tubes: ["12BE6", "12BA6", "12AV6", "35C5", "35W4"] },
   "supply-ripple": {
     loadCurrent: "60 mA",
@@ -42,6 +43,7 @@ export const HEADLINES: Record<string, readonly string[]> = {
   "dropping-resistor": ["resistance", "suggestedRating"],
   "coupling-cap": ["cornerFrequency", "gridShift"],
   "plate-dissipation": ["dissipation", "fractionOfMax"],
+  "output-transformer": ["turnsRatio", "reflectedImpedance"],
   "heater-string": ["droppingResistance", "suggestedRating"],
   "supply-ripple": ["rippleRms", "finalRippleRms"],
   "b-plus": ["dcOutput", "ripplePeakToPeak"],

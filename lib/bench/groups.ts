@@ -14,4 +14,4 @@ export const GROUP_TITLES: Record<CalculatorGroup, string> = Object.fromEntries(
 >;
 
 /** Calculators about high voltage by nature: their danger banner never goes away. */
-export const ALWAYS_DANGER_SLUGS: ReadonlySet<string> = new Set(["arc-clearance", "bleeder"]);
+export const ALWAYS_DANGER_SLUGS: ReadonlySet<string> = new Set(["arc-clearance", "bleeder", "coupling-cap", "output-transformer"]);

@@ -18,6 +18,7 @@ const LOADERS: Record<string, Loader> = {
   "meter-loading": () => import("@/lib/calc/meter-loading"),
   "heater-string": () => import("@/lib/calc/heater-string"),
   "ohms-law": () => import("@/lib/calc/ohms-law"),
+  "output-transformer": () => import("@/lib/calc/output-transformer"),
   "plate-dissipation": () => import("@/lib/calc/plate-dissipation"),
   "preferred-value": () => import("@/lib/calc/preferred-value"),
   reactance: () => import("@/lib/calc/reactance"),

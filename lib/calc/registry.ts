@@ -10,6 +10,7 @@ import { calculator as fuse } from "./fuse";
 import { calculator as meterLoading } from "./meter-loading";
 import { calculator as heaterString } from "./heater-string";
 import { calculator as ohmsLaw } from "./ohms-law";
+import { calculator as outputTransformer } from "./output-transformer";
 import { calculator as plateDissipation } from "./plate-dissipation";
 import { calculator as preferredValue } from "./preferred-value";
 import { calculator as reactance } from "./reactance";
@@ -30,6 +31,7 @@ export const calculators: readonly Calculator[] = [
   droppingResistor,
   couplingCap,
   plateDissipation,
+  outputTransformer,
   heaterString,
   supplyRipple,
   bPlus,

@@ -31,6 +31,7 @@ export const samples: Record<string, Record<string, unknown>> = {
   "dropping-resistor": { supplyVoltage: "300 V", loadVoltage: "250 V", loadCurrent: "10 mA" },
   "coupling-cap": { capacitance: "0.05 uF", gridResistance: "470k", sourceResistance: "47k", leakageCurrent: "2 uA", maxGridResistance: "500k" },
   "plate-dissipation": { plateVoltage: "250 V", cathodeVoltage: "7.2 V", plateCurrent: "48 mA", tube: "EL84", screenVoltage: "250 V", screenCurrent: "5.5 mA", stageClass: "A" },
+  "output-transformer": { primaryImpedance: "5k", secondaryImpedance: "8 ohm", newLoad: "4 ohm" },
   "vr-tube": { supplyVoltage: "250 V", tube: "0A2", loadCurrentMin: "5 mA", loadCurrentMax: "20 mA" },
   "heater-string": { lineVoltage: "120 V", tubes: ["12BE6", "12BA6", "12AV6", "50C5", "35W4"] },
   "arc-clearance": { peakVoltage: "15 kV", gap: "5 mm", pressure: 101325, temperature: 293.15, safetyFactor: 2 },
