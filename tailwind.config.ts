@@ -1,9 +1,11 @@
 import type { Config } from "tailwindcss";
 
 /**
- * Glowbench's own palette: warm bench paper and deep ink by day, a dim valve-glow at night.
- * Colours are CSS variables (app/globals.css) so the dark theme (prefers-color-scheme) swaps them in one place.
- * Every text/background pair used in components meets WCAG AA contrast.
+ * Glowbench's own palette (none of the framework's stock colours): warm bench paper and bakelite ink
+ * by day, a dim bench at night. Colours are CSS variables (app/globals.css, values from
+ * lib/theme/palette.ts) so the dark theme (prefers-color-scheme) swaps them in one place.
+ * Each hue has one job: glow the primary, hazard for danger alone, caution, ok, flag for errors and
+ * actions that cannot be undone. tests/unit/palette.test.ts checks WCAG AA contrast of every pair we use.
  */
 const v = (name: string) => `rgb(var(--gb-${name}) / <alpha-value>)`;
 
@@ -18,8 +20,10 @@ const config: Config = {
         ink: v("ink"),
         muted: v("muted"),
         rule: v("rule"),
+        edge: v("edge"),
         glow: v("glow"),
         "glow-ink": v("glow-ink"),
+        "glow-bg": v("glow-bg"),
         signal: v("signal"),
         hazard: v("hazard"),
         "hazard-bg": v("hazard-bg"),
@@ -27,6 +31,8 @@ const config: Config = {
         "caution-bg": v("caution-bg"),
         ok: v("ok"),
         "ok-bg": v("ok-bg"),
+        flag: v("flag"),
+        "flag-bg": v("flag-bg"),
       },
       fontFamily: {
         sans: ["var(--font-body)", "system-ui", "sans-serif"],

@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import { connection } from "next/server";
+import { DARK, LIGHT } from "@/lib/theme/palette";
 import { bodyFont, figureFont } from "./fonts";
 import "./globals.css";
 
@@ -10,8 +11,8 @@ export const metadata: Metadata = {
 
 export const viewport: Viewport = {
   themeColor: [
-    { media: "(prefers-color-scheme: light)", color: "#faf6ee" },
-    { media: "(prefers-color-scheme: dark)", color: "#161412" },
+    { media: "(prefers-color-scheme: light)", color: LIGHT.paper },
+    { media: "(prefers-color-scheme: dark)", color: DARK.paper },
   ],
 };
 

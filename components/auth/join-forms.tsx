@@ -29,7 +29,7 @@ function useJoin(token: string) {
 
 function FormError({ message }: { message: string | null }) {
   return (
-    <p id="join-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-hazard">
+    <p id="join-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
       {message ?? ""}
     </p>
   );

@@ -35,7 +35,7 @@ export function ResetRequestForm() {
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
       <Field id="email" label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...register("email")} />
-      <p role="alert" aria-live="polite" className="min-h-6 font-bold text-hazard">
+      <p role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
         {formError ?? ""}
       </p>
       <Button type="submit" disabled={isSubmitting}>
@@ -64,7 +64,7 @@ export function NewPasswordFormView({ token }: { token: string }) {
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
       <Field id="password" label="New password" type="password" autoComplete="new-password" hint="At least 8 characters. A long phrase is easier to remember than a short jumble." error={errors.password?.message} {...register("password")} />
       <Field id="confirm" label="The same again" type="password" autoComplete="new-password" error={errors.confirm?.message} {...register("confirm")} />
-      <p role="alert" aria-live="polite" className="min-h-6 font-bold text-hazard">
+      <p role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
         {formError ?? ""}
       </p>
       <Button type="submit" disabled={isSubmitting}>

@@ -38,7 +38,7 @@ export function SignInForm({ next }: { next?: string }) {
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2" aria-describedby="sign-in-error">
       <Field id="email" label="E-mail" type="email" autoComplete="email" error={errors.email?.message} {...register("email")} />
       <Field id="password" label="Password" type="password" autoComplete="current-password" error={errors.password?.message} {...register("password")} />
-      <p id="sign-in-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-hazard">
+      <p id="sign-in-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
         {formError ?? ""}
       </p>
       <Button type="submit" disabled={isSubmitting}>

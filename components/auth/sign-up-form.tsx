@@ -50,7 +50,7 @@ export function SignUpForm() {
         error={errors.password?.message}
         {...register("password")}
       />
-      <p role="alert" aria-live="polite" className="min-h-6 font-bold text-hazard">
+      <p role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
         {formError ?? ""}
       </p>
       <Button type="submit" disabled={isSubmitting}>

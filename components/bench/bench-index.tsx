@@ -17,7 +17,7 @@ export interface IndexEntry {
 const ACCENT: Record<CalculatorGroup, string> = {
   stages: "border-t-glow",
   supplies: "border-t-signal",
-  safety: "border-t-hazard",
+  safety: "border-t-caution",
   parts: "border-t-muted",
 };
 
@@ -49,7 +49,7 @@ export function BenchIndex({ entries }: { entries: IndexEntry[] }) {
           placeholder="bias, ripple, bleeder, colour…"
           aria-describedby={`${id}-count`}
           autoComplete="off"
-          className="mt-1 min-h-11 w-full rounded-chip border border-rule bg-panel px-3 py-2 text-body text-ink placeholder:text-muted"
+          className="mt-1 min-h-11 w-full rounded-chip border border-edge bg-panel px-3 py-2 text-body text-ink placeholder:text-muted"
         />
         <p id={`${id}-count`} className="mt-1 text-note text-muted" aria-live="polite">
           {q ? `${shown.length} of ${entries.length} calculators match.` : `${entries.length} calculators.`}

@@ -183,7 +183,7 @@ export function CalculatorView(p: CalculatorViewProps) {
             </details>
           ) : null}
           {orphanErrors.length ? (
-            <ul role="alert" className="mt-2 text-note font-bold text-hazard">
+            <ul role="alert" className="mt-2 text-note font-bold text-flag">
               {orphanErrors.map(([k, m]) => (
                 <li key={k}>{plain(m)}</li>
               ))}

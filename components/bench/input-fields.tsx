@@ -15,7 +15,7 @@ const inputClass = "min-h-11 w-full rounded-chip border bg-panel px-3 py-2 text-
 
 function Message({ id, error }: { id: string; error?: string }) {
   return (
-    <p id={`${id}-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
+    <p id={`${id}-error`} role="alert" className="min-h-5 text-note font-bold text-flag">
       {error ?? ""}
     </p>
   );
@@ -69,7 +69,7 @@ export function InputControl({ meta, slug }: { meta: InputMeta; slug: string }) 
           id={id}
           aria-invalid={error ? true : undefined}
           aria-describedby={describedBy(id, error, meta.help)}
-          className={`${inputClass} ${error ? "border-hazard" : "border-rule"}`}
+          className={`${inputClass} ${error ? "border-flag" : "border-edge"}`}
           {...register(meta.name)}
         >
           {!meta.required && meta.default === undefined ? <option value="">{meta.blankLabel ?? "None"}</option> : null}

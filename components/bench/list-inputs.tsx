@@ -11,7 +11,7 @@ import { PilotLampInput } from "./pilot-lamp-input";
 /** The list inputs: filter stages, heaters, tube types and colour bands, each editable row by row. */
 
 const small = buttonClass("secondary", "!min-h-11 !px-3 !py-1 text-note");
-const remove = "inline-flex min-h-11 items-center rounded-chip px-3 text-note font-bold text-hazard hover:bg-hazard-bg";
+const remove = "inline-flex min-h-11 items-center rounded-chip px-3 text-note font-bold text-flag hover:bg-flag-bg";
 
 export function ListInput({ meta }: { meta: InputMeta; slug: string }) {
   if (meta.name === "stages") return <StagesInput meta={meta} />;
@@ -31,7 +31,7 @@ function ListFrame({ meta, children, actions }: { meta: InputMeta; children: Rea
       {meta.help ? <p className="mb-3 text-note text-muted">{listHelp(meta)}</p> : null}
       <div className="flex flex-col gap-3">{children}</div>
       <div className="mt-3 flex flex-wrap gap-2">{actions}</div>
-      <p id={`${id}-error`} role="alert" className="mt-1 min-h-5 text-note font-bold text-hazard">
+      <p id={`${id}-error`} role="alert" className="mt-1 min-h-5 text-note font-bold text-flag">
         {error ?? ""}
       </p>
     </fieldset>
@@ -76,7 +76,7 @@ function StagesInput({ meta }: { meta: InputMeta }) {
               <label className="sr-only" htmlFor={`${idBase}-kind`}>
                 Stage {i + 1} kind
               </label>
-              <select id={`${idBase}-kind`} className="min-h-11 rounded-chip border border-rule bg-panel px-2 text-ink" {...register(`${base}.kind`)}>
+              <select id={`${idBase}-kind`} className="min-h-11 rounded-chip border border-edge bg-panel px-2 text-ink" {...register(`${base}.kind`)}>
                 <option value="rc">RC (resistor)</option>
                 <option value="lc">LC (choke)</option>
               </select>
@@ -240,7 +240,7 @@ function BandsInput({ meta }: { meta: InputMeta }) {
                 aria-invalid={error ? true : undefined}
                 aria-describedby={error ? "in-bands-error" : undefined}
                 onChange={(e) => set(list.map((x, j) => (j === i ? e.target.value : x)))}
-                className="min-h-11 w-full rounded-chip border border-rule bg-panel px-2 text-ink"
+                className="min-h-11 w-full rounded-chip border border-edge bg-panel px-2 text-ink"
               >
                 {colours.map((o) => (
                   <option key={o} value={o}>

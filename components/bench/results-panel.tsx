@@ -7,10 +7,11 @@ import { HEADLINES } from "@/lib/bench/examples";
 import { BAND_PAINT } from "./list-inputs";
 import { ShuntsTable } from "./shunts-table";
 
-/** Outputs whose value is bad news, so the figure is shown in the hazard or caution colour. */
+/** Outputs whose value is bad news, so the figure is shown in the hazard (danger alone) or caution colour. */
 function tone(slug: string, name: string, value: OutputValue): string {
   if (slug === "arc-clearance" && name === "willArc" && value === true) return "text-hazard";
-  if (slug === "heater-string" && name === "currentsMatch" && value === false) return "text-hazard";
+  // Unequal heater currents need shunts, a caution; only an arc at the typed voltage is a danger.
+  if (slug === "heater-string" && name === "currentsMatch" && value === false) return "text-caution";
   if (slug === "resistor-drift" && (name === "verdict" || name === "withinTolerance") && value !== "within" && value !== true) return "text-caution";
   return "text-ink";
 }

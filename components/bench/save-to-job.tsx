@@ -12,7 +12,7 @@ interface JobSummary {
 }
 
 const NEW = "new";
-const field = "min-h-11 w-full rounded-chip border border-rule bg-panel px-3 py-2 text-body text-ink";
+const field = "min-h-11 w-full rounded-chip border border-edge bg-panel px-3 py-2 text-body text-ink";
 
 /** Save this calculation to one of the workshop's jobs (or a new one), with a note. The server recomputes it. */
 export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { slug: string; inputs: Record<string, unknown>; disabled: boolean; canCreateJob: boolean }) {
@@ -65,7 +65,7 @@ export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { sl
     setNote("");
   }
 
-  if (loadError) return <p className="text-hazard">Could not load the workshop’s jobs: {loadError}</p>;
+  if (loadError) return <p className="text-flag">Could not load the workshop’s jobs: {loadError}</p>;
   if (!jobs) return <p className="text-muted">Loading the workshop’s jobs…</p>;
 
   return (
@@ -83,7 +83,7 @@ export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { sl
           {canCreateJob ? <option value={NEW}>New job…</option> : null}
           {!canCreateJob && jobs.length === 0 ? <option value="">No jobs yet: ask a technician to book the set in</option> : null}
         </select>
-        <p id={`${id}-job-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
+        <p id={`${id}-job-error`} role="alert" className="min-h-5 text-note font-bold text-flag">
           {errors.job ?? ""}
         </p>
       </div>
@@ -94,7 +94,7 @@ export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { sl
               New job title
             </label>
             <input id={`${id}-title`} value={title} onChange={(e) => setTitle(e.target.value)} className={field} aria-invalid={errors.title ? true : undefined} aria-describedby={`${id}-title-error`} placeholder="Five-valve table radio, 1950s" />
-            <p id={`${id}-title-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
+            <p id={`${id}-title-error`} role="alert" className="min-h-5 text-note font-bold text-flag">
               {errors.title ?? ""}
             </p>
           </div>
@@ -109,7 +109,7 @@ export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { sl
                 </option>
               ))}
             </select>
-            <p id={`${id}-kind-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
+            <p id={`${id}-kind-error`} role="alert" className="min-h-5 text-note font-bold text-flag">
               {errors.kind ?? ""}
             </p>
           </div>
@@ -137,7 +137,7 @@ export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { sl
             </>
           ) : null}
         </p>
-        <p role="alert" className="text-note font-bold text-hazard">
+        <p role="alert" className="text-note font-bold text-flag">
           {errors.form ?? ""}
         </p>
       </div>

@@ -40,7 +40,7 @@ export function AnswerButtons({ token }: { token: string }) {
         maxLength={1000}
         rows={3}
         aria-describedby="answer-error"
-        className="rounded-chip border border-rule bg-panel px-3 py-2 text-body"
+        className="rounded-chip border border-edge bg-panel px-3 py-2 text-body"
       />
       <div className="flex flex-wrap gap-3">
         <Button onClick={() => answer("approve")} disabled={busy}>
@@ -50,7 +50,7 @@ export function AnswerButtons({ token }: { token: string }) {
           Decline
         </Button>
       </div>
-      <p id="answer-error" role="alert" className="min-h-6 font-bold text-hazard">
+      <p id="answer-error" role="alert" className="min-h-6 font-bold text-flag">
         {error}
       </p>
     </div>

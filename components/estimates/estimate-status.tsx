@@ -1,8 +1,8 @@
 const LABELS = {
   draft: ["Draft", "bg-sunk text-ink"],
-  sent: ["Waiting for the customer", "bg-caution-bg text-ink"],
+  sent: ["Waiting for the customer", "bg-glow-bg text-ink"],
   approved: ["Approved by the customer", "bg-ok-bg text-ink"],
-  declined: ["Declined by the customer", "bg-hazard-bg text-ink"],
+  declined: ["Declined by the customer", "bg-flag-bg text-ink"],
 } as const;
 
 export function EstimateStatus({ status }: { status: keyof typeof LABELS }) {

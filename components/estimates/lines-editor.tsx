@@ -142,7 +142,7 @@ export function LinesEditor({
           <label className="flex items-center gap-2">
             <span className="font-bold">Add part</span>
             <select
-              className="min-h-11 rounded-chip border border-rule bg-panel px-3"
+              className="min-h-11 rounded-chip border border-edge bg-panel px-3"
               value=""
               onChange={(e) => {
                 addPart(Number(e.target.value));
@@ -171,7 +171,7 @@ export function LinesEditor({
           {money(totals.totalMinor)}
         </dd>
       </dl>
-      <p id="lines-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-hazard">
+      <p id="lines-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
         {formError}
       </p>
       <div className="flex items-center gap-3">

@@ -25,7 +25,7 @@ export function SendEstimateButton({ jobId, again }: { jobId: number; again: boo
       >
         {busy ? "Sending…" : again ? "Send again to the customer" : "Send to the customer for approval"}
       </Button>
-      <p role="status" aria-live="polite" className={message?.ok ? "text-ok" : "font-bold text-hazard"}>
+      <p role="status" aria-live="polite" className={message?.ok ? "text-ok" : "font-bold text-flag"}>
         {message?.text ?? ""}
       </p>
     </div>

@@ -49,7 +49,7 @@ export function InvoiceActions({ invoiceId, status }: { invoiceId: number; statu
           </Button>
         ) : null}
       </div>
-      <p role="alert" className="min-h-6 font-bold text-hazard">
+      <p role="alert" className="min-h-6 font-bold text-flag">
         {error}
       </p>
     </div>

@@ -13,7 +13,7 @@ export function DeleteButton({ url, confirm, label }: { url: string; confirm: st
       <button
         type="button"
         aria-label={label}
-        className="min-h-9 rounded-chip px-2 text-note font-bold text-hazard hover:bg-sunk"
+        className="min-h-9 rounded-chip px-2 text-note font-bold text-flag hover:bg-flag-bg"
         onClick={async () => {
           if (!window.confirm(confirm)) return;
           const res = await sendJson(url, undefined, "DELETE");
@@ -23,7 +23,7 @@ export function DeleteButton({ url, confirm, label }: { url: string; confirm: st
       >
         Remove
       </button>
-      {error ? <span role="alert" className="ml-2 text-note font-bold text-hazard">{error}</span> : null}
+      {error ? <span role="alert" className="ml-2 text-note font-bold text-flag">{error}</span> : null}
     </span>
   );
 }

@@ -61,13 +61,13 @@ export function JobDetails({ job, canEdit, canDelete }: { job: Details; canEdit:
             </Button>
           ) : null}
           {canDelete ? (
-            <Button variant="quiet" className="text-hazard" onClick={remove}>
+            <Button variant="destructive" onClick={remove}>
               Delete job
             </Button>
           ) : null}
         </div>
       ) : null}
-      <p role="alert" className="mt-2 min-h-5 font-bold text-hazard">
+      <p role="alert" className="mt-2 min-h-5 font-bold text-flag">
         {error ?? ""}
       </p>
     </div>

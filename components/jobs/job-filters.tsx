@@ -8,7 +8,7 @@ export interface Filters {
   kind: string;
 }
 
-const control = "min-h-11 rounded-chip border border-rule bg-panel px-3 py-2 text-body text-ink";
+const control = "min-h-11 rounded-chip border border-edge bg-panel px-3 py-2 text-body text-ink";
 
 export function JobFilters({ value, onChange }: { value: Filters; onChange: (f: Filters) => void }) {
   return (

@@ -56,7 +56,7 @@ export function JobForm({ job, onDone }: { job?: { id: number } & Partial<Record
       <Field id={id("customer-name")} label="Customer name" error={errors.customerName?.message} {...register("customerName")} />
       <Field id={id("customer-email")} label="Customer e-mail" type="email" error={errors.customerEmail?.message} {...register("customerEmail")} />
       <TextareaField id={id("notes")} label="Notes" className="sm:col-span-2" hint="Symptoms, condition, what the customer asked for." error={errors.notes?.message} {...register("notes")} />
-      <p id="job-form-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-hazard sm:col-span-2">
+      <p id="job-form-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-flag sm:col-span-2">
         {formError ?? ""}
       </p>
       <div className="flex gap-3 sm:col-span-2">

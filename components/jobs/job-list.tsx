@@ -100,7 +100,7 @@ export function JobList({ firstPage }: { firstPage?: JobPage }) {
     <div className="flex flex-col gap-4">
       <JobFilters value={filters} onChange={setFilters} />
       {query.isError ? (
-        <p role="alert" className="rounded-card border border-hazard bg-hazard-bg p-4 font-bold text-hazard">
+        <p role="alert" className="rounded-card border border-flag bg-flag-bg p-4 font-bold text-flag">
           {query.error.message} <button type="button" className="underline" onClick={() => query.refetch()}>Try again</button>
         </p>
       ) : null}

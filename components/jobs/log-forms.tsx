@@ -35,7 +35,7 @@ export function NoteForm({ jobId }: { jobId: number }) {
       <TextareaField id="log-text" label="What you did or found" rows={3} error={errors.text?.message as string | undefined} {...form.register("text")} />
       <div className="flex items-center gap-3">
         <Button type="submit" disabled={isSubmitting}>Add to log</Button>
-        <p role="alert" className="font-bold text-hazard">{formError ?? ""}</p>
+        <p role="alert" className="font-bold text-flag">{formError ?? ""}</p>
       </div>
     </form>
   );
@@ -53,7 +53,7 @@ export function PowerUpForm({ jobId }: { jobId: number }) {
       <TextareaField id="pu-text" label="What was seen" className="sm:col-span-2" rows={2} placeholder="Heaters lit, lamp dimmed after 20 s, no smoke, faint hum" error={msg("text")} {...form.register("text")} />
       <div className="flex items-center gap-3 sm:col-span-2">
         <Button type="submit" disabled={isSubmitting}>Record power-up</Button>
-        <p role="alert" className="font-bold text-hazard">{formError ?? ""}</p>
+        <p role="alert" className="font-bold text-flag">{formError ?? ""}</p>
       </div>
     </form>
   );

@@ -46,7 +46,7 @@ export function PartAddForm({ jobId }: { jobId: number }) {
         <Button type="submit" disabled={isSubmitting}>
           Add part
         </Button>
-        <p role="alert" aria-live="polite" className="font-bold text-hazard">
+        <p role="alert" aria-live="polite" className="font-bold text-flag">
           {formError ?? ""}
         </p>
       </div>

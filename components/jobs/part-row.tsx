@@ -9,7 +9,7 @@ import type { PartRow as Part } from "@/db/queries/parts";
 
 const TEXT_FIELDS = ["designator", "originalValue", "originalRating", "replacementValue", "replacementRating"] as const;
 const cell = "px-3 py-2 align-top";
-const input = "w-full min-h-9 rounded-chip border border-rule bg-panel px-2 py-1";
+const input = "w-full min-h-9 rounded-chip border border-edge bg-panel px-2 py-1";
 const STATE_TONE: Record<PartState, string> = { "to-order": "text-caution", ordered: "text-signal", fitted: "text-ok" };
 
 /** One part, edited in place: click Edit, change the cells, Save (PATCH with only what changed). */
@@ -65,7 +65,7 @@ export function PartRow({ jobId, part, canEdit, caution, readingNote }: { jobId:
             <button type="button" className="min-h-9 rounded-chip bg-glow px-3 font-bold text-glow-ink" onClick={() => save(changed)}>Save</button>
             <button type="button" className="min-h-9 rounded-chip border border-rule px-3 font-bold" onClick={() => { setDraft(part); setEditing(false); setErrors({}); }}>Cancel</button>
           </div>
-          {message ? <p role="alert" className="mt-1 text-note font-bold text-hazard">{Object.values(errors)[0] ?? message}</p> : null}
+          {message ? <p role="alert" className="mt-1 text-note font-bold text-flag">{Object.values(errors)[0] ?? message}</p> : null}
         </td>
       </tr>
     );
@@ -92,10 +92,10 @@ export function PartRow({ jobId, part, canEdit, caution, readingNote }: { jobId:
         {canEdit ? (
           <>
             <button type="button" className="min-h-9 rounded-chip px-2 font-bold text-signal hover:bg-sunk" onClick={() => setEditing(true)} aria-label={`Edit ${part.designator}`}>Edit</button>
-            <button type="button" className="min-h-9 rounded-chip px-2 font-bold text-hazard hover:bg-sunk" onClick={remove} aria-label={`Remove ${part.designator}`}>Remove</button>
+            <button type="button" className="min-h-9 rounded-chip px-2 font-bold text-flag hover:bg-flag-bg" onClick={remove} aria-label={`Remove ${part.designator}`}>Remove</button>
           </>
         ) : null}
-        {message && !editing ? <p role="alert" className="text-note font-bold text-hazard">{message}</p> : null}
+        {message && !editing ? <p role="alert" className="text-note font-bold text-flag">{message}</p> : null}
       </td>
     </tr>
   );

@@ -36,8 +36,8 @@ export function PartsCsvTools({ jobId, canEdit }: { jobId: number; canEdit: bool
         {canEdit ? <span className="text-note text-muted">Columns: {CSV_COLUMNS.join(", ")}. A file with any bad row imports nothing.</span> : null}
       </div>
       {result ? (
-        <div role="alert" className={`rounded-card border p-3 ${result.ok ? "border-ok/50 bg-ok-bg text-ok" : "border-hazard/50 bg-hazard-bg"}`}>
-          <p className={`font-bold ${result.ok ? "" : "text-hazard"}`}>{result.message}</p>
+        <div role="alert" className={`rounded-card border p-3 ${result.ok ? "border-ok/50 bg-ok-bg text-ok" : "border-flag/50 bg-flag-bg"}`}>
+          <p className={`font-bold ${result.ok ? "" : "text-flag"}`}>{result.message}</p>
           {result.rows.length ? (
             <ul className="mt-1 list-disc pl-5 text-note">
               {result.rows.map((r) => <li key={r}>{r}</li>)}

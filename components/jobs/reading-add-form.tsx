@@ -50,7 +50,7 @@ export function ReadingAddForm({ jobId }: { jobId: number }) {
       <Field id="reading-tolerance" label="Tolerance" placeholder="0.2" hint="0.2 = ±20 %" error={errors.tolerance?.message} {...register("tolerance")} />
       <div className="flex items-center gap-3 sm:col-span-5">
         <Button type="submit" disabled={isSubmitting}>Add reading</Button>
-        <p role="alert" aria-live="polite" className="font-bold text-hazard">{formError ?? ""}</p>
+        <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
       </div>
     </form>
   );

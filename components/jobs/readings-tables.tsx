@@ -9,9 +9,9 @@ import { VERDICT_LABELS, type ReadingVerdict } from "@/lib/jobs/reading-verdict"
 
 const TONE: Record<ReadingVerdict, string> = {
   within: "bg-ok-bg text-ok border-ok/40",
-  high: "bg-hazard-bg text-hazard border-hazard/40",
+  high: "bg-caution-bg text-caution border-caution/40",
   low: "bg-caution-bg text-caution border-caution/40",
-  open: "bg-hazard-bg text-hazard border-hazard/40",
+  open: "bg-flag-bg text-flag border-flag/40",
   unknown: "bg-sunk text-muted border-rule",
 };
 
@@ -30,7 +30,7 @@ const key = (r: ReadingRow) => (r.verdict === "open" ? Number.POSITIVE_INFINITY 
 function RemoveButton({ jobId, r }: { jobId: number; r: ReadingRow }) {
   const router = useRouter();
   return (
-    <button type="button" className="min-h-9 rounded-chip px-2 text-note font-bold text-hazard hover:bg-sunk" aria-label={`Remove reading ${r.designator}`}
+    <button type="button" className="min-h-9 rounded-chip px-2 text-note font-bold text-flag hover:bg-flag-bg" aria-label={`Remove reading ${r.designator}`}
       onClick={async () => {
         if (!window.confirm(`Remove the reading for ${r.designator}?`)) return;
         const res = await sendJson(`/api/jobs/${jobId}/readings/${r.id}`, undefined, "DELETE");

@@ -50,7 +50,7 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
     setResult({ ok: true, message: `Sent to ${res.data.sent.to} with the bench sheet attached.` });
   });
 
-  if (loadError) return <p className="text-note text-hazard">{loadError}</p>;
+  if (loadError) return <p className="text-note text-flag">{loadError}</p>;
   if (!draft) return <p className="text-note text-muted">Loading the customer message…</p>;
   if (!draft.canSend) {
     if (draft.blocked === "role") return null;
@@ -79,7 +79,7 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
           <Button type="submit" disabled={isSubmitting}>
             {isSubmitting ? "Sending…" : "Send to customer"}
           </Button>
-          <p role="status" aria-live="polite" className={`text-note font-bold ${result?.ok ? "text-ok" : "text-hazard"}`}>
+          <p role="status" aria-live="polite" className={`text-note font-bold ${result?.ok ? "text-ok" : "text-flag"}`}>
             {result?.message ?? ""}
           </p>
         </div>

@@ -1,14 +1,14 @@
 import { JOB_STATUS_LABELS, type JobStatus } from "@/db/enums";
 
-/** Colour by stage: waiting (neutral), on the bench (amber), done (green). */
+/** Colour by stage: waiting (neutral), on the bench (the primary's tint), done (green). Caution and hazard colours are kept for results. */
 const TONE: Record<JobStatus, string> = {
   "booked-in": "border-rule bg-sunk text-ink",
-  inspecting: "border-glow/40 bg-caution-bg text-caution",
+  inspecting: "border-glow/40 bg-glow-bg text-glow",
   "awaiting-go-ahead": "border-rule bg-sunk text-ink",
-  recapping: "border-glow/40 bg-caution-bg text-caution",
-  "slow-start": "border-hazard/40 bg-hazard-bg text-hazard",
-  "fault-finding": "border-glow/40 bg-caution-bg text-caution",
-  aligning: "border-glow/40 bg-caution-bg text-caution",
+  recapping: "border-glow/40 bg-glow-bg text-glow",
+  "slow-start": "border-glow/40 bg-glow-bg text-glow",
+  "fault-finding": "border-glow/40 bg-glow-bg text-glow",
+  aligning: "border-glow/40 bg-glow-bg text-glow",
   ready: "border-ok/40 bg-ok-bg text-ok",
   returned: "border-rule bg-panel text-muted",
 };

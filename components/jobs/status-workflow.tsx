@@ -65,7 +65,7 @@ export function StatusWorkflow({ jobId, status, canChange }: { jobId: number; st
           ) : null}
           <label className="flex flex-col gap-1">
             <span className="text-note font-bold">Or set the status to</span>
-            <select value={other} onChange={(e) => setOther(e.target.value as JobStatus)} className="min-h-11 rounded-chip border border-rule bg-panel px-3">
+            <select value={other} onChange={(e) => setOther(e.target.value as JobStatus)} className="min-h-11 rounded-chip border border-edge bg-panel px-3">
               {JOB_STATUSES.map((s) => (
                 <option key={s} value={s}>
                   {JOB_STATUS_LABELS[s]}
@@ -80,7 +80,7 @@ export function StatusWorkflow({ jobId, status, canChange }: { jobId: number; st
       ) : (
         <p className="mt-3 text-note text-muted">Technicians and owners move a job along; each change is written to the Log.</p>
       )}
-      <p role="alert" className="mt-2 min-h-5 font-bold text-hazard">
+      <p role="alert" className="mt-2 min-h-5 font-bold text-flag">
         {error ?? ""}
       </p>
     </div>

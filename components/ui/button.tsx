@@ -1,13 +1,14 @@
 import Link from "next/link";
 import type { ComponentProps } from "react";
 
-type Variant = "primary" | "secondary" | "quiet" | "danger";
+/** destructive: for what cannot be undone (delete, remove, void); plum, never the hazard red, which means danger alone. */
+type Variant = "primary" | "secondary" | "quiet" | "destructive";
 
 const styles: Record<Variant, string> = {
   primary: "bg-glow text-glow-ink hover:brightness-110 shadow-sm",
   secondary: "bg-panel text-ink border border-rule hover:bg-sunk",
   quiet: "text-ink hover:bg-sunk",
-  danger: "bg-hazard text-white hover:brightness-110",
+  destructive: "bg-panel text-flag border border-flag/60 hover:bg-flag-bg",
 };
 
 const base =

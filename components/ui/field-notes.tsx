@@ -9,7 +9,7 @@ export function FieldNotes({ id, hint, error }: { id: string; hint?: ReactNode; 
           {hint}
         </p>
       ) : null}
-      <p id={`${id}-error`} role="alert" className="min-h-5 text-note font-bold text-hazard">
+      <p id={`${id}-error`} role="alert" className="min-h-5 text-note font-bold text-flag">
         {error ?? ""}
       </p>
     </>

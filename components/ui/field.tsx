@@ -23,12 +23,12 @@ export function Field({
           aria-invalid={error ? true : undefined}
           aria-describedby={describedBy}
           className={`min-h-11 w-full rounded-chip border bg-panel px-3 py-2 text-body text-ink placeholder:text-muted ${
-            error ? "border-hazard" : "border-rule"
+            error ? "border-flag" : "border-edge"
           } ${suffix ? "rounded-r-none" : ""}`}
           {...input}
         />
         {suffix ? (
-          <span className="inline-flex items-center rounded-r-chip border border-l-0 border-rule bg-sunk px-3 font-mono text-muted">{suffix}</span>
+          <span className="inline-flex items-center rounded-r-chip border border-l-0 border-edge bg-sunk px-3 font-mono text-muted">{suffix}</span>
         ) : null}
       </div>
       <FieldNotes id={id} hint={hint} error={error} />

@@ -21,7 +21,7 @@ export function SelectField({
         id={id}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy}
-        className={`min-h-11 w-full rounded-chip border bg-panel px-3 py-2 text-body text-ink ${error ? "border-hazard" : "border-rule"}`}
+        className={`min-h-11 w-full rounded-chip border bg-panel px-3 py-2 text-body text-ink ${error ? "border-flag" : "border-edge"}`}
         {...select}
       >
         {options.map((o) => (

@@ -20,7 +20,7 @@ export function TextareaField({
         rows={3}
         aria-invalid={error ? true : undefined}
         aria-describedby={describedBy}
-        className={`w-full rounded-chip border bg-panel px-3 py-2 text-body text-ink placeholder:text-muted ${error ? "border-hazard" : "border-rule"}`}
+        className={`w-full rounded-chip border bg-panel px-3 py-2 text-body text-ink placeholder:text-muted ${error ? "border-flag" : "border-edge"}`}
         {...area}
       />
       <FieldNotes id={id} hint={hint} error={error} />

@@ -49,7 +49,7 @@ export function ChargesForm({ initial, currencyLocked }: { initial: ChargesFormV
           <p className="font-bold">Currency</p>
           <p className="font-mono">{currency}</p>
           <p className="text-note text-muted">Estimates or invoices already use this currency, so it stays as it is.</p>
-          {errors.currency?.message ? <p role="alert" className="text-note font-bold text-hazard">{errors.currency.message}</p> : null}
+          {errors.currency?.message ? <p role="alert" className="text-note font-bold text-flag">{errors.currency.message}</p> : null}
         </div>
       ) : (
         <SelectField id="ch-currency" label="Currency" options={CHARGE_CURRENCIES} hint="Every estimate and invoice is in this currency." error={errors.currency?.message} {...register("currency")} />
@@ -62,7 +62,7 @@ export function ChargesForm({ initial, currencyLocked }: { initial: ChargesFormV
         <Button type="submit" disabled={isSubmitting || !isDirty}>
           {isSubmitting ? "Saving…" : "Save charges"}
         </Button>
-        <p role="status" aria-live="polite" className={`text-note font-bold ${status?.ok ? "text-ok" : "text-hazard"}`}>
+        <p role="status" aria-live="polite" className={`text-note font-bold ${status?.ok ? "text-ok" : "text-flag"}`}>
           {status?.message ?? ""}
         </p>
       </div>

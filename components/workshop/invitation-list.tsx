@@ -56,7 +56,7 @@ export function InvitationList({ invitations }: { invitations: InvitationItem[] 
           </li>
         ))}
       </ul>
-      <p role="alert" className="min-h-5 text-note font-bold text-hazard">
+      <p role="alert" className="min-h-5 text-note font-bold text-flag">
         {error ?? ""}
       </p>
     </>

@@ -43,7 +43,7 @@ export function InviteForm() {
       <Button type="submit" disabled={isSubmitting} className="sm:mt-7">
         {isSubmitting ? "Sending…" : "Send invitation"}
       </Button>
-      <p role="status" aria-live="polite" className={`min-h-6 text-note font-bold sm:col-span-3 ${status?.ok ? "text-ok" : "text-hazard"}`}>
+      <p role="status" aria-live="polite" className={`min-h-6 text-note font-bold sm:col-span-3 ${status?.ok ? "text-ok" : "text-flag"}`}>
         {status?.message ?? ""}
       </p>
     </form>

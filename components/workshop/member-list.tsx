@@ -56,7 +56,7 @@ export function MemberList({ members, manage, selfUserId }: { members: MemberIte
                 disabled={busy === m.id}
                 aria-describedby={error?.id === m.id ? `member-${m.id}-error` : undefined}
                 onChange={(e) => act(m.id, `/api/workshop/members/${m.id}`, { role: e.target.value }, "PATCH")}
-                className="min-h-11 rounded-chip border border-rule bg-panel px-3 py-2 text-body"
+                className="min-h-11 rounded-chip border border-edge bg-panel px-3 py-2 text-body"
               >
                 {ROLE_OPTIONS.map((o) => (
                   <option key={o.value} value={o.value}>
@@ -66,7 +66,7 @@ export function MemberList({ members, manage, selfUserId }: { members: MemberIte
               </select>
               {confirming === m.id ? (
                 <>
-                  <Button variant="danger" disabled={busy === m.id} onClick={() => act(m.id, `/api/workshop/members/${m.id}`, undefined, "DELETE")}>
+                  <Button variant="destructive" disabled={busy === m.id} onClick={() => act(m.id, `/api/workshop/members/${m.id}`, undefined, "DELETE")}>
                     {m.userId === selfUserId ? "Leave" : `Remove ${m.name.split(" ")[0]}`}
                   </Button>
                   <Button variant="quiet" onClick={() => setConfirming(null)}>
@@ -83,7 +83,7 @@ export function MemberList({ members, manage, selfUserId }: { members: MemberIte
             <RoleBadge role={m.role} />
           )}
           {error?.id === m.id ? (
-            <p id={`member-${m.id}-error`} role="alert" className="w-full text-note font-bold text-hazard">
+            <p id={`member-${m.id}-error`} role="alert" className="w-full text-note font-bold text-flag">
               {error.message}
             </p>
           ) : null}

@@ -66,7 +66,7 @@ export function SettingsForm({ initial }: { initial: WorkshopSettingsForm }) {
         <Button type="submit" disabled={isSubmitting || !isDirty}>
           {isSubmitting ? "Saving…" : "Save settings"}
         </Button>
-        <p role="status" aria-live="polite" className={`text-note font-bold ${status?.ok ? "text-ok" : "text-hazard"}`}>
+        <p role="status" aria-live="polite" className={`text-note font-bold ${status?.ok ? "text-ok" : "text-flag"}`}>
           {status?.message ?? ""}
         </p>
       </div>

@@ -1,4 +1,5 @@
 import type { Role } from "@/db/enums";
+import { LIGHT } from "@/lib/theme/palette";
 
 /** The wording of Glowbench's own e-mails: plain text first, a simple HTML twin. */
 
@@ -12,7 +13,7 @@ const ROLE_PHRASE: Record<Role, string> = {
 
 function html(paragraphs: string[], link: { href: string; label: string }): string {
   const body = paragraphs.map((p) => `<p>${escape(p)}</p>`).join("");
-  return `<div style="font-family:system-ui,sans-serif;font-size:16px;line-height:1.5;color:#1c1917">${body}<p><a href="${escape(link.href)}" style="display:inline-block;background:#b45309;color:#fff;padding:10px 16px;border-radius:6px;text-decoration:none;font-weight:bold">${escape(link.label)}</a></p><p style="color:#575048;font-size:14px">${escape(link.href)}</p></div>`;
+  return `<div style="font-family:system-ui,sans-serif;font-size:16px;line-height:1.5;color:${LIGHT.ink}">${body}<p><a href="${escape(link.href)}" style="display:inline-block;background:${LIGHT.glow};color:${LIGHT["glow-ink"]};padding:10px 16px;border-radius:6px;text-decoration:none;font-weight:bold">${escape(link.label)}</a></p><p style="color:${LIGHT.muted};font-size:14px">${escape(link.href)}</p></div>`;
 }
 
 export function invitationMail(input: { workshopName: string; inviterName: string; role: Role; link: string; expiresAt: Date }) {
@@ -23,7 +24,7 @@ export function invitationMail(input: { workshopName: string; inviterName: strin
   return {
     subject: `Join ${input.workshopName} on Glowbench`,
     text: [lead, how, input.link, ignore].join("\n\n"),
-    html: html([lead, how], { href: input.link, label: `Join ${input.workshopName}` }) + `<p style="font-family:system-ui,sans-serif;color:#575048;font-size:14px">${escape(ignore)}</p>`,
+    html: html([lead, how], { href: input.link, label: `Join ${input.workshopName}` }) + `<p style="font-family:system-ui,sans-serif;color:${LIGHT.muted};font-size:14px">${escape(ignore)}</p>`,
   };
 }
 
@@ -34,6 +35,6 @@ export function passwordResetMail(input: { name: string; link: string }) {
   return {
     subject: "Set a new Glowbench password",
     text: [lead, how, input.link, ignore].join("\n\n"),
-    html: html([lead, how], { href: input.link, label: "Choose a new password" }) + `<p style="font-family:system-ui,sans-serif;color:#575048;font-size:14px">${escape(ignore)}</p>`,
+    html: html([lead, how], { href: input.link, label: "Choose a new password" }) + `<p style="font-family:system-ui,sans-serif;color:${LIGHT.muted};font-size:14px">${escape(ignore)}</p>`,
   };
 }

@@ -50,7 +50,7 @@ export default function PlateChart({ inputs, outputs }: ChartProps) {
             />
           ))}
           <Line data={d.loadLine} dataKey="ip" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} name="Load line" />
-          {d.operating ? <ReferenceDot x={d.operating.ep} y={d.operating.ip} r={7} fill={C.hazard} stroke={C.panel} strokeWidth={2} /> : null}
+          {d.operating ? <ReferenceDot x={d.operating.ep} y={d.operating.ip} r={7} fill={C.ink} stroke={C.panel} strokeWidth={2} /> : null}
         </LineChart>
       </ResponsiveContainer>
     </ChartFrame>

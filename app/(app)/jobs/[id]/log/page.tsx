@@ -10,8 +10,8 @@ export const metadata: Metadata = { title: "Log" };
 
 const KIND: Record<string, { label: string; tone: string }> = {
   note: { label: "Note", tone: "bg-sunk text-ink" },
-  "power-up": { label: "Power-up", tone: "bg-hazard-bg text-hazard" },
-  status: { label: "Status", tone: "bg-caution-bg text-caution" },
+  "power-up": { label: "Power-up", tone: "bg-glow-bg text-glow" },
+  status: { label: "Status", tone: "bg-sunk text-muted" },
   estimate: { label: "Estimate", tone: "bg-ok-bg text-ink" },
   invoice: { label: "Invoice", tone: "bg-ok-bg text-ink" },
 };
