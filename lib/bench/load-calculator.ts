@@ -25,6 +25,7 @@ const LOADERS: Record<string, Loader> = {
   reforming: () => import("@/lib/calc/reforming"),
   "resistor-drift": () => import("@/lib/calc/resistor-drift"),
   "series-lamp": () => import("@/lib/calc/series-lamp"),
+  "series-parallel": () => import("@/lib/calc/series-parallel"),
   superhet: () => import("@/lib/calc/superhet"),
   "supply-ripple": () => import("@/lib/calc/supply-ripple"),
   "time-constant": () => import("@/lib/calc/time-constant"),

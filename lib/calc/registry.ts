@@ -17,6 +17,7 @@ import { calculator as reactance } from "./reactance";
 import { calculator as reforming } from "./reforming";
 import { calculator as resistorDrift } from "./resistor-drift";
 import { calculator as seriesLamp } from "./series-lamp";
+import { calculator as seriesParallel } from "./series-parallel";
 import { calculator as superhet } from "./superhet";
 import { calculator as supplyRipple } from "./supply-ripple";
 import { calculator as timeConstant } from "./time-constant";
@@ -45,6 +46,7 @@ export const calculators: readonly Calculator[] = [
   meterLoading,
   reforming,
   preferredValue,
+  seriesParallel,
   colourCode,
   ohmsLaw,
   reactance,

@@ -44,6 +44,7 @@ export const samples: Record<string, Record<string, unknown>> = {
   "triode-stage": { tube: "12AX7", supplyVoltage: "250 V", plateResistor: "100k", cathodeResistor: "1.5k", cathodeBypassed: true, loadResistance: "470k" },
   "colour-code": { bands: ["yellow", "violet", "red", "gold"] },
   "preferred-value": { value: "5.13k", series: "E12" },
+  "series-parallel": { target: "5.13k", series: "E12", mode: "either" },
 };
 
 /** Slugs that are closed-form (no iteration), measured against the closed-form targets. */
