@@ -2,27 +2,36 @@ import { Document, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { getInvoice } from "@/db/queries/invoices";
 import { LINE_KIND_LABELS } from "@/lib/estimates/schemas";
 import { formatMoney, formatQuantity, formatTaxRate } from "@/lib/money";
+import { LIGHT } from "@/lib/theme/palette";
+import { PDF_BODY, PDF_FIGURES } from "@/server/pdf/fonts";
 
-/** The printable invoice, kept beside the job's bench sheet. Built with @react-pdf/renderer's primitives. */
+/**
+ * The printable invoice, kept beside the job's bench sheet. Built with @react-pdf/renderer's primitives,
+ * set in our shipped faces (server/pdf/fonts.ts): words in Atkinson Hyperlegible, money in JetBrains Mono.
+ */
 
 type Invoice = ReturnType<typeof getInvoice>;
 
+const ink = LIGHT.ink;
+const muted = LIGHT.muted;
 const s = StyleSheet.create({
-  page: { padding: 40, fontSize: 10, fontFamily: "Helvetica", color: "#221c15" },
+  page: { padding: 40, fontSize: 10, fontFamily: PDF_BODY, color: ink, lineHeight: 1.3 },
   header: { flexDirection: "row", justifyContent: "space-between", marginBottom: 24 },
-  title: { fontSize: 20, fontFamily: "Helvetica-Bold" },
-  muted: { color: "#6b5d4a" },
-  row: { flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: "#d8cfbd", paddingVertical: 5 },
-  head: { fontFamily: "Helvetica-Bold", borderBottomWidth: 1, borderBottomColor: "#221c15" },
+  title: { fontSize: 20, fontWeight: 700 },
+  muted: { color: muted },
+  row: { flexDirection: "row", borderBottomWidth: 0.5, borderBottomColor: LIGHT.rule, paddingVertical: 5 },
+  head: { fontWeight: 700, borderBottomWidth: 1, borderBottomColor: ink },
   desc: { flex: 1 },
   kind: { width: 60 },
-  qty: { width: 50, textAlign: "right" },
-  money: { width: 80, textAlign: "right", fontFamily: "Courier" },
-  totals: { marginTop: 12, marginLeft: "auto", width: 220 },
+  qty: { width: 50, textAlign: "right", fontFamily: PDF_FIGURES, fontSize: 9 },
+  heading: { fontFamily: PDF_BODY, fontSize: 10, fontWeight: 700 },
+  money: { width: 84, textAlign: "right", fontFamily: PDF_FIGURES, fontSize: 9 },
+  totals: { marginTop: 12, marginLeft: "auto", width: 230 },
   totalRow: { flexDirection: "row", justifyContent: "space-between", paddingVertical: 2 },
-  grand: { fontFamily: "Helvetica-Bold", fontSize: 12, borderTopWidth: 1, borderTopColor: "#221c15", marginTop: 4, paddingTop: 4 },
-  stamp: { marginTop: 24, fontSize: 14, fontFamily: "Helvetica-Bold" },
-  foot: { position: "absolute", bottom: 30, left: 40, right: 40, fontSize: 8, color: "#6b5d4a" },
+  grand: { fontWeight: 700, fontSize: 12, borderTopWidth: 1, borderTopColor: ink, marginTop: 4, paddingTop: 4 },
+  grandMoney: { fontWeight: 600, fontSize: 11 },
+  stamp: { marginTop: 24, fontSize: 14, fontWeight: 700 },
+  foot: { position: "absolute", bottom: 30, left: 40, right: 40, fontSize: 8, color: muted },
 });
 
 const date = (d: Date | string | null) => (d ? new Date(d).toLocaleDateString("en-GB", { day: "numeric", month: "long", year: "numeric" }) : "");
@@ -49,9 +58,9 @@ export function InvoicePdf({ invoice }: { invoice: Invoice }) {
         <View style={[s.row, s.head]}>
           <Text style={s.kind}>Kind</Text>
           <Text style={s.desc}>Description</Text>
-          <Text style={s.qty}>Qty</Text>
-          <Text style={s.money}>Unit</Text>
-          <Text style={s.money}>Amount</Text>
+          <Text style={[s.qty, s.heading]}>Qty</Text>
+          <Text style={[s.money, s.heading]}>Unit</Text>
+          <Text style={[s.money, s.heading]}>Amount</Text>
         </View>
         {invoice.lines.map((l) => (
           <View style={s.row} key={l.id} wrap={false}>
@@ -73,7 +82,7 @@ export function InvoicePdf({ invoice }: { invoice: Invoice }) {
           </View>
           <View style={[s.totalRow, s.grand]}>
             <Text>Total</Text>
-            <Text style={s.money}>{money(invoice.totalMinor)}</Text>
+            <Text style={[s.money, s.grandMoney]}>{money(invoice.totalMinor)}</Text>
           </View>
         </View>
         {invoice.status === "paid" ? <Text style={s.stamp}>Paid {date(invoice.paidAt)}. Thank you.</Text> : null}
