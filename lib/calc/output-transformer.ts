@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { formatQuantity, texQuantity, tex } from "./format";
+import { texQuantity, tex } from "./format";
 import { ALWAYS_DANGER } from "./safety";
 import { defineCalculator, type Step, type Warning } from "./types";
 import { optionalQuantity, quantity } from "./units";
@@ -46,19 +46,24 @@ const NOMINAL: Warning = {
     "so the plate load swings about the figure shown.",
 };
 
-function mismatch(ratio: number, zs: number, load: number, reflected: number, zp: number): Warning {
-  const shown = `${formatQuantity(load, "Ω")} on the ${formatQuantity(zs, "Ω")} tap puts ${formatQuantity(reflected, "Ω")} on the plates instead of ${formatQuantity(zp, "Ω")}`;
-  const far = ratio > MISMATCH_FACTOR || ratio < 1 / MISMATCH_FACTOR;
-  const why =
-    ratio < 1
-      ? "A lower plate load makes a pentode or beam tube give less power with more distortion, and draws more peak plate and screen current."
-      : "A higher plate load lets the plate voltage swing further on peaks, stressing the transformer's insulation the way no load does, and heats a pentode's screen.";
-  return {
-    level: far ? "caution" : "info",
-    message: far
-      ? `${shown}: more than a factor of ${MISMATCH_FACTOR} off. ${why} Use the tap that matches the speaker (common practice).`
-      : `${shown}. ${why} Within a factor of ${MISMATCH_FACTOR} most sets tolerate it (common practice).`,
-  };
+const LOWER =
+  "the plate load falls in proportion. A lower plate load makes a pentode or beam tube give less power with more distortion, and draws more peak plate and screen current.";
+const HIGHER =
+  "the plate load rises in proportion. A higher plate load lets the plate voltage swing further on peaks, stressing the transformer's insulation the way no load does, and heats a pentode's screen.";
+const near = (side: string, why: string): Warning => ({
+  level: "info",
+  message: `The speaker's impedance is ${side} the tap's, within a factor of ${MISMATCH_FACTOR}: ${why} Most sets tolerate it (common practice).`,
+});
+const far = (side: string, why: string): Warning => ({
+  level: "caution",
+  message: `The speaker's impedance is more than a factor of ${MISMATCH_FACTOR} ${side} the tap's: ${why} Use the tap that matches the speaker (common practice).`,
+});
+/** Fixed messages (the figures are in the outputs), so compute does no formatting. */
+const MISMATCH = { nearLow: near("below", LOWER), nearHigh: near("above", HIGHER), farLow: far("below", LOWER), farHigh: far("above", HIGHER) };
+
+function mismatch(ratio: number): Warning {
+  if (ratio < 1) return ratio < 1 / MISMATCH_FACTOR ? MISMATCH.farLow : MISMATCH.nearLow;
+  return ratio > MISMATCH_FACTOR ? MISMATCH.farHigh : MISMATCH.nearHigh;
 }
 
 export const calculator = defineCalculator({
@@ -94,7 +99,7 @@ export const calculator = defineCalculator({
     const turnsRatio = Math.sqrt(zp / zs);
     const reflectedImpedance = newLoad === undefined ? null : (zp * newLoad) / zs;
     const warnings: Warning[] = [ALWAYS_DANGER, NO_LOAD];
-    if (newLoad !== undefined && newLoad !== zs) warnings.push(mismatch(newLoad / zs, zs, newLoad, reflectedImpedance!, zp));
+    if (newLoad !== undefined && newLoad !== zs) warnings.push(mismatch(newLoad / zs));
     warnings.push(NOMINAL);
     return { outputs: { turnsRatio, reflectedImpedance }, warnings };
   },
@@ -110,6 +115,10 @@ export const calculator = defineCalculator({
       steps.push({
         label: "Plate load with the new speaker",
         latex: tex`Z_p' = n^2 Z_L = (${texQuantity(o.turnsRatio, "", 4)})^2 \times ${texQuantity(newLoad, "Ω", 4)} = ${texQuantity(o.reflectedImpedance, "Ω", 4)}`,
+      });
+      steps.push({
+        label: "Against the plate load the tube was designed for",
+        latex: tex`\frac{Z_p'}{Z_p} = \frac{Z_L}{Z_s} = \frac{${texQuantity(newLoad, "Ω", 4)}}{${texQuantity(zs, "Ω", 4)}} = ${texQuantity(newLoad / zs, "", 3)}`,
       });
     }
     return steps;

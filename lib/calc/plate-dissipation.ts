@@ -18,8 +18,27 @@ import { optionalQuantity, quantity, quantityWithDefault } from "./units";
 export const AB_IDLE_MARGIN = 0.7;
 
 const TUBES = new Map<string, ReceivingTube>(RECEIVING_TUBES.map((t) => [t.type, t]));
+
+/** Each tube's fixed notes, made once: compute only picks them up. */
+function tubeNotes(tube: ReceivingTube): { always: Warning[]; fromTable: Warning } {
+  const always: Warning[] = [];
+  if (tube.sections === 2) always.push({ level: "info", message: `The ${tube.type}'s rating is per section: work out each section on its own. The data sheet also limits both together.` });
+  if (tube.maxPeakPulseVoltage !== undefined) {
+    always.push({
+      level: "info",
+      message: `In a television's horizontal output the ${tube.type}'s plate sees flyback pulses up to ${formatQuantity(tube.maxPeakPulseVoltage, "V")}; the DC figures here give the average dissipation only.`,
+    });
+  }
+  const fromTable: Warning = {
+    level: "info",
+    message: `The ${tube.type}'s maximum is from the built-in table, recalled from memory of its data sheet; suffixes and makers differ, so check the sheet of the tube in the set.`,
+  };
+  return { always, fromTable };
+}
+const NOTES = new Map(RECEIVING_TUBES.map((t) => [t.type, tubeNotes(t)]));
 const TUBE_TYPES = RECEIVING_TUBES.map((t) => t.type);
 const STAGE_CLASSES = ["A", "AB"] as const;
+type StageClass = (typeof STAGE_CLASSES)[number];
 
 const isBlank = (v: unknown) => v === undefined || v === null || (typeof v === "string" && v.trim() === "");
 
@@ -27,7 +46,8 @@ const tubeField = z
   .unknown()
   .transform((raw, ctx): string | undefined => {
     if (isBlank(raw)) return undefined;
-    const found = typeof raw === "string" ? findTube(raw) : undefined;
+    // The form sends the table's own type numbers: look those up directly before reading a typed name.
+    const found = typeof raw === "string" ? (TUBES.get(raw) ?? findTube(raw)) : undefined;
     if (!found) {
       ctx.addIssue({ code: "custom", message: "Tube type is not in the built-in table; leave it blank and enter the maximum dissipation from its data sheet" });
       return z.NEVER;
@@ -40,10 +60,17 @@ const tubeField = z
   })
   .optional();
 
-const stageClassField = z.preprocess(
-  (v) => (isBlank(v) ? undefined : v),
-  z.enum(STAGE_CLASSES, { error: 'Stage class must be "A" or "AB"' }).optional(),
-);
+const stageClassField = z
+  .unknown()
+  .transform((raw, ctx): StageClass | undefined => {
+    if (isBlank(raw)) return undefined;
+    if (raw === "A" || raw === "AB") return raw;
+    const typed = typeof raw === "string" ? raw.trim().toUpperCase().replace(/^CLASS\s*/, "") : "";
+    if (typed === "A" || typed === "AB") return typed;
+    ctx.addIssue({ code: "custom", message: 'Stage class must be "A" or "AB"' });
+    return z.NEVER;
+  })
+  .optional();
 
 export const plateDissipationSchema = z
   .object({
@@ -75,7 +102,21 @@ export const plateDissipationSchema = z
 
 export type PlateDissipationInput = z.output<typeof plateDissipationSchema>;
 
-const percent = (x: number) => `${(100 * x).toPrecision(3)} %`;
+const percent = (x: number) => `${Math.round(1000 * x) / 10} %`;
+
+// Fixed wording (the fraction itself is an output), so the common cases format nothing.
+const ABOVE_AB_MARGIN: Warning = {
+  level: "caution",
+  message:
+    `Above ${AB_IDLE_MARGIN * 100} % of the data-sheet maximum, the most a push-pull class AB stage commonly idles at (common practice), leaving room for signal and a high line. ` +
+    "A single-ended class A stage is designed nearer the maximum: if that is this stage, choose class A.",
+};
+const CLASS_A_NEAR_MAX: Warning = {
+  level: "info",
+  message:
+    `Above ${AB_IDLE_MARGIN * 100} % of the data-sheet maximum, and below it: a single-ended class A stage is designed near the maximum ` +
+    "(the 6V6GT's own typical operation is about 94 %), with no signal swing to allow for. A line running high raises it further.",
+};
 
 const CATHODE_READING: Warning = {
   level: "info",
@@ -137,19 +178,15 @@ export const calculator = defineCalculator({
       if (screenRated !== undefined) screenFractionOfMax = screenDissipation / screenRated;
     }
     const warnings: Warning[] = highVoltageWarning(vp, vs);
-    const of = `${percent(fractionOfMax)} of the ${formatQuantity(ratedDissipation, "W")} data-sheet maximum`;
     if (fractionOfMax > 1) {
       warnings.push({
         level: "danger",
-        message: `The plate dissipates ${formatQuantity(dissipation, "W")}, ${of}: beyond its rating. Expect a red plate, gas and a short life, and a runaway that can take the output transformer or rectifier with it. Check the bias, the grid's coupling capacitor and the screen supply.`,
+        message: `The plate dissipates ${formatQuantity(dissipation, "W")}, ${percent(fractionOfMax)} of the ${formatQuantity(ratedDissipation, "W")} data-sheet maximum: beyond its rating. Expect a red plate, gas and a short life, and a runaway that can take the output transformer or rectifier with it. Check the bias, the grid's coupling capacitor and the screen supply.`,
       });
     } else if (fractionOfMax > AB_IDLE_MARGIN && stageClass !== "A") {
-      warnings.push({
-        level: "caution",
-        message: `${of[0].toUpperCase()}${of.slice(1)}, above the ${AB_IDLE_MARGIN * 100} % a push-pull class AB stage commonly idles at (common practice). A single-ended class A stage is designed nearer the maximum: if that is this stage, choose class A.`,
-      });
+      warnings.push(ABOVE_AB_MARGIN);
     } else if (fractionOfMax > AB_IDLE_MARGIN) {
-      warnings.push({ level: "info", message: `${of[0].toUpperCase()}${of.slice(1)}: a single-ended class A stage is designed near the maximum (the 6V6GT's own typical operation is about 94 %), with no signal swing to allow for.` });
+      warnings.push(CLASS_A_NEAR_MAX);
     }
     if (tube?.maxPlateVoltage !== undefined && vpk > tube.maxPlateVoltage) {
       warnings.push({ level: "caution", message: `${formatQuantity(vpk, "V")} plate to cathode is above the ${tube.type}'s ${formatQuantity(tube.maxPlateVoltage, "V")} maximum plate voltage (table, from memory of the data sheet).` });
@@ -157,12 +194,10 @@ export const calculator = defineCalculator({
     if (screenFractionOfMax !== null && screenFractionOfMax > 1) {
       warnings.push({ level: "danger", message: `The screen dissipates ${formatQuantity(screenDissipation!, "W")}, ${percent(screenFractionOfMax)} of its maximum: beyond its rating; a screen grid this hot warps and glows.` });
     }
-    if (tube?.sections === 2) warnings.push({ level: "info", message: `The ${tube.type}'s rating is per section: work out each section on its own. The data sheet also limits both together.` });
-    if (tube?.maxPeakPulseVoltage !== undefined) {
-      warnings.push({ level: "info", message: `In a television's horizontal output the ${tube.type}'s plate sees flyback pulses up to ${formatQuantity(tube.maxPeakPulseVoltage, "V")}; the DC figures here give the average dissipation only.` });
-    }
-    if (tube && maxDissipation === undefined) {
-      warnings.push({ level: "info", message: `The ${tube.type}'s maximum is from the built-in table, recalled from memory of its data sheet; suffixes and makers differ, so check the sheet of the tube in the set.` });
+    if (tube) {
+      const notes = NOTES.get(tube.type)!;
+      for (const w of notes.always) warnings.push(w);
+      if (maxDissipation === undefined) warnings.push(notes.fromTable);
     }
     warnings.push(CATHODE_READING);
     return { outputs: { dissipation, fractionOfMax, ratedDissipation, screenDissipation, screenFractionOfMax }, warnings };

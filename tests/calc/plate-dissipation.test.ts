@@ -43,7 +43,7 @@ describe("plate-dissipation: checks against published data", () => {
     // RCA 6L6GC: maximum plate dissipation 30 W (from memory); 70 % idle for class AB is common practice
     const r = run({ plateVoltage: 450, plateCurrent: "60 mA", tube: "6L6GC", stageClass: "AB" });
     expect(r.outputs.fractionOfMax).toBeCloseTo(0.9, 12);
-    expect(has(r, "caution", /above the 70 % a push-pull class AB/)).toBe(true);
+    expect(has(r, "caution", /Above 70 % of the data-sheet maximum, the most a push-pull class AB/)).toBe(true);
     expect(has(r, "danger", /beyond its rating/)).toBe(false);
   });
 });
@@ -113,6 +113,7 @@ describe("plate-dissipation: refusals", () => {
     expect(fields({ plateVoltage: 250, plateCurrent: "45m", tube: "6V6GT", screenCurrent: "4m" }).screenVoltage).toMatch(/required/);
     expect(fields({ plateVoltage: 250, plateCurrent: "45m", tube: "6V6GT", stageClass: "B" }).stageClass).toMatch(/"A" or "AB"/);
     expect(out({ plateVoltage: 250, plateCurrent: "45m", tube: "6V6GT", stageClass: "" }).fractionOfMax).toBeCloseTo(0.9375, 12);
+    expect(run({ plateVoltage: 250, plateCurrent: "45m", tube: "6V6GT", stageClass: "class a" }).warnings.some((w) => w.level === "caution")).toBe(false);
   });
 
   it("property: bad numbers are refused under their own field", () => {
