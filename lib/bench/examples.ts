@@ -8,7 +8,7 @@ export const EXAMPLES: Record<string, Record<string, unknown>> = {
   superhet: { signalFrequency: "1000 kHz", intermediateFrequency: "455 kHz", loadedQ: "100" },
   "dropping-resistor": { supplyVoltage: "300 V", loadVoltage: "250 V", loadCurrent: "10 mA" },
   "coupling-cap": { capacitance: ".05 mfd", gridResistance: "470k", sourceResistance: "47k", leakageCurrent: "2 uA" },
-  "plate-dissipation": { plateVoltage: "250 V", cathodeVoltage: "12.5 V", plateCurrent: "45 mA", tube: "6V6GT" },
+  "plate-dissipation": { plateVoltage: "250 V", cathodeVoltage: "12.5 V", plateCurrent: "45 mA", tube: "6V6GT", stageClass: "A" },
   "output-transformer": { primaryImpedance: "5k", secondaryImpedance: "8 ohm", newLoad: "4 ohm" },
   "heater-string": { lineVoltage: "120 V", tubes: ["12BE6", "12BA6", "12AV6", "35C5", "35W4"] },
   "supply-ripple": {
