@@ -32,6 +32,7 @@ export const EXAMPLES: Record<string, Record<string, unknown>> = {
   "preferred-value": { value: "5.13k" },
   "series-parallel": { target: "5.13k", series: "E12", mode: "either" },
   "colour-code": { bands: ["yellow", "violet", "red", "gold"] },
+  "vintage-markings": { scheme: "body-end-dot", body: "brown", end: "black", dot: "orange" },
   "ohms-law": { voltage: "250 V", resistance: "100k" },
   reactance: { frequency: "1 kHz", capacitance: "100 nF", inductance: "10 mH" },
 };
@@ -61,6 +62,7 @@ export const HEADLINES: Record<string, readonly string[]> = {
   "preferred-value": ["nearest", "errorOfNearest"],
   "series-parallel": ["combined", "error"],
   "colour-code": ["resistance", "tolerance"],
+  "vintage-markings": ["resistance", "tolerance"],
   "ohms-law": ["current", "power"],
   reactance: ["capacitiveReactance", "resonantFrequency"],
 };

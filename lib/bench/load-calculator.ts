@@ -30,6 +30,7 @@ const LOADERS: Record<string, Loader> = {
   "supply-ripple": () => import("@/lib/calc/supply-ripple"),
   "time-constant": () => import("@/lib/calc/time-constant"),
   "triode-stage": () => import("@/lib/calc/triode-stage"),
+  "vintage-markings": () => import("@/lib/calc/vintage-markings"),
   "vr-tube": () => import("@/lib/calc/vr-tube"),
 };
 

@@ -22,6 +22,7 @@ import { calculator as superhet } from "./superhet";
 import { calculator as supplyRipple } from "./supply-ripple";
 import { calculator as timeConstant } from "./time-constant";
 import { calculator as triodeStage } from "./triode-stage";
+import { calculator as vintageMarkings } from "./vintage-markings";
 import { calculator as vrTube } from "./vr-tube";
 
 /** Every calculator of the Bench, in the order the index shows them. */
@@ -48,6 +49,7 @@ export const calculators: readonly Calculator[] = [
   preferredValue,
   seriesParallel,
   colourCode,
+  vintageMarkings,
   ohmsLaw,
   reactance,
 ] as unknown as readonly Calculator[];

@@ -43,6 +43,7 @@ export const samples: Record<string, Record<string, unknown>> = {
   superhet: { signalFrequency: "1000 kHz", intermediateFrequency: "455 kHz", oscillatorAbove: true, loadedQ: "100" },
   "triode-stage": { tube: "12AX7", supplyVoltage: "250 V", plateResistor: "100k", cathodeResistor: "1.5k", cathodeBypassed: true, loadResistance: "470k" },
   "colour-code": { bands: ["yellow", "violet", "red", "gold"] },
+  "vintage-markings": { scheme: "body-end-dot", body: "brown", end: "black", dot: "orange", toleranceEnd: "silver" },
   "preferred-value": { value: "5.13k", series: "E12" },
   "series-parallel": { target: "5.13k", series: "E12", mode: "either" },
 };
