@@ -2,6 +2,7 @@
 
 import { useFormContext } from "react-hook-form";
 import { Field } from "@/components/ui/field";
+import { InputLabel } from "@/components/ui/quantity-symbol";
 import type { InputMeta } from "@/lib/calc/types";
 import { errorAt } from "@/lib/bench/errors";
 import { ListInput } from "./list-inputs";
@@ -39,7 +40,7 @@ export function InputControl({ meta, slug }: { meta: InputMeta; slug: string }) 
   const error = errorAt(formState.errors, meta.name);
   const label = (
     <>
-      {meta.label}
+      <InputLabel meta={meta} />
       {!meta.required ? <span className="ml-1 font-normal text-muted">(optional)</span> : null}
     </>
   );
@@ -51,7 +52,7 @@ export function InputControl({ meta, slug }: { meta: InputMeta; slug: string }) 
       <div className="flex flex-col gap-1">
         <label htmlFor={id} className="flex min-h-11 cursor-pointer items-center gap-3 font-bold">
           <input id={id} type="checkbox" className="h-5 w-5 accent-[rgb(var(--gb-glow))]" aria-describedby={describedBy(id, error, meta.help)} {...register(meta.name)} />
-          {meta.label}
+          <InputLabel meta={meta} />
         </label>
         <Hint id={id} help={meta.help} />
         <Message id={id} error={error} />

@@ -1,3 +1,4 @@
+import { InputLabel } from "@/components/ui/quantity-symbol";
 import type { InputMeta } from "@/lib/calc/types";
 
 function show(value: unknown, unit: string): string {
@@ -21,7 +22,7 @@ export function PrintInputs({ inputs, raw }: { inputs: readonly InputMeta[]; raw
         <tbody>
           {rows.map((i) => (
             <tr key={i.name} className="border-b border-rule">
-              <th scope="row" className="py-1 pr-4 font-normal">{i.label}</th>
+              <th scope="row" className="py-1 pr-4 font-normal"><InputLabel meta={i} /></th>
               <td className="py-1 font-mono">{show(raw[i.name], i.unit)}</td>
             </tr>
           ))}

@@ -93,7 +93,7 @@ export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { sl
             <label htmlFor={`${id}-title`} className="font-bold">
               New job title
             </label>
-            <input id={`${id}-title`} value={title} onChange={(e) => setTitle(e.target.value)} className={field} aria-invalid={errors.title ? true : undefined} aria-describedby={`${id}-title-error`} placeholder="Five-valve table radio, 1950s" />
+            <input id={`${id}-title`} value={title} onChange={(e) => setTitle(e.target.value)} className={field} aria-invalid={errors.title ? true : undefined} aria-describedby={`${id}-title-error`} placeholder="Five-tube table radio, 1950s" />
             <p id={`${id}-title-error`} role="alert" className="min-h-5 text-note font-bold text-flag">
               {errors.title ?? ""}
             </p>

@@ -20,6 +20,14 @@ export { plateCurves } from "./triode-model";
 
 const MODEL_KEYS = ["mu", "ex", "kg1", "kp", "kvb"] as const;
 type ModelKey = (typeof MODEL_KEYS)[number];
+/** Plain-text names of Koren's parameters for messages; the form typesets them from `symbol`. */
+const MODEL_NAMES: Record<ModelKey, string> = {
+  mu: "Amplification factor µ",
+  ex: "Exponent x",
+  kg1: "Grid constant K_G1",
+  kp: "Plate constant K_P",
+  kvb: "Knee constant K_VB",
+};
 
 const tubeField = z
   .unknown()
@@ -52,11 +60,11 @@ const param = (label: string, min: number, max: number) =>
 export const triodeStageSchema = z
   .object({
     tube: tubeField,
-    mu: param("µ (mu)", 0.5, 1000),
-    ex: param("EX", 1, 3),
-    kg1: param("KG1", 1, 1e6),
-    kp: param("KP", 1, 1e5),
-    kvb: param("KVB", 1, 1e7),
+    mu: param(MODEL_NAMES.mu, 0.5, 1000),
+    ex: param(MODEL_NAMES.ex, 1, 3),
+    kg1: param(MODEL_NAMES.kg1, 1, 1e6),
+    kp: param(MODEL_NAMES.kp, 1, 1e5),
+    kvb: param(MODEL_NAMES.kvb, 1, 1e7),
     supplyVoltage: quantity("voltage", { positive: true, max: 10_000, label: "Supply voltage" }),
     plateResistor: quantity("resistance", { positive: true, min: 1, max: 1e9, label: "Plate resistor" }),
     cathodeResistor: quantity("resistance", { nonNegative: true, max: 1e8, label: "Cathode resistor" }),
@@ -67,11 +75,11 @@ export const triodeStageSchema = z
     if (v.tube !== undefined) return;
     const missing = MODEL_KEYS.filter((k) => v[k] === undefined);
     if (missing.length === MODEL_KEYS.length) {
-      ctx.addIssue({ code: "custom", path: ["tube"], message: "Choose a tube type, or enter all five model parameters (mu, ex, kg1, kp, kvb)" });
+      ctx.addIssue({ code: "custom", path: ["tube"], message: "Choose a tube type, or enter all five parameters of Koren's triode model (µ, x, K_G1, K_P, K_VB)" });
       return;
     }
     for (const k of missing) {
-      ctx.addIssue({ code: "custom", path: [k], message: `${k} is required when no tube type is chosen` });
+      ctx.addIssue({ code: "custom", path: [k], message: `${MODEL_NAMES[k]} is required when no tube type is chosen` });
     }
   });
 
@@ -94,7 +102,9 @@ export interface TriodeStageOutputs {
   plateToChassisVoltage: N;
 }
 
-const MODEL_TEX = tex`E_1 = \frac{E_p}{K_P}\ln\!\left(1 + e^{K_P\left(\frac{1}{\mu} + \frac{E_g}{\sqrt{K_{VB} + E_p^2}}\right)}\right),\quad I_p = \frac{E_1^{E_X}}{K_{G1}}\left(1 + \operatorname{sgn} E_1\right)`;
+// Koren's equations as his article writes them, the exponent as x (EX in SPICE listings).
+const MODEL_TEX = tex`E_1 = \frac{E_p}{K_P}\ln\!\left(1 + e^{K_P\left(\frac{1}{\mu} + \frac{E_g}{\sqrt{K_{VB} + E_p^2}}\right)}\right),\quad I_p = \frac{E_1^{x}}{K_{G1}}\left(1 + \operatorname{sgn} E_1\right)`;
+const KOREN_CITE = "Koren's improved triode model (Glass Audio, 1996; revised 2003)";
 const LOAD_LINE_TEX = tex`E_p = B^{+} - I_p\,(R_a + R_k),\quad E_g = -I_p R_k`;
 
 const sig6 = (n: number) => String(Number(n.toPrecision(6)));
@@ -115,11 +125,13 @@ export const calculator = defineCalculator({
   group: "stages",
   inputs: [
     { name: "tube", label: "Tube type", unit: "", required: false, control: "select", options: TRIODE_NAMES, blankLabel: "None (enter the figures below)", help: "Pick a type from the built-in table, or leave it blank and enter the five model parameters." },
-    { name: "mu", label: "Model µ", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Koren model amplification factor. With a tube chosen, any parameter you enter replaces the table's." },
-    { name: "ex", label: "Model EX", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Exponent, between 1 and 3 (usually 1.2–1.4)." },
-    { name: "kg1", label: "Model KG1", unit: "", required: false, control: "quantity", quantity: "ratio" },
-    { name: "kp", label: "Model KP", unit: "", required: false, control: "quantity", quantity: "ratio" },
-    { name: "kvb", label: "Model KVB", unit: "", required: false, control: "quantity", quantity: "ratio", help: "In V²." },
+    // The five parameters of Koren's improved triode model, named and written as his article sets them;
+    // SPICE listings spell them MU, EX, KG1, KP, KVB, and the API keeps mu, ex, kg1, kp, kvb.
+    { name: "mu", label: "Amplification factor", symbol: "\\mu", unit: "", required: false, control: "quantity", quantity: "ratio", help: `${KOREN_CITE}. With a tube chosen, any parameter you enter replaces the table's.` },
+    { name: "ex", label: "Exponent", symbol: "x", unit: "", required: false, control: "quantity", quantity: "ratio", help: "The power the plate current follows (EX in SPICE listings): between 1 and 3, usually 1.2–1.4." },
+    { name: "kg1", label: "Grid constant", symbol: "K_{G1}", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Divides the current: a larger value, less current (KG1 in SPICE listings)." },
+    { name: "kp", label: "Plate constant", symbol: "K_P", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Sets how the curves bend near cut-off (KP in SPICE listings)." },
+    { name: "kvb", label: "Knee constant", symbol: "K_{VB}", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Sets the knee at low plate voltage, in V² (KVB in SPICE listings)." },
     { name: "supplyVoltage", label: "Supply voltage (B+)", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "At the top of the plate resistor." },
     { name: "plateResistor", label: "Plate resistor Ra", unit: "Ω", required: true, control: "quantity", quantity: "resistance" },
     { name: "cathodeResistor", label: "Cathode resistor Rk", unit: "Ω", required: true, control: "quantity", quantity: "resistance", help: "0 is allowed: the grid then sits at 0 V bias." },
@@ -139,13 +151,13 @@ export const calculator = defineCalculator({
   ],
   schema: triodeStageSchema,
   formulas: [
-    { label: "Triode model (Koren)", latex: MODEL_TEX },
+    { label: "Koren's improved triode model", latex: MODEL_TEX },
     { label: "Load line and cathode bias", latex: LOAD_LINE_TEX },
     { label: "Gain, cathode bypassed", latex: tex`A = \frac{\mu R_L'}{r_p + R_L'},\quad R_L' = R_a \parallel R_L` },
     { label: "Gain, cathode not bypassed", latex: tex`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k}` },
   ],
   references: [
-    { title: "N. L. Koren, Improved vacuum tube models for SPICE simulations, Glass Audio 8(5), 1996", detail: "Triode equations for E1 and Ip and the parameter table (µ, EX, KG1, KP, KVB); parameters recalled from memory" },
+    { title: "N. L. Koren, Improved vacuum tube models for SPICE simulations, Glass Audio 8(5), 1996, p. 18; revised online edition, Part 1: Models and example, 20 March 2003", detail: "The improved triode equations for E1 and Ip and the parameter table: amplification factor µ, exponent x (EX), grid constant K_G1, plate constant K_P, knee constant K_VB; parameters recalled from memory" },
     { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Chapter 12, resistance-capacitance coupled triode amplifiers: stage gain µRL/(rp + RL) and the effect of an unbypassed cathode resistor (cited from memory)" },
     { title: "Tube data sheets (12AX7, 12AT7, 12AU7, 6SN7, 6SL7 and others)", detail: "Typical operating characteristics and maximum plate dissipation per section (from memory)" },
   ],
@@ -161,7 +173,7 @@ export const calculator = defineCalculator({
     const solved = solveOperatingPoint(p, bPlus, ra, rk);
     const warnings: Warning[] = highVoltageWarning(bPlus);
     if (overridden.length) {
-      warnings.push({ level: "info", message: `Using the ${name} table entry with your own ${overridden.join(", ")}.` });
+      warnings.push({ level: "info", message: `Using the ${name} table entry with your own ${overridden.map((k) => MODEL_NAMES[k]).join(", ")}.` });
     }
     if (!solved.ok) {
       warnings.push({ level: "caution", message: solved.message });
@@ -203,8 +215,8 @@ export const calculator = defineCalculator({
     const tRa = texQuantity(ra, "Ω");
     const tRk = texQuantity(rk, "Ω");
     const steps: Step[] = [
-      { label: "Triode model (Koren)", latex: MODEL_TEX },
-      { label: `Model parameters (${name})`, latex: tex`\mu = ${sig6(p.mu)},\; E_X = ${sig6(p.ex)},\; K_{G1} = ${sig6(p.kg1)},\; K_P = ${sig6(p.kp)},\; K_{VB} = ${sig6(p.kvb)}\,\mathrm{V^2}` },
+      { label: "Koren's improved triode model", latex: MODEL_TEX },
+      { label: `Model parameters (${name})`, latex: tex`\mu = ${sig6(p.mu)},\; x = ${sig6(p.ex)},\; K_{G1} = ${sig6(p.kg1)},\; K_P = ${sig6(p.kp)},\; K_{VB} = ${sig6(p.kvb)}\,\mathrm{V^2}` },
       { label: "Load line and cathode bias", latex: LOAD_LINE_TEX },
       { label: "Load line with your values", latex: tex`E_p = ${tB} - I_p\,(${tRa} + ${tRk}),\quad E_g = -I_p \times ${tRk}` },
     ];

@@ -30,6 +30,11 @@ export interface InputMeta {
   name: string;
   /** Plain-words label for the form. */
   label: string;
+  /**
+   * The quantity's symbol as its published source writes it, typeset after the label: a base letter
+   * or \mu, then _{subscript} and ^{superscript} (K_{G1}, x, \mu). See components/ui/quantity-symbol.tsx.
+   */
+  symbol?: string;
   /** SI unit symbol shown beside the field ("" for none). */
   unit: string;
   required: boolean;

@@ -4,6 +4,7 @@ import { DeleteButton } from "@/components/jobs/delete-button";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
 import { ButtonLink } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/card";
+import { InputLabel } from "@/components/ui/quantity-symbol";
 import { listCalculations } from "@/db/queries/calculations";
 import { can } from "@/lib/auth/member";
 import { formatQuantity } from "@/lib/calc/format";
@@ -50,7 +51,7 @@ export default async function CalculationsPage({ params }: JobPageProps) {
             <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-1 text-note">
               {inputs.map((i) => (
                 <div key={i.name} className="contents">
-                  <dt className="text-muted">{i.label}</dt>
+                  <dt className="text-muted"><InputLabel meta={i} /></dt>
                   <dd className="font-mono">{show(c.inputs[i.name], i.unit)}</dd>
                 </div>
               ))}
