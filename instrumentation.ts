@@ -3,5 +3,5 @@ export async function register() {
   if (process.env.NEXT_RUNTIME !== "nodejs") return;
   const { startLocalPaymentsIfWanted } = await import("./lib/payments/dev-start");
   await startLocalPaymentsIfWanted();
-  await (await import("./lib/mail/local-sink")).startLocalMailSinkIfWanted();
+  await (await import("./server/mail/local-sink")).startLocalMailSinkIfWanted();
 }

@@ -1,5 +1,5 @@
 import { NextResponse, type NextRequest } from "next/server";
-import { SESSION_COOKIE } from "@/lib/auth/session-cookie";
+import { SESSION_COOKIE } from "@/server/auth/session-cookie";
 
 /**
  * Runs before pages: sets a nonce-based Content-Security-Policy (as the Next.js CSP guide shows) and

@@ -2,7 +2,13 @@ import { defineConfig } from "vitest/config";
 import path from "node:path";
 
 export default defineConfig({
-  resolve: { alias: { "@": path.resolve(import.meta.dirname) } },
+  resolve: {
+    alias: {
+      "@": path.resolve(import.meta.dirname),
+      // server/ files start with import "server-only"; Next.js resolves it, vitest needs an empty stand-in.
+      "server-only": path.resolve(import.meta.dirname, "tests/helpers/server-only.ts"),
+    },
+  },
   test: {
     include: ["tests/**/*.test.ts", "lib/**/*.test.ts", "db/**/*.test.ts"],
     environment: "node",

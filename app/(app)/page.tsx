@@ -1,6 +1,6 @@
 import { redirect } from "next/navigation";
 import { ButtonLink } from "@/components/ui/button";
-import { getMember } from "@/lib/auth/member";
+import { getMember } from "@/server/auth/member";
 
 const POINTS = [
   { title: "Working shown", text: "Every result comes with its formula, your numbers substituted, and the handbook it comes from." },

@@ -2,7 +2,7 @@ import Link from "next/link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { getEstimateForJob } from "@/db/queries/estimates";
 import { listInvoicesForJob } from "@/db/queries/invoices";
-import { can, type Member } from "@/lib/auth/member";
+import { can, type Member } from "@/lib/auth/can";
 import { editorLines } from "@/lib/estimates/editor-lines";
 import { EstimateStatus } from "./estimate-status";
 import { LinesEditor } from "./lines-editor";

@@ -5,7 +5,7 @@ import { LinesEditor, type EditorPart } from "@/components/estimates/lines-edito
 import { JOB_STATUS_LABELS, type JobStatus } from "@/db/enums";
 import type { getEstimateForJob } from "@/db/queries/estimates";
 import type { listInvoicesForJob } from "@/db/queries/invoices";
-import type { Member } from "@/lib/auth/member";
+import type { Member } from "@/lib/auth/can";
 import { formatMoney } from "@/lib/money";
 import { InvoiceStatus } from "./invoice-status";
 

@@ -1,7 +1,7 @@
 import { notFound, redirect } from "next/navigation";
 import { cache } from "react";
 import { findJob } from "@/db/queries/jobs";
-import { getMember } from "@/lib/auth/member";
+import { getMember } from "@/server/auth/member";
 import { parseId } from "@/lib/ids";
 
 /** For job pages: the signed-in member and the job, or sign-in / our 404. Cached per request (layout + page). */

@@ -1,5 +1,5 @@
 import Link from "next/link";
-import { getMember } from "@/lib/auth/member";
+import { getMember } from "@/server/auth/member";
 import { RoleBadge } from "@/components/ui/card";
 import { NavLinks } from "./nav-links";
 import { SignOutButton } from "./sign-out-button";

@@ -1,4 +1,5 @@
-import { eq } from "drizzle-orm";
+import { asc, eq, sql } from "drizzle-orm";
+import type { Member } from "@/lib/auth/can";
 import { getDb } from "../client";
 import { auditEvents, memberships, users, workshops } from "../schema";
 
@@ -30,4 +31,35 @@ export function createWorkshopWithOwner(input: { workshopName: string; name: str
       .run();
     return { userId: user.id, sessionVersion: user.sessionVersion, workshopId: workshop.id };
   });
+}
+
+/** The member for a user id, checking nothing else: the preferred workshop if they belong to it, else their first. */
+export function loadMember(userId: number, preferredWorkshopId?: number): (Member & { sessionVersion: number }) | null {
+  const row = getDb()
+    .select({
+      userId: users.id,
+      email: users.email,
+      name: users.name,
+      sessionVersion: users.sessionVersion,
+      workshopId: memberships.workshopId,
+      workshopName: workshops.name,
+      role: memberships.role,
+    })
+    .from(users)
+    .innerJoin(memberships, eq(memberships.userId, users.id))
+    .innerJoin(workshops, eq(workshops.id, memberships.workshopId))
+    .where(eq(users.id, userId))
+    .orderBy(sql`case when ${memberships.workshopId} = ${preferredWorkshopId ?? 0} then 0 else 1 end`, asc(memberships.id))
+    .limit(1)
+    .get();
+  return row ?? null;
+}
+
+/** Ends every session of the user, everywhere: sessions carry the version they began with. */
+export function bumpSessionVersion(userId: number): void {
+  getDb()
+    .update(users)
+    .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+    .where(eq(users.id, userId))
+    .run();
 }

@@ -56,7 +56,7 @@ export function completePasswordReset(token: string, passwordHash: string) {
         .where(and(eq(passwordResets.id, row.id), isNull(passwordResets.usedAt), gt(passwordResets.expiresAt, now)))
         .run();
       if (used.changes !== 1) throw new GoneError(RESET_GONE);
-      // Bumping the session version ends every session of this user, everywhere (lib/auth/member.ts).
+      // Bumping the session version ends every session of this user, everywhere (server/auth/member.ts compares it).
       const user = tx
         .update(users)
         .set({ passwordHash, sessionVersion: sql`${users.sessionVersion} + 1` })

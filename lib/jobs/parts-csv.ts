@@ -1,5 +1,5 @@
 import Papa from "papaparse";
-import { fieldErrors } from "@/lib/http/api";
+import { fieldErrors } from "@/lib/field-errors";
 import { partSchema, type PartValues } from "./part-schemas";
 
 /**

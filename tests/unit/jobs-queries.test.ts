@@ -11,7 +11,7 @@ delete (globalThis as { __glowbenchDb?: unknown }).__glowbenchDb;
 
 const { getDb } = await import("@/db/client");
 const { seedDemo, DEMO_USERS } = await import("@/db/seed");
-const { loadMember } = await import("@/lib/auth/member");
+const { loadMember } = await import("@/db/queries/auth");
 const jobsQ = await import("@/db/queries/jobs");
 const partsQ = await import("@/db/queries/parts");
 const readingsQ = await import("@/db/queries/readings");
@@ -136,8 +136,8 @@ describe("parts, readings, calculations", () => {
   });
 
   test("the bench sheet renders a PDF for a member and 404s for another workshop", async () => {
-    const { renderBenchSheet } = await import("@/lib/jobs/bench-sheet");
-    const { benchSheetData } = await import("@/lib/jobs/bench-sheet-data");
+    const { renderBenchSheet } = await import("@/server/bench-sheet/render");
+    const { benchSheetData } = await import("@/server/bench-sheet/data");
     const radio = jobsQ.searchJobs(owner, query({ q: "Five-tube" })).jobs[0];
     const data = benchSheetData(owner, radio.id);
     expect(data.partsFitted.map((p) => p.designator)).toEqual(["C1", "C2"]);

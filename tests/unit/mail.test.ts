@@ -2,9 +2,9 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
-import { localMailEnabled } from "@/lib/mail/config";
+import { localMailEnabled } from "@/server/mail/config";
 import { decodeQuotedPrintable, decodeWords } from "@/lib/mail/parse";
-import { sendMail } from "@/lib/mail/send";
+import { sendMail } from "@/server/mail/send";
 import { startMailSink, type MailSink, type StoredMail } from "@/lib/mail/sink";
 
 let sink: MailSink;

@@ -11,7 +11,7 @@ delete (globalThis as { __glowbenchDb?: unknown }).__glowbenchDb;
 
 const { getDb } = await import("@/db/client");
 const { seedDemo, DEMO_USERS } = await import("@/db/seed");
-const { loadMember } = await import("@/lib/auth/member");
+const { loadMember } = await import("@/db/queries/auth");
 const jobsQ = await import("@/db/queries/jobs");
 const partsQ = await import("@/db/queries/parts");
 const readingsQ = await import("@/db/queries/readings");

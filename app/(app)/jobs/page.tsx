@@ -4,7 +4,8 @@ import type { JobPage } from "@/components/jobs/job-list";
 import { JobsPageClient } from "@/components/jobs/jobs-page-client";
 import { searchJobs } from "@/db/queries/jobs";
 import { JOB_LIST_PAGE_SIZE, jobListQuerySchema } from "@/lib/jobs/job-schemas";
-import { can, getMember } from "@/lib/auth/member";
+import { can } from "@/lib/auth/can";
+import { getMember } from "@/server/auth/member";
 
 export const metadata: Metadata = { title: "Jobs" };
 

@@ -13,8 +13,9 @@ import { listAuditEvents } from "@/db/queries/audit";
 import { listInvitations } from "@/db/queries/invitations";
 import { listMembers } from "@/db/queries/members";
 import { getCharges, getWorkshopSettings } from "@/db/queries/workshop";
-import { can, getMember } from "@/lib/auth/member";
-import { localMailEnabled } from "@/lib/mail/config";
+import { can } from "@/lib/auth/can";
+import { getMember } from "@/server/auth/member";
+import { localMailEnabled } from "@/server/mail/config";
 
 export const metadata: Metadata = { title: "Workshop" };
 

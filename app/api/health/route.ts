@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 
 // Dynamic on purpose: the benchmark compares it with the calculator route, so it must not be served from cache.
 export const dynamic = "force-dynamic";

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { createJob, searchJobs } from "@/db/queries/jobs";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { jobCreateSchema, jobListQuerySchema } from "@/lib/jobs/job-schemas";
 
 /** GET: one page of the workshop's jobs, `{ jobs, total, page, pageSize }`; without parameters the 50 most recently worked on. */

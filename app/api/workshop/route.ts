@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { getWorkshopSettings, updateWorkshopSettings } from "@/db/queries/workshop";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { workshopSettingsSchema } from "@/lib/workshop/schemas";
 
 export const GET = route({}, ({ member }) => NextResponse.json({ workshop: getWorkshopSettings(member) }));

@@ -7,7 +7,8 @@ import { InvoiceStatus } from "@/components/invoices/invoice-status";
 import { Card, EmptyState } from "@/components/ui/card";
 import { getInvoice } from "@/db/queries/invoices";
 import { NotFoundError } from "@/lib/errors";
-import { can, getMember } from "@/lib/auth/member";
+import { can } from "@/lib/auth/can";
+import { getMember } from "@/server/auth/member";
 import { parseId } from "@/lib/ids";
 
 export const metadata: Metadata = { title: "Invoice" };

@@ -8,7 +8,7 @@ import { Card } from "@/components/ui/card";
 import { listFiles } from "@/db/queries/files";
 import { listParts } from "@/db/queries/parts";
 import { listReadings } from "@/db/queries/readings";
-import { can } from "@/lib/auth/member";
+import { can } from "@/lib/auth/can";
 
 export async function generateMetadata({ params }: JobPageProps): Promise<Metadata> {
   const { job } = await loadJobPage((await params).id);

@@ -2,8 +2,9 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { Card, EmptyState } from "@/components/ui/card";
-import { can, getMember } from "@/lib/auth/member";
-import { readOutbox } from "@/lib/mail/outbox";
+import { can } from "@/lib/auth/can";
+import { getMember } from "@/server/auth/member";
+import { readOutbox } from "@/server/mail/outbox";
 
 export const metadata: Metadata = { title: "Outbox" };
 export const dynamic = "force-dynamic";

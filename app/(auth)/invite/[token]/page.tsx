@@ -3,7 +3,7 @@ import Link from "next/link";
 import { JoinExistingForm, JoinNewForm, JoinSignedIn } from "@/components/auth/join-forms";
 import { ROLE_LABELS } from "@/components/workshop/role-labels";
 import { INVITATION_GONE, findInvitation } from "@/db/queries/invitations";
-import { getMember } from "@/lib/auth/member";
+import { getMember } from "@/server/auth/member";
 import { tokenField } from "@/lib/workshop/schemas";
 
 export const metadata: Metadata = { title: "Join a workshop", referrer: "no-referrer" };

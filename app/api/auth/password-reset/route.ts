@@ -2,11 +2,11 @@ import { NextResponse, after } from "next/server";
 import { createPasswordReset } from "@/db/queries/password-resets";
 import { RateLimiter, clientAddress } from "@/lib/auth/rate-limit";
 import { RESET_ANSWER, resetRequestSchema } from "@/lib/auth/reset-schemas";
-import { HttpError } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
-import { appUrl } from "@/lib/mail/config";
+import { HttpError } from "@/server/http/errors";
+import { route } from "@/server/http/route";
+import { appUrl } from "@/server/mail/config";
 import { passwordResetMail } from "@/lib/mail/messages";
-import { sendMail } from "@/lib/mail/send";
+import { sendMail } from "@/server/mail/send";
 
 const limits = globalThis as unknown as { __glowbenchResetLimits?: { address: RateLimiter; email: RateLimiter } };
 const resetLimits = (limits.__glowbenchResetLimits ??= {

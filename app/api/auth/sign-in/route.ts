@@ -1,12 +1,12 @@
 import { NextResponse } from "next/server";
 import { findCredentials } from "@/db/queries/auth";
-import { loadMember } from "@/lib/auth/member";
+import { loadMember } from "@/db/queries/auth";
 import { burnPasswordCheck, verifyPassword } from "@/lib/auth/password";
 import { clientAddress, signInLimits } from "@/lib/auth/rate-limit";
 import { signInSchema } from "@/lib/auth/schemas";
-import { startSession } from "@/lib/auth/session";
-import { HttpError } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
+import { startSession } from "@/server/auth/session";
+import { HttpError } from "@/server/http/errors";
+import { route } from "@/server/http/route";
 
 const WRONG = "E-mail or password is wrong.";
 

@@ -2,9 +2,9 @@ import { NextResponse } from "next/server";
 import { createWorkshopWithOwner, emailTaken } from "@/db/queries/auth";
 import { hashPassword } from "@/lib/auth/password";
 import { signUpSchema } from "@/lib/auth/schemas";
-import { startSession } from "@/lib/auth/session";
-import { HttpError } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
+import { startSession } from "@/server/auth/session";
+import { HttpError } from "@/server/http/errors";
+import { route } from "@/server/http/route";
 
 export const POST = route({ auth: "public", body: signUpSchema }, async ({ body: input }) => {
   if (emailTaken(input.email)) {

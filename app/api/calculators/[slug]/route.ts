@@ -1,8 +1,8 @@
 import { z } from "zod";
 import { getCalculator } from "@/lib/calc/registry";
 import { calculationJson, runCalculator } from "@/lib/calc/run";
-import { HttpError, jsonTextResponse } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
+import { HttpError, jsonTextResponse } from "@/server/http/errors";
+import { route } from "@/server/http/route";
 
 /**
  * Public (signed-out visitors may calculate): validates and recomputes on the server with the very

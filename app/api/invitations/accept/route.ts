@@ -4,9 +4,9 @@ import { INVITATION_GONE, acceptInvitation, findInvitation } from "@/db/queries/
 import { notSignedIn } from "@/lib/errors";
 import { hashPassword, verifyPassword } from "@/lib/auth/password";
 import { clientAddress, signInLimits } from "@/lib/auth/rate-limit";
-import { startSession } from "@/lib/auth/session";
-import { HttpError } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
+import { startSession } from "@/server/auth/session";
+import { HttpError } from "@/server/http/errors";
+import { route } from "@/server/http/route";
 import { acceptInvitationSchema } from "@/lib/workshop/schemas";
 
 /** Joins a workshop from an invitation link: as a new account, with an existing account's password, or as the signed-in invitee. */

@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
 import { getInvoice } from "@/db/queries/invoices";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 
 export const GET = route({ role: "seeMoney", ids: { id: "That invoice" } }, ({ member, ids }) => NextResponse.json(getInvoice(member, ids.id)));

@@ -1,9 +1,9 @@
 import { NextResponse } from "next/server";
 import { getJobRecord } from "@/db/queries/job-record";
 import { deleteJob, updateJob } from "@/db/queries/jobs";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { jobUpdateSchema } from "@/lib/jobs/job-schemas";
-import { removeStored } from "@/lib/jobs/uploads";
+import { removeStored } from "@/server/files/uploads";
 
 const ids = { id: "That job" };
 

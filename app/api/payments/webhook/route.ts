@@ -1,9 +1,9 @@
 import { NextResponse } from "next/server";
 import type Stripe from "stripe";
 import { applyCheckoutCompleted } from "@/db/queries/payments";
-import { HttpError } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
-import { PaymentsNotConfigured, getStripe, webhookSecret } from "@/lib/payments/stripe";
+import { HttpError } from "@/server/http/errors";
+import { route } from "@/server/http/route";
+import { PaymentsNotConfigured, getStripe, webhookSecret } from "@/server/payments/stripe";
 
 /**
  * The payment service's webhook. It reads the raw body (the signature covers those exact bytes), so it

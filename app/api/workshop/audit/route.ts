@@ -1,5 +1,5 @@
 import { NextResponse } from "next/server";
 import { listAuditEvents } from "@/db/queries/audit";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 
 export const GET = route({ role: "manageWorkshop" }, ({ member }) => NextResponse.json({ events: listAuditEvents(member) }));

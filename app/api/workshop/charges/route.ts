@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { getCharges, updateCharges } from "@/db/queries/workshop";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { chargesSchema } from "@/lib/workshop/charges-schema";
 
 export const GET = route({ role: "seeCharges" }, ({ member }) => NextResponse.json({ charges: getCharges(member) }));

@@ -1,10 +1,10 @@
 import { NextResponse } from "next/server";
 import { createInvitation, listInvitations, revokeInvitation } from "@/db/queries/invitations";
-import { HttpError } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
-import { appUrl } from "@/lib/mail/config";
+import { HttpError } from "@/server/http/errors";
+import { route } from "@/server/http/route";
+import { appUrl } from "@/server/mail/config";
 import { invitationMail } from "@/lib/mail/messages";
-import { sendMail } from "@/lib/mail/send";
+import { sendMail } from "@/server/mail/send";
 import { invitationSchema } from "@/lib/workshop/schemas";
 
 export const GET = route({ role: "manageMembers" }, ({ member }) => NextResponse.json({ invitations: listInvitations(member) }));

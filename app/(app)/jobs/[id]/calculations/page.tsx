@@ -6,7 +6,7 @@ import { ButtonLink } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/card";
 import { InputLabel } from "@/components/ui/quantity-symbol";
 import { listCalculations } from "@/db/queries/calculations";
-import { can } from "@/lib/auth/member";
+import { can } from "@/lib/auth/can";
 import { formatQuantity } from "@/lib/calc/format";
 import { getCalculator } from "@/lib/calc/registry";
 import { benchHref } from "@/lib/calc/share";

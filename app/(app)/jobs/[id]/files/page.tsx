@@ -4,7 +4,7 @@ import { FileUploadForm } from "@/components/jobs/file-upload-form";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
 import { Card, EmptyState } from "@/components/ui/card";
 import { listFiles } from "@/db/queries/files";
-import { can } from "@/lib/auth/member";
+import { can } from "@/lib/auth/can";
 import { formatDate } from "@/lib/jobs/dates";
 
 export const metadata: Metadata = { title: "Files" };

@@ -6,7 +6,7 @@ import { PartsCsvTools } from "@/components/jobs/parts-csv-tools";
 import { Card, EmptyState } from "@/components/ui/card";
 import { listParts } from "@/db/queries/parts";
 import { listReadings } from "@/db/queries/readings";
-import { can } from "@/lib/auth/member";
+import { can } from "@/lib/auth/can";
 import { capacitorChecks } from "@/lib/jobs/part-cautions";
 
 export const metadata: Metadata = { title: "Parts" };

@@ -4,7 +4,7 @@ import { ReadingAddForm } from "@/components/jobs/reading-add-form";
 import { ResistorSurvey, VoltageTable } from "@/components/jobs/readings-tables";
 import { Card, EmptyState } from "@/components/ui/card";
 import { listReadings } from "@/db/queries/readings";
-import { can } from "@/lib/auth/member";
+import { can } from "@/lib/auth/can";
 
 export const metadata: Metadata = { title: "Readings" };
 

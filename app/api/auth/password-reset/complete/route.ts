@@ -2,9 +2,9 @@ import { NextResponse } from "next/server";
 import { RESET_GONE, completePasswordReset, findPasswordReset } from "@/db/queries/password-resets";
 import { hashPassword } from "@/lib/auth/password";
 import { resetPasswordSchema } from "@/lib/auth/reset-schemas";
-import { endSession } from "@/lib/auth/session";
-import { HttpError } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
+import { endSession } from "@/server/auth/session";
+import { HttpError } from "@/server/http/errors";
+import { route } from "@/server/http/route";
 
 /** Sets the new password; every session of the user ends, this browser's too, so they sign in afresh. */
 export const POST = route({ auth: "public", body: resetPasswordSchema }, async ({ body: { token, password } }) => {

@@ -2,7 +2,7 @@ import { renderToBuffer } from "@react-pdf/renderer";
 import { createElement } from "react";
 import { InvoicePdf } from "@/components/invoices/invoice-pdf";
 import { getInvoice } from "@/db/queries/invoices";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 
 export const runtime = "nodejs";
 

@@ -1,5 +1,5 @@
-import { route } from "@/lib/http/route";
-import { renderBenchSheet } from "@/lib/jobs/bench-sheet";
+import { route } from "@/server/http/route";
+import { renderBenchSheet } from "@/server/bench-sheet/render";
 import { downloadName } from "@/lib/jobs/download-name";
 
 export const runtime = "nodejs";

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { listCalculations, saveCalculation } from "@/db/queries/calculations";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { calculationSaveSchema } from "@/lib/jobs/calculation-schemas";
 
 export const GET = route({ ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json({ calculations: listCalculations(member, ids.id) }));

@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { getEstimateForJob, saveEstimate } from "@/db/queries/estimates";
 import { linesSchema } from "@/lib/estimates/schemas";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 
 export const GET = route({ role: "prepareEstimates", ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json(getEstimateForJob(member, ids.id)));
 

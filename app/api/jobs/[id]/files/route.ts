@@ -1,9 +1,9 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { assertCanUpload, createFileRecord, listFiles } from "@/db/queries/files";
-import { HttpError } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
-import { MAX_UPLOAD_BYTES, checkOriginalName, prepareUpload, removeStored, storeUpload } from "@/lib/jobs/uploads";
+import { HttpError } from "@/server/http/errors";
+import { route } from "@/server/http/route";
+import { MAX_UPLOAD_BYTES, checkOriginalName, prepareUpload, removeStored, storeUpload } from "@/server/files/uploads";
 
 export const GET = route({ ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json({ files: listFiles(member, ids.id) }));
 

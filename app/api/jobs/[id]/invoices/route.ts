@@ -1,7 +1,7 @@
 import { NextResponse } from "next/server";
 import { issueInvoice, listInvoicesForJob } from "@/db/queries/invoices";
 import { issueInvoiceSchema } from "@/lib/estimates/schemas";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 
 export const GET = route({ role: "seeMoney", ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json({ invoices: listInvoicesForJob(member, ids.id) }));
 

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { addLogEntry, listLog } from "@/db/queries/log";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { logEntrySchema } from "@/lib/jobs/log-schemas";
 
 export const GET = route({ ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json({ log: listLog(member, ids.id) }));

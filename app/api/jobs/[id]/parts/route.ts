@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { createPart, listParts } from "@/db/queries/parts";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { partSchema } from "@/lib/jobs/part-schemas";
 
 export const GET = route({ ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json({ parts: listParts(member, ids.id) }));

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { createReading, listReadings } from "@/db/queries/readings";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { readingSchema } from "@/lib/jobs/reading-schemas";
 
 export const GET = route({ ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json({ readings: listReadings(member, ids.id) }));

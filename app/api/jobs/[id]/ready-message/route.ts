@@ -1,10 +1,10 @@
 import { NextResponse } from "next/server";
 import { readyMessageDraft, recordReadyMessageSent } from "@/db/queries/ready-message";
-import { HttpError } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
-import { renderBenchSheet } from "@/lib/jobs/bench-sheet";
+import { HttpError } from "@/server/http/errors";
+import { route } from "@/server/http/route";
+import { renderBenchSheet } from "@/server/bench-sheet/render";
 import { readyMessageSchema } from "@/lib/mail/ready-schemas";
-import { sendMail } from "@/lib/mail/send";
+import { sendMail } from "@/server/mail/send";
 
 export const runtime = "nodejs";
 

@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { changeJobStatus } from "@/db/queries/jobs";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { statusChangeSchema } from "@/lib/jobs/job-schemas";
 
 /** Technicians and owners move a job along the workflow; each change is written to the log. */

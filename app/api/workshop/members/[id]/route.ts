@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { changeMemberRole, removeMember } from "@/db/queries/members";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { roleChangeSchema } from "@/lib/workshop/schemas";
 
 const ids = { id: "That member" };

@@ -1,10 +1,10 @@
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { issueApprovalLink } from "@/db/queries/estimates";
-import { sendApprovalLink } from "@/lib/estimates/mail";
-import { HttpError } from "@/lib/http/api";
-import { publicOrigin } from "@/lib/http/public-origin";
-import { route } from "@/lib/http/route";
+import { sendApprovalLink } from "@/server/mail/estimate-mail";
+import { HttpError } from "@/server/http/errors";
+import { publicOrigin } from "@/server/http/public-origin";
+import { route } from "@/server/http/route";
 
 /** E-mails the customer a single-use approval link. The token is only ever in that e-mail. */
 export const POST = route({ role: "prepareEstimates", ids: { id: "That job" }, body: z.object({}) }, async ({ request, member, ids }) => {

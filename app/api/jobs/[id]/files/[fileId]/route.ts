@@ -1,9 +1,9 @@
 import { NextResponse } from "next/server";
 import { deleteFileRecord, getFileRow } from "@/db/queries/files";
-import { HttpError } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
+import { HttpError } from "@/server/http/errors";
+import { route } from "@/server/http/route";
 import { downloadName } from "@/lib/jobs/download-name";
-import { readStored, removeStored } from "@/lib/jobs/uploads";
+import { readStored, removeStored } from "@/server/files/uploads";
 
 const ids = { id: "That job", fileId: "That file" };
 

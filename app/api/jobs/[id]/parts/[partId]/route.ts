@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { deletePart, updatePart } from "@/db/queries/parts";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { partUpdateSchema } from "@/lib/jobs/part-schemas";
 
 const ids = { id: "That job", partId: "That part" };

@@ -1,6 +1,6 @@
 import { getJob } from "@/db/queries/jobs";
 import { listParts } from "@/db/queries/parts";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { partsToCsv } from "@/lib/jobs/parts-csv";
 import { downloadName } from "@/lib/jobs/download-name";
 

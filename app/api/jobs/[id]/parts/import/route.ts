@@ -1,8 +1,8 @@
 import { NextResponse } from "next/server";
 import { createParts } from "@/db/queries/parts";
 import { assertJobInWorkshop } from "@/db/queries/job-access";
-import { HttpError } from "@/lib/http/api";
-import { route } from "@/lib/http/route";
+import { HttpError } from "@/server/http/errors";
+import { route } from "@/server/http/route";
 import { parsePartsCsv } from "@/lib/jobs/parts-csv";
 import { partsImportSchema } from "@/lib/jobs/part-schemas";
 

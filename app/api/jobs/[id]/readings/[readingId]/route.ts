@@ -1,6 +1,6 @@
 import { NextResponse } from "next/server";
 import { deleteReading, updateReading } from "@/db/queries/readings";
-import { route } from "@/lib/http/route";
+import { route } from "@/server/http/route";
 import { readingSchema } from "@/lib/jobs/reading-schemas";
 
 const ids = { id: "That job", readingId: "That reading" };

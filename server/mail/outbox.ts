@@ -1,7 +1,8 @@
+import "server-only";
 import fs from "node:fs";
 import path from "node:path";
 import { localMailEnabled, mailDir } from "./config";
-import type { StoredMail } from "./sink";
+import type { StoredMail } from "@/lib/mail/sink";
 
 /** Messages the local sink stored for one workshop, newest first; null when there is no local sink. */
 export function readOutbox(workshopId: number, limit = 50): StoredMail[] | null {

@@ -1,4 +1,5 @@
-import { HttpError } from "./api";
+import "server-only";
+import { HttpError } from "./errors";
 
 /** What a state-changing request must look like before its body is read: same origin, the right type, bounded. */
 

@@ -1,5 +1,6 @@
+import "server-only";
 import { invoiceForCheckout, recordCheckoutSession } from "@/db/queries/invoices";
-import type { Member } from "@/lib/auth/member";
+import type { Member } from "@/lib/auth/can";
 import { DomainError, NotConfiguredError, UpstreamError } from "@/lib/errors";
 import { PaymentsNotConfigured, getStripe } from "./stripe";
 

@@ -1,3 +1,4 @@
+import "server-only";
 import path from "node:path";
 import { databasePath } from "@/db/client";
 
@@ -21,4 +22,4 @@ export function mailFrom(): string {
   return process.env.MAIL_FROM ?? "Glowbench <no-reply@glowbench.invalid>";
 }
 
-export { publicOrigin as appUrl } from "@/lib/http/public-origin";
+export { publicOrigin as appUrl } from "@/server/http/public-origin";

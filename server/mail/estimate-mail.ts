@@ -1,4 +1,5 @@
-import { sendMail } from "@/lib/mail/send";
+import "server-only";
+import { sendMail } from "./send";
 
 /** The e-mails of the estimate round trip: the approval link to the customer, the answer to whoever prepared it. */
 

@@ -1,5 +1,6 @@
+import "server-only";
 import { localMailEnabled, mailDir } from "./config";
-import { startMailSink } from "./sink";
+import { startMailSink } from "@/lib/mail/sink";
 
 const globalForSink = globalThis as unknown as { __glowbenchSink?: Promise<void> };
 

@@ -1,7 +1,8 @@
+import "server-only";
 import { renderToBuffer } from "@react-pdf/renderer";
-import type { Member } from "@/lib/auth/member";
-import { benchSheetData } from "./bench-sheet-data";
-import { BenchSheetDocument } from "./bench-sheet-document";
+import type { Member } from "@/lib/auth/can";
+import { benchSheetData } from "./data";
+import { BenchSheetDocument } from "./document";
 
 /**
  * The bench sheet of one job as a PDF. Checks the member's workshop (404 otherwise) like every

@@ -1,6 +1,7 @@
+import "server-only";
 import { getIronSession, type SessionOptions } from "iron-session";
 import { cookies } from "next/headers";
-import { sessionSecret } from "./secret";
+import { sessionSecret } from "./session-secret";
 import { SESSION_COOKIE } from "./session-cookie";
 
 export { SESSION_COOKIE };

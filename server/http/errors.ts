@@ -1,5 +1,5 @@
+import "server-only";
 import { NextResponse } from "next/server";
-import type { z } from "zod";
 import {
   ConflictError,
   DomainError,
@@ -39,16 +39,6 @@ export class HttpError extends Error {
   ) {
     super(message);
   }
-}
-
-/** Zod issues → `{ fieldName: message }`, first message per field, all fields. */
-export function fieldErrors(error: z.ZodError): Record<string, string> {
-  const fields: Record<string, string> = {};
-  for (const issue of error.issues) {
-    const key = issue.path.length ? issue.path.map(String).join(".") : "_";
-    fields[key] ??= issue.message;
-  }
-  return fields;
 }
 
 /** The one mapping from the data layer's errors to HTTP statuses (PRODUCT.md, DEVELOPERS.md "Errors"). */

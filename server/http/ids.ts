@@ -1,3 +1,4 @@
+import "server-only";
 import { notFound } from "@/lib/errors";
 import { parseId } from "@/lib/ids";
 

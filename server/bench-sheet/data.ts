@@ -1,14 +1,15 @@
+import "server-only";
 import { EQUIPMENT_KIND_LABELS, JOB_STATUS_LABELS, PART_STATE_LABELS } from "@/db/enums";
 import { getJobRecord } from "@/db/queries/job-record";
-import type { Member } from "@/lib/auth/member";
+import type { Member } from "@/lib/auth/can";
 import { formatQuantity } from "@/lib/calc/format";
 import { getCalculator } from "@/lib/calc/registry";
 import { runCalculator } from "@/lib/calc/run";
 import { HIGH_VOLTAGE_CAUTION } from "@/lib/calc/safety";
 import type { OutputValue } from "@/lib/calc/types";
-import { latexToText, pdfText } from "./latex-text";
-import { PART_KIND_LABELS } from "./part-schemas";
-import { VERDICT_LABELS } from "./reading-verdict";
+import { latexToText, pdfText } from "@/lib/jobs/latex-text";
+import { PART_KIND_LABELS } from "@/lib/jobs/part-schemas";
+import { VERDICT_LABELS } from "@/lib/jobs/reading-verdict";
 
 /** Everything the PDF bench sheet prints, as plain strings the embedded font can show. */
 

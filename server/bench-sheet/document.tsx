@@ -1,6 +1,7 @@
+import "server-only";
 import path from "node:path";
 import { Document, Font, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
-import type { BenchSheetData } from "./bench-sheet-data";
+import type { BenchSheetData } from "./data";
 
 /**
  * The printable bench sheet: A4, our own layout, the shipped OFL font embedded. WOFF (not WOFF2):

@@ -1,9 +1,11 @@
+import "server-only";
 import type { NextRequest } from "next/server";
 import type { z } from "zod";
 import { assertCan, type Action, type Member } from "@/lib/auth/can";
-import { getMember } from "@/lib/auth/member";
 import { notSignedIn } from "@/lib/errors";
-import { HttpError, errorResponse, fieldErrors } from "./api";
+import { fieldErrors } from "@/lib/field-errors";
+import { getMember } from "@/server/auth/member";
+import { HttpError, errorResponse } from "./errors";
 import { MAX_JSON_BYTES, assertContentType, assertSameOrigin, readBounded } from "./body";
 import { idParam } from "./ids";
 
