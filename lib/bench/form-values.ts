@@ -133,7 +133,7 @@ function cleanLamp(v: unknown): Record<string, string> | null {
 /** Inputs most people leave alone, folded under "More figures" until needed. */
 export const ADVANCED: Record<string, { title: string; fields: readonly string[] }> = {
   "cathode-bias": { title: "Tube figures, for a better bypass estimate", fields: ["amplificationFactor", "plateResistance", "plateLoad", "transconductance"] },
-  "triode-stage": { title: "Model parameters (to override the table or for another tube)", fields: ["mu", "ex", "kg1", "kp", "kvb"] },
+  "triode-stage": { title: "Koren's triode model: override the table, or model another tube", fields: ["mu", "ex", "kg1", "kp", "kvb"] },
   "heater-string": { title: "Pilot lamp on the rectifier's heater tap", fields: ["pilotLamp"] },
   "arc-clearance": { title: "Air, altitude and safety factor", fields: ["pressure", "temperature", "altitude", "safetyFactor"] },
 };

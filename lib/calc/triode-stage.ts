@@ -20,13 +20,13 @@ export { plateCurves } from "./triode-model";
 
 const MODEL_KEYS = ["mu", "ex", "kg1", "kp", "kvb"] as const;
 type ModelKey = (typeof MODEL_KEYS)[number];
-/** Plain-text names of Koren's parameters for messages; the form typesets them from `symbol`. */
+/** Plain-text names of Koren's parameters for messages (no K_G1 in running text); the form typesets the symbols. */
 const MODEL_NAMES: Record<ModelKey, string> = {
   mu: "Amplification factor µ",
   ex: "Exponent x",
-  kg1: "Grid constant K_G1",
-  kp: "Plate constant K_P",
-  kvb: "Knee constant K_VB",
+  kg1: "Grid constant",
+  kp: "Plate constant",
+  kvb: "Knee constant",
 };
 
 const tubeField = z
@@ -75,7 +75,7 @@ export const triodeStageSchema = z
     if (v.tube !== undefined) return;
     const missing = MODEL_KEYS.filter((k) => v[k] === undefined);
     if (missing.length === MODEL_KEYS.length) {
-      ctx.addIssue({ code: "custom", path: ["tube"], message: "Choose a tube type, or enter all five parameters of Koren's triode model (µ, x, K_G1, K_P, K_VB)" });
+      ctx.addIssue({ code: "custom", path: ["tube"], message: "Choose a tube type, or enter all five parameters of Koren's triode model (µ, x and the grid, plate and knee constants)" });
       return;
     }
     for (const k of missing) {
@@ -124,10 +124,10 @@ export const calculator = defineCalculator({
   purpose: "Operating point, plate dissipation and voltage gain of a cathode-biased triode stage.",
   group: "stages",
   inputs: [
-    { name: "tube", label: "Tube type", unit: "", required: false, control: "select", options: TRIODE_NAMES, blankLabel: "None (enter the figures below)", help: "Pick a type from the built-in table, or leave it blank and enter the five model parameters." },
+    { name: "tube", label: "Tube type", unit: "", required: false, control: "select", options: TRIODE_NAMES, blankLabel: "None (enter the figures below)", help: "Pick a type from the built-in table, or leave it blank and enter the five parameters of Koren's model below." },
     // The five parameters of Koren's improved triode model, named and written as his article sets them;
     // SPICE listings spell them MU, EX, KG1, KP, KVB, and the API keeps mu, ex, kg1, kp, kvb.
-    { name: "mu", label: "Amplification factor", symbol: "\\mu", unit: "", required: false, control: "quantity", quantity: "ratio", help: `${KOREN_CITE}. With a tube chosen, any parameter you enter replaces the table's.` },
+    { name: "mu", label: "Amplification factor", symbol: "\\mu", unit: "", required: false, control: "quantity", quantity: "ratio", help: `As ${KOREN_CITE} uses it. With a tube chosen, any parameter you enter replaces the table's.` },
     { name: "ex", label: "Exponent", symbol: "x", unit: "", required: false, control: "quantity", quantity: "ratio", help: "The power the plate current follows (EX in SPICE listings): between 1 and 3, usually 1.2–1.4." },
     { name: "kg1", label: "Grid constant", symbol: "K_{G1}", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Divides the current: a larger value, less current (KG1 in SPICE listings)." },
     { name: "kp", label: "Plate constant", symbol: "K_P", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Sets how the curves bend near cut-off (KP in SPICE listings)." },

@@ -34,7 +34,7 @@ describe("triode model parameters are named in words and typeset, not listed as 
     const r = calculator.schema.safeParse({ mu: 100, supplyVoltage: 250, plateResistor: 100e3, cathodeResistor: 1500 });
     expect(r.success).toBe(false);
     const messages = r.success ? [] : r.error.issues.map((x) => x.message);
-    expect(messages).toContain("Grid constant K_G1 is required when no tube type is chosen");
+    expect(messages).toContain("Grid constant is required when no tube type is chosen");
   });
 });
 
