@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
 import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
-import { EQUIPMENT_KINDS, JOB_STATUSES, PART_KINDS, PART_STATES, ROLES } from "./enums";
+import { EQUIPMENT_KINDS, JOB_STATUSES, PART_KINDS, PART_STATES, ROLES } from "../lib/vocabulary";
 
 /** Every table of Glowbench. Each row belongs to one workshop, directly or through its job. */
 

@@ -3,7 +3,7 @@
 import Link from "next/link";
 import { useEffect, useId, useState } from "react";
 import { Button } from "@/components/ui/button";
-import { EQUIPMENT_KINDS, EQUIPMENT_KIND_LABELS, type EquipmentKind } from "@/db/enums";
+import { EQUIPMENT_KINDS, EQUIPMENT_KIND_LABELS, type EquipmentKind } from "@/lib/vocabulary";
 import { getJson, sendJson } from "@/lib/client/fetch-json";
 
 interface JobSummary {

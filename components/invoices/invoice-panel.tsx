@@ -2,7 +2,7 @@ import Link from "next/link";
 import { Card } from "@/components/ui/card";
 import { editorLines } from "@/lib/estimates/editor-lines";
 import { LinesEditor, type EditorPart } from "@/components/estimates/lines-editor";
-import { JOB_STATUS_LABELS, type JobStatus } from "@/db/enums";
+import { JOB_STATUS_LABELS, type JobStatus } from "@/lib/vocabulary";
 import type { getEstimateForJob } from "@/db/queries/estimates";
 import type { listInvoicesForJob } from "@/db/queries/invoices";
 import type { Member } from "@/lib/auth/can";

@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { EQUIPMENT_KIND_LABELS, type EquipmentKind } from "@/db/enums";
+import { EQUIPMENT_KIND_LABELS, type EquipmentKind } from "@/lib/vocabulary";
 import { Button } from "@/components/ui/button";
 import { sendJson } from "@/lib/client/fetch-json";
 import { JobForm } from "./job-form";

@@ -1,6 +1,6 @@
 "use client";
 
-import { EQUIPMENT_KINDS, EQUIPMENT_KIND_LABELS, JOB_STATUSES, JOB_STATUS_LABELS } from "@/db/enums";
+import { EQUIPMENT_KINDS, EQUIPMENT_KIND_LABELS, JOB_STATUSES, JOB_STATUS_LABELS } from "@/lib/vocabulary";
 
 export interface Filters {
   q: string;

@@ -5,7 +5,7 @@ import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { EQUIPMENT_KINDS, EQUIPMENT_KIND_LABELS } from "@/db/enums";
+import { EQUIPMENT_KINDS, EQUIPMENT_KIND_LABELS } from "@/lib/vocabulary";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";

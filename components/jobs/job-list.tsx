@@ -4,7 +4,7 @@ import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
 import Link from "next/link";
 import { useEffect, useState } from "react";
-import { EQUIPMENT_KIND_LABELS, type EquipmentKind, type JobStatus } from "@/db/enums";
+import { EQUIPMENT_KIND_LABELS, type EquipmentKind, type JobStatus } from "@/lib/vocabulary";
 import { EmptyState } from "@/components/ui/card";
 import { getJson } from "@/lib/client/fetch-json";
 import { formatDate } from "@/lib/jobs/dates";

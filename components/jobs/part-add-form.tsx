@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
-import { PART_KINDS, PART_STATES, PART_STATE_LABELS } from "@/db/enums";
+import { PART_KINDS, PART_STATES, PART_STATE_LABELS } from "@/lib/vocabulary";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";

@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { PART_KINDS, PART_STATES, PART_STATE_LABELS, type PartState } from "@/db/enums";
+import { PART_KINDS, PART_STATES, PART_STATE_LABELS, type PartState } from "@/lib/vocabulary";
 import { sendJson } from "@/lib/client/fetch-json";
 import { PART_KIND_LABELS } from "@/lib/jobs/part-schemas";
 import type { PartRow as Part } from "@/db/queries/parts";

@@ -1,4 +1,4 @@
-import { JOB_STATUS_LABELS, type JobStatus } from "@/db/enums";
+import { JOB_STATUS_LABELS, type JobStatus } from "@/lib/vocabulary";
 
 /** Colour by stage: waiting (neutral), on the bench (the primary's tint), done (green). Caution and hazard colours are kept for results. */
 const TONE: Record<JobStatus, string> = {

@@ -2,7 +2,7 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from "@/db/enums";
+import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from "@/lib/vocabulary";
 import { Button } from "@/components/ui/button";
 import { sendJson } from "@/lib/client/fetch-json";
 

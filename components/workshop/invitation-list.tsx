@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import type { Role } from "@/db/enums";
+import type { Role } from "@/lib/vocabulary";
 import { sendJson } from "@/lib/client/fetch-json";
 import { ROLE_LABELS } from "./role-labels";
 

@@ -4,7 +4,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { RoleBadge } from "@/components/ui/card";
 import { Button } from "@/components/ui/button";
-import type { Role } from "@/db/enums";
+import type { Role } from "@/lib/vocabulary";
 import { sendJson } from "@/lib/client/fetch-json";
 import { ROLE_OPTIONS } from "./role-labels";
 

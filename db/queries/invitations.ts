@@ -1,5 +1,5 @@
 import { and, desc, eq, gt, isNull } from "drizzle-orm";
-import type { Role } from "@/db/enums";
+import type { Role } from "@/lib/vocabulary";
 import { assertCan, type Member } from "@/lib/auth/can";
 import { hashToken, newToken } from "@/lib/auth/tokens";
 import { ConflictError, ForbiddenError, GoneError, NotFoundError, notFound } from "@/lib/errors";

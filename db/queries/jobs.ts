@@ -1,6 +1,5 @@
 import { and, asc, desc, eq, inArray, or, sql, type AnyColumn, type SQL } from "drizzle-orm";
-import type { JobStatus } from "@/db/enums";
-import { JOB_STATUS_LABELS } from "@/db/enums";
+import { JOB_STATUS_LABELS, type JobStatus } from "@/lib/vocabulary";
 import { assertCan, type Member } from "@/lib/auth/can";
 import { notFound } from "@/lib/errors";
 import type { JobCreate, JobListQuery, JobUpdate } from "@/lib/jobs/job-schemas";

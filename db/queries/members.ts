@@ -1,5 +1,5 @@
 import { and, asc, count, eq } from "drizzle-orm";
-import type { Role } from "@/db/enums";
+import type { Role } from "@/lib/vocabulary";
 import { assertCan, type Member } from "@/lib/auth/can";
 import { ConflictError, notFound } from "@/lib/errors";
 import { getDb, type Db } from "../client";

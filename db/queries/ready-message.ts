@@ -1,5 +1,5 @@
 import { and, eq } from "drizzle-orm";
-import { JOB_STATUS_LABELS } from "@/db/enums";
+import { JOB_STATUS_LABELS } from "@/lib/vocabulary";
 import { notFound } from "@/lib/errors";
 import { can, type Member } from "@/lib/auth/can";
 import { readySubject, renderReadyMessage } from "@/lib/mail/ready-message";

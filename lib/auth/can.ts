@@ -1,4 +1,4 @@
-import type { Role } from "@/db/enums";
+import type { Role } from "@/lib/vocabulary";
 import { forbidden } from "@/lib/errors";
 
 /** The signed-in person as every query function sees them. Never carries the password hash. */

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { EQUIPMENT_KINDS, JOB_STATUSES } from "@/db/enums";
+import { EQUIPMENT_KINDS, JOB_STATUSES } from "@/lib/vocabulary";
 import { blankToUndefined, optionalText, requiredText } from "./fields";
 
 /** One schema per job form, used by react-hook-form (zodResolver) and the route handlers (safeParse). */

@@ -1,4 +1,4 @@
-import type { PartKind } from "@/db/enums";
+import type { PartKind } from "@/lib/vocabulary";
 import { formatQuantity } from "@/lib/calc/format";
 import { parseQuantity } from "@/lib/calc/units";
 import { splitDesignators } from "./reading-schemas";

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { PART_KINDS, PART_STATES } from "@/db/enums";
+import { PART_KINDS, PART_STATES } from "@/lib/vocabulary";
 import { optionalText, requiredText } from "./fields";
 
 export const PART_KIND_LABELS: Record<(typeof PART_KINDS)[number], string> = {

@@ -1,4 +1,4 @@
-import type { Role } from "@/db/enums";
+import type { Role } from "@/lib/vocabulary";
 import { LIGHT } from "@/lib/theme/palette";
 
 /** The wording of Glowbench's own e-mails: plain text first, a simple HTML twin. */

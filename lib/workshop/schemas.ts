@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { ROLES } from "@/db/enums";
+import { ROLES } from "@/lib/vocabulary";
 import { PASSWORD_MAX, emailField, newPasswordField } from "@/lib/auth/schemas";
 
 /** Shared by the /workshop forms (zodResolver) and the /api/workshop route handlers (safeParse). */

@@ -1,5 +1,5 @@
 import "server-only";
-import { EQUIPMENT_KIND_LABELS, JOB_STATUS_LABELS, PART_STATE_LABELS } from "@/db/enums";
+import { EQUIPMENT_KIND_LABELS, JOB_STATUS_LABELS, PART_STATE_LABELS } from "@/lib/vocabulary";
 import { getJobRecord } from "@/db/queries/job-record";
 import type { Member } from "@/lib/auth/can";
 import { formatQuantity } from "@/lib/calc/format";

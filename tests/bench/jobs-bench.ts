@@ -11,7 +11,7 @@ import net from "node:net";
 import os from "node:os";
 import path from "node:path";
 import { performance } from "node:perf_hooks";
-import { EQUIPMENT_KINDS, JOB_STATUSES } from "../../db/enums";
+import { EQUIPMENT_KINDS, JOB_STATUSES } from "../../lib/vocabulary";
 
 export const TARGET_P95_MS = 50;
 const JOBS = 10_000;

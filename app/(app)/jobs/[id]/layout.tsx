@@ -4,7 +4,7 @@ import { HighVoltageNote } from "@/components/jobs/high-voltage-note";
 import { JobTabs } from "@/components/jobs/job-tabs";
 import { loadJobPage } from "@/components/jobs/load-job";
 import { StatusBadge } from "@/components/jobs/status-badge";
-import { EQUIPMENT_KIND_LABELS } from "@/db/enums";
+import { EQUIPMENT_KIND_LABELS } from "@/lib/vocabulary";
 
 export default async function JobLayout({ children, params }: { children: ReactNode; params: Promise<{ id: string }> }) {
   const { job } = await loadJobPage((await params).id);

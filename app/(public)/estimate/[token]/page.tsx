@@ -3,7 +3,7 @@ import { AnswerButtons } from "@/components/estimates/answer-buttons";
 import { LinesTable } from "@/components/estimates/lines-table";
 import { RepairDisclaimer } from "@/components/estimates/repair-disclaimer";
 import { Card } from "@/components/ui/card";
-import { EQUIPMENT_KIND_LABELS } from "@/db/enums";
+import { EQUIPMENT_KIND_LABELS } from "@/lib/vocabulary";
 import { findEstimateByToken } from "@/db/queries/estimates";
 
 // The token is the credential: never indexed, never sent on as a referrer.

@@ -1,4 +1,8 @@
-/** Value lists shared by the schema, the zod schemas and the UI. Labels are Glowbench's own wording. */
+/**
+ * Glowbench's vocabulary: the value lists the database schema (db/schema.ts), the zod schemas and the
+ * components all share. It sits in lib/, the bottom floor, so none of them reaches into db/ for a word.
+ * Labels are Glowbench's own wording.
+ */
 
 export const ROLES = ["owner", "technician", "apprentice"] as const;
 export type Role = (typeof ROLES)[number];
