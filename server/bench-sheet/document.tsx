@@ -1,44 +1,32 @@
 import "server-only";
-import path from "node:path";
-import { Document, Font, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
+import { Document, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
+import { LIGHT } from "@/lib/theme/palette";
+import { PDF_BODY } from "@/server/pdf/fonts";
 import type { BenchSheetData } from "./data";
 
-/**
- * The printable bench sheet: A4, our own layout, the shipped OFL font embedded. WOFF (not WOFF2):
- * the PDF font subsetter drops the glyph outlines of WOFF2 files, leaving blank text.
- */
+/** The printable bench sheet: A4, our own layout, set in the shipped OFL faces (server/pdf/fonts.ts). */
 
-const fontFile = (name: string) => path.join(/*turbopackIgnore: true*/ process.cwd(), "fonts", name);
-Font.register({
-  family: "Body",
-  fonts: [
-    { src: fontFile("atkinson-hyperlegible-latin-400-normal.woff") },
-    { src: fontFile("atkinson-hyperlegible-latin-700-normal.woff"), fontWeight: 700 },
-    { src: fontFile("atkinson-hyperlegible-latin-400-italic.woff"), fontStyle: "italic" },
-  ],
-});
-Font.registerHyphenationCallback((word) => [word]);
-
-const ink = "#1c1917";
-const rule = "#d6cdbe";
+const ink = LIGHT.ink;
+const rule = LIGHT.rule;
+const muted = LIGHT.muted;
 const s = StyleSheet.create({
-  page: { fontFamily: "Body", fontSize: 10, color: ink, padding: 36, paddingBottom: 48, lineHeight: 1.35 },
+  page: { fontFamily: PDF_BODY, fontSize: 10, color: ink, padding: 36, paddingBottom: 48, lineHeight: 1.35 },
   top: { flexDirection: "row", justifyContent: "space-between", borderBottom: `2 solid ${ink}`, paddingBottom: 6, marginBottom: 10 },
-  brand: { fontSize: 9, color: "#57504a" },
+  brand: { fontSize: 9, color: muted },
   title: { fontSize: 17, fontWeight: 700, lineHeight: 1.2, marginBottom: 8 },
   facts: { flexDirection: "row", flexWrap: "wrap", marginBottom: 10 },
   fact: { width: "33%", marginBottom: 3 },
-  factLabel: { fontSize: 8, color: "#57504a" },
-  danger: { border: "1.5 solid #b91c1c", backgroundColor: "#feece6", padding: 8, marginBottom: 12 },
-  dangerHead: { fontWeight: 700, color: "#b91c1c", marginBottom: 2 },
+  factLabel: { fontSize: 8, color: muted },
+  danger: { border: `1.5 solid ${LIGHT.hazard}`, backgroundColor: LIGHT["hazard-bg"], padding: 8, marginBottom: 12 },
+  dangerHead: { fontWeight: 700, color: LIGHT.hazard, marginBottom: 2 },
   h2: { fontSize: 12.5, fontWeight: 700, marginTop: 10, marginBottom: 5, borderBottom: `1 solid ${rule}`, paddingBottom: 2 },
   row: { flexDirection: "row", borderBottom: `0.5 solid ${rule}`, paddingVertical: 2.5 },
   head: { flexDirection: "row", borderBottom: `1 solid ${ink}`, paddingVertical: 2.5, fontWeight: 700, fontSize: 9 },
-  muted: { color: "#57504a" },
+  muted: { color: muted },
   calc: { marginBottom: 8, padding: 7, border: `0.75 solid ${rule}` },
   calcTitle: { fontWeight: 700, fontSize: 11 },
   mono: { fontSize: 9.5 },
-  footer: { position: "absolute", bottom: 20, left: 36, right: 36, flexDirection: "row", justifyContent: "space-between", fontSize: 8, color: "#57504a" },
+  footer: { position: "absolute", bottom: 20, left: 36, right: 36, flexDirection: "row", justifyContent: "space-between", fontSize: 8, color: muted },
 });
 
 function Table({ cols, rows }: { cols: { label: string; width: string }[]; rows: string[][] }) {
@@ -137,7 +125,7 @@ export function BenchSheetDocument({ data }: { data: BenchSheetData }) {
             ))}
             <Text style={{ marginTop: 3, fontWeight: 700 }}>{c.results.map((r) => `${r.label}: ${r.value}`).join("   ·   ")}</Text>
             {c.warnings.map((w, k) => (
-              <Text key={`w${k}`} style={{ color: w.level === "danger" ? "#b91c1c" : "#854d0e", marginTop: 2 }}>
+              <Text key={`w${k}`} style={{ color: w.level === "danger" ? LIGHT.hazard : LIGHT.caution, marginTop: 2 }}>
                 {w.level === "danger" ? "Danger" : "Caution"}: {w.text}
               </Text>
             ))}
