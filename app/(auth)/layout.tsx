@@ -5,33 +5,38 @@ import { Wordmark } from "@/components/shell/logo";
 // a page prerendered at build time has no nonce, its scripts are blocked and forms never hydrate.
 export const dynamic = "force-dynamic";
 
+// The page lies on perforated board, the way a set's chassis sits on the bench; one card on it.
+const perfboard = {
+  backgroundImage: "radial-gradient(rgb(var(--gb-rule)) 1.3px, transparent 1.6px)",
+  backgroundSize: "20px 20px",
+  backgroundPosition: "10px 10px",
+};
+
+/** A lightning stroke of our own drawing, for the high-voltage note. */
+function Bolt() {
+  return (
+    <svg viewBox="0 0 20 20" className="mt-0.5 h-5 w-5 shrink-0" aria-hidden="true">
+      <path d="M11.5 1.5 4.5 11h4.8l-1.3 7.5L15.5 9h-4.8z" fill="currentColor" />
+    </svg>
+  );
+}
+
 export default function AuthLayout({ children }: { children: React.ReactNode }) {
   return (
-    <div className="grid min-h-screen lg:grid-cols-[1.1fr_1fr]">
-      <aside className="relative hidden overflow-hidden bg-ink p-12 text-paper lg:flex lg:flex-col lg:justify-between">
-        <Link href="/" className="[&_*]:text-paper" aria-label="Glowbench home">
-          <Wordmark />
-        </Link>
-        <div className="max-w-md">
-          <p className="text-display font-bold leading-tight">Every set on the bench, every number with its working.</p>
-          <p className="mt-4 text-lead text-paper/80">
-            Bias points, bleeders, ripple and heater strings worked out step by step, and a job record your whole
-            workshop shares: parts, readings, photos and the bench log.
+    <div className="flex min-h-screen flex-col items-center px-4 py-8 sm:py-14" style={perfboard}>
+      <Link href="/" aria-label="Glowbench home" className="rounded-chip bg-paper px-3 py-1.5">
+        <Wordmark />
+      </Link>
+      <div className="mt-6 w-full max-w-md overflow-hidden rounded-card border border-rule bg-panel shadow-card">
+        <main className="p-6 sm:p-8">{children}</main>
+        <aside aria-label="High voltage" className="flex gap-3 border-t border-rule bg-sunk px-6 py-4 text-note text-muted sm:px-8">
+          <Bolt />
+          <p>
+            <strong className="text-ink">Tube sets hold lethal voltages,</strong> in filter capacitors even when unplugged.
+            Glowbench works out the figures; discharging, isolating and your local codes stay with you.
           </p>
-        </div>
-        <p className="text-note text-paper/70">
-          Tube-era sets run at lethal voltages. Glowbench helps you think; it does not replace safe practice or local codes.
-        </p>
-        <div aria-hidden="true" className="pointer-events-none absolute -right-24 top-1/3 h-96 w-96 rounded-full bg-glow/30 blur-3xl" />
-      </aside>
-      <main className="flex items-center justify-center p-6">
-        <div className="w-full max-w-md">
-          <div className="mb-8 lg:hidden">
-            <Wordmark />
-          </div>
-          {children}
-        </div>
-      </main>
+        </aside>
+      </div>
     </div>
   );
 }
