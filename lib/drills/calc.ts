@@ -30,6 +30,18 @@ export function outputOf(slug: string, inputs: Record<string, unknown>, name: st
   return v;
 }
 
+/**
+ * The figure a typical slip gives, worked by the calculator with the slip made; NaN when the calculator
+ * refuses the slipped inputs (that mistake is then left out of the drill).
+ */
+export function slipOf(slug: string, inputs: Record<string, unknown>, name: string): number {
+  try {
+    return outputOf(slug, inputs, name);
+  } catch {
+    return Number.NaN;
+  }
+}
+
 /** The output for a trial value of the unknown, through schema and compute only (cheap: no working typeset). */
 function trial(calc: Calculator, inputs: Record<string, unknown>, input: string, x: number, output: string): number | null {
   const parsed = calc.schema.safeParse({ ...inputs, [input]: x });

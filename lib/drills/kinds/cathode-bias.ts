@@ -1,4 +1,4 @@
-import { invert, outputOf } from "../calc";
+import { invert, outputOf, slipOf } from "../calc";
 import { OPERATING_POINTS, TRIODE_POINTS, type OperatingPoint } from "../operating-points";
 import type { Rng } from "../rng";
 import type { DrillKind, DrillSetup, MistakeSpec, SolvedContext } from "../types";
@@ -46,7 +46,7 @@ function pointSetup(rng: Rng, ask: string, points?: readonly OperatingPoint[]): 
 /** The same figure with the screen current left out of the cathode current. */
 function withoutScreen(ctx: SolvedContext, output: string, hint: string): MistakeSpec[] {
   if (!((ctx.inputs.screenCurrent as number) > 0)) return [];
-  return [{ value: outputOf(SLUG, { ...ctx.inputs, screenCurrent: 0 }, output), step: "Cathode current", hint }];
+  return [{ value: slipOf(SLUG, { ...ctx.inputs, screenCurrent: 0 }, output), step: "Cathode current", hint }];
 }
 
 const SCREEN_HINT = "The screen current returns through the cathode too: add it to the plate current before working with the cathode current.";
@@ -111,7 +111,12 @@ export const cathodeBiasKinds: DrillKind[] = [
     mistakes(ctx) {
       if (!((ctx.inputs.screenCurrent as number) > 0) || !ctx.setup.solve) return [];
       const { input, output, target, lo, hi } = ctx.setup.solve;
-      const plateOnly = invert(SLUG, { ...ctx.setup.inputs, screenCurrent: 0 }, input, output, target, lo, hi);
+      let plateOnly = Number.NaN;
+      try {
+        plateOnly = invert(SLUG, { ...ctx.setup.inputs, screenCurrent: 0 }, input, output, target, lo, hi);
+      } catch {
+        // No such bias within the bracket: the mistake is left out.
+      }
       return [{ value: plateOnly, step: "Cathode current", hint: "The bias is the cathode resistor times the whole cathode current: plate and screen current together." }];
     },
   },

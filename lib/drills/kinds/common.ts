@@ -1,6 +1,6 @@
 import { formatQuantity } from "../../calc/format";
 import { nextRatingAtLeast } from "../../calc/tables/wattage";
-import { outputOf } from "../calc";
+import { slipOf } from "../calc";
 import type { Rng } from "../rng";
 import type { MistakeSpec, ToleranceRule } from "../types";
 
@@ -31,9 +31,9 @@ export function noDerating(dissipation: number, step = "Suggested rating"): Mist
   return [{ value: r.watts, step, hint: "A resistor is chosen rated for at least twice what it dissipates; double the dissipation first, then take the next standard wattage." }];
 }
 
-/** Ohm's law through its own calculator: the figure a slip gives (the whole supply across a resistor, say). */
+/** Ohm's law through its own calculator: the figure a slip gives (the whole supply across a resistor, say); NaN if refused. */
 export function ohms(given: Record<string, number>, output: "voltage" | "current" | "resistance" | "power"): number {
-  return outputOf("ohms-law", given, output);
+  return slipOf("ohms-law", given, output);
 }
 
 /** Mains of the era: 50 Hz and 60 Hz, with their usual line voltages. */

@@ -1,5 +1,5 @@
 import { preferredBelow, nearestPreferred } from "../../calc/tables/preferred-values";
-import { outputOf } from "../calc";
+import { slipOf } from "../calc";
 import type { Rng } from "../rng";
 import type { DrillKind } from "../types";
 import { EXACT, fmt, RELATIVE_2 } from "./common";
@@ -143,7 +143,7 @@ export const dischargeKinds: DrillKind[] = [
       };
     },
     mistakes: (ctx) => [
-      { value: outputOf("reforming", { ...ctx.inputs, leakageFloor: 0 }, "leakageLimit"), step: "Leakage limit", hint: "The limit is never below the 3 µA floor: take whichever is greater." },
+      { value: slipOf("reforming", { ...ctx.inputs, leakageFloor: 0 }, "leakageLimit"), step: "Leakage limit", hint: "The limit is never below the 3 µA floor: take whichever is greater." },
     ],
   },
   {

@@ -7,8 +7,10 @@ import { droppingResistorKinds } from "./dropping-resistor";
 import { heaterStringKinds } from "./heater-string";
 import { mainsKinds } from "./mains";
 import { partsKinds } from "./parts";
+import { signalKinds } from "./signal";
 import { supplyKinds } from "./supply";
 import { triodeStageKinds } from "./triode-stage";
+import { workbenchKinds } from "./workbench";
 
 /**
  * Every drill kind, in the Bench's order of calculators. A kind whose calculator is not registered
@@ -24,6 +26,8 @@ const ALL: readonly DrillKind[] = [
   ...mainsKinds,
   ...partsKinds,
   ...circuitKinds,
+  ...signalKinds,
+  ...workbenchKinds,
 ];
 
 export const DRILL_KINDS: readonly DrillKind[] = ALL.filter((k) => getCalculator(k.slug) !== undefined);

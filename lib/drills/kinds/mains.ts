@@ -1,6 +1,6 @@
 import { ratingAtLeast } from "../../calc/tables/fuses";
 import { PICTURE_TUBES } from "../../calc/tables/tubes";
-import { outputOf } from "../calc";
+import { slipOf } from "../calc";
 import type { Rng } from "../rng";
 import type { DrillKind, DrillSetup, SolvedContext } from "../types";
 import { EXACT, fmt, MAINS, ohms, RELATIVE_2, RELATIVE_3 } from "./common";
@@ -96,7 +96,7 @@ export const mainsKinds: DrillKind[] = [
       const other = ctx.inputs.kind === "quick" ? "time-lag" : "quick";
       return [
         ...(noMargin === null ? [] : [{ value: noMargin, step: "Least rating", hint: "A fuse at the running current blows on the switch-on surge: multiply by the margin the fuse kind needs first." }]),
-        { value: outputOf("fuse", { ...ctx.inputs, kind: other }, "suggestedRating"), step: "Least rating", hint: `That is the margin of a ${other} fuse; a ${ctx.inputs.kind} fuse needs its own.` },
+        { value: slipOf("fuse", { ...ctx.inputs, kind: other }, "suggestedRating"), step: "Least rating", hint: `That is the margin of a ${other} fuse; a ${ctx.inputs.kind} fuse needs its own.` },
       ];
     },
   },
@@ -111,7 +111,7 @@ export const mainsKinds: DrillKind[] = [
     generate: (rng) => fuseSetup(rng, "What current does it draw from the mains?"),
     mistakes: (ctx) =>
       (ctx.inputs.powerFactor as number) < 1
-        ? [{ value: outputOf("fuse", { ...ctx.inputs, powerFactor: 1 }, "runningCurrent"), step: "Running current", hint: "With a power factor below 1 the set draws more current than P/V: divide by the power factor as well." }]
+        ? [{ value: slipOf("fuse", { ...ctx.inputs, powerFactor: 1 }, "runningCurrent"), step: "Running current", hint: "With a power factor below 1 the set draws more current than P/V: divide by the power factor as well." }]
         : [],
   },
   {
@@ -134,7 +134,7 @@ export const mainsKinds: DrillKind[] = [
       };
     },
     mistakes: (ctx) => [
-      { value: outputOf("arc-clearance", { ...ctx.inputs, gap: (ctx.inputs.gap as number) * 10 }, "breakdownVoltage"), step: "Uniform-field breakdown", hint: "The constants are per centimetre: 5 mm is 0.5 cm, not 5." },
+      { value: slipOf("arc-clearance", { ...ctx.inputs, gap: (ctx.inputs.gap as number) * 10 }, "breakdownVoltage"), step: "Uniform-field breakdown", hint: "The constants are per centimetre: 5 mm is 0.5 cm, not 5." },
     ],
   },
   {
@@ -157,8 +157,8 @@ export const mainsKinds: DrillKind[] = [
     },
     accept: (ctx) => typeof ctx.outputs.standardClearance === "number",
     mistakes: (ctx) => [
-      { value: outputOf("arc-clearance", { ...ctx.inputs, altitude: 0 }, "standardClearance"), step: "Altitude factor", hint: "The table is for up to 2000 m; higher up the air is thinner, so multiply by the altitude factor of Table A.2." },
-      { value: outputOf("arc-clearance", { ...ctx.inputs, electrode: "uniform" }, "standardClearance"), step: "IEC 60664-1 Table F.8", hint: "A chassis, solder tags and wire ends make a non-uniform field: read case A, not case B." },
+      { value: slipOf("arc-clearance", { ...ctx.inputs, altitude: 0 }, "standardClearance"), step: "Altitude factor", hint: "The table is for up to 2000 m; higher up the air is thinner, so multiply by the altitude factor of Table A.2." },
+      { value: slipOf("arc-clearance", { ...ctx.inputs, electrode: "uniform" }, "standardClearance"), step: "IEC 60664-1 Table F.8", hint: "A chassis, solder tags and wire ends make a non-uniform field: read case A, not case B." },
     ],
   },
 ];

@@ -1,4 +1,4 @@
-import { outputOf } from "../calc";
+import { slipOf } from "../calc";
 import type { Rng } from "../rng";
 import type { DrillKind, DrillSetup, SolvedContext } from "../types";
 import { fmt, RELATIVE_2 } from "./common";
@@ -30,7 +30,7 @@ function rippleSetup(rng: Rng, ask: string): DrillSetup {
 function otherRectifier(ctx: SolvedContext, output: string) {
   const full = ctx.inputs.rectifier === "full-wave";
   return {
-    value: outputOf("supply-ripple", { ...ctx.inputs, rectifier: full ? "half-wave" : "full-wave" }, output),
+    value: slipOf("supply-ripple", { ...ctx.inputs, rectifier: full ? "half-wave" : "full-wave" }, output),
     step: "Ripple frequency",
     hint: full
       ? "A full-wave rectifier charges the reservoir twice each mains cycle: the ripple is at twice the mains frequency."

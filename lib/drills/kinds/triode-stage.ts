@@ -1,5 +1,5 @@
 import { TRIODES } from "../../calc/tables/triodes";
-import { outputOf } from "../calc";
+import { outputOf, slipOf } from "../calc";
 import type { Rng } from "../rng";
 import type { DrillKind, DrillSetup, SolvedContext } from "../types";
 import { fmt, ohms, RELATIVE_2, RELATIVE_3, roundTo } from "./common";
@@ -164,10 +164,10 @@ export const triodeStageKinds: DrillKind[] = [
       const out = [];
       if (ctx.inputs.loadResistance !== undefined) {
         const { loadResistance: _, ...alone } = ctx.inputs;
-        out.push({ value: outputOf(SLUG, alone, "gain"), step: "Signal load", hint: "The next stage's grid resistor is in parallel with the plate resistor: use Ra ∥ RL as the load." });
+        out.push({ value: slipOf(SLUG, alone, "gain"), step: "Signal load", hint: "The next stage's grid resistor is in parallel with the plate resistor: use Ra ∥ RL as the load." });
       }
       if (ctx.inputs.cathodeBypassed === false) {
-        out.push({ value: outputOf(SLUG, { ...ctx.inputs, cathodeBypassed: true }, "gain"), step: "Voltage gain", hint: "Without a bypass capacitor the cathode resistor feeds back: add (µ + 1)·Rk to the denominator." });
+        out.push({ value: slipOf(SLUG, { ...ctx.inputs, cathodeBypassed: true }, "gain"), step: "Voltage gain", hint: "Without a bypass capacitor the cathode resistor feeds back: add (µ + 1)·Rk to the denominator." });
       }
       out.push({ value: ctx.outputs.amplificationFactor as number, step: "Voltage gain", hint: "µ is the most a triode could give; the stage gives µ·RL′/(rp + RL′)." });
       return out;
