@@ -86,7 +86,8 @@ export function makeDrill(kind: DrillKind, seed: number): Drill {
       seed: seed >>> 0,
       slug: kind.slug,
       title: kind.title,
-      prompt: fixArticles(setup.prompt),
+      // The unit line closes the prompt, so a bare number's meaning is stated where it is asked.
+      prompt: `${fixArticles(setup.prompt)} ${askedHelp(kind.asked)}`,
       given: setup.given,
       asked: { ...kind.asked, help: askedHelp(kind.asked) },
       danger,

@@ -43,7 +43,7 @@ export interface MistakeSpec {
 export interface DrillSetup {
   /** Raw calculator inputs (SI numbers or engineering text); a backward kind leaves its unknown out. */
   inputs: Record<string, unknown>;
-  /** The problem, without the "answer in …" line (added for every kind alike). */
+  /** The problem, without the "answer in …" line (makeDrill adds it for every kind alike). */
   prompt: string;
   /** What the problem gives, label → value with its unit ("Plate current" → "45 mA"). */
   given: Record<string, string>;
@@ -131,6 +131,7 @@ export interface Drill {
   solution: DrillSolution;
 }
 
+/** "wrong-number" is any wrong answer of the right sort: a wrong figure, or wrong words for a text ask. */
 export type Verdict = "correct" | "wrong-number" | "wrong-unit" | "unreadable";
 
 export interface Judgement {

@@ -125,6 +125,15 @@ describe("the bench examples of the issue", () => {
     expect(j.mistake?.hint).toMatch(/thousand times too large/);
   });
 
+  it("takes a verdict in the bench's other words, and refuses an answer that names no side", () => {
+    const within = findDrill("resistor-drift/verdict", (x) => x.solution.expected === "within");
+    expect(judgeDrill(within, "In tolerance").correct).toBe(true);
+    const high = findDrill("resistor-drift/verdict", (x) => x.solution.expected === "high");
+    expect(judgeDrill(high, "reads HIGH").correct).toBe(true);
+    expect(judgeDrill(high, "out of tolerance").verdict).toBe("wrong-number");
+    expect(high.problem.prompt).toMatch(/Answer in words: within, high or low\.$/);
+  });
+
   it("covers every kind with at least one drill whose typical mistake is recognised, or the prefix slip", () => {
     for (const k of DRILL_KINDS) {
       const d = generateDrill(k.id, 42);

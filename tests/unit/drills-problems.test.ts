@@ -41,6 +41,7 @@ describe.each(DRILL_KINDS.map((k) => [k.id, k] as const))("%s", (_id, kind) => {
       // Only these fields, and no number but the seed: nothing of the solution rides along.
       expect(Object.keys(d.problem).sort()).toEqual(["asked", "caution", "danger", "given", "kind", "prompt", "seed", "slug", "title"]);
       expect(d.problem.asked).toEqual({ ...kind.asked, help: askedHelp(kind.asked) });
+      expect(d.problem.prompt.endsWith(` ${d.problem.asked.help}`)).toBe(true);
       expect(Object.values(d.problem.given).every((v) => typeof v === "string")).toBe(true);
       const json = JSON.stringify(d.problem);
       expect(json).not.toMatch(/"(expected|solution|inputs|mistakes|steps|solved)"/);
