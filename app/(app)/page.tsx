@@ -1,4 +1,5 @@
 import { redirect } from "next/navigation";
+import { HighVoltageNote } from "@/components/bench/danger-banner";
 import { ButtonLink } from "@/components/ui/button";
 import { getMember } from "@/server/auth/member";
 
@@ -23,6 +24,9 @@ export default async function HomePage() {
         <ButtonLink href="/sign-in" variant="secondary">
           Sign in
         </ButtonLink>
+      </div>
+      <div className="mt-8 max-w-3xl">
+        <HighVoltageNote />
       </div>
       <ul className="mt-14 grid gap-6 md:grid-cols-3">
         {POINTS.map((p) => (

@@ -4,6 +4,7 @@ import Link from "next/link";
 import { useId, useState } from "react";
 import type { CalculatorGroup } from "@/lib/calc/types";
 import { GROUPS } from "@/lib/bench/groups";
+import { HighVoltageNote } from "./danger-banner";
 
 export interface IndexEntry {
   slug: string;
@@ -37,6 +38,9 @@ export function BenchIndex({ entries }: { entries: IndexEntry[] }) {
   const shown = entries.filter((e) => matches(e, q));
   return (
     <>
+      <div className="mb-8 max-w-3xl">
+        <HighVoltageNote />
+      </div>
       <div className="gb-no-print mb-10 max-w-xl">
         <label htmlFor={id} className="font-bold">
           Find a calculator

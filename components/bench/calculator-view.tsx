@@ -11,6 +11,7 @@ import type { Calculator, InputMeta, OutputMeta } from "@/lib/calc/types";
 import { plain } from "@/lib/bench/errors";
 import { ADVANCED, hiddenFields, initialMode, MODES, toRaw, type FormValues } from "@/lib/bench/form-values";
 import { loadCalculator } from "@/lib/bench/load-calculator";
+import { highestTypedVoltage, quickParse, typedHazard, type Parse } from "@/lib/bench/typed-volts";
 import { ChartSlot } from "./chart-slot";
 import { DangerBanner } from "./danger-banner";
 import { InputControl } from "./input-fields";
@@ -74,6 +75,10 @@ export function CalculatorView(p: CalculatorViewProps) {
   const raw = useMemo(() => toRaw(slug, inputs, values, mode), [slug, inputs, values, mode]);
   const run = useMemo(() => (calc ? runCalculator(calc, raw) : p.initialRun), [calc, raw, p.initialRun]);
   const later = useDeferredValue(run);
+  // The danger banner follows each typed voltage on its own, valid form or not. The full unit parser
+  // (mathjs) shares the calculator module's chunk; until it arrives the quick reader serves.
+  const [parse, setParse] = useState<Parse>(() => quickParse);
+  const typed = useMemo(() => highestTypedVoltage(inputs, raw, parse), [inputs, raw, parse]);
 
   // The calculator module loads on the first sign of use (pointer over or into the form, focus, a key):
   // the server's result is already on the page, so nothing else waits for it.
@@ -82,6 +87,7 @@ export function CalculatorView(p: CalculatorViewProps) {
   useEffect(() => {
     if (!wanted) return;
     let alive = true;
+    import("@/lib/calc/units").then((m) => alive && setParse(() => m.parseQuantity));
     loadCalculator(slug).then((c) => {
       if (!alive) return;
       calcRef.current = c;
@@ -116,7 +122,8 @@ export function CalculatorView(p: CalculatorViewProps) {
   const visibleNames = new Set(shown.map((i) => i.name));
   const orphanErrors = run.ok ? [] : Object.entries(run.error.fields).filter(([k]) => !visibleNames.has(k.split(".")[0]));
   const dangers = run.ok ? run.result.warnings.filter((w) => w.level === "danger").map((w) => w.message) : [];
-  const showDanger = p.alwaysDanger || dangers.length > 0;
+  const hazardTyped = typedHazard(typed);
+  const showDanger = p.alwaysDanger || dangers.length > 0 || hazardTyped;
   const modes = MODES[slug]?.modes;
   const advanced = ADVANCED[slug];
   const isAdvanced = (name: string) => advanced?.fields.includes(name) ?? false;
@@ -126,10 +133,10 @@ export function CalculatorView(p: CalculatorViewProps) {
     <FormProvider {...form}>
       {showDanger ? (
         <div className="mb-6">
-          <DangerBanner extra={dangers} />
+          <DangerBanner extra={dangers} typed={hazardTyped ? typed : null} />
         </div>
       ) : null}
-      <div className="gb-calc-grid grid items-start gap-8 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
+      <div className="gb-calc-grid grid grid-cols-1 items-start gap-8 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
         <form
           onSubmit={(e) => e.preventDefault()}
           onPointerEnter={want}
@@ -138,7 +145,7 @@ export function CalculatorView(p: CalculatorViewProps) {
           onKeyDownCapture={want}
           noValidate
           aria-labelledby="inputs-title"
-          className="gb-no-print rounded-card border border-rule bg-panel p-6 shadow-card"
+          className="gb-no-print min-w-0 rounded-card border border-rule bg-panel p-6 shadow-card"
         >
           <div className="mb-4 flex items-baseline justify-between gap-3">
             <h2 id="inputs-title" className="text-lead font-bold">
@@ -190,7 +197,7 @@ export function CalculatorView(p: CalculatorViewProps) {
             </ul>
           ) : null}
         </form>
-        <div className="flex flex-col gap-6 lg:sticky lg:top-4" aria-labelledby="result-title">
+        <div className="flex min-w-0 flex-col gap-6 lg:sticky lg:top-4" aria-labelledby="result-title">
           <h2 id="result-title" className="sr-only">
             Result
           </h2>

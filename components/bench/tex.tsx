@@ -44,7 +44,7 @@ function render(katex: Katex, latex: string): string {
 /** One formula: from KaTeX when loaded, from the server's HTML when it has it, else the LaTeX as text. */
 export function Tex({ latex, katex, serverHtml }: { latex: string; katex: Katex | null; serverHtml?: Record<string, string> }) {
   const html = katex ? render(katex, latex) : serverHtml?.[latex];
-  if (html === undefined) return <code className="font-mono text-note text-muted">{latex}</code>;
+  if (html === undefined) return <code className="font-mono text-note text-muted break-all">{latex}</code>;
   return <span className="gb-tex" dangerouslySetInnerHTML={{ __html: html }} />;
 }
 

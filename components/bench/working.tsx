@@ -41,23 +41,24 @@ export function Working({ slug, live, open, run, outputs, serverHtml, formulas, 
         Show the working
         <span className="ml-auto text-note font-normal text-muted group-open:hidden">formula, your values, source</span>
       </summary>
-      <div className="grid gap-8 border-t border-rule px-6 py-6 lg:grid-cols-2">
-        <section aria-labelledby="w-formula">
+      {/* minmax(0, 1fr) columns and min-w-0 sections: a wide formula scrolls in its own box instead of widening the page. */}
+      <div className="grid grid-cols-1 gap-8 border-t border-rule px-4 py-6 sm:px-6 lg:grid-cols-2">
+        <section className="min-w-0" aria-labelledby="w-formula">
           <h3 id="w-formula" className="mb-3 font-bold uppercase tracking-wider text-muted text-note">
             1 · The formula
           </h3>
           {formulas}
         </section>
-        <section aria-labelledby="w-steps">
+        <section className="min-w-0" aria-labelledby="w-steps">
           <h3 id="w-steps" className="mb-3 font-bold uppercase tracking-wider text-muted text-note">
             2 · With your values
           </h3>
           {run.ok ? (
             <ol className="flex flex-col gap-3" data-testid="steps">
               {run.result.steps.map((s, i) => (
-                <li key={`${i}-${s.label}`} className="rounded-chip bg-sunk/60 px-4 py-3">
+                <li key={`${i}-${s.label}`} className="min-w-0 rounded-chip bg-sunk/60 px-3 py-3 sm:px-4">
                   <p className="text-note font-bold text-muted">{s.label}</p>
-                  <div className="mt-1 overflow-x-auto text-body">
+                  <div className="gb-formula mt-1 text-body">
                     <Tex latex={s.latex} katex={katex} serverHtml={serverHtml} />
                   </div>
                 </li>
@@ -82,13 +83,13 @@ export function Working({ slug, live, open, run, outputs, serverHtml, formulas, 
             <p className="text-muted">—</p>
           )}
         </section>
-        <section aria-labelledby="w-source">
+        <section className="min-w-0" aria-labelledby="w-source">
           <h3 id="w-source" className="mb-3 font-bold uppercase tracking-wider text-muted text-note">
             4 · Where it comes from
           </h3>
           {sources}
         </section>
-        <section aria-labelledby="w-why">
+        <section className="min-w-0" aria-labelledby="w-why">
           <h3 id="w-why" className="mb-3 font-bold uppercase tracking-wider text-muted text-note">
             5 · Why it matters at the bench
           </h3>
