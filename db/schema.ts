@@ -318,6 +318,65 @@ export const paymentEvents = sqliteTable("payment_events", {
   receivedAt: createdAt(),
 });
 
+/**
+ * A set of drills an owner or technician gives an apprentice, due on a calendar date. Its drills are made
+ * when it is set (drills.assignmentId), so the set the apprentice sees is the one the mentor chose.
+ */
+export const drillAssignments = sqliteTable(
+  "drill_assignments",
+  {
+    id: id(),
+    workshopId: workshopRef(),
+    assignedBy: integer("assigned_by").references(() => users.id, { onDelete: "set null" }),
+    apprenticeId: integer("apprentice_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    /** The drill kinds ("cathode-bias/resistor") or calculator slugs the set was made from, as chosen. */
+    kinds: text("kinds", { mode: "json" }).$type<string[]>().notNull(),
+    count: integer("count").notNull(),
+    /** A calendar date, "2025-03-14": due by the end of that day wherever the workshop is. */
+    dueDate: text("due_date").notNull(),
+    note: text("note"),
+    createdAt: createdAt(),
+  },
+  (t) => [index("drill_assignments_workshop_apprentice").on(t.workshopId, t.apprenticeId, t.dueDate)],
+);
+
+/**
+ * One practice problem for one member. The problem (what the browser may see) and the solution (the
+ * expected answer, tolerance and working, never sent before the answer) are stored when the drill is made,
+ * so a later change to a calculator never rewrites a drill already set. Answered once: the answer columns
+ * are written by a conditional update.
+ */
+export const drills = sqliteTable(
+  "drills",
+  {
+    id: id(),
+    workshopId: workshopRef(),
+    userId: integer("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    kind: text("kind").notNull(),
+    slug: text("slug").notNull(),
+    seed: integer("seed").notNull(),
+    problem: text("problem", { mode: "json" }).$type<Record<string, unknown>>().notNull(),
+    solution: text("solution", { mode: "json" }).$type<Record<string, unknown>>().notNull(),
+    assignmentId: integer("assignment_id").references(() => drillAssignments.id, { onDelete: "set null" }),
+    sourceCalculationId: integer("source_calculation_id").references(() => calculations.id, { onDelete: "set null" }),
+    /** The answer as sent (a JSON number or text), kept so the judgement can be shown again. */
+    answer: text("answer", { mode: "json" }).$type<number | string>(),
+    verdict: text("verdict", { enum: ["correct", "wrong-number", "wrong-unit"] }),
+    correct: integer("correct", { mode: "boolean" }),
+    answeredAt: integer("answered_at", { mode: "timestamp_ms" }),
+    createdAt: createdAt(),
+  },
+  (t) => [
+    // Progress reads a member's answered drills by kind and time.
+    index("drills_workshop_user_answered").on(t.workshopId, t.userId, t.answeredAt),
+    index("drills_assignment").on(t.assignmentId),
+  ],
+);
+
 export type Workshop = typeof workshops.$inferSelect;
 export type User = typeof users.$inferSelect;
 export type Membership = typeof memberships.$inferSelect;
@@ -334,3 +393,5 @@ export type Estimate = typeof estimates.$inferSelect;
 export type EstimateLine = typeof estimateLines.$inferSelect;
 export type Invoice = typeof invoices.$inferSelect;
 export type InvoiceLine = typeof invoiceLines.$inferSelect;
+export type DrillRow = typeof drills.$inferSelect;
+export type DrillAssignment = typeof drillAssignments.$inferSelect;

@@ -26,6 +26,10 @@ const RULES = {
   seeMoney: { roles: ["owner"], what: "see invoices" },
   manageMembers: { roles: ["owner"], what: "manage the workshop's members" },
   manageWorkshop: { roles: ["owner"], what: "change the workshop's settings" },
+  // Drills (PRODUCT.md "Drills"): every member may practise; mentors set drills and follow every apprentice's progress.
+  doDrills: { roles: ["owner", "technician", "apprentice"], what: "do drills" },
+  assignDrills: { roles: ["owner", "technician"], what: "set drills for apprentices" },
+  followDrills: { roles: ["owner", "technician"], what: "see other members' drill progress" },
 } as const satisfies Record<string, { roles: readonly Role[]; what: string }>;
 
 export type Action = keyof typeof RULES;

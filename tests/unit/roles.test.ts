@@ -16,6 +16,10 @@ const EXPECTED: Record<Action, [owner: boolean, technician: boolean, apprentice:
   seeMoney: [true, false, false],
   manageMembers: [true, false, false],
   manageWorkshop: [true, false, false],
+  // Drills: apprentices do them; owners and technicians set them and follow apprentices' progress.
+  doDrills: [true, true, true],
+  assignDrills: [true, true, false],
+  followDrills: [true, true, false],
 };
 
 describe("role rules", () => {
