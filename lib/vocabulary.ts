@@ -65,3 +65,67 @@ export const PART_STATE_LABELS: Record<PartState, string> = {
   ordered: "Ordered",
   fitted: "Fitted",
 };
+
+/** The bench record (PRODUCT.md "The bench record"): what a tube tester's result comes to. */
+export const TUBE_VERDICTS = ["strong", "serviceable", "weak", "short", "open-heater", "gassy", "not-tested"] as const;
+export type TubeVerdict = (typeof TUBE_VERDICTS)[number];
+
+export const TUBE_VERDICT_LABELS: Record<TubeVerdict, string> = {
+  strong: "Strong",
+  serviceable: "Serviceable",
+  weak: "Weak",
+  short: "Shorted",
+  "open-heater": "Heater open",
+  gassy: "Gassy",
+  "not-tested": "Not tested yet",
+};
+
+/** What holds a first power-up back from the full mains. */
+export const POWER_UP_LIMITERS = ["variac", "series-lamp", "limited-supply"] as const;
+export type PowerUpLimiter = (typeof POWER_UP_LIMITERS)[number];
+
+export const POWER_UP_LIMITER_LABELS: Record<PowerUpLimiter, string> = {
+  variac: "Variable transformer",
+  "series-lamp": "Series lamp",
+  "limited-supply": "Current-limited supply",
+};
+
+export const POWER_UP_OUTCOMES = ["passed", "stopped"] as const;
+export type PowerUpOutcome = (typeof POWER_UP_OUTCOMES)[number];
+
+export const POWER_UP_OUTCOME_LABELS: Record<PowerUpOutcome, string> = {
+  passed: "Came up well",
+  stopped: "Stopped",
+};
+
+/** The checks before first power, in the order they are done at the bench (advice, not a gate). */
+export const POWER_UP_CHECKLIST = [
+  { id: "filters-replaced", label: "Filter capacitors replaced or reformed" },
+  { id: "caps-discharged", label: "Every capacitor discharged, and checked with a meter" },
+  { id: "fuse-rating", label: "A fuse of the right rating fitted" },
+  { id: "hv-lead-dressed", label: "High-voltage lead dressed and its clearance checked" },
+  { id: "no-bplus-short", label: "No short on B+, measured with an ohmmeter" },
+  { id: "tubes-seated", label: "Tubes seated and caps on" },
+  { id: "output-loaded", label: "A load on the output transformer (speaker or resistor)" },
+] as const;
+export type PowerUpChecklistId = (typeof POWER_UP_CHECKLIST)[number]["id"];
+
+/** One suspect on a fault's list. */
+export const FAULT_CANDIDATE_STATUSES = ["open", "ruled-out", "cause"] as const;
+export type FaultCandidateStatus = (typeof FAULT_CANDIDATE_STATUSES)[number];
+
+export const FAULT_CANDIDATE_STATUS_LABELS: Record<FaultCandidateStatus, string> = {
+  open: "Still to test",
+  "ruled-out": "Ruled out",
+  cause: "The cause",
+};
+
+/** A fault as a whole: open while no candidate is the cause, found once one is, fixed once the repair is written. */
+export const FAULT_STATES = ["open", "found", "fixed"] as const;
+export type FaultState = (typeof FAULT_STATES)[number];
+
+export const FAULT_STATE_LABELS: Record<FaultState, string> = {
+  open: "Open",
+  found: "Cause found",
+  fixed: "Fixed",
+};
