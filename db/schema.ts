@@ -92,6 +92,26 @@ export const passwordResets = sqliteTable(
   (t) => [uniqueIndex("password_resets_token").on(t.tokenHash)],
 );
 
+/**
+ * One row per signed-in browser. The sealed cookie carries a random session id; only its SHA-256 is
+ * stored. Signing out deletes the row, so a copied cookie stops working at once; an idle session ends
+ * when `lastSeenAt` is older than the idle timeout, any session at `expiresAt`.
+ */
+export const sessions = sqliteTable(
+  "sessions",
+  {
+    id: id(),
+    userId: integer("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    tokenHash: text("token_hash").notNull(),
+    lastSeenAt: integer("last_seen_at", { mode: "timestamp_ms" }).notNull(),
+    expiresAt: integer("expires_at", { mode: "timestamp_ms" }).notNull(),
+    createdAt: createdAt(),
+  },
+  (t) => [uniqueIndex("sessions_token").on(t.tokenHash), index("sessions_user").on(t.userId)],
+);
+
 export const auditEvents = sqliteTable(
   "audit_events",
   {
