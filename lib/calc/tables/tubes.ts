@@ -135,6 +135,11 @@ export const RECEIVING_TUBES: readonly ReceivingTube[] = [
   r({ type: "12AU7", aliases: ["12AU7A", "ECC82"], kind: "twin triode", base: "9-pin noval", sections: 2, maxPlateVoltage: 300, maxPlateDissipation: 2.75 }),
   r({ type: "12AT7", aliases: ["ECC81"], kind: "twin triode", base: "9-pin noval", sections: 2, maxPlateVoltage: 300, maxPlateDissipation: 2.5 }),
   r({ type: "6SL7GT", aliases: ["6SL7"], kind: "twin triode", base: "octal", sections: 2, maxPlateVoltage: 250, maxPlateDissipation: 1 }),
+  // The 6SN7GT's sections on a 12.6 V 0.3 A heater, for 300 mA series strings.
+  r({ type: "12SN7GT", aliases: ["12SN7"], kind: "twin triode", base: "octal", sections: 2, maxPlateVoltage: 450, maxPlateDissipation: 2.5 }),
+  r({ type: "6CG7", kind: "twin triode", base: "9-pin noval", sections: 2, maxPlateVoltage: 330, maxPlateDissipation: 3.5, note: "The miniature counterpart of the 6SN7GT, on a noval base." }),
+  // Television vertical deflection output triode.
+  r({ type: "6S4", aliases: ["6S4A"], kind: "triode", base: "9-pin noval", maxPlateVoltage: 550, maxPlateDissipation: 7.5, heater: h(6.3, 0.6), note: "Its plate also sees the vertical flyback pulse, well above the DC rating." }),
   r({ type: "6J5", aliases: ["6J5GT"], kind: "triode", base: "octal", maxPlateVoltage: 300, maxPlateDissipation: 2.5 }),
   r({ type: "2A3", kind: "triode", base: "4-pin (UX)", heating: "filament", maxPlateVoltage: 300, maxPlateDissipation: 15, heater: h(2.5, 2.5) }),
   r({ type: "300B", kind: "triode", base: "4-pin (UX)", heating: "filament", maxPlateVoltage: 450, maxPlateDissipation: 36, heater: h(5, 1.2), source: memo("300B", "300B data sheet"), note: "Later sheets rate it at 40 W." }),
@@ -148,6 +153,7 @@ export const RECEIVING_TUBES: readonly ReceivingTube[] = [
   r({ type: "6SQ7", aliases: ["6SQ7GT"], kind: "duplex diode triode", base: "octal", maxPlateVoltage: 250, maxPlateDissipation: 0.5 }),
   r({ type: "6AU6", kind: "sharp-cutoff pentode", base: "7-pin miniature", maxPlateVoltage: 300, maxPlateDissipation: 3, maxScreenDissipation: 0.65 }),
   r({ type: "6AU6A", kind: "sharp-cutoff pentode", base: "7-pin miniature", maxPlateVoltage: 330, maxPlateDissipation: 3.5, maxScreenDissipation: 0.75 }),
+  r({ type: "6CB6", kind: "sharp-cutoff pentode", base: "7-pin miniature", maxPlateVoltage: 300, maxPlateDissipation: 2, maxScreenDissipation: 0.5 }),
 ];
 
 const CRT = "RCA picture tube data";
@@ -166,6 +172,7 @@ export const PICTURE_TUBES: readonly PictureTube[] = [
   p({ type: "10BP4", face: "round", anodeVoltageMin: 8000, anodeVoltageMax: 12000, deflectionAngle: 50, focus: "magnetic", ionTrap: true }),
   p({ type: "12LP4", face: "round", anodeVoltageMin: 9000, anodeVoltageMax: 12000, deflectionAngle: 54, focus: "magnetic", ionTrap: true }),
   p({ type: "17BP4A", face: "rectangular", anodeVoltageMin: 12000, anodeVoltageMax: 16000, deflectionAngle: 70, focus: "magnetic", ionTrap: true }),
+  p({ type: "17HP4", face: "rectangular", anodeVoltageMin: 12000, anodeVoltageMax: 16000, deflectionAngle: 70, focus: "electrostatic", ionTrap: true, note: "Electrostatic focus: in place of a 17BP4A it needs a focus-electrode connection, not the focus coil." }),
   p({ type: "21YP4", face: "rectangular", anodeVoltageMin: 14000, anodeVoltageMax: 18000, deflectionAngle: 70, focus: "electrostatic", ionTrap: true }),
 ];
 
