@@ -8,9 +8,22 @@ export function baseUrl(): string {
   return url;
 }
 
+/**
+ * Each client is its own machine: the test server trusts X-Forwarded-For (GLOWBENCH_TRUST_PROXY=1), so
+ * a client gets an address of its own from 198.18.0.0/15 (RFC 2544's benchmarking range) unless the test
+ * names one. Without it every test would share one per-client throttle bucket.
+ */
+function testAddress(): string {
+  const n = Math.floor(Math.random() * 2 ** 17);
+  return `198.${18 + (n >> 16)}.${(n >> 8) & 255}.${n & 255}`;
+}
+
 export class Client {
   private cookie = "";
-  constructor(private readonly headers: Record<string, string> = {}) {}
+  private readonly headers: Record<string, string>;
+  constructor(headers: Record<string, string> = {}) {
+    this.headers = { "x-forwarded-for": testAddress(), ...headers };
+  }
 
   async request(method: string, path: string, body?: unknown, extra: Record<string, string> = {}): Promise<Response> {
     const headers: Record<string, string> = { ...this.headers, ...extra };

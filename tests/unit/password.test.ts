@@ -1,5 +1,6 @@
 import { describe, expect, test } from "vitest";
-import { SCRYPT_PARAMS, hashPassword, verifyPassword } from "@/lib/auth/password";
+import { readFileSync } from "node:fs";
+import { SCRYPT_PARAMS, hashPassword, scryptParams, verifyPassword } from "@/lib/auth/password";
 
 describe("password hashing", () => {
   test("uses the OWASP Password Storage Cheat Sheet's scrypt parameters (N=2^17, r=8, p=1)", async () => {
@@ -33,5 +34,28 @@ describe("password hashing", () => {
   test("refuses malformed stored hashes without throwing", async () => {
     expect(await verifyPassword("x", "plain-text")).toBe(false);
     expect(await verifyPassword("x", "scrypt$abc$8$1$c2FsdA==$a2V5")).toBe(false);
+  });
+
+  test("hashes with the asynchronous crypto.scrypt, never scryptSync (the event loop stays free)", async () => {
+    const source = readFileSync("lib/auth/password.ts", "utf8");
+    expect(source).not.toMatch(/scryptSync/);
+    // While a full-cost hash runs, timers still fire: the loop is not blocked for the hash's duration.
+    let ticks = 0;
+    const timer = setInterval(() => ticks++, 5);
+    const started = Date.now();
+    await hashPassword("event loop stays free");
+    clearInterval(timer);
+    const elapsed = Date.now() - started;
+    expect(elapsed).toBeGreaterThan(20);
+    expect(ticks).toBeGreaterThan(1);
+  });
+
+  test("GLOWBENCH_SCRYPT_COST lowers the cost for the test suite only and is refused in production", () => {
+    expect(scryptParams({} as NodeJS.ProcessEnv)).toEqual(SCRYPT_PARAMS);
+    expect(scryptParams({ GLOWBENCH_SCRYPT_COST: "12", NODE_ENV: "test" } as NodeJS.ProcessEnv)).toEqual({ N: 2 ** 12, r: 8, p: 1 });
+    // The test server is a production build started by vitest (VITEST=true is inherited).
+    expect(scryptParams({ GLOWBENCH_SCRYPT_COST: "12", NODE_ENV: "production", VITEST: "true" } as NodeJS.ProcessEnv).N).toBe(2 ** 12);
+    expect(() => scryptParams({ GLOWBENCH_SCRYPT_COST: "12", NODE_ENV: "production" } as NodeJS.ProcessEnv)).toThrow(/refused in production/);
+    expect(() => scryptParams({ GLOWBENCH_SCRYPT_COST: "4", NODE_ENV: "test" } as NodeJS.ProcessEnv)).toThrow(/10 to 17/);
   });
 });
