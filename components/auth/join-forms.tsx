@@ -8,6 +8,8 @@ import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { sendJson } from "@/lib/client/fetch-json";
+import { NEW_PASSWORD_HINT } from "@/lib/auth/schemas";
+import { PasswordStrength } from "./password-strength";
 import { joinExistingSchema, joinNewSchema, type JoinExistingForm, type JoinNewForm } from "@/lib/workshop/schemas";
 
 function useJoin(token: string) {
@@ -38,7 +40,7 @@ function FormError({ message }: { message: string | null }) {
 /** No account yet for the invited address: choose a name and password. */
 export function JoinNewForm({ token, email }: { token: string; email: string }) {
   const { join, formError } = useJoin(token);
-  const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<JoinNewForm>({ resolver: zodResolver(joinNewSchema), defaultValues: { name: "", password: "" } });
+  const { register, handleSubmit, setError, watch, formState: { errors, isSubmitting } } = useForm<JoinNewForm>({ resolver: zodResolver(joinNewSchema), defaultValues: { name: "", password: "" } });
   const onSubmit = handleSubmit(async (values) => {
     const fields = await join({ mode: "sign-up", ...values });
     if (fields?.name) setError("name", { message: fields.name });
@@ -48,7 +50,8 @@ export function JoinNewForm({ token, email }: { token: string; email: string }) 
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
       <Field id="join-email" label="E-mail" value={email} readOnly disabled hint="The address the invitation was sent to." />
       <Field id="name" label="Your name" autoComplete="name" error={errors.name?.message} {...register("name")} />
-      <Field id="password" label="Choose a password" type="password" autoComplete="new-password" hint="At least 8 characters. A long phrase is easier to remember than a short jumble." error={errors.password?.message} {...register("password")} />
+      <Field id="password" label="Choose a password" type="password" autoComplete="new-password" hint={NEW_PASSWORD_HINT} error={errors.password?.message} {...register("password")} />
+      <PasswordStrength id="password-strength" password={watch("password")} context={[email, watch("name")]} />
       <FormError message={formError} />
       <Button type="submit" disabled={isSubmitting}>
         {isSubmitting ? "Joining…" : "Create my account and join"}

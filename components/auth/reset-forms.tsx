@@ -8,6 +8,8 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { newPasswordFormSchema, resetRequestSchema, type NewPasswordForm, type ResetRequestForm } from "@/lib/auth/reset-schemas";
 import { sendJson } from "@/lib/client/fetch-json";
+import { NEW_PASSWORD_HINT } from "@/lib/auth/schemas";
+import { PasswordStrength } from "./password-strength";
 
 export function ResetRequestForm() {
   const [sent, setSent] = useState<string | null>(null);
@@ -48,7 +50,7 @@ export function ResetRequestForm() {
 export function NewPasswordFormView({ token }: { token: string }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<NewPasswordForm>({ resolver: zodResolver(newPasswordFormSchema), defaultValues: { password: "", confirm: "" } });
+  const { register, handleSubmit, setError, watch, formState: { errors, isSubmitting } } = useForm<NewPasswordForm>({ resolver: zodResolver(newPasswordFormSchema), defaultValues: { password: "", confirm: "" } });
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     const res = await sendJson("/api/auth/password-reset/complete", { token, password: values.password });
@@ -62,7 +64,8 @@ export function NewPasswordFormView({ token }: { token: string }) {
   });
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
-      <Field id="password" label="New password" type="password" autoComplete="new-password" hint="At least 8 characters. A long phrase is easier to remember than a short jumble." error={errors.password?.message} {...register("password")} />
+      <Field id="password" label="New password" type="password" autoComplete="new-password" hint={NEW_PASSWORD_HINT} error={errors.password?.message} {...register("password")} />
+      <PasswordStrength id="password-strength" password={watch("password")} />
       <Field id="confirm" label="The same again" type="password" autoComplete="new-password" error={errors.confirm?.message} {...register("confirm")} />
       <p role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
         {formError ?? ""}

@@ -6,7 +6,8 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import { signUpSchema, type SignUpInput } from "@/lib/auth/schemas";
+import { NEW_PASSWORD_HINT, signUpSchema, type SignUpInput } from "@/lib/auth/schemas";
+import { PasswordStrength } from "./password-strength";
 import { sendJson } from "@/lib/client/fetch-json";
 
 const NAMES = ["workshopName", "name", "email", "password"] as const;
@@ -18,6 +19,7 @@ export function SignUpForm() {
     register,
     handleSubmit,
     setError,
+    watch,
     formState: { errors, isSubmitting },
   } = useForm<SignUpInput>({
     resolver: zodResolver(signUpSchema),
@@ -46,10 +48,11 @@ export function SignUpForm() {
         label="Password"
         type="password"
         autoComplete="new-password"
-        hint="At least 8 characters. A long phrase is easier to remember than a short jumble."
+        hint={NEW_PASSWORD_HINT}
         error={errors.password?.message}
         {...register("password")}
       />
+      <PasswordStrength id="password-strength" password={watch("password")} context={[watch("email"), watch("name"), watch("workshopName")]} />
       <p role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
         {formError ?? ""}
       </p>

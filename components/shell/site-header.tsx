@@ -24,6 +24,9 @@ export async function SiteHeader() {
                 <span className="block text-note text-muted">{member.workshopName}</span>
               </span>
               <RoleBadge role={member.role} />
+              <Link href="/account/password" className="rounded-chip px-3 py-2 text-note font-bold text-ink hover:bg-sunk">
+                Password
+              </Link>
               <SignOutButton />
             </>
           ) : (

@@ -25,6 +25,16 @@ function describe(e: AuditEventRow): string {
       return `${d.name} asked for a password reset link.`;
     case "password.reset":
       return `${d.name} set a new password; their sessions were ended.`;
+    case "password.changed":
+      return `${d.name} changed their password; their other sessions were ended.`;
+    case "session.signed-in":
+      return `${d.name} signed in.`;
+    case "session.signed-out":
+      return `${d.name} signed out.`;
+    case "session.signed-out-everywhere":
+      return `${d.name} signed out everywhere.`;
+    case "sign-in.delayed":
+      return `Sign-ins to ${d.name}'s account were slowed after ${d.failures} wrong passwords in a row.`;
     default:
       return `${who}: ${e.action}`;
   }

@@ -14,7 +14,12 @@ export type AuditAction =
   | "member.role-changed"
   | "member.removed"
   | "password.reset-requested"
-  | "password.reset";
+  | "password.reset"
+  | "password.changed"
+  | "session.signed-in"
+  | "session.signed-out"
+  | "session.signed-out-everywhere"
+  | "sign-in.delayed";
 
 type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 

@@ -54,12 +54,3 @@ export function loadMember(userId: number, preferredWorkshopId?: number): (Membe
     .get();
   return row ?? null;
 }
-
-/** Ends every session of the user, everywhere: sessions carry the version they began with. */
-export function bumpSessionVersion(userId: number): void {
-  getDb()
-    .update(users)
-    .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
-    .where(eq(users.id, userId))
-    .run();
-}

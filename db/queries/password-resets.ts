@@ -4,6 +4,7 @@ import { GoneError, NotFoundError } from "@/lib/errors";
 import { getDb, type Db } from "../client";
 import { memberships, passwordResets, users } from "../schema";
 import { recordAudit, type AuditAction } from "./audit";
+import { deleteUserSessions } from "./sessions";
 
 /**
  * Password reset by e-mail. These run before anyone is signed in, so they take an address or a
@@ -63,6 +64,7 @@ export function completePasswordReset(token: string, passwordHash: string) {
         .where(eq(users.id, row.userId))
         .returning({ id: users.id, name: users.name, email: users.email })
         .get();
+      deleteUserSessions(user.id, undefined, tx);
       auditEveryWorkshop(tx, user.id, "password.reset", { name: user.name, email: user.email });
       return { userId: user.id };
     },

@@ -26,10 +26,12 @@ describe("sign-in and sessions through the real server", () => {
     expect(me).toMatchObject({ role, workshop: { name: workshop }, user: { email } });
   });
 
-  test("the session cookie is httpOnly, SameSite=Lax, Secure in production and holds no readable data", async () => {
+  test("the session cookie is __Host- prefixed, httpOnly, SameSite=Lax, Secure in production and holds no readable data", async () => {
     const client = new Client();
     const res = await client.post("/api/auth/sign-in", { email: "owner@demo.test", password: DEMO_PASSWORD });
-    const cookie = res.headers.getSetCookie().find((c) => c.startsWith("glowbench_session="))!;
+    const cookie = res.headers.getSetCookie().find((c) => c.startsWith("__Host-glowbench_session="))!;
+    expect(cookie).toMatch(/Path=\/(;|$)/i);
+    expect(cookie).not.toMatch(/Domain=/i);
     expect(cookie).toMatch(/HttpOnly/i);
     expect(cookie).toMatch(/SameSite=Lax/i);
     expect(cookie).toMatch(/Secure/i);

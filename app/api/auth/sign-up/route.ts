@@ -1,22 +1,26 @@
 import { NextResponse } from "next/server";
 import { createWorkshopWithOwner, emailTaken } from "@/db/queries/auth";
-import { hashPassword } from "@/lib/auth/password";
 import { signUpSchema } from "@/lib/auth/schemas";
+import { assertStrongPassword } from "@/lib/auth/strength";
 import { startSession } from "@/server/auth/session";
+import { clientId, gatedHash, takeAttempt, throttles } from "@/server/auth/throttles";
 import { HttpError } from "@/server/http/errors";
 import { route } from "@/server/http/route";
 
-export const POST = route({ auth: "public", body: signUpSchema }, async ({ body: input }) => {
-  if (emailTaken(input.email)) {
-    throw new HttpError(409, "That e-mail already has an account.", { email: "That e-mail already has an account; sign in instead." });
-  }
-  const passwordHash = await hashPassword(input.password);
+const TAKEN = "That e-mail already has an account.";
+
+export const POST = route({ auth: "public", body: signUpSchema }, async ({ request, body: input }) => {
+  // Every sign-up costs a hash and a workshop: a few per client per hour, counted before either.
+  takeAttempt(throttles.signUps, clientId(request), "sign-ups from here");
+  if (emailTaken(input.email)) throw new HttpError(409, TAKEN, { email: "That e-mail already has an account; sign in instead." });
+  assertStrongPassword(input.password, [input.email, input.name, input.workshopName]);
+  const passwordHash = await gatedHash(input.password);
   let created;
   try {
     created = createWorkshopWithOwner({ ...input, passwordHash });
   } catch (err) {
     // Two sign-ups racing for one address: the unique index decides.
-    if (String(err).includes("UNIQUE")) throw new HttpError(409, "That e-mail already has an account.", { email: "That e-mail already has an account; sign in instead." });
+    if (String(err).includes("UNIQUE")) throw new HttpError(409, TAKEN, { email: "That e-mail already has an account; sign in instead." });
     throw err;
   }
   await startSession(created.userId, created.sessionVersion);
