@@ -4,4 +4,5 @@ export async function register() {
   const { startLocalPaymentsIfWanted } = await import("./lib/payments/dev-start");
   await startLocalPaymentsIfWanted();
   await (await import("./server/mail/local-sink")).startLocalMailSinkIfWanted();
+  (await import("./server/startup")).startServerTasks();
 }

@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
-import { SESSION_COOKIE } from "@/server/auth/session-cookie";
+import { sessionCookieName } from "@/server/auth/session-cookie";
+import { addHsts } from "@/server/http/hsts";
 
 /**
  * Runs before pages: sets a nonce-based Content-Security-Policy (as the Next.js CSP guide shows) and
@@ -7,15 +8,15 @@ import { SESSION_COOKIE } from "@/server/auth/session-cookie";
  * security check: every page, action and route handler checks the session and role itself.
  */
 
-const MEMBER_AREAS = ["/jobs", "/workshop", "/invoices"];
+const MEMBER_AREAS = ["/jobs", "/workshop", "/invoices", "/account"];
 
 export function proxy(request: NextRequest) {
   const { pathname, search } = request.nextUrl;
-  if (MEMBER_AREAS.some((p) => pathname === p || pathname.startsWith(`${p}/`)) && !request.cookies.has(SESSION_COOKIE)) {
+  if (MEMBER_AREAS.some((p) => pathname === p || pathname.startsWith(`${p}/`)) && !request.cookies.has(sessionCookieName())) {
     const url = request.nextUrl.clone();
     url.pathname = "/sign-in";
     url.search = `?next=${encodeURIComponent(pathname + search)}`;
-    return NextResponse.redirect(url);
+    return addHsts(NextResponse.redirect(url), request.headers);
   }
 
   const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
@@ -38,17 +39,11 @@ export function proxy(request: NextRequest) {
   requestHeaders.set("Content-Security-Policy", csp);
   const response = NextResponse.next({ request: { headers: requestHeaders } });
   response.headers.set("Content-Security-Policy", csp);
-  return response;
+  return addHsts(response, request.headers);
 }
 
+// Prefetches too: a page a browser prefetched (Purpose: prefetch) is shown later as a navigation, and
+// must carry its policy like any other. API routes set their own headers in the route wrapper.
 export const config = {
-  matcher: [
-    {
-      source: "/((?!api|_next/static|_next/image|favicon.ico|fonts/).*)",
-      missing: [
-        { type: "header", key: "next-router-prefetch" },
-        { type: "header", key: "purpose", value: "prefetch" },
-      ],
-    },
-  ],
+  matcher: ["/((?!api|_next/static|_next/image|favicon.ico|fonts/).*)"],
 };

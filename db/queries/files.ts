@@ -1,4 +1,4 @@
-import { and, desc, eq } from "drizzle-orm";
+import { and, desc, eq, inArray } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
 import { notFound } from "@/lib/errors";
 import { getDb } from "../client";
@@ -81,4 +81,17 @@ export function deleteFileRecord(member: Member, jobId: number, fileId: number):
     touchJob(member, jobId, tx);
     return gone.storedName;
   });
+}
+
+/**
+ * Of these stored names, the ones a file row still refers to, in any workshop. Only for the uploads
+ * sweep (server/files/sweep.ts), a maintenance task with no member behind it; it returns names, nothing else.
+ */
+export function knownStoredNames(names: string[]): Set<string> {
+  const known = new Set<string>();
+  for (let i = 0; i < names.length; i += 500) {
+    const rows = getDb().select({ storedName: files.storedName }).from(files).where(inArray(files.storedName, names.slice(i, i + 500))).all();
+    for (const r of rows) known.add(r.storedName);
+  }
+  return known;
 }

@@ -14,6 +14,13 @@ import { TooLargeError, UnsupportedTypeError, ValidationError } from "@/lib/erro
 
 export const MAX_UPLOAD_BYTES = 20 * 1024 * 1024;
 
+/**
+ * Largest image we decode: 50 megapixels (a phone's full-resolution photo is 12–50). A few kilobytes of
+ * PNG or WebP can declare 30 000 × 30 000 pixels and need gigabytes to decode; sharp refuses past this
+ * (`limitInputPixels`), and we check the declared size first to answer with a plain message.
+ */
+export const MAX_IMAGE_PIXELS = 50_000_000;
+
 /** Sniffed MIME type → stored extension. PDF is for schematics; images may be either. */
 export const ALLOWED_TYPES: Record<string, string> = {
   "image/jpeg": "jpg",
@@ -59,9 +66,20 @@ export async function prepareUpload(file: File): Promise<PreparedUpload> {
   }
   let thumbnail: Buffer | null = null;
   if (type.startsWith("image/")) {
+    const tooBig = () =>
+      new TooLargeError(`Images may be up to ${MAX_IMAGE_PIXELS / 1e6} megapixels.`, { file: "This image has too many pixels; export a smaller copy (for example 4000 × 3000)." });
+    let pixels = 0;
     try {
-      thumbnail = await sharp(bytes).rotate().resize(480, 480, { fit: "inside", withoutEnlargement: true }).webp({ quality: 78 }).toBuffer();
+      const { width = 0, height = 0 } = await sharp(bytes, { limitInputPixels: false }).metadata(); // reads the header only
+      pixels = width * height;
     } catch {
+      pixels = 0; // unreadable header: the decode below says so
+    }
+    if (pixels > MAX_IMAGE_PIXELS) throw tooBig();
+    try {
+      thumbnail = await sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS }).rotate().resize(480, 480, { fit: "inside", withoutEnlargement: true }).webp({ quality: 78 }).toBuffer();
+    } catch (err) {
+      if (/pixel limit/i.test(String(err))) throw tooBig();
       throw new UnsupportedTypeError("That image could not be read; it may be damaged.", { file: "The image could not be opened; save it again and retry." });
     }
   }

@@ -6,7 +6,7 @@ import { HttpError } from "./errors";
 export const MAX_JSON_BYTES = 64 * 1024;
 
 /** The origin (scheme, host and port) this request was addressed to, as the browser saw it. */
-function ownOrigin(request: Request): string | null {
+export function requestOrigin(request: Request): string | null {
   const first = (name: string) => request.headers.get(name)?.split(",")[0].trim() || null;
   const host = first("x-forwarded-host") ?? first("host");
   const scheme = first("x-forwarded-proto") ?? new URL(request.url).protocol.replace(/:$/, "");
@@ -33,7 +33,7 @@ export function sameOrigin(request: Request): boolean {
   }
   const configured = process.env.GLOWBENCH_PUBLIC_URL;
   if (configured && URL.canParse(configured) && new URL(configured).origin === sent) return true;
-  return sent === ownOrigin(request);
+  return sent === requestOrigin(request);
 }
 
 export function assertSameOrigin(request: Request): void {

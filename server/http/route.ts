@@ -7,6 +7,7 @@ import { fieldErrors } from "@/lib/field-errors";
 import { getMember } from "@/server/auth/member";
 import { HttpError, errorResponse } from "./errors";
 import { MAX_JSON_BYTES, assertContentType, assertSameOrigin, readBounded } from "./body";
+import { addHsts } from "./hsts";
 import { idParam } from "./ids";
 
 /**
@@ -84,9 +85,9 @@ export function route<
       const query = options.query ? parseQuery(request, options.query) : undefined;
       const body = options.body === undefined ? undefined : await readBody(request, options.body, options.limit);
       const call = { request, member, ids, params, query, body } as unknown as RouteCall<A, B, Q, I, P>;
-      return noStore(await handler(call), personal);
+      return addHsts(noStore(await handler(call), personal), request.headers);
     } catch (err) {
-      return noStore(errorResponse(err), personal);
+      return addHsts(noStore(errorResponse(err), personal), request.headers);
     }
   };
 }

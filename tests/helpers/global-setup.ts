@@ -92,6 +92,11 @@ export default async function setup(project: TestProject) {
     STRIPE_API_BASE: payments.url,
     SMTP_URL: mailSink.url,
     GLOWBENCH_MAIL_DIR: mailDir,
+    // Links in e-mails: a production server refuses to make them without it. The address the tests use.
+    GLOWBENCH_PUBLIC_URL: `http://localhost:${port}`,
+    // Test-only: scrypt at N = 2^12 instead of 2^17 for the seed and every sign-up (lib/auth/password.ts
+    // honours it only under the test runner); hashes made by tests themselves keep the full cost.
+    GLOWBENCH_SCRYPT_COST: "12",
   };
   // Seed before the server opens the file, through the same code as `npm run db:seed`.
   const seed = spawn(process.execPath, [path.join(root, "node_modules/tsx/dist/cli.mjs"), "db/seed.ts"], { env, stdio: "inherit" });

@@ -10,8 +10,10 @@ import { invitationSchema } from "@/lib/workshop/schemas";
 export const GET = route({ role: "manageMembers" }, ({ member }) => NextResponse.json({ invitations: listInvitations(member) }));
 
 export const POST = route({ role: "manageMembers", body: invitationSchema }, async ({ request, member, body: input }) => {
+  // The link's address first: a server that cannot make one refuses before an invitation exists.
+  const base = appUrl(request);
   const invitation = createInvitation(member, input);
-  const link = `${appUrl(request)}/invite/${invitation.token}`;
+  const link = `${base}/invite/${invitation.token}`;
   try {
     await sendMail({ to: invitation.email, ...invitationMail({ workshopName: member.workshopName, inviterName: member.name, role: invitation.role, link, expiresAt: invitation.expiresAt }), workshopId: member.workshopId });
   } catch (err) {

@@ -8,6 +8,7 @@ import { route } from "@/server/http/route";
 
 /** E-mails the customer a single-use approval link. The token is only ever in that e-mail. */
 export const POST = route({ role: "prepareEstimates", ids: { id: "That job" }, body: z.object({}) }, async ({ request, member, ids }) => {
+  const base = publicOrigin(request); // before the link is issued: a server that cannot address it refuses first
   const issued = issueApprovalLink(member, ids.id);
   try {
     await sendApprovalLink({
@@ -17,7 +18,7 @@ export const POST = route({ role: "prepareEstimates", ids: { id: "That job" }, b
       workshopName: issued.workshopName,
       jobTitle: issued.job.title,
       total: issued.total,
-      link: `${publicOrigin(request)}/estimate/${issued.token}`,
+      link: `${base}/estimate/${issued.token}`,
       expiresAt: issued.expiresAt,
     });
   } catch (err) {
