@@ -1,0 +1,58 @@
+"use client";
+
+import { zodResolver } from "@hookform/resolvers/zod";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { useForm, type DefaultValues, type FieldValues, type Path, type Resolver } from "react-hook-form";
+import type { z } from "zod";
+import { sendJson } from "@/lib/client/fetch-json";
+
+/**
+ * The forms of the bench record (Tubes, Power-ups, Faults): react-hook-form with the contract's zod
+ * schema through zodResolver, the parsed values sent to the route, the server's field messages put back
+ * beside their fields, and the page refreshed. `prepare` turns what the form holds into what the schema
+ * reads (a blank tester reading into "no test"), on the client and before sending.
+ */
+export function useRecordForm<F extends FieldValues, S extends z.ZodType>(
+  schema: S,
+  options: {
+    url: string;
+    method?: "POST" | "PATCH";
+    defaults: F;
+    prepare?: (values: F) => unknown;
+    /** After a good answer; by default the form is cleared. */
+    onDone?: (data: unknown, values: F) => void;
+  },
+) {
+  const router = useRouter();
+  const [formError, setFormError] = useState<string | null>(null);
+  const base = zodResolver(schema as never) as unknown as Resolver<F>;
+  const resolver: Resolver<F> = async (values, context, opts) => {
+    const result = await base((options.prepare ? options.prepare(values) : values) as F, context, opts);
+    // Keep what the person typed in the form: only the errors are taken from the check.
+    return Object.keys(result.errors).length ? result : { values, errors: {} };
+  };
+  const form = useForm<F>({ resolver, defaultValues: options.defaults as DefaultValues<F> });
+  const onSubmit = form.handleSubmit(async (values) => {
+    setFormError(null);
+    const body = options.prepare ? options.prepare(values) : values;
+    const res = await sendJson(options.url, body, options.method ?? "POST");
+    if (!res.ok) {
+      for (const [name, message] of Object.entries(res.fields)) form.setError(name as Path<F>, { message });
+      setFormError(res.message);
+      return;
+    }
+    if (options.onDone) options.onDone(res.data, values);
+    else form.reset(options.defaults);
+    router.refresh();
+  });
+  return { form, onSubmit, formError, setFormError };
+}
+
+/** The message of a field, nested names included ("test.reading"). */
+export function fieldError(errors: Record<string, unknown>, name: string): string | undefined {
+  let at: unknown = errors;
+  for (const part of name.split(".")) at = (at as Record<string, unknown> | undefined)?.[part];
+  const message = (at as { message?: unknown } | undefined)?.message;
+  return typeof message === "string" ? message : undefined;
+}
