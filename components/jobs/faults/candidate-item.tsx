@@ -1,0 +1,115 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { Button } from "@/components/ui/button";
+import type { FaultCandidate } from "@/db/queries/faults";
+import { SelectField } from "@/components/ui/select-field";
+import { TextareaField } from "@/components/ui/textarea-field";
+import { formatQuantity } from "@/lib/calc/format";
+import { sendJson } from "@/lib/client/fetch-json";
+import { candidateUpdateSchema } from "@/lib/jobs/fault-schemas";
+import { FAULT_CANDIDATE_STATUSES, type FaultCandidateStatus } from "@/lib/vocabulary";
+import { fieldError, useRecordForm } from "../record-form";
+import { STATUS_LABEL, STATUS_TONE } from "./fault-state-badge";
+
+type CandidateView = Pick<FaultCandidate, "id" | "position" | "description" | "status" | "evidence" | "readingId" | "reading">;
+
+export interface ReadingChoice {
+  id: number;
+  label: string;
+}
+
+/** The button words: what pressing it records. */
+const ACTION: Record<FaultCandidateStatus, string> = { open: "Still to test", "ruled-out": "Ruled out", cause: "The cause" };
+
+export function readingText(r: NonNullable<CandidateView["reading"]>): string {
+  return `${r.designator}: ${r.measured === null ? "open" : formatQuantity(r.measured, r.unit)}`;
+}
+
+function EvidenceForm({ url, candidate, readings, onClose }: { url: string; candidate: CandidateView; readings: readonly ReadingChoice[]; onClose: () => void }) {
+  const defaults = { evidence: candidate.evidence ?? "", readingId: candidate.readingId ? String(candidate.readingId) : "" };
+  const { form, onSubmit, formError } = useRecordForm<typeof defaults, typeof candidateUpdateSchema>(candidateUpdateSchema, { url, method: "PATCH", defaults, onDone: onClose });
+  const { errors, isSubmitting } = form.formState;
+  const err = (n: string) => fieldError(errors as Record<string, unknown>, n);
+  const id = (n: string) => `cand-${candidate.id}-${n}`;
+  return (
+    <form onSubmit={onSubmit} noValidate aria-label={`Evidence for ${candidate.description}`} className="mt-2 grid gap-x-3 sm:grid-cols-2">
+      <TextareaField id={id("evidence")} label="Evidence" rows={2} placeholder="Substituted a known-good tube: no change" error={err("evidence")} {...form.register("evidence")} />
+      <SelectField
+        id={id("reading")}
+        label="Or a reading"
+        hint={readings.length ? "From this job's Readings tab" : "No readings on this job yet"}
+        options={[{ value: "", label: "None" }, ...readings.map((r) => ({ value: String(r.id), label: r.label }))]}
+        error={err("readingId")}
+        {...form.register("readingId")}
+      />
+      <div className="flex flex-wrap items-center gap-3 sm:col-span-2">
+        <Button type="submit" disabled={isSubmitting}>Save evidence</Button>
+        <Button type="button" variant="secondary" onClick={onClose}>Cancel</Button>
+        <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
+      </div>
+    </form>
+  );
+}
+
+/** One suspect: its place in the test order, its status as three buttons, and the evidence for it. */
+export function CandidateItem({ jobId, faultId, candidate, readings, next }: { jobId: number; faultId: number; candidate: CandidateView; readings: readonly ReadingChoice[]; next: boolean }) {
+  const router = useRouter();
+  const [busy, setBusy] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+  const [editing, setEditing] = useState(false);
+  const url = `/api/jobs/${jobId}/faults/${faultId}/candidates/${candidate.id}`;
+  async function mark(status: FaultCandidateStatus) {
+    setBusy(true);
+    setError(null);
+    const res = await sendJson(url, { status }, "PATCH");
+    setBusy(false);
+    if (!res.ok) return setError(res.fields.status ?? res.message);
+    router.refresh();
+  }
+  const c = candidate;
+  return (
+    <li className={`rounded-card border p-3 ${STATUS_TONE[c.status]}`} data-testid={`candidate-${c.position}`} data-status={c.status}>
+      <div className="flex flex-wrap items-baseline justify-between gap-x-3 gap-y-1">
+        <p className={`min-w-0 ${c.status === "ruled-out" ? "line-through decoration-muted/60" : ""}`}>
+          <span className="mr-2 font-mono font-bold">{c.position}.</span>
+          <span className="font-bold">{c.description}</span>
+        </p>
+        <p className="text-note font-bold">
+          {next ? <span className="mr-2 rounded-full bg-glow px-2 py-0.5 text-glow-ink">Test next</span> : null}
+          <span data-testid="candidate-status">{STATUS_LABEL[c.status]}</span>
+        </p>
+      </div>
+      {c.evidence || c.reading ? (
+        <p className="mt-1 text-note">
+          <span className="text-muted">Evidence: </span>
+          {c.evidence}
+          {c.evidence && c.reading ? " · " : ""}
+          {c.reading ? <span className="font-mono">{readingText(c.reading)}</span> : null}
+        </p>
+      ) : null}
+      <div role="group" aria-label={`Status of ${c.description}`} className="mt-2 flex flex-wrap gap-2">
+        {FAULT_CANDIDATE_STATUSES.map((s) => (
+          <Button
+            key={s}
+            type="button"
+            variant={c.status === s ? "primary" : "secondary"}
+            aria-pressed={c.status === s}
+            disabled={busy}
+            onClick={() => (c.status === s ? undefined : mark(s))}
+          >
+            {ACTION[s]}
+          </Button>
+        ))}
+        {!editing ? (
+          <Button type="button" variant="quiet" onClick={() => setEditing(true)} aria-label={`Evidence for ${c.description}`}>
+            {c.evidence || c.reading ? "Edit evidence" : "Add evidence"}
+          </Button>
+        ) : null}
+      </div>
+      {error ? <p role="alert" className="mt-1 text-note font-bold text-flag">{error}</p> : null}
+      {editing ? <EvidenceForm url={url} candidate={c} readings={readings} onClose={() => setEditing(false)} /> : null}
+    </li>
+  );
+}
