@@ -3,11 +3,16 @@ import { drizzle, type BetterSQLite3Database } from "drizzle-orm/better-sqlite3"
 import { migrate } from "drizzle-orm/better-sqlite3/migrator";
 import fs from "node:fs";
 import path from "node:path";
+import { processSingleton } from "../lib/singleton";
 import * as schema from "./schema";
 
 /** The one database client of the process: opened once, migrated once. */
 
 export type Db = BetterSQLite3Database<typeof schema>;
+/** What `getDb().transaction()` hands its callback. */
+export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
+/** Query helpers take either, so they run alone or inside a caller's transaction. */
+export type DbOrTx = Db | Tx;
 
 export function databasePath(): string {
   return path.resolve(/*turbopackIgnore: true*/ process.env.GLOWBENCH_DB ?? path.join("data", "glowbench.db"));
@@ -27,10 +32,7 @@ export function openDatabase(file = databasePath()): { sqlite: Database.Database
   return { sqlite, db };
 }
 
-const globalForDb = globalThis as unknown as { __glowbenchDb?: { sqlite: Database.Database; db: Db } };
-
 /** Lazily opened so that `next build` never touches the database file. */
 export function getDb(): Db {
-  globalForDb.__glowbenchDb ??= openDatabase();
-  return globalForDb.__glowbenchDb.db;
+  return processSingleton("Db", () => openDatabase()).db;
 }

@@ -1,16 +1,24 @@
 import { sql } from "drizzle-orm";
 import { index, integer, real, sqliteTable, text, uniqueIndex } from "drizzle-orm/sqlite-core";
 import {
+  DRILL_VERDICTS,
   EQUIPMENT_KINDS,
+  ESTIMATE_STATUSES,
   FAULT_CANDIDATE_STATUSES,
+  FILE_KINDS,
+  INVOICE_STATUSES,
   JOB_STATUSES,
+  LINE_KINDS,
+  LOG_KINDS,
   PART_KINDS,
   PART_STATES,
   POWER_UP_LIMITERS,
   POWER_UP_OUTCOMES,
+  READING_KINDS,
   ROLES,
   TUBE_VERDICTS,
 } from "../lib/vocabulary";
+import type { DrillProblem, DrillSolution } from "../lib/drills/types";
 
 /** Every table of Glowbench. Each row belongs to one workshop, directly or through its job. */
 
@@ -203,7 +211,7 @@ export const readings = sqliteTable(
     jobId: jobRef(),
     workshopId: workshopRef(),
     /** "resistor" survey rows (Ω) or "voltage" test-point rows (V, nominal = expected). */
-    kind: text("kind", { enum: ["resistor", "voltage"] }).notNull().default("resistor"),
+    kind: text("kind", { enum: READING_KINDS }).notNull().default("resistor"),
     designator: text("designator").notNull(),
     /**
      * Voltage rows: the part(s) this reading was taken across, comma-separated ("C5a, C5b"), so a
@@ -245,7 +253,7 @@ export const files = sqliteTable(
     originalName: text("original_name").notNull(),
     type: text("type").notNull(),
     size: integer("size").notNull(),
-    kind: text("kind", { enum: ["photo", "schematic"] }).notNull().default("photo"),
+    kind: text("kind", { enum: FILE_KINDS }).notNull().default("photo"),
     hasThumbnail: integer("has_thumbnail", { mode: "boolean" }).notNull().default(false),
     uploadedBy: integer("uploaded_by").references(() => users.id, { onDelete: "set null" }),
     createdAt: createdAt(),
@@ -260,8 +268,7 @@ export const logEntries = sqliteTable(
     jobId: jobRef(),
     workshopId: workshopRef(),
     authorId: integer("author_id").references(() => users.id, { onDelete: "set null" }),
-    /** "note", "power-up", "status", "estimate", "invoice", "mail". */
-    kind: text("kind").notNull().default("note"),
+    kind: text("kind", { enum: LOG_KINDS }).notNull().default("note"),
     text: text("text").notNull(),
     data: text("data", { mode: "json" }).$type<Record<string, unknown>>(),
     createdAt: createdAt(),
@@ -380,7 +387,7 @@ export const estimates = sqliteTable(
     id: id(),
     jobId: jobRef(),
     workshopId: workshopRef(),
-    status: text("status", { enum: ["draft", "sent", "approved", "declined"] }).notNull().default("draft"),
+    status: text("status", { enum: ESTIMATE_STATUSES }).notNull().default("draft"),
     currency: text("currency").notNull(),
     taxRateBp: integer("tax_rate_bp").notNull().default(0),
     approvalTokenHash: text("approval_token_hash"),
@@ -399,7 +406,7 @@ export const estimateLines = sqliteTable(
     estimateId: integer("estimate_id")
       .notNull()
       .references(() => estimates.id, { onDelete: "cascade" }),
-    kind: text("kind", { enum: ["labour", "part", "fee"] }).notNull(),
+    kind: text("kind", { enum: LINE_KINDS }).notNull(),
     description: text("description").notNull(),
     /** Quantity in thousandths (hours for labour, pieces for parts). */
     quantityMilli: integer("quantity_milli").notNull(),
@@ -418,7 +425,7 @@ export const invoices = sqliteTable(
     workshopId: workshopRef(),
     estimateId: integer("estimate_id").references(() => estimates.id, { onDelete: "set null" }),
     number: integer("number").notNull(),
-    status: text("status", { enum: ["issued", "paid", "void"] }).notNull().default("issued"),
+    status: text("status", { enum: INVOICE_STATUSES }).notNull().default("issued"),
     currency: text("currency").notNull(),
     taxRateBp: integer("tax_rate_bp").notNull(),
     subtotalMinor: integer("subtotal_minor").notNull(),
@@ -438,7 +445,7 @@ export const invoiceLines = sqliteTable(
     invoiceId: integer("invoice_id")
       .notNull()
       .references(() => invoices.id, { onDelete: "cascade" }),
-    kind: text("kind", { enum: ["labour", "part", "fee"] }).notNull(),
+    kind: text("kind", { enum: LINE_KINDS }).notNull(),
     description: text("description").notNull(),
     quantityMilli: integer("quantity_milli").notNull(),
     unitPriceMinor: integer("unit_price_minor").notNull(),
@@ -497,13 +504,13 @@ export const drills = sqliteTable(
     kind: text("kind").notNull(),
     slug: text("slug").notNull(),
     seed: integer("seed").notNull(),
-    problem: text("problem", { mode: "json" }).$type<Record<string, unknown>>().notNull(),
-    solution: text("solution", { mode: "json" }).$type<Record<string, unknown>>().notNull(),
+    problem: text("problem", { mode: "json" }).$type<DrillProblem>().notNull(),
+    solution: text("solution", { mode: "json" }).$type<DrillSolution>().notNull(),
     assignmentId: integer("assignment_id").references(() => drillAssignments.id, { onDelete: "set null" }),
     sourceCalculationId: integer("source_calculation_id").references(() => calculations.id, { onDelete: "set null" }),
     /** The answer as sent (a JSON number or text), kept so the judgement can be shown again. */
     answer: text("answer", { mode: "json" }).$type<number | string>(),
-    verdict: text("verdict", { enum: ["correct", "wrong-number", "wrong-unit"] }),
+    verdict: text("verdict", { enum: DRILL_VERDICTS }),
     correct: integer("correct", { mode: "boolean" }),
     answeredAt: integer("answered_at", { mode: "timestamp_ms" }),
     createdAt: createdAt(),

@@ -129,3 +129,44 @@ export const FAULT_STATE_LABELS: Record<FaultState, string> = {
   found: "Cause found",
   fixed: "Fixed",
 };
+
+/** A reading is a resistor-survey row (Ω) or a voltage test point (V, nominal = expected). */
+export const READING_KINDS = ["resistor", "voltage"] as const;
+export type ReadingKind = (typeof READING_KINDS)[number];
+
+/** What an uploaded file is for: a PDF is always a schematic. */
+export const FILE_KINDS = ["photo", "schematic"] as const;
+export type FileKind = (typeof FILE_KINDS)[number];
+
+/** A line of an estimate or an invoice. */
+export const LINE_KINDS = ["labour", "part", "fee"] as const;
+export type LineKind = (typeof LINE_KINDS)[number];
+export const LINE_KIND_LABELS: Record<LineKind, string> = { labour: "Labour", part: "Part", fee: "Fee" };
+
+/** An estimate is prepared (draft), sent to the customer, and answered once. */
+export const ESTIMATE_STATUSES = ["draft", "sent", "approved", "declined"] as const;
+export type EstimateStatus = (typeof ESTIMATE_STATUSES)[number];
+
+/** An invoice is issued, then paid (only from the payment service's webhook) or voided by the owner. */
+export const INVOICE_STATUSES = ["issued", "paid", "void"] as const;
+export type InvoiceStatus = (typeof INVOICE_STATUSES)[number];
+
+/** What a line of a job's Log tells of: a member's note, the bench record, the workflow, the customer's answer, a payment, a mail. */
+export const LOG_KINDS = ["note", "power-up", "tube", "fault", "part", "status", "estimate", "invoice", "mail"] as const;
+export type LogKind = (typeof LOG_KINDS)[number];
+
+export const LOG_KIND_LABELS: Record<LogKind, string> = {
+  note: "Note",
+  "power-up": "Power-up",
+  tube: "Tube",
+  fault: "Fault",
+  part: "Part",
+  status: "Status",
+  estimate: "Estimate",
+  invoice: "Invoice",
+  mail: "E-mail",
+};
+
+/** How an answered drill was judged, as stored; an unreadable answer is refused, never stored. */
+export const DRILL_VERDICTS = ["correct", "wrong-number", "wrong-unit"] as const;
+export type DrillVerdict = (typeof DRILL_VERDICTS)[number];

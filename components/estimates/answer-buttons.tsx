@@ -2,19 +2,23 @@
 
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
+import type { answerEstimate } from "@/db/queries/estimates";
 import { sendJson } from "@/lib/client/fetch-json";
+import type { AnswerInput } from "@/lib/estimates/schemas";
+
+type Answered = ReturnType<typeof answerEstimate>["status"];
 
 /** Approve or decline, once. The server re-checks the token; this only shows what it said. */
 export function AnswerButtons({ token }: { token: string }) {
   const [note, setNote] = useState("");
   const [busy, setBusy] = useState(false);
-  const [done, setDone] = useState<"approved" | "declined" | null>(null);
+  const [done, setDone] = useState<Answered | null>(null);
   const [error, setError] = useState("");
 
-  async function answer(decision: "approve" | "decline") {
+  async function answer(decision: AnswerInput["decision"]) {
     setBusy(true);
     setError("");
-    const res = await sendJson<{ status: "approved" | "declined" }>("/api/estimates/answer", { token, decision, note: note || undefined });
+    const res = await sendJson<{ status: Answered }>("/api/estimates/answer", { token, decision, note: note || undefined });
     setBusy(false);
     if (res.ok) setDone(res.data.status);
     else setError(res.fields.note ?? res.message);

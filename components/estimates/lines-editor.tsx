@@ -7,7 +7,8 @@ import { useFieldArray, useForm, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { sendJson } from "@/lib/client/fetch-json";
-import { LINE_KIND_LABELS, linesSchema, type LinesInput, type LinesValues } from "@/lib/estimates/schemas";
+import { linesSchema, type LinesInput, type LinesValues } from "@/lib/estimates/schemas";
+import { LINE_KIND_LABELS } from "@/lib/vocabulary";
 import { computeTotals, formatMoney, formatTaxRate, parseMoney, parseQuantityMilli } from "@/lib/money";
 
 /**

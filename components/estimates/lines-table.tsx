@@ -1,4 +1,4 @@
-import { LINE_KIND_LABELS, type LineKind } from "@/lib/estimates/schemas";
+import { LINE_KIND_LABELS, type LineKind } from "@/lib/vocabulary";
 import { formatMoney, formatQuantity, formatTaxRate } from "@/lib/money";
 
 /** The priced lines and totals of an estimate or invoice, read-only; figures in the mono face. */

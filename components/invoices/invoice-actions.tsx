@@ -4,9 +4,10 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button, buttonClass } from "@/components/ui/button";
 import { sendJson } from "@/lib/client/fetch-json";
+import type { InvoiceStatus } from "@/lib/vocabulary";
 
 /** Pay by card (the payment service's checkout page), the PDF, and voiding an unpaid invoice. */
-export function InvoiceActions({ invoiceId, status }: { invoiceId: number; status: "issued" | "paid" | "void" }) {
+export function InvoiceActions({ invoiceId, status }: { invoiceId: number; status: InvoiceStatus }) {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState("");

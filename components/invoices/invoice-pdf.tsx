@@ -1,6 +1,6 @@
 import { Document, Page, StyleSheet, Text, View } from "@react-pdf/renderer";
 import type { getInvoice } from "@/db/queries/invoices";
-import { LINE_KIND_LABELS } from "@/lib/estimates/schemas";
+import { LINE_KIND_LABELS } from "@/lib/vocabulary";
 import { formatMoney, formatQuantity, formatTaxRate } from "@/lib/money";
 import { LIGHT } from "@/lib/theme/palette";
 import { PDF_BODY, PDF_FIGURES } from "@/server/pdf/fonts";

@@ -3,22 +3,13 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import type { Role } from "@/lib/vocabulary";
+import type { InvitationRow } from "@/db/queries/invitations";
 import { sendJson } from "@/lib/client/fetch-json";
 import { ROLE_LABELS } from "./role-labels";
 
-export interface InvitationItem {
-  id: number;
-  email: string;
-  role: Role;
-  state: "pending" | "expired";
-  expiresAt: string;
-  invitedBy: string | null;
-}
+const day = (date: Date) => date.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
 
-const day = (iso: string) => new Date(iso).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
-
-export function InvitationList({ invitations }: { invitations: InvitationItem[] }) {
+export function InvitationList({ invitations }: { invitations: InvitationRow[] }) {
   const router = useRouter();
   const [error, setError] = useState<string | null>(null);
   const [busy, setBusy] = useState<number | null>(null);

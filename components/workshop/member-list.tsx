@@ -4,21 +4,12 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { RoleBadge } from "@/components/ui/card";
 import { Button } from "@/components/ui/button";
-import type { Role } from "@/lib/vocabulary";
+import type { MemberRow } from "@/db/queries/members";
 import { sendJson } from "@/lib/client/fetch-json";
 import { ROLE_OPTIONS } from "./role-labels";
 
-export interface MemberItem {
-  id: number;
-  userId: number;
-  name: string;
-  email: string;
-  role: Role;
-  joinedAt: string;
-}
-
 /** The workshop's people. Owners change roles and remove members here; everyone else reads. */
-export function MemberList({ members, manage, selfUserId }: { members: MemberItem[]; manage: boolean; selfUserId: number }) {
+export function MemberList({ members, manage, selfUserId }: { members: MemberRow[]; manage: boolean; selfUserId: number }) {
   const router = useRouter();
   const [busy, setBusy] = useState<number | null>(null);
   const [confirming, setConfirming] = useState<number | null>(null);

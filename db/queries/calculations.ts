@@ -50,9 +50,8 @@ export function saveCalculation(member: Member, jobId: number, input: Calculatio
   if (!calc) throw new NotFoundError(`There is no calculator called "${input.slug}".`);
   const run = runCalculator(calc, input.inputs);
   if (!run.ok) throw new ValidationError(run.error.message, run.error.fields);
-  // JSON round-trip: what is stored is exactly what a later read gives back.
-  const inputs = JSON.parse(JSON.stringify(run.result.inputs)) as Record<string, unknown>;
-  const outputs = JSON.parse(JSON.stringify(run.result.outputs)) as Record<string, unknown>;
+  // Stored as JSON; the row returned is read back from the database, so it is what a later read gives.
+  const { inputs, outputs } = run.result;
   return getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
     const row = tx

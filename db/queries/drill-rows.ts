@@ -1,12 +1,11 @@
 import { and, eq } from "drizzle-orm";
 import type { Member } from "@/lib/auth/can";
 import { getCalculator } from "@/lib/calc/registry";
-import { drillKindsFor, generateDrill, getDrillKind, newSeed, type Drill, type DrillProblem, type DrillSolution, type Judgement } from "@/lib/drills";
+import { drillKindsFor, generateDrill, getDrillKind, newSeed, type Drill, type Judgement } from "@/lib/drills";
 import { ValidationError, notFound } from "@/lib/errors";
 import type { Role } from "@/lib/vocabulary";
-import { getDb, type Db } from "../client";
+import { getDb, type DbOrTx } from "../client";
 import { calculations, drills, jobs, memberships, users } from "../schema";
-import type { Tx } from "./job-access";
 
 /**
  * Shared by the drills query modules: storing a drill, shaping what the browser may see (never the
@@ -17,7 +16,7 @@ export type DrillRecord = typeof drills.$inferSelect;
 
 /** The problem as the API sends it: no seed (the seed and the kind would let a browser regenerate the answer). */
 export function publicProblem(row: Pick<DrillRecord, "id" | "problem" | "assignmentId" | "sourceCalculationId" | "createdAt" | "answeredAt">) {
-  const p = row.problem as unknown as DrillProblem;
+  const p = row.problem;
   return {
     id: row.id,
     kind: p.kind,
@@ -59,14 +58,7 @@ export function resultView(row: Pick<DrillRecord, "id" | "kind" | "slug">, answe
 }
 export type DrillResult = ReturnType<typeof resultView>;
 
-export function asDrill(row: Pick<DrillRecord, "problem" | "solution">): Drill {
-  return { problem: row.problem as unknown as DrillProblem, solution: row.solution as unknown as DrillSolution };
-}
-
-export function insertDrill(db: Db | Tx, member: Member, userId: number, drill: Drill, origin: { assignmentId?: number; sourceCalculationId?: number } = {}): DrillRecord {
-  // JSON round-trip: what is stored is exactly what a later read gives back.
-  const problem = JSON.parse(JSON.stringify(drill.problem)) as Record<string, unknown>;
-  const solution = JSON.parse(JSON.stringify(drill.solution)) as Record<string, unknown>;
+export function insertDrill(db: DbOrTx, member: Member, userId: number, drill: Drill, origin: { assignmentId?: number; sourceCalculationId?: number } = {}): DrillRecord {
   return db
     .insert(drills)
     .values({
@@ -75,8 +67,8 @@ export function insertDrill(db: Db | Tx, member: Member, userId: number, drill: 
       kind: drill.problem.kind,
       slug: drill.problem.slug,
       seed: drill.problem.seed,
-      problem,
-      solution,
+      problem: drill.problem,
+      solution: drill.solution,
       assignmentId: origin.assignmentId ?? null,
       sourceCalculationId: origin.sourceCalculationId ?? null,
     })
@@ -91,7 +83,7 @@ export interface WorkshopPerson {
 }
 
 /** A member of the caller's workshop by user id, or null (another workshop's member is never found). */
-export function findWorkshopPerson(member: Member, userId: number, db: Db | Tx = getDb()): WorkshopPerson | null {
+export function findWorkshopPerson(member: Member, userId: number, db: DbOrTx = getDb()): WorkshopPerson | null {
   return (
     db
       .select({ userId: users.id, name: users.name, role: memberships.role })
@@ -103,7 +95,7 @@ export function findWorkshopPerson(member: Member, userId: number, db: Db | Tx =
 }
 
 /** An apprentice of the caller's workshop; anyone else (another role, another workshop) is a 404. */
-export function findApprentice(member: Member, userId: number, db: Db | Tx = getDb()): WorkshopPerson {
+export function findApprentice(member: Member, userId: number, db: DbOrTx = getDb()): WorkshopPerson {
   const person = findWorkshopPerson(member, userId, db);
   if (!person || person.role !== "apprentice") throw notFound("That apprentice");
   return person;
@@ -114,7 +106,7 @@ export function findApprentice(member: Member, userId: number, db: Db | Tx = get
  * cannot be fed a saved set of figures), so this is a fresh problem of the same calculator, preferring a
  * kind that asks for a figure the saved calculation worked out; the prompt says so.
  */
-export function drillFromCalculation(member: Member, calculationId: number, seed = newSeed(), db: Db | Tx = getDb()): Drill {
+export function drillFromCalculation(member: Member, calculationId: number, seed = newSeed(), db: DbOrTx = getDb()): Drill {
   const calc = db
     .select({ slug: calculations.slug, outputs: calculations.outputs, jobTitle: jobs.title })
     .from(calculations)

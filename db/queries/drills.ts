@@ -5,7 +5,7 @@ import type { DrillCreate } from "@/lib/drills/schemas";
 import { ConflictError, ForbiddenError, ValidationError, notFound } from "@/lib/errors";
 import { getDb } from "../client";
 import { drills } from "../schema";
-import { asDrill, drillFromCalculation, insertDrill, publicProblem, resultView, type DrillRecord } from "./drill-rows";
+import { drillFromCalculation, insertDrill, publicProblem, resultView, type DrillRecord } from "./drill-rows";
 
 /**
  * Drills (PRODUCT.md "Drills"): practice problems made by the Bench's calculators, judged on the server.
@@ -51,7 +51,7 @@ function findDrill(member: Member, drillId: number): DrillRecord {
 /** Judging is pure; a kind retired since the drill was made cannot be judged any more. */
 function judge(row: DrillRecord, answer: number | string): Judgement {
   try {
-    return judgeDrill(asDrill(row), answer);
+    return judgeDrill(row, answer);
   } catch (err) {
     if (err instanceof UnknownDrillKindError) throw new ConflictError("This kind of drill is no longer offered; start another drill.");
     throw err;

@@ -1,11 +1,12 @@
 import { and, asc, desc, eq } from "drizzle-orm";
-import { createHash, randomBytes } from "node:crypto";
 import { assertCan, type Member } from "@/lib/auth/can";
-import type { LinesValues } from "@/lib/estimates/schemas";
+import { hashToken, newToken } from "@/lib/auth/tokens";
+import type { AnswerInput, LinesValues } from "@/lib/estimates/schemas";
 import { ConflictError, GoneError, NotFoundError, notFound } from "@/lib/errors";
 import { computeTotals, formatMoney } from "@/lib/money";
-import { getDb } from "../client";
-import { estimateLines, estimates, logEntries, users, workshops } from "../schema";
+import { getDb, type DbOrTx } from "../client";
+import { estimateLines, estimates, users, workshops } from "../schema";
+import { insertLogEntry } from "./log";
 import { jobInWorkshop, jobPartsForPricing, moneySettings, priceLines } from "./money-lines";
 
 /**
@@ -15,11 +16,7 @@ import { jobInWorkshop, jobPartsForPricing, moneySettings, priceLines } from "./
 
 export const APPROVAL_LINK_DAYS = 14;
 
-export const hashToken = (token: string) => createHash("sha256").update(token).digest("hex");
-
-type Tx = Parameters<Parameters<ReturnType<typeof getDb>["transaction"]>[0]>[0];
-
-function latestEstimate(tx: Tx | ReturnType<typeof getDb>, workshopId: number, jobId: number) {
+function latestEstimate(tx: DbOrTx, workshopId: number, jobId: number) {
   return tx
     .select()
     .from(estimates)
@@ -29,7 +26,7 @@ function latestEstimate(tx: Tx | ReturnType<typeof getDb>, workshopId: number, j
     .get();
 }
 
-function linesOf(tx: Tx | ReturnType<typeof getDb>, estimateId: number) {
+function linesOf(tx: DbOrTx, estimateId: number) {
   return tx.select().from(estimateLines).where(eq(estimateLines.estimateId, estimateId)).orderBy(asc(estimateLines.position)).all();
 }
 
@@ -88,14 +85,12 @@ export function issueApprovalLink(member: Member, jobId: number) {
     if (!job.customerEmail) throw new ConflictError("Add the customer's e-mail to the job before sending the estimate.");
     const lines = linesOf(tx, current.id);
     if (!lines.length) throw new ConflictError("Add at least one line before sending the estimate.");
-    const token = randomBytes(32).toString("base64url");
+    const { token, hash } = newToken();
     const expiresAt = new Date(Date.now() + APPROVAL_LINK_DAYS * 86_400_000);
-    tx.update(estimates).set({ status: "sent", approvalTokenHash: hashToken(token), tokenExpiresAt: expiresAt, respondedAt: null }).where(eq(estimates.id, current.id)).run();
+    tx.update(estimates).set({ status: "sent", approvalTokenHash: hash, tokenExpiresAt: expiresAt, respondedAt: null }).where(eq(estimates.id, current.id)).run();
     const total = formatMoney(withTotals(current, lines).totalMinor, current.currency);
     // Log entries carry no amounts: apprentices read the Log and never see prices.
-    tx.insert(logEntries)
-      .values({ jobId, workshopId: member.workshopId, authorId: member.userId, kind: "estimate", text: `Estimate sent to ${job.customerEmail} for approval.`, data: { estimateId: current.id, event: "sent" } })
-      .run();
+    insertLogEntry(tx, { jobId, workshopId: member.workshopId, authorId: member.userId, kind: "estimate", text: `Estimate sent to ${job.customerEmail} for approval.`, data: { estimateId: current.id, event: "sent" } });
     return { token, expiresAt, job, total, workshopName: member.workshopName };
   });
 }
@@ -124,7 +119,7 @@ export function findEstimateByToken(token: string) {
 }
 
 /** The customer's answer: once only, before expiry; logged on the job. Returns who to tell. */
-export function answerEstimate(token: string, decision: "approve" | "decline", note?: string) {
+export function answerEstimate(token: string, decision: AnswerInput["decision"], note?: string) {
   return getDb().transaction((tx) => {
     const estimate = tx.select().from(estimates).where(eq(estimates.approvalTokenHash, hashToken(token))).get();
     if (!estimate) throw new NotFoundError("This link is not valid. Ask the workshop to send the estimate again.");
@@ -138,9 +133,7 @@ export function answerEstimate(token: string, decision: "approve" | "decline", n
     const job = jobInWorkshop(tx, estimate.workshopId, estimate.jobId)!;
     const who = job.customerName ?? "The customer";
     const text = `${who} ${status} the estimate.${note ? ` Their note: “${note}”` : ""}`;
-    tx.insert(logEntries)
-      .values({ jobId: estimate.jobId, workshopId: estimate.workshopId, authorId: null, kind: "estimate", text, data: { estimateId: estimate.id, event: status } })
-      .run();
+    insertLogEntry(tx, { jobId: estimate.jobId, workshopId: estimate.workshopId, authorId: null, kind: "estimate", text, data: { estimateId: estimate.id, event: status } });
     const preparer = estimate.createdBy
       ? tx.select({ email: users.email, name: users.name }).from(users).where(eq(users.id, estimate.createdBy)).get()
       : undefined;

@@ -4,7 +4,9 @@ import type { LinesValues } from "@/lib/estimates/schemas";
 import { ConflictError, notFound } from "@/lib/errors";
 import { computeTotals } from "@/lib/money";
 import { getDb } from "../client";
-import { estimateLines, estimates, invoiceLines, invoices, jobs, logEntries, workshops } from "../schema";
+import { estimateLines, estimates, invoiceLines, invoices, jobs, workshops } from "../schema";
+import { touchJob } from "./job-access";
+import { insertLogEntry } from "./log";
 import { jobInWorkshop, priceLines, type PricedLineRow } from "./money-lines";
 
 /**
@@ -101,10 +103,8 @@ export function issueInvoice(member: Member, jobId: number, input: { lines?: Lin
       .values(lines.map((l, i) => ({ invoiceId: invoice.id, kind: l.kind, description: l.description, quantityMilli: l.quantityMilli, unitPriceMinor: l.unitPriceMinor, amountMinor: totals.lines[i], position: i })))
       .run();
     // No amounts in the Log: apprentices read it.
-    tx.insert(logEntries)
-      .values({ jobId, workshopId: member.workshopId, authorId: member.userId, kind: "invoice", text: `Invoice ${counter.number} issued.`, data: { invoiceId: invoice.id, event: "issued" } })
-      .run();
-    tx.update(jobs).set({ updatedAt: new Date() }).where(eq(jobs.id, jobId)).run();
+    insertLogEntry(tx, { jobId, workshopId: member.workshopId, authorId: member.userId, kind: "invoice", text: `Invoice ${counter.number} issued.`, data: { invoiceId: invoice.id, event: "issued" } });
+    touchJob(member, jobId, tx);
     return invoice.id;
   });
   return getInvoice(member, id);
@@ -117,9 +117,7 @@ export function voidInvoice(member: Member, invoiceId: number) {
     if (!invoice) throw notFound("That invoice");
     if (invoice.status !== "issued") throw new ConflictError(invoice.status === "paid" ? "A paid invoice cannot be voided." : "This invoice is already void.");
     tx.update(invoices).set({ status: "void" }).where(eq(invoices.id, invoiceId)).run();
-    tx.insert(logEntries)
-      .values({ jobId: invoice.jobId, workshopId: member.workshopId, authorId: member.userId, kind: "invoice", text: `Invoice ${invoice.number} voided.`, data: { invoiceId, event: "void" } })
-      .run();
+    insertLogEntry(tx, { jobId: invoice.jobId, workshopId: member.workshopId, authorId: member.userId, kind: "invoice", text: `Invoice ${invoice.number} voided.`, data: { invoiceId, event: "void" } });
   });
   return getInvoice(member, invoiceId);
 }

@@ -1,15 +1,14 @@
 import { and, eq, sql } from "drizzle-orm";
 import type { Member } from "@/lib/auth/can";
 import { notFound } from "@/lib/errors";
-import type { Db } from "../client";
-import { getDb } from "../client";
+import { getDb, type DbOrTx } from "../client";
 import { jobs } from "../schema";
 
 /** Shared by the job-area query modules: the job must be in the member's workshop, else NotFoundError. */
 
-export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
+export type { Tx } from "../client";
 
-export function assertJobInWorkshop(member: Member, jobId: number, db: Db | Tx = getDb()): void {
+export function assertJobInWorkshop(member: Member, jobId: number, db: DbOrTx = getDb()): void {
   const row = db
     .select({ id: jobs.id })
     .from(jobs)
@@ -19,7 +18,7 @@ export function assertJobInWorkshop(member: Member, jobId: number, db: Db | Tx =
 }
 
 /** Any change to a job's record moves it up the "recently worked on" list. */
-export function touchJob(member: Member, jobId: number, db: Db | Tx = getDb()): void {
+export function touchJob(member: Member, jobId: number, db: DbOrTx = getDb()): void {
   db.update(jobs)
     .set({ updatedAt: sql`(unixepoch('subsec') * 1000)` })
     .where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId)))

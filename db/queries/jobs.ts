@@ -4,8 +4,9 @@ import { assertCan, type Member } from "@/lib/auth/can";
 import { notFound } from "@/lib/errors";
 import type { JobCreate, JobListQuery, JobUpdate } from "@/lib/jobs/job-schemas";
 import { getDb } from "../client";
-import { files, jobs, logEntries } from "../schema";
+import { files, jobs } from "../schema";
 import { assertJobInWorkshop } from "./job-access";
+import { insertLogEntry } from "./log";
 
 /** Jobs: every query here is scoped to the member's workshop and checks the role itself. */
 
@@ -94,9 +95,7 @@ export function createJob(member: Member, input: JobCreate) {
       .values({ ...input, workshopId: member.workshopId, status: "booked-in" })
       .returning(detailColumns)
       .get();
-    tx.insert(logEntries)
-      .values({ jobId: job.id, workshopId: member.workshopId, authorId: member.userId, kind: "status", text: `Booked in: ${job.title}.`, data: { to: "booked-in" } })
-      .run();
+    insertLogEntry(tx, { jobId: job.id, workshopId: member.workshopId, authorId: member.userId, kind: "status", text: `Booked in: ${job.title}.`, data: { to: "booked-in" } });
     return job;
   });
 }
@@ -130,16 +129,14 @@ export function changeJobStatus(member: Member, jobId: number, status: JobStatus
       .returning(detailColumns)
       .get()!;
     if (before.status !== status) {
-      tx.insert(logEntries)
-        .values({
-          jobId,
-          workshopId: member.workshopId,
-          authorId: member.userId,
-          kind: "status",
-          text: `Status: ${JOB_STATUS_LABELS[before.status]} → ${JOB_STATUS_LABELS[status]}.`,
-          data: { from: before.status, to: status },
-        })
-        .run();
+      insertLogEntry(tx, {
+        jobId,
+        workshopId: member.workshopId,
+        authorId: member.userId,
+        kind: "status",
+        text: `Status: ${JOB_STATUS_LABELS[before.status]} → ${JOB_STATUS_LABELS[status]}.`,
+        data: { from: before.status, to: status },
+      });
     }
     return job;
   });

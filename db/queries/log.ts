@@ -1,11 +1,21 @@
 import { and, desc, eq } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
 import type { LogEntryValues } from "@/lib/jobs/log-schemas";
-import { getDb } from "../client";
+import { getDb, type DbOrTx } from "../client";
 import { logEntries, users } from "../schema";
 import { assertJobInWorkshop, touchJob } from "./job-access";
 
 /** The dated bench log of a job. Every member may write notes and power-up entries; entries are never edited. */
+
+const entryColumns = { id: logEntries.id, jobId: logEntries.jobId, kind: logEntries.kind, text: logEntries.text, data: logEntries.data, createdAt: logEntries.createdAt };
+
+/**
+ * The one way a line enters a job's Log, called inside the transaction that made the change it tells of.
+ * `authorId` is null for the customer's answer and the payment service.
+ */
+export function insertLogEntry(db: DbOrTx, entry: Omit<typeof logEntries.$inferInsert, "id" | "createdAt">) {
+  return db.insert(logEntries).values(entry).returning(entryColumns).get();
+}
 
 export function listLog(member: Member, jobId: number) {
   assertJobInWorkshop(member, jobId);
@@ -35,11 +45,7 @@ export function addLogEntry(member: Member, jobId: number, input: LogEntryValues
   return getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
     const data = input.kind === "power-up" ? { supplyVoltage: input.supplyVoltage, currentDrawn: input.currentDrawn } : null;
-    const row = tx
-      .insert(logEntries)
-      .values({ jobId, workshopId: member.workshopId, authorId: member.userId, kind: input.kind, text: input.text, data })
-      .returning({ id: logEntries.id, jobId: logEntries.jobId, kind: logEntries.kind, text: logEntries.text, data: logEntries.data, createdAt: logEntries.createdAt })
-      .get();
+    const row = insertLogEntry(tx, { jobId, workshopId: member.workshopId, authorId: member.userId, kind: input.kind, text: input.text, data });
     touchJob(member, jobId, tx);
     return { ...row, author: { id: member.userId, name: member.name } };
   });

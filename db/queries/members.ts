@@ -2,11 +2,9 @@ import { and, asc, count, eq } from "drizzle-orm";
 import type { Role } from "@/lib/vocabulary";
 import { assertCan, type Member } from "@/lib/auth/can";
 import { ConflictError, notFound } from "@/lib/errors";
-import { getDb, type Db } from "../client";
+import { getDb, type DbOrTx, type Tx } from "../client";
 import { memberships, users } from "../schema";
 import { recordAudit } from "./audit";
-
-type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 /** Raised when a change would leave the workshop without an owner. */
 export class LastOwnerError extends ConflictError {
@@ -82,7 +80,7 @@ export function removeMember(member: Member, membershipId: number) {
   );
 }
 
-export function isMemberOf(tx: Tx | Db, workshopId: number, userId: number): boolean {
+export function isMemberOf(tx: DbOrTx, workshopId: number, userId: number): boolean {
   return !!tx.select({ id: memberships.id }).from(memberships).where(and(eq(memberships.workshopId, workshopId), eq(memberships.userId, userId))).get();
 }
 

@@ -2,15 +2,14 @@ import { and, eq } from "drizzle-orm";
 import { NotFoundError, ValidationError } from "@/lib/errors";
 import type { LinesValues } from "@/lib/estimates/schemas";
 import { lineAmountMinor, minorExponent, parseMoney, parseQuantityMilli } from "@/lib/money";
-import type { Db } from "../client";
+import type { LineKind } from "@/lib/vocabulary";
+import type { DbOrTx } from "../client";
 import { jobs, parts, workshops } from "../schema";
 
 /** Shared by estimates and invoices: the workshop's money settings and typed lines turned into priced lines. */
 
-type Tx = Pick<Db, "select">;
-
 export interface PricedLineRow {
-  kind: "labour" | "part" | "fee";
+  kind: LineKind;
   description: string;
   quantityMilli: number;
   unitPriceMinor: number;
@@ -18,7 +17,7 @@ export interface PricedLineRow {
   position: number;
 }
 
-export function moneySettings(tx: Tx, workshopId: number) {
+export function moneySettings(tx: DbOrTx, workshopId: number) {
   const row = tx
     .select({ name: workshops.name, currency: workshops.currency, hourlyRateMinor: workshops.hourlyRateMinor, taxRateBp: workshops.taxRateBp })
     .from(workshops)
@@ -29,7 +28,7 @@ export function moneySettings(tx: Tx, workshopId: number) {
 }
 
 /** The job's parts that can go on an estimate, scoped to the workshop. */
-export function jobPartsForPricing(tx: Tx, workshopId: number, jobId: number) {
+export function jobPartsForPricing(tx: DbOrTx, workshopId: number, jobId: number) {
   return tx
     .select({
       id: parts.id,
@@ -44,7 +43,7 @@ export function jobPartsForPricing(tx: Tx, workshopId: number, jobId: number) {
     .all();
 }
 
-export function jobInWorkshop(tx: Tx, workshopId: number, jobId: number) {
+export function jobInWorkshop(tx: DbOrTx, workshopId: number, jobId: number) {
   return tx
     .select({
       id: jobs.id,
@@ -63,7 +62,7 @@ export function jobInWorkshop(tx: Tx, workshopId: number, jobId: number) {
 }
 
 /** Typed lines → priced lines; every line that cannot be priced is named in one 400. */
-export function priceLines(tx: Tx, workshopId: number, jobId: number, input: LinesValues["lines"]): PricedLineRow[] {
+export function priceLines(tx: DbOrTx, workshopId: number, jobId: number, input: LinesValues["lines"]): PricedLineRow[] {
   const settings = moneySettings(tx, workshopId);
   const known = new Map(jobPartsForPricing(tx, workshopId, jobId).map((p) => [p.id, p]));
   const fields: Record<string, string> = {};

@@ -1,6 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import { getDb } from "../client";
-import { invoices, logEntries, paymentEvents } from "../schema";
+import { invoices, paymentEvents } from "../schema";
+import { insertLogEntry } from "./log";
 
 /**
  * Applies verified payment-service events. Called only by the webhook route after the SDK has checked the
@@ -40,16 +41,14 @@ export function applyCheckoutCompleted(eventId: string, eventType: string, sessi
     }
     const paidAt = new Date();
     tx.update(invoices).set({ status: "paid", paidAt }).where(and(eq(invoices.id, invoice.id), eq(invoices.status, "issued"))).run();
-    tx.insert(logEntries)
-      .values({
-        jobId: invoice.jobId,
-        workshopId: invoice.workshopId,
-        authorId: null,
-        kind: "invoice",
-        text: `Invoice ${invoice.number} paid by card.`,
-        data: { invoiceId: invoice.id, event: "paid", paymentEventId: eventId },
-      })
-      .run();
+    insertLogEntry(tx, {
+      jobId: invoice.jobId,
+      workshopId: invoice.workshopId,
+      authorId: null,
+      kind: "invoice",
+      text: `Invoice ${invoice.number} paid by card.`,
+      data: { invoiceId: invoice.id, event: "paid", paymentEventId: eventId },
+    });
     return "paid";
   });
 }

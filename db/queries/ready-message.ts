@@ -4,7 +4,8 @@ import { notFound } from "@/lib/errors";
 import { can, type Member } from "@/lib/auth/can";
 import { readySubject, renderReadyMessage } from "@/lib/mail/ready-message";
 import { getDb } from "../client";
-import { jobs, logEntries, workshops } from "../schema";
+import { jobs, workshops } from "../schema";
+import { insertLogEntry } from "./log";
 
 /**
  * The customer's "ready to collect" message for one job: the draft from the workshop's template, and
@@ -48,8 +49,5 @@ export function readyMessageDraft(member: Member, jobId: number): ReadyDraft {
 }
 
 export function recordReadyMessageSent(member: Member, jobId: number, sent: { to: string; subject: string; attachment: string }) {
-  getDb()
-    .insert(logEntries)
-    .values({ jobId, workshopId: member.workshopId, authorId: member.userId, kind: "mail", text: `“Ready to collect” e-mail sent to ${sent.to}, bench sheet attached.`, data: sent })
-    .run();
+  insertLogEntry(getDb(), { jobId, workshopId: member.workshopId, authorId: member.userId, kind: "mail", text: `“Ready to collect” e-mail sent to ${sent.to}, bench sheet attached.`, data: sent });
 }

@@ -1,4 +1,5 @@
 import type { OutputValue, Step, Warning } from "../calc/types";
+import type { DrillVerdict } from "../vocabulary";
 import type { Rng } from "./rng";
 
 /**
@@ -132,7 +133,7 @@ export interface Drill {
 }
 
 /** "wrong-number" is any wrong answer of the right sort: a wrong figure, or wrong words for a text ask. */
-export type Verdict = "correct" | "wrong-number" | "wrong-unit" | "unreadable";
+export type Verdict = DrillVerdict | "unreadable";
 
 export interface Judgement {
   correct: boolean;

@@ -1,8 +1,9 @@
 import { formatQuantity, minorExponent, toDecimalString } from "@/lib/money";
+import type { LineKind } from "@/lib/vocabulary";
 
 /** Stored lines back into the editor's typed form ("1.5", "12.50"). */
 export function editorLines(
-  lines: { kind: "labour" | "part" | "fee"; description: string; quantityMilli: number; unitPriceMinor: number; partId?: number | null }[],
+  lines: { kind: LineKind; description: string; quantityMilli: number; unitPriceMinor: number; partId?: number | null }[],
   currency: string,
 ) {
   const exponent = minorExponent(currency);

@@ -1,14 +1,11 @@
 import { z } from "zod";
+import { LINE_KINDS } from "@/lib/vocabulary";
 
 /**
  * One schema for the estimate and invoice line editors, shared by react-hook-form (zodResolver) and the
  * route handlers. Quantities and prices travel as the text a person typed ("1.5", "12.50"); the server
  * turns them into integer thousandths and minor units with the workshop's currency (lib/money).
  */
-
-export const LINE_KINDS = ["labour", "part", "fee"] as const;
-export type LineKind = (typeof LINE_KINDS)[number];
-export const LINE_KIND_LABELS: Record<LineKind, string> = { labour: "Labour", part: "Part", fee: "Fee" };
 
 const decimal = /^\d{1,9}(\.\d{1,3})?$/;
 

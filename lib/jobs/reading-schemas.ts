@@ -5,7 +5,6 @@ import { requiredText } from "./fields";
 
 /** A reading is either a resistor-survey row (Ω) or a voltage test point (V, nominal = expected). */
 
-export const READING_KINDS = ["resistor", "voltage"] as const;
 export const DEFAULT_READING_TOLERANCE = 0.2;
 
 const designator = requiredText(40, "The designator", "Say which part or test point, like R4 or “B+ at C5a”.");

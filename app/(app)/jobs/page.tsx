@@ -12,7 +12,8 @@ export const metadata: Metadata = { title: "Jobs" };
 export default async function JobsPage() {
   const member = await getMember();
   if (!member) redirect("/sign-in?next=/jobs");
-  // The same first page GET /api/jobs gives, as JSON (dates as strings), so the client cache can take it over.
-  const firstPage = JSON.parse(JSON.stringify(searchJobs(member, jobListQuerySchema.parse({ pageSize: String(JOB_LIST_PAGE_SIZE) })))) as JobPage;
+  // The same first page GET /api/jobs gives, dates as JSON strings, so the client cache can take it over.
+  const page = searchJobs(member, jobListQuerySchema.parse({ pageSize: String(JOB_LIST_PAGE_SIZE) }));
+  const firstPage: JobPage = { ...page, jobs: page.jobs.map((j) => ({ ...j, createdAt: j.createdAt.toISOString(), updatedAt: j.updatedAt.toISOString() })) };
   return <JobsPageClient workshopName={member.workshopName} canCreate={can.editJobs(member)} firstPage={firstPage} />;
 }

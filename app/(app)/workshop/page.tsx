@@ -26,10 +26,8 @@ export default async function WorkshopPage() {
   const settings = getWorkshopSettings(member);
   // Apprentices never see prices: the card is not rendered for them at all.
   const charges = can.prepareEstimates(member) ? getCharges(member) : null;
-  const members = listMembers(member).map((m) => ({ ...m, joinedAt: m.joinedAt.toISOString() }));
-  const invitations = owner
-    ? listInvitations(member).map((i) => ({ id: i.id, email: i.email, role: i.role, state: i.state as "pending" | "expired", expiresAt: i.expiresAt.toISOString(), invitedBy: i.invitedBy }))
-    : [];
+  const members = listMembers(member);
+  const invitations = owner ? listInvitations(member) : [];
 
   return (
     <>

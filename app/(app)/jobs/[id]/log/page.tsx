@@ -5,15 +5,20 @@ import { Card, EmptyState } from "@/components/ui/card";
 import { listLog } from "@/db/queries/log";
 import { formatQuantity } from "@/lib/calc/format";
 import { formatDateTime } from "@/lib/jobs/dates";
+import { LOG_KIND_LABELS, type LogKind } from "@/lib/vocabulary";
 
 export const metadata: Metadata = { title: "Log" };
 
-const KIND: Record<string, { label: string; tone: string }> = {
-  note: { label: "Note", tone: "bg-sunk text-ink" },
-  "power-up": { label: "Power-up", tone: "bg-glow-bg text-glow" },
-  status: { label: "Status", tone: "bg-sunk text-muted" },
-  estimate: { label: "Estimate", tone: "bg-ok-bg text-ink" },
-  invoice: { label: "Invoice", tone: "bg-ok-bg text-ink" },
+const TONE: Record<LogKind, string> = {
+  note: "bg-sunk text-ink",
+  "power-up": "bg-glow-bg text-glow",
+  tube: "bg-sunk text-ink",
+  fault: "bg-sunk text-ink",
+  part: "bg-sunk text-ink",
+  status: "bg-sunk text-muted",
+  estimate: "bg-ok-bg text-ink",
+  invoice: "bg-ok-bg text-ink",
+  mail: "bg-sunk text-muted",
 };
 
 export default async function LogPage({ params }: JobPageProps) {
@@ -28,12 +33,11 @@ export default async function LogPage({ params }: JobPageProps) {
         ) : (
           <ol className="flex flex-col gap-3" data-testid="log-entries">
             {entries.map((e) => {
-              const kind = KIND[e.kind] ?? { label: e.kind, tone: "bg-sunk text-ink" };
               const data = e.data as { supplyVoltage?: number; currentDrawn?: number } | null;
               return (
                 <li key={e.id} className="rounded-card border border-rule bg-panel p-4">
                   <div className="flex flex-wrap items-center gap-x-3 gap-y-1 text-note">
-                    <span className={`rounded-full px-2 py-0.5 font-bold ${kind.tone}`}>{kind.label}</span>
+                    <span className={`rounded-full px-2 py-0.5 font-bold ${TONE[e.kind]}`}>{LOG_KIND_LABELS[e.kind]}</span>
                     <time dateTime={e.createdAt.toISOString()} className="font-mono">{formatDateTime(e.createdAt)}</time>
                     <span className="text-muted">{e.author?.name ?? (e.kind === "estimate" ? "The customer" : e.kind === "invoice" ? "Payment service" : "A former member")}</span>
                   </div>
