@@ -18,7 +18,9 @@ export function readOutbox(workshopId: number, limit = 50): StoredMail[] | null 
   for (const name of names.sort().reverse()) {
     try {
       const mail = JSON.parse(fs.readFileSync(path.join(dir, name), "utf8")) as StoredMail;
-      if (mail.workshopId === workshopId) out.push(mail);
+      // A reset link is its member's alone: reset mail is sent untagged, and any message carrying such a
+      // link (one stored before that rule, say) is kept out of the owner's view all the same.
+      if (mail.workshopId === workshopId && !mail.text.includes("/reset-password/")) out.push(mail);
     } catch {
       // a file being written or not ours: skip it
     }

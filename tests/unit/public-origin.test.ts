@@ -10,13 +10,13 @@ const behindProxy = () =>
 
 describe("links that leave the app (README: GLOWBENCH_PUBLIC_URL, else the request's own origin)", () => {
   test("GLOWBENCH_PUBLIC_URL wins, trailing slash or not", () => {
-    const env = { NODE_ENV: "production", GLOWBENCH_PUBLIC_URL: "https://bench.example/" } as NodeJS.ProcessEnv;
+    const env = { NODE_ENV: "production", GLOWBENCH_PUBLIC_URL: "https://bench.example/" } as unknown as NodeJS.ProcessEnv;
     expect(publicOrigin(behindProxy(), env)).toBe("https://bench.example");
   });
 
   test("in development and the demo, the origin the browser used, not Next's localhost", () => {
-    expect(publicOrigin(behindProxy(), { NODE_ENV: "development" } as NodeJS.ProcessEnv)).toBe("https://bench.example");
-    expect(publicOrigin(behindProxy(), { NODE_ENV: "production", GLOWBENCH_DEMO: "1" } as NodeJS.ProcessEnv)).toBe("https://bench.example");
+    expect(publicOrigin(behindProxy(), { NODE_ENV: "development" } as unknown as NodeJS.ProcessEnv)).toBe("https://bench.example");
+    expect(publicOrigin(behindProxy(), { NODE_ENV: "production", GLOWBENCH_DEMO: "1" } as unknown as NodeJS.ProcessEnv)).toBe("https://bench.example");
   });
 
   test("a production server without GLOWBENCH_PUBLIC_URL refuses loudly instead of trusting Host", () => {
@@ -24,7 +24,7 @@ describe("links that leave the app (README: GLOWBENCH_PUBLIC_URL, else the reque
     const original = console.error;
     console.error = (...args: unknown[]) => errors.push(args);
     try {
-      expect(() => publicOrigin(behindProxy(), { NODE_ENV: "production" } as NodeJS.ProcessEnv)).toThrow(NotConfiguredError);
+      expect(() => publicOrigin(behindProxy(), { NODE_ENV: "production" } as unknown as NodeJS.ProcessEnv)).toThrow(NotConfiguredError);
     } finally {
       console.error = original;
     }
@@ -36,15 +36,15 @@ describe("HSTS (RFC 6797) only where the browser came over HTTPS", () => {
   const headers = (proto?: string) => new Headers(proto ? { "x-forwarded-proto": proto } : {});
 
   test("an https public URL, or a trusted proxy's last X-Forwarded-Proto of https", () => {
-    expect(servedOverHttps(headers(), { GLOWBENCH_PUBLIC_URL: "https://bench.example" } as NodeJS.ProcessEnv)).toBe(true);
-    expect(servedOverHttps(headers("https"), { GLOWBENCH_TRUST_PROXY: "1" } as NodeJS.ProcessEnv)).toBe(true);
-    expect(servedOverHttps(headers("http, https"), { GLOWBENCH_TRUST_PROXY: "1" } as NodeJS.ProcessEnv)).toBe(true);
+    expect(servedOverHttps(headers(), { GLOWBENCH_PUBLIC_URL: "https://bench.example" } as unknown as NodeJS.ProcessEnv)).toBe(true);
+    expect(servedOverHttps(headers("https"), { GLOWBENCH_TRUST_PROXY: "1" } as unknown as NodeJS.ProcessEnv)).toBe(true);
+    expect(servedOverHttps(headers("http, https"), { GLOWBENCH_TRUST_PROXY: "1" } as unknown as NodeJS.ProcessEnv)).toBe(true);
   });
 
   test("never for plain HTTP, nor on a client's own say-so without a trusted proxy", () => {
-    expect(servedOverHttps(headers("http"), { GLOWBENCH_TRUST_PROXY: "1" } as NodeJS.ProcessEnv)).toBe(false);
-    expect(servedOverHttps(headers("https"), {} as NodeJS.ProcessEnv)).toBe(false);
-    expect(servedOverHttps(headers(), { GLOWBENCH_PUBLIC_URL: "http://bench.lan" } as NodeJS.ProcessEnv)).toBe(false);
+    expect(servedOverHttps(headers("http"), { GLOWBENCH_TRUST_PROXY: "1" } as unknown as NodeJS.ProcessEnv)).toBe(false);
+    expect(servedOverHttps(headers("https"), {} as unknown as NodeJS.ProcessEnv)).toBe(false);
+    expect(servedOverHttps(headers(), { GLOWBENCH_PUBLIC_URL: "http://bench.lan" } as unknown as NodeJS.ProcessEnv)).toBe(false);
   });
 
   test("the header value asks for a year", () => {

@@ -22,7 +22,7 @@ beforeAll(() => {
   workshopId = db.insert(workshops).values({ name: "Sweep Test Bench" }).returning().get().id;
   userId = db.insert(users).values({ email: "s@example.test", name: "S", passwordHash: "x" }).returning().get().id;
   db.insert(memberships).values({ workshopId, userId, role: "owner" }).run();
-  jobId = db.insert(jobs).values({ workshopId, title: "Set", equipmentKind: "radio" }).returning().get().id;
+  jobId = db.insert(jobs).values({ workshopId, title: "Set", equipmentKind: "table-radio" }).returning().get().id;
 });
 afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
