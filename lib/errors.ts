@@ -1,7 +1,7 @@
 /**
  * What the data layer and the services raise when a request cannot be done. They say what went wrong in
  * the domain's terms and know nothing of HTTP; only the route wrapper (server/http/errors.ts) turns each
- * kind into a status. `fields` names the inputs at fault, as PRODUCT.md's error shape does.
+ * kind into a status. `fields` names the inputs at fault, as docs/PRODUCT.md's error shape does.
  */
 export class DomainError extends Error {
   constructor(

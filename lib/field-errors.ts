@@ -1,6 +1,6 @@
 import type { z } from "zod";
 
-/** Zod issues → `{ fieldName: message }`, first message per field, all fields (PRODUCT.md's error shape). */
+/** Zod issues → `{ fieldName: message }`, first message per field, all fields (docs/PRODUCT.md's error shape). */
 export function fieldErrors(error: z.ZodError): Record<string, string> {
   const fields: Record<string, string> = {};
   for (const issue of error.issues) {

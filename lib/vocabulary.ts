@@ -66,7 +66,7 @@ export const PART_STATE_LABELS: Record<PartState, string> = {
   fitted: "Fitted",
 };
 
-/** The bench record (PRODUCT.md "The bench record"): what a tube tester's result comes to. */
+/** The bench record (docs/PRODUCT.md "The bench record"): what a tube tester's result comes to. */
 export const TUBE_VERDICTS = ["strong", "serviceable", "weak", "short", "open-heater", "gassy", "not-tested"] as const;
 export type TubeVerdict = (typeof TUBE_VERDICTS)[number];
 

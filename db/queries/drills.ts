@@ -8,7 +8,7 @@ import { drills } from "../schema";
 import { drillFromCalculation, insertDrill, publicProblem, resultView, type DrillRecord } from "./drill-rows";
 
 /**
- * Drills (PRODUCT.md "Drills"): practice problems made by the Bench's calculators, judged on the server.
+ * Drills (docs/PRODUCT.md "Drills"): practice problems made by the Bench's calculators, judged on the server.
  * Every function takes the signed-in member and scopes to their workshop; the solution never leaves here
  * before the drill is answered, and a drill is answered once.
  */

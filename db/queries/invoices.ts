@@ -10,7 +10,7 @@ import { insertLogEntry } from "./log";
 import { jobInWorkshop, priceLines, type PricedLineRow } from "./money-lines";
 
 /**
- * Invoices are the owner's alone (PRODUCT.md: technicians and apprentices never see them). Numbers run per
+ * Invoices are the owner's alone (docs/PRODUCT.md: technicians and apprentices never see them). Numbers run per
  * workshop without gaps: the counter is bumped inside the same transaction that inserts the invoice.
  */
 

@@ -1,4 +1,4 @@
-/** Browser-side JSON calls to our route handlers, returning PRODUCT.md's error shape as data. */
+/** Browser-side JSON calls to our route handlers, returning docs/PRODUCT.md's error shape as data. */
 
 export type ApiResult<T> = { ok: true; data: T } | { ok: false; status: number; message: string; fields: Record<string, string> };
 

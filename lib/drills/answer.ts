@@ -7,7 +7,7 @@ import type { Asked, AskedUnit } from "./types";
  * Reading an answer as people write it, with the Bench's own parser: "1.5k", "1k5", "250 mW",
  * "0.25 W", "4.7 uF", "2,2 kΩ", "25 ms", "1/4 W". A bare number is read in the asked unit (per cent
  * for a "%" ask), except a capacitance, which the Bench never reads as farads without a unit
- * (PRODUCT.md, vintage markings); a JSON number is likewise in the asked unit. An answer in another
+ * (docs/PRODUCT.md, vintage markings); a JSON number is likewise in the asked unit. An answer in another
  * quantity's unit ("0.25 V" when W is asked) is told apart as a wrong unit.
  */
 

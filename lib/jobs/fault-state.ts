@@ -1,7 +1,7 @@
 import type { FaultCandidateStatus, FaultState } from "@/lib/vocabulary";
 
 /**
- * A fault's state from its candidates and resolution (PRODUCT.md "Faults"): open while no candidate is
+ * A fault's state from its candidates and resolution (docs/PRODUCT.md "Faults"): open while no candidate is
  * the cause, found once one is, fixed once the repair is written too. Reopening the cause makes the
  * fault open again even if a resolution was written, so a wrong diagnosis never shows as fixed.
  */

@@ -82,7 +82,7 @@ export function plotData(steps: readonly StepFigures[], stopCurrent: number | nu
 
 /**
  * Why a session may not be marked passed, or null: a step over the stop current needs a reason
- * (PRODUCT.md "Power-ups"). Stopping needs none.
+ * (docs/PRODUCT.md "Power-ups"). Stopping needs none.
  */
 export function outcomeRefusal(outcome: "passed" | "stopped", reason: string | null | undefined, steps: readonly StepFigures[], stopCurrent: number | null): string | null {
   if (outcome !== "passed" || (reason ?? "").trim()) return null;

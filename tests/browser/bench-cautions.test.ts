@@ -5,7 +5,7 @@ import { baseUrl } from "../helpers/http";
 import { ready } from "./bench-helpers";
 
 /**
- * Cautions that follow the inputs (PRODUCT.md "Safety rules": any voltage typed above 50 V shows the
+ * Cautions that follow the inputs (docs/PRODUCT.md "Safety rules": any voltage typed above 50 V shows the
  * danger banner, even while another field is invalid), the short caution on the pages that lead to the
  * calculators, and the working's formulas: they wrap or scroll in their own box, never the page.
  */

@@ -78,7 +78,7 @@ describe("arc-clearance: IEC 60664-1:2020 Table F.8 and Table A.2", () => {
   });
 
   it("a uniform field reads the homogeneous column (case B) but the recommendation keeps the case A floor", () => {
-    // IEC 60664-1:2020 Table F.8, case B: 8 kV 3 mm, 15 kV 5.5 mm, 100 kV 45 mm. PRODUCT.md: no clearance below case A.
+    // IEC 60664-1:2020 Table F.8, case B: 8 kV 3 mm, 15 kV 5.5 mm, 100 kV 45 mm. docs/PRODUCT.md: no clearance below case A.
     const rows: [string, number][] = [["7 kV", 3], ["15 kV", 5.5], ["100 kV", 45]];
     for (const [v, want] of rows) expect(out({ peakVoltage: v, electrode: "uniform" }).standardClearance! / mm, v).toBeCloseTo(want, 9);
     const u = run({ peakVoltage: "7 kV", electrode: "uniform" });

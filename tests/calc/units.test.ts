@@ -217,7 +217,7 @@ describe("parseQuantity: metres", () => {
 });
 
 describe("parseQuantity: capacitor markings as the trade writes them", () => {
-  // PRODUCT.md "Vintage markings"; before SI a capacitor's "m" meant micro, so mfd/mf/MF are microfarads
+  // docs/PRODUCT.md "Vintage markings"; before SI a capacitor's "m" meant micro, so mfd/mf/MF are microfarads
   // and mmf/mmfd/µµF ("micro-micro-farads") are picofarads (common practice; period parts lists and cans).
   it("mfd, mf, MF, MFD, Mfd, uf, UF, uF, µF are microfarads", () => {
     for (const u of ["mfd", "mf", "MF", "MFD", "Mfd", "uf", "UF", "uF", "µF", "μF", "ufd"]) {
@@ -248,7 +248,7 @@ describe("parseQuantity: capacitor markings as the trade writes them", () => {
     expect(message("0.000047", "capacitance")).toMatch(/needs a unit/);
     expect(message("4.7e-5", "capacitance")).toMatch(/needs a unit/);
     expect(message("2R2", "capacitance")).toMatch(/needs a unit.*2\.2 uF/);
-    // a JSON number stays SI (PRODUCT.md), and a prefix alone is a multiplier, as before
+    // a JSON number stays SI (docs/PRODUCT.md), and a prefix alone is a multiplier, as before
     expect(value(4.7e-5, "capacitance")).toBe(4.7e-5);
     expect(value("47u", "capacitance")).toBe(47e-6);
     expect(value("1 F", "capacitance")).toBe(1);

@@ -4,7 +4,7 @@ import { samples } from "../bench/samples";
 import { Client, baseUrl } from "../helpers/http";
 
 /**
- * The calculator API through the real production server, signed out. CONTRACT is PRODUCT.md's
+ * The calculator API through the real production server, signed out. CONTRACT is docs/PRODUCT.md's
  * table written out: slugs, input names (with the defaults it states) and output names.
  */
 const CONTRACT: Record<string, { inputs: string[]; defaults?: Record<string, unknown>; outputs: string[] }> = {
@@ -55,7 +55,7 @@ const CONTRACT: Record<string, { inputs: string[]; defaults?: Record<string, unk
     outputs: ["capacitiveReactance", "inductiveReactance", "resonantFrequency"],
   },
   "triode-stage": {
-    // PRODUCT.md names the model parameters µ, EX, KG1, KP, KVB; the API spells them mu, ex, kg1, kp, kvb.
+    // docs/PRODUCT.md names the model parameters µ, EX, KG1, KP, KVB; the API spells them mu, ex, kg1, kp, kvb.
     inputs: ["tube", "mu", "ex", "kg1", "kp", "kvb", "supplyVoltage", "plateResistor", "cathodeResistor", "cathodeBypassed", "loadResistance"],
     defaults: { cathodeBypassed: true },
     outputs: ["plateVoltage", "plateCurrent", "cathodeVoltage", "plateDissipation", "amplificationFactor", "plateResistance", "transconductance", "gain", "plateToChassisVoltage"],
@@ -69,7 +69,7 @@ const CONTRACT: Record<string, { inputs: string[]; defaults?: Record<string, unk
     defaults: { series: "E12" },
     outputs: ["nearest", "below", "above", "errorOfNearest"],
   },
-  // PRODUCT.md, "More calculators".
+  // docs/PRODUCT.md, "More calculators".
   "series-lamp": {
     inputs: ["lineVoltage", "lampPower", "setPower"],
     defaults: { lineVoltage: 120 },
@@ -156,7 +156,7 @@ function expectFieldError(r: { status: number; body: any }, field: string, patte
 const dangers = (body: any) => (body.warnings as { level: string }[]).filter((w) => w.level === "danger");
 
 describe("GET /api/calculators", () => {
-  test("lists exactly PRODUCT.md's calculators, each with every input and output name it gives (additions allowed, nothing renamed)", async () => {
+  test("lists exactly docs/PRODUCT.md's calculators, each with every input and output name it gives (additions allowed, nothing renamed)", async () => {
     const res = await visitor.get("/api/calculators");
     expect(res.status).toBe(200);
     const list = (await res.json()) as { slug: string; title: string; inputs: any[]; outputs: any[] }[];
@@ -180,7 +180,7 @@ describe("GET /api/calculators", () => {
     }
   });
 
-  test("inputs and outputs carry PRODUCT.md's SI units", async () => {
+  test("inputs and outputs carry docs/PRODUCT.md's SI units", async () => {
     const list = (await (await visitor.get("/api/calculators")).json()) as any[];
     const unitOf = (slug: string, side: "inputs" | "outputs", name: string) =>
       list.find((c) => c.slug === slug)[side].find((x: any) => x.name === name).unit;

@@ -4,7 +4,7 @@ import { fileForm, makeTeam, samplePng, type Team } from "../helpers/team";
 
 /**
  * Every jobs route against every kind of caller, through the real server, with the exact status
- * each must get. Roles follow PRODUCT.md: apprentices read everything and add readings,
+ * each must get. Roles follow docs/PRODUCT.md: apprentices read everything and add readings,
  * calculations and log notes; technicians edit; only owners delete jobs; another workshop's
  * owner sees nothing (404, never a hint that the job exists).
  */

@@ -55,7 +55,7 @@ describe("reading answers as people write them", () => {
     }
   });
 
-  it("never reads a bare number as farads (PRODUCT.md, vintage markings)", () => {
+  it("never reads a bare number as farads (docs/PRODUCT.md, vintage markings)", () => {
     const r = read("47", "F");
     expect(r.ok).toBe(false);
     if (!r.ok) {

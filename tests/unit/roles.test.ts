@@ -4,7 +4,7 @@ import { ForbiddenError } from "@/lib/errors";
 
 const member = (role: Member["role"]): Member => ({ userId: 1, email: "a@b.test", name: "A", workshopId: 1, workshopName: "W", role });
 
-// The role rules of PRODUCT.md, "Users and roles": owners everything; technicians edit jobs, change status and
+// The role rules of docs/PRODUCT.md, "Users and roles": owners everything; technicians edit jobs, change status and
 // prepare estimates but neither delete nor see invoices; apprentices add to the record and nothing more.
 const EXPECTED: Record<Action, [owner: boolean, technician: boolean, apprentice: boolean]> = {
   editJobs: [true, true, false],

@@ -12,7 +12,7 @@ const { db, sqlite } = openDatabase(path.join(dir, "t.db"));
 afterAll(() => sqlite.close());
 
 describe("database", () => {
-  test("migrations create every table of PRODUCT.md's data section", () => {
+  test("migrations create every table of docs/PRODUCT.md's data section", () => {
     const names = sqlite.prepare("select name from sqlite_master where type='table'").all().map((r) => (r as { name: string }).name);
     for (const t of ["workshops", "users", "memberships", "invitations", "jobs", "parts", "readings", "calculations", "files", "log_entries"]) {
       expect(names).toContain(t);
@@ -42,7 +42,7 @@ describe("database", () => {
     expect(first.workshops).toBe(2);
   });
 
-  test("demo users have the roles PRODUCT.md lists", () => {
+  test("demo users have the roles docs/PRODUCT.md lists", () => {
     const role = (email: string) =>
       db.select({ role: memberships.role }).from(memberships).innerJoin(users, eq(users.id, memberships.userId)).where(eq(users.email, email)).get()?.role;
     expect(role(DEMO_USERS.owner.email)).toBe("owner");

@@ -5,7 +5,7 @@ import { runCalculator } from "@/lib/calc/run";
 import { HAZARD_VOLTS } from "@/lib/calc/safety";
 import { parseQuantity } from "@/lib/calc/units";
 
-// PRODUCT.md "Safety rules": any voltage input above 50 V shows the danger caution, even while another
+// docs/PRODUCT.md "Safety rules": any voltage input above 50 V shows the danger caution, even while another
 // field is invalid. The 50 V is lib/calc/safety.ts's HAZARD_VOLTS (IEC 61140's extra-low-voltage limit, AC).
 const inputs = (slug: string) => getCalculator(slug)!.inputs;
 
