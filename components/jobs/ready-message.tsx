@@ -7,8 +7,10 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { TextareaField } from "@/components/ui/textarea-field";
 import type { ReadyDraft } from "@/db/queries/ready-message";
-import { getJson, sendJson } from "@/lib/client/fetch-json";
+import { getJson } from "@/lib/client/fetch-json";
+import type { ReadyIssue } from "@/lib/jobs/ready-checks";
 import { readyMessageSchema, type ReadyMessageForm } from "@/lib/mail/ready-schemas";
+import { ReadyChecksPanel, sendReady } from "./ready-checks";
 
 /**
  * "Tell the customer it's ready": a self-contained panel for the job Overview. It loads the draft
@@ -19,6 +21,10 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
   const [draft, setDraft] = useState<ReadyDraft | null>(null);
   const [loadError, setLoadError] = useState<string | null>(null);
   const [result, setResult] = useState<{ ok: boolean; message: string } | null>(null);
+  // A refused send: the checks before "ready", and the message as it was to go.
+  const [held, setHeld] = useState<{ values: ReadyMessageForm; checks: ReadyIssue[] } | null>(null);
+  // The checks before "ready" still open when the draft loaded: shown ahead, asked about on sending.
+  const [open, setOpen] = useState<ReadyIssue[]>([]);
   const { register, handleSubmit, reset, setError, formState: { errors, isSubmitting } } = useForm<ReadyMessageForm>({
     resolver: zodResolver(readyMessageSchema),
     defaultValues: { subject: "", text: "" },
@@ -26,10 +32,11 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
 
   useEffect(() => {
     let live = true;
-    getJson<{ draft: ReadyDraft }>(`/api/jobs/${jobId}/ready-message`)
-      .then(({ draft }) => {
+    getJson<{ draft: ReadyDraft; checks?: ReadyIssue[] }>(`/api/jobs/${jobId}/ready-message`)
+      .then(({ draft, checks }) => {
         if (!live) return;
         setDraft(draft);
+        setOpen(checks ?? []);
         reset({ subject: draft.subject, text: draft.text });
       })
       .catch((err: Error) => live && setLoadError(err.message));
@@ -38,17 +45,20 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
     };
   }, [jobId, status, reset]);
 
-  const onSubmit = handleSubmit(async (values) => {
+  async function send(values: ReadyMessageForm, override?: { override: true; reason: string }) {
     setResult(null);
-    const res = await sendJson<{ sent: { to: string } }>(`/api/jobs/${jobId}/ready-message`, values);
+    const res = await sendReady<{ sent: { to: string } }>(`/api/jobs/${jobId}/ready-message`, { ...values, ...override });
     if (!res.ok) {
+      if (res.checks.length) return setHeld({ values, checks: res.checks });
       if (res.fields.subject) setError("subject", { message: res.fields.subject });
       if (res.fields.text) setError("text", { message: res.fields.text });
-      setResult({ ok: false, message: res.message });
+      setResult({ ok: false, message: res.fields.reason ?? res.message });
       return;
     }
+    setHeld(null);
     setResult({ ok: true, message: `Sent to ${res.data.sent.to} with the bench sheet attached.` });
-  });
+  }
+  const onSubmit = handleSubmit((values) => send(values));
 
   if (loadError) return <p className="text-note text-flag">{loadError}</p>;
   if (!draft) return <p className="text-note text-muted">Loading the customer message…</p>;
@@ -72,6 +82,16 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
         To <strong className="text-ink">{draft.to}</strong>, with the bench sheet as a PDF. Edit the words for this customer if you like; the
         template lives in the workshop settings.
       </p>
+      {open.length && !held ? (
+        <div role="note" className="mb-3 rounded-chip border border-caution/50 bg-caution-bg px-3 py-2 text-note" data-testid="ready-open-checks">
+          <p className="font-bold text-caution">Still open on the record</p>
+          <ul className="list-disc pl-5">
+            {open.map((c) => (
+              <li key={c.id}>{c.message}</li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
       <form onSubmit={onSubmit} noValidate className="flex flex-col gap-1" aria-label="Ready to collect message">
         <Field id={`ready-subject-${jobId}`} label="Subject" error={errors.subject?.message} {...register("subject")} />
         <TextareaField id={`ready-text-${jobId}`} label="Message" rows={10} error={errors.text?.message} {...register("text")} />
@@ -80,10 +100,22 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
             {isSubmitting ? "Sending…" : "Send to customer"}
           </Button>
           <p role="status" aria-live="polite" className={`text-note font-bold ${result?.ok ? "text-ok" : "text-flag"}`}>
-            {result?.message ?? ""}
+            {held ? "" : (result?.message ?? "")}
           </p>
         </div>
       </form>
+      {held ? (
+        <div className="mt-3">
+          <ReadyChecksPanel
+            id={`ready-checks-${jobId}`}
+            checks={held.checks}
+            action="Send anyway"
+            serverError={result?.ok ? null : result?.message}
+            onContinue={(body) => send(held.values, body)}
+            onCancel={() => setHeld(null)}
+          />
+        </div>
+      ) : null}
     </section>
   );
 }

@@ -4,7 +4,8 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from "@/lib/vocabulary";
 import { Button } from "@/components/ui/button";
-import { sendJson } from "@/lib/client/fetch-json";
+import type { ReadyIssue } from "@/lib/jobs/ready-checks";
+import { ReadyChecksPanel, sendReady } from "./ready-checks";
 
 /** What each step means at the bench, in our words. */
 const HINTS: Record<JobStatus, string> = {
@@ -24,15 +25,21 @@ export function StatusWorkflow({ jobId, status, canChange }: { jobId: number; st
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
   const [other, setOther] = useState<JobStatus>(status);
+  // A refused "ready": the checks the server listed, and the status that was asked for.
+  const [held, setHeld] = useState<{ to: JobStatus; checks: ReadyIssue[] } | null>(null);
   const index = JOB_STATUSES.indexOf(status);
   const next = JOB_STATUSES[index + 1];
 
-  async function move(to: JobStatus) {
+  async function move(to: JobStatus, override?: { override: true; reason: string }) {
     setBusy(true);
     setError(null);
-    const res = await sendJson(`/api/jobs/${jobId}/status`, { status: to });
+    const res = await sendReady(`/api/jobs/${jobId}/status`, { status: to, ...override });
     setBusy(false);
-    if (!res.ok) return setError(res.message);
+    if (!res.ok) {
+      if (res.checks.length) return setHeld({ to, checks: res.checks });
+      return setError(res.fields.reason ?? res.message);
+    }
+    setHeld(null);
     router.refresh();
   }
 
@@ -80,8 +87,20 @@ export function StatusWorkflow({ jobId, status, canChange }: { jobId: number; st
       ) : (
         <p className="mt-3 text-note text-muted">Technicians and owners move a job along; each change is written to the Log.</p>
       )}
+      {held ? (
+        <div className="mt-4">
+          <ReadyChecksPanel
+            id={`status-checks-${jobId}`}
+            checks={held.checks}
+            action={`Move to “${JOB_STATUS_LABELS[held.to]}” anyway`}
+            serverError={error}
+            onContinue={(body) => move(held.to, body)}
+            onCancel={() => setHeld(null)}
+          />
+        </div>
+      ) : null}
       <p role="alert" className="mt-2 min-h-5 font-bold text-flag">
-        {error ?? ""}
+        {held ? "" : (error ?? "")}
       </p>
     </div>
   );

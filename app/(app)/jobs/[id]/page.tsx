@@ -1,10 +1,12 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { OpenFaultsPanel } from "@/components/jobs/faults/open-faults-panel";
 import { JobDetails } from "@/components/jobs/job-details";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
 import { ReadyMessage } from "@/components/jobs/ready-message";
 import { StatusWorkflow } from "@/components/jobs/status-workflow";
 import { Card } from "@/components/ui/card";
+import { listFaults } from "@/db/queries/faults";
 import { listFiles } from "@/db/queries/files";
 import { listParts } from "@/db/queries/parts";
 import { listReadings } from "@/db/queries/readings";
@@ -20,6 +22,7 @@ export default async function JobOverviewPage({ params }: JobPageProps) {
   const parts = listParts(member, job.id);
   const readings = listReadings(member, job.id);
   const files = listFiles(member, job.id);
+  const faults = listFaults(member, job.id);
   const stats = [
     { label: "parts to order", value: parts.filter((p) => p.state === "to-order").length, href: "parts" },
     { label: `of ${parts.length} ${parts.length === 1 ? "part" : "parts"} fitted`, value: parts.filter((p) => p.state === "fitted").length, href: "parts" },
@@ -54,6 +57,9 @@ export default async function JobOverviewPage({ params }: JobPageProps) {
           ))}
         </ul>
       </Card>
+      <div className="lg:col-span-2">
+        <OpenFaultsPanel jobId={job.id} faults={faults} />
+      </div>
     </div>
   );
 }
