@@ -33,6 +33,8 @@ export const partUpdateSchema = z
     designator: partFields.designator.optional(),
     kind: partFields.kind.optional(),
     state: z.enum(PART_STATES, { error: `State must be one of ${PART_STATES.join(", ")}.` }).optional(),
+    /** A technician's check of a fitted part (apprentices may record fitting, not check it). */
+    checked: z.boolean({ error: "Send checked as true or false." }).optional(),
   })
   .refine((v) => Object.values(v).some((x) => x !== undefined), { message: "Send at least one field to change." });
 export type PartUpdate = z.output<typeof partUpdateSchema>;

@@ -17,11 +17,12 @@ import {
 /** PRODUCT.md's error shape, and the one place a thrown error becomes an HTTP answer. */
 
 export interface ApiErrorBody {
-  error: { message: string; fields: Record<string, string> };
+  /** Some refusals add a list beside message and fields (the checks before "ready": `checks`). */
+  error: { message: string; fields: Record<string, string> } & Record<string, unknown>;
 }
 
-export function apiError(status: number, message: string, fields: Record<string, string> = {}, headers?: HeadersInit) {
-  return NextResponse.json<ApiErrorBody>({ error: { message, fields } }, { status, headers });
+export function apiError(status: number, message: string, fields: Record<string, string> = {}, headers?: HeadersInit, details?: Record<string, unknown>) {
+  return NextResponse.json<ApiErrorBody>({ error: { ...details, message, fields } }, { status, headers });
 }
 
 /** A JSON response from text already serialised (the calculator route builds its JSON itself). */
@@ -60,7 +61,8 @@ export function errorResponse(err: unknown): Response {
   if (err instanceof HttpError) return apiError(err.status, err.message, err.fields, err.headers);
   if (err instanceof DomainError) {
     const status = STATUS_OF.find(([kind]) => err instanceof kind)?.[1];
-    if (status) return apiError(status, err.message, err.fields);
+    const details = "details" in err && typeof err.details === "object" ? (err.details as Record<string, unknown>) : undefined;
+    if (status) return apiError(status, err.message, err.fields, undefined, details);
   }
   console.error("Unhandled route error", err);
   return apiError(500, "Something went wrong on our side; please try again.");
