@@ -20,7 +20,7 @@ export async function sweepOrphanUploads(options: { now?: number; graceMs?: numb
   const dir = options.dir ?? uploadsDir();
   let names: string[];
   try {
-    names = await fs.readdir(dir);
+    names = await fs.readdir(/*turbopackIgnore: true*/ dir);
   } catch {
     return []; // no uploads yet
   }
@@ -28,14 +28,14 @@ export async function sweepOrphanUploads(options: { now?: number; graceMs?: numb
   for (const name of names) {
     const stored = name.endsWith(".thumb.webp") ? name.slice(0, -".thumb.webp".length) : name;
     if (!STORED.test(stored)) continue; // not ours: never touched
-    const stat = await fs.stat(path.join(dir, name)).catch(() => null);
+    const stat = await fs.stat(path.join(/*turbopackIgnore: true*/ dir, name)).catch(() => null);
     if (stat && now - stat.mtimeMs >= graceMs && !old.includes(stored)) old.push(stored);
   }
   const known = knownStoredNames(old);
   const orphans = old.filter((n) => !known.has(n));
   for (const n of orphans) {
-    await fs.rm(path.join(dir, n), { force: true });
-    await fs.rm(path.join(dir, thumbnailName(n)), { force: true });
+    await fs.rm(path.join(/*turbopackIgnore: true*/ dir, n), { force: true });
+    await fs.rm(path.join(/*turbopackIgnore: true*/ dir, thumbnailName(n)), { force: true });
   }
   if (orphans.length) console.log(`Removed ${orphans.length} upload(s) whose record was never saved.`);
   return orphans;
