@@ -15,10 +15,12 @@ export interface IndexEntry {
   words: string;
 }
 
+/** A group's colour along the top of its cards (hazard red stays for danger alone). */
 const ACCENT: Record<CalculatorGroup, string> = {
-  stages: "border-t-glow",
+  "first-power": "border-t-caution",
   supplies: "border-t-signal",
-  safety: "border-t-caution",
+  stages: "border-t-glow",
+  radio: "border-t-edge",
   parts: "border-t-muted",
 };
 
@@ -31,7 +33,7 @@ function matches(e: IndexEntry, q: string): boolean {
     .every((w) => hay.includes(w));
 }
 
-/** Every calculator by bench task, with a filter that narrows as you type. */
+/** Every calculator under the bench task a restorer knows it by, with a filter that narrows as you type. */
 export function BenchIndex({ entries }: { entries: IndexEntry[] }) {
   const [q, setQ] = useState("");
   const id = useId();
@@ -59,6 +61,20 @@ export function BenchIndex({ entries }: { entries: IndexEntry[] }) {
           {q ? `${shown.length} of ${entries.length} calculators match.` : `${entries.length} calculators.`}
         </p>
       </div>
+      {q ? null : (
+        <nav aria-label="Bench sections" className="gb-no-print -mt-6 mb-10">
+          <ul className="flex flex-wrap gap-2">
+            {GROUPS.map((g) => (
+              <li key={g.id}>
+                <a href={`#group-${g.id}`} className="inline-flex min-h-11 items-center rounded-chip border border-rule bg-panel px-3 py-2 font-bold text-signal hover:border-glow">
+                  {g.title}
+                  <span className="ml-2 font-normal text-muted">{entries.filter((e) => e.group === g.id).length}</span>
+                </a>
+              </li>
+            ))}
+          </ul>
+        </nav>
+      )}
       {shown.length === 0 ? (
         <div className="rounded-card border-2 border-dashed border-rule bg-panel/60 p-10 text-center">
           <h2 className="text-lead font-bold">Nothing matches “{q}”</h2>
@@ -77,10 +93,10 @@ export function BenchIndex({ entries }: { entries: IndexEntry[] }) {
           return (
             <section key={g.id} aria-labelledby={`group-${g.id}`} className="mb-12">
               <div className="mb-4 flex flex-wrap items-baseline gap-x-4 border-b border-rule pb-2">
-                <h2 id={`group-${g.id}`} className="text-lead font-bold">
+                <h2 id={`group-${g.id}`} className="scroll-mt-4 text-lead font-bold">
                   {g.title}
                 </h2>
-                <p className="text-muted">{g.blurb}</p>
+                <p className="max-w-3xl text-muted">{g.blurb}</p>
               </div>
               <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3">
                 {list.map((e) => (

@@ -1,15 +1,15 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
+import { toNestErrors } from "@hookform/resolvers";
 import dynamic from "next/dynamic";
 import Link from "next/link";
 import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState, type ReactNode } from "react";
-import { FormProvider, useForm, useWatch, type Resolver } from "react-hook-form";
+import { FormProvider, useForm, useWatch, type FieldError, type Resolver } from "react-hook-form";
 import { runCalculator, type RunResult } from "@/lib/calc/run";
 import { encodeInputs } from "@/lib/calc/share";
-import type { Calculator, InputMeta, OutputMeta } from "@/lib/calc/types";
+import type { BenchDescriptor, Calculator, InputMeta, OutputMeta } from "@/lib/calc/types";
 import { plain } from "@/lib/bench/errors";
-import { ADVANCED, hiddenFields, initialMode, MODES, toRaw, type FormValues } from "@/lib/bench/form-values";
+import { hiddenFields, initialMode, toRaw, type FormValues } from "@/lib/bench/form-values";
 import { loadCalculator } from "@/lib/bench/load-calculator";
 import { highestTypedVoltage, quickParse, typedHazard, type Parse } from "@/lib/bench/typed-volts";
 import { ChartSlot } from "./chart-slot";
@@ -26,6 +26,8 @@ export interface CalculatorViewProps {
   slug: string;
   inputs: InputMeta[];
   outputs: OutputMeta[];
+  /** The calculator's descriptor (lib/calc/<slug>.ts), handed over by the server page, so no registry reaches the browser. */
+  bench: BenchDescriptor;
   initial: FormValues;
   example: FormValues;
   initialRun: RunResult;
@@ -34,7 +36,6 @@ export interface CalculatorViewProps {
   signedIn: boolean;
   /** Owners and technicians may book in a new job from here; apprentices save to existing ones. */
   canCreateJob: boolean;
-  alwaysDanger: boolean;
   formulas: ReactNode;
   sources: ReactNode;
   why: ReactNode;
@@ -46,34 +47,32 @@ export interface CalculatorViewProps {
  * The calculator module is loaded on its own; until it arrives the server's result is shown.
  */
 export function CalculatorView(p: CalculatorViewProps) {
-  const { slug, inputs } = p;
-  const calcRef = useRef<Calculator | null>(null);
+  const { slug, inputs, bench } = p;
+  const shape = useMemo(() => ({ inputs, bench }), [inputs, bench]);
   const [calc, setCalc] = useState<Calculator | null>(null);
-  const [mode, setMode] = useState(() => initialMode(slug, p.initial));
+  const [mode, setMode] = useState(() => initialMode(bench.modes, p.initial));
   const [moreOpen, setMoreOpen] = useState(() =>
-    (ADVANCED[slug]?.fields ?? []).some((f) => {
+    (bench.advanced?.fields ?? []).some((f) => {
       const v = p.initial[f];
       const d = p.inputs.find((i) => i.name === f)?.default;
       return typeof v === "string" && v.trim() !== "" && v !== String(d ?? "");
     }),
   );
-  const modeRef = useRef(mode);
-  modeRef.current = mode;
-
-  // The calculator's own schema validates what the form holds, cleaned as the calculator receives it.
-  const resolver = useCallback<Resolver<FormValues>>(
-    async (values, context, options) => {
-      const c = calcRef.current;
-      if (!c) return { values, errors: {} };
-      const zr = zodResolver(c.schema as never) as unknown as Resolver<FormValues>;
-      return zr(toRaw(slug, inputs, values, modeRef.current), context, options);
-    },
-    [slug, inputs],
-  );
+  // Each keystroke is parsed once: the calculator's own schema, through runCalculator, gives the result
+  // below, and the resolver hands that same run's field messages to the form instead of parsing again.
+  const latest = useRef<RunResult | null>(null);
+  const resolver = useCallback<Resolver<FormValues>>((values, _context, options) => {
+    const last = latest.current;
+    if (!last || last.ok) return { values, errors: {} };
+    const flat: Record<string, FieldError> = {};
+    for (const [path, message] of Object.entries(last.error.fields)) if (path !== "_") flat[path] = { type: "validate", message };
+    return { values: {}, errors: toNestErrors(flat, options) };
+  }, []);
   const form = useForm<FormValues>({ defaultValues: p.initial, resolver, mode: "onSubmit", reValidateMode: "onSubmit" });
   const values = useWatch({ control: form.control }) as FormValues;
-  const raw = useMemo(() => toRaw(slug, inputs, values, mode), [slug, inputs, values, mode]);
+  const raw = useMemo(() => toRaw(shape, values, mode), [shape, values, mode]);
   const run = useMemo(() => (calc ? runCalculator(calc, raw) : p.initialRun), [calc, raw, p.initialRun]);
+  latest.current = calc ? run : null;
   const later = useDeferredValue(run);
   // The danger banner follows each typed voltage on its own, valid form or not. The full unit parser
   // (mathjs) shares the calculator module's chunk; until it arrives the quick reader serves.
@@ -90,7 +89,6 @@ export function CalculatorView(p: CalculatorViewProps) {
     import("@/lib/calc/units").then((m) => alive && setParse(() => m.parseQuantity));
     loadCalculator(slug).then((c) => {
       if (!alive) return;
-      calcRef.current = c;
       setCalc(c);
       // Lets tests and the speed bench know results now follow keystrokes in the browser.
       document.documentElement.dataset.benchReady = "1";
@@ -101,7 +99,7 @@ export function CalculatorView(p: CalculatorViewProps) {
     };
   }, [slug, wanted]);
 
-  // Re-check every field, so a message that depends on another field (target below initial) stays current.
+  // Re-check every field from the latest run, so a message that depends on another field (target below initial) stays current.
   const { trigger } = form;
   useEffect(() => {
     if (calc) void trigger();
@@ -117,15 +115,15 @@ export function CalculatorView(p: CalculatorViewProps) {
     return () => clearTimeout(t);
   }, [raw]);
 
-  const hidden = hiddenFields(slug, mode);
+  const hidden = hiddenFields(bench.modes, mode);
   const shown = inputs.filter((i) => !hidden.has(i.name));
   const visibleNames = new Set(shown.map((i) => i.name));
   const orphanErrors = run.ok ? [] : Object.entries(run.error.fields).filter(([k]) => !visibleNames.has(k.split(".")[0]));
   const dangers = run.ok ? run.result.warnings.filter((w) => w.level === "danger").map((w) => w.message) : [];
   const hazardTyped = typedHazard(typed);
-  const showDanger = p.alwaysDanger || dangers.length > 0 || hazardTyped;
-  const modes = MODES[slug]?.modes;
-  const advanced = ADVANCED[slug];
+  const showDanger = bench.alwaysDanger || dangers.length > 0 || hazardTyped;
+  const modes = bench.modes;
+  const advanced = bench.advanced;
   const isAdvanced = (name: string) => advanced?.fields.includes(name) ?? false;
   const advancedError = !run.ok && Object.keys(run.error.fields).some((k) => isAdvanced(k.split(".")[0]));
 
@@ -202,12 +200,12 @@ export function CalculatorView(p: CalculatorViewProps) {
             Result
           </h2>
           <PrintInputs inputs={shown} raw={raw} />
-          <ResultsPanel slug={slug} outputs={p.outputs} run={run} />
-          {later.ok ? <ChartSlot slug={slug} inputs={later.result.inputs} outputs={later.result.outputs} /> : null}
+          <ResultsPanel view={bench} outputs={p.outputs} run={run} />
+          {later.ok ? <ChartSlot kind={bench.chart} inputs={later.result.inputs} outputs={later.result.outputs} /> : null}
         </div>
       </div>
       <div className="mt-8">
-        <Working slug={slug} live={calc !== null} open={p.workingOpen} run={later} outputs={p.outputs} serverHtml={p.serverHtml} formulas={p.formulas} sources={p.sources} why={p.why} />
+        <Working view={bench} live={calc !== null} open={p.workingOpen} run={later} outputs={p.outputs} serverHtml={p.serverHtml} formulas={p.formulas} sources={p.sources} why={p.why} />
       </div>
       <section aria-labelledby="save-title" className="gb-no-print mt-8 rounded-card border border-rule bg-panel p-6 shadow-card">
         <h2 id="save-title" className="mb-3 text-lead font-bold">
@@ -234,7 +232,7 @@ export function CalculatorView(p: CalculatorViewProps) {
           onReset={() => {
             want();
             form.reset(p.example);
-            setMode(initialMode(slug, p.example));
+            setMode(initialMode(bench.modes, p.example));
           }}
         />
       </div>

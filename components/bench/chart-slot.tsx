@@ -2,11 +2,15 @@
 
 import dynamic from "next/dynamic";
 import type { ComponentType } from "react";
+import type { ChartKind } from "@/lib/calc/bench-descriptor";
 
-/** The picture for a calculator, with recharts loaded only on the pages that draw one. */
+/**
+ * The picture a calculator's descriptor names (`bench.chart`), with recharts loaded only on the pages
+ * that draw one: each kind is its own chunk.
+ */
 
 export interface ChartProps {
-  slug: string;
+  kind: ChartKind;
   inputs: Record<string, unknown>;
   outputs: Record<string, unknown>;
 }
@@ -17,20 +21,25 @@ const Discharge = dynamic(() => import("./charts/discharge-chart"), { ssr: false
 const Ripple = dynamic(() => import("./charts/ripple-chart"), { ssr: false, loading: placeholder });
 const Breakdown = dynamic(() => import("./charts/breakdown-chart"), { ssr: false, loading: placeholder });
 const Plate = dynamic(() => import("./charts/plate-chart"), { ssr: false, loading: placeholder });
+const Lamp = dynamic(() => import("./charts/lamp-chart"), { ssr: false, loading: placeholder });
+const Reforming = dynamic(() => import("./charts/reforming-chart"), { ssr: false, loading: placeholder });
+const Coupling = dynamic(() => import("./charts/coupling-chart"), { ssr: false, loading: placeholder });
+const Dial = dynamic(() => import("./charts/dial-chart"), { ssr: false, loading: placeholder });
 
-const BY_SLUG: Record<string, ComponentType<ChartProps>> = {
-  "time-constant": Discharge,
-  bleeder: Discharge,
-  "supply-ripple": Ripple,
-  "arc-clearance": Breakdown,
-  "triode-stage": Plate,
+const BY_KIND: Record<ChartKind, ComponentType<ChartProps>> = {
+  "rc-discharge": Discharge,
+  "bleeder-discharge": Discharge,
+  ripple: Ripple,
+  breakdown: Breakdown,
+  "plate-curves": Plate,
+  "lamp-current": Lamp,
+  "reforming-schedule": Reforming,
+  "coupling-response": Coupling,
+  "superhet-dial": Dial,
 };
 
-export function hasChart(slug: string): boolean {
-  return slug in BY_SLUG;
-}
-
-export function ChartSlot(props: ChartProps) {
-  const Chart = BY_SLUG[props.slug];
-  return Chart ? <Chart {...props} /> : null;
+export function ChartSlot({ kind, ...rest }: Omit<ChartProps, "kind"> & { kind: ChartKind | null }) {
+  if (!kind) return null;
+  const Chart = BY_KIND[kind];
+  return <Chart kind={kind} {...rest} />;
 }

@@ -2,21 +2,21 @@
 
 import type { RunResult } from "@/lib/calc/run";
 import type { OutputMeta, OutputValue, Warning } from "@/lib/calc/types";
-import { formatOutput, formatPlain, outputLabel } from "@/lib/bench/display";
-import { HEADLINES } from "@/lib/bench/examples";
+import type { BenchDescriptor } from "@/lib/calc/types";
+import { formatOutput, formatPlain, outputLabel, outputTone } from "@/lib/bench/display";
 import { BAND_PAINT } from "./list-inputs";
 import { ShuntsTable } from "./shunts-table";
 
-/** Outputs whose value is bad news, so the figure is shown in the hazard (danger alone) or caution colour. */
-function tone(slug: string, name: string, value: OutputValue): string {
-  if (slug === "arc-clearance" && name === "willArc" && value === true) return "text-hazard";
-  // Unequal heater currents need shunts, a caution; only an arc at the typed voltage is a danger.
-  if (slug === "heater-string" && name === "currentsMatch" && value === false) return "text-caution";
-  if (slug === "resistor-drift" && (name === "verdict" || name === "withinTolerance") && value !== "within" && value !== true) return "text-caution";
-  return "text-ink";
+type View = Pick<BenchDescriptor, "headlines" | "format" | "words" | "tones">;
+
+/** A figure whose value is bad news (the descriptor's tones) is shown in the hazard (danger alone) or caution colour. */
+const TONE_CLASS = { hazard: "text-hazard", caution: "text-caution" } as const;
+function tone(view: View, name: string, value: OutputValue): string {
+  const t = outputTone(view, name, value);
+  return t ? TONE_CLASS[t] : "text-ink";
 }
 
-export function ResultsPanel({ slug, outputs, run }: { slug: string; outputs: readonly OutputMeta[]; run: RunResult }) {
+export function ResultsPanel({ view, outputs, run }: { view: View; outputs: readonly OutputMeta[]; run: RunResult }) {
   if (!run.ok) {
     const named = Object.keys(run.error.fields).filter((k) => k !== "_").length;
     return (
@@ -29,7 +29,7 @@ export function ResultsPanel({ slug, outputs, run }: { slug: string; outputs: re
     );
   }
   const { outputs: values, warnings } = run.result;
-  const headline = HEADLINES[slug] ?? outputs.slice(0, 2).map((o) => o.name);
+  const headline: readonly string[] = view.headlines;
   const heads = outputs.filter((o) => headline.includes(o.name));
   const rest = outputs.filter((o) => !headline.includes(o.name) && values[o.name] !== null && values[o.name] !== undefined);
   return (
@@ -37,9 +37,9 @@ export function ResultsPanel({ slug, outputs, run }: { slug: string; outputs: re
       <div className="grid gap-3 sm:grid-cols-2" aria-live="polite">
         {heads.map((o) => (
           <div key={o.name} className="rounded-card border border-rule bg-panel p-4 shadow-card">
-            <p className="text-note font-bold text-muted">{outputLabel(slug, o)}</p>
-            <p data-testid={`output-${o.name}`} className={`mt-1 font-mono text-reading font-bold ${tone(slug, o.name, values[o.name])}`}>
-              {formatOutput(slug, o, values[o.name])}
+            <p className="text-note font-bold text-muted">{outputLabel(view, o)}</p>
+            <p data-testid={`output-${o.name}`} className={`mt-1 font-mono text-reading font-bold ${tone(view, o.name, values[o.name])}`}>
+              {formatOutput(view, o, values[o.name])}
             </p>
           </div>
         ))}
@@ -47,10 +47,10 @@ export function ResultsPanel({ slug, outputs, run }: { slug: string; outputs: re
       {rest.length ? (
         <dl className="divide-y divide-rule rounded-card border border-rule bg-panel">
           {rest.map((o) => (
-            <div key={o.name} className={`px-4 py-2.5 ${o.name === "stages" || o.name === "shunts" ? "" : "flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1"}`}>
-              <dt className="text-muted">{outputLabel(slug, o)}</dt>
-              <dd data-testid={`output-${o.name}`} className={`font-mono font-bold ${tone(slug, o.name, values[o.name])}`}>
-                {Array.isArray(values[o.name]) ? <ListValue name={o.name} value={values[o.name] as OutputValue[]} /> : formatOutput(slug, o, values[o.name])}
+            <div key={o.name} className={`px-4 py-2.5 ${TABLES.has(o.name) ? "" : "flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1"}`}>
+              <dt className="text-muted">{outputLabel(view, o)}</dt>
+              <dd data-testid={`output-${o.name}`} className={`font-mono font-bold ${tone(view, o.name, values[o.name])}`}>
+                {Array.isArray(values[o.name]) ? <ListValue name={o.name} value={values[o.name] as OutputValue[]} /> : formatOutput(view, o, values[o.name])}
               </dd>
             </div>
           ))}
@@ -60,6 +60,9 @@ export function ResultsPanel({ slug, outputs, run }: { slug: string; outputs: re
     </div>
   );
 }
+
+/** List outputs drawn as a table under their label rather than beside it. */
+const TABLES = new Set(["stages", "shunts", "steps"]);
 
 function ListValue({ name, value }: { name: string; value: OutputValue[] }) {
   if (name === "bands") {
@@ -105,6 +108,7 @@ function ListValue({ name, value }: { name: string; value: OutputValue[] }) {
       </table>
     );
   }
+  if (name === "steps") return <ScheduleTable value={value} />;
   return <>{value.map(String).join(", ")}</>;
 }
 
@@ -126,5 +130,34 @@ function Notes({ warnings }: { warnings: Warning[] }) {
         </li>
       ))}
     </ul>
+  );
+}
+
+/** The reforming schedule: each step's voltage, the least time to hold it and the leakage to wait for. */
+function ScheduleTable({ value }: { value: OutputValue[] }) {
+  return (
+    <table className="mt-1 w-full text-right text-note">
+      <thead className="font-sans text-muted">
+        <tr>
+          <th scope="col" className="pr-3 text-left font-normal">Step</th>
+          <th scope="col" className="pr-3 font-normal">Voltage</th>
+          <th scope="col" className="pr-3 font-normal">Hold at least</th>
+          <th scope="col" className="font-normal">Leakage to wait for</th>
+        </tr>
+      </thead>
+      <tbody>
+        {value.map((s, i) => {
+          const row = s as Record<string, OutputValue>;
+          return (
+            <tr key={i}>
+              <th scope="row" className="pr-3 text-left">{i + 1}</th>
+              <td className="pr-3">{formatPlain(row.voltage, "V")}</td>
+              <td className="pr-3">{typeof row.minutes === "number" ? `${row.minutes} min` : "—"}</td>
+              <td>{formatPlain(row.leakageLimit, "A")}</td>
+            </tr>
+          );
+        })}
+      </tbody>
+    </table>
   );
 }

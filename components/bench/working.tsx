@@ -2,13 +2,13 @@
 
 import { useEffect, useRef, useState, type ReactNode } from "react";
 import type { RunResult } from "@/lib/calc/run";
-import type { OutputMeta } from "@/lib/calc/types";
+import type { BenchDescriptor, OutputMeta } from "@/lib/calc/types";
 import { formatOutput, outputLabel } from "@/lib/bench/display";
-import { HEADLINES } from "@/lib/bench/examples";
 import { Tex, useKatex } from "./tex";
 
 interface Props {
-  slug: string;
+  /** The descriptor's headline figures and how they read. */
+  view: Pick<BenchDescriptor, "headlines" | "format" | "words">;
   /** Load KaTeX for live steps (true once the person has started working with the form). */
   live: boolean;
   open: boolean;
@@ -21,7 +21,7 @@ interface Props {
 }
 
 /** The working: formulas, each step with the values substituted, the result, its source and why it matters. */
-export function Working({ slug, live, open, run, outputs, serverHtml, formulas, sources, why }: Props) {
+export function Working({ view, live, open, run, outputs, serverHtml, formulas, sources, why }: Props) {
   const [isOpen, setIsOpen] = useState(open);
   const katex = useKatex(live || isOpen);
   const ref = useRef<HTMLDetailsElement>(null);
@@ -31,7 +31,7 @@ export function Working({ slug, live, open, run, outputs, serverHtml, formulas, 
     window.addEventListener("beforeprint", show);
     return () => window.removeEventListener("beforeprint", show);
   }, []);
-  const headline = HEADLINES[slug] ?? [];
+  const headline: readonly string[] = view.headlines;
   return (
     <details ref={ref} open={open} onToggle={(e) => setIsOpen(e.currentTarget.open)} data-testid="working" className="gb-working group rounded-card border border-rule bg-panel shadow-card">
       <summary className="flex min-h-11 cursor-pointer list-none items-center gap-3 rounded-card px-6 py-4 text-lead font-bold hover:bg-sunk [&::-webkit-details-marker]:hidden">
@@ -74,8 +74,8 @@ export function Working({ slug, live, open, run, outputs, serverHtml, formulas, 
                 .filter((o) => headline.includes(o.name))
                 .map((o) => (
                   <li key={o.name}>
-                    <span className="font-sans text-muted">{outputLabel(slug, o)}: </span>
-                    <strong>{formatOutput(slug, o, run.result.outputs[o.name])}</strong>
+                    <span className="font-sans text-muted">{outputLabel(view, o)}: </span>
+                    <strong>{formatOutput(view, o, run.result.outputs[o.name])}</strong>
                   </li>
                 ))}
             </ul>

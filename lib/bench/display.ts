@@ -1,18 +1,23 @@
 import { formatQuantity, toEngineering } from "@/lib/calc/format";
-import type { OutputMeta, OutputValue } from "@/lib/calc/types";
+import type { BenchDescriptor, OutputMeta, OutputValue } from "@/lib/calc/types";
 
-/** Turning calculator outputs into what the Bench shows: engineering notation, plain words for the rest. */
+/**
+ * Turning calculator outputs into what the Bench shows: engineering notation, plain words for the rest.
+ * How each output reads (a percentage, a bare prefix, words, a warning colour) comes from the calculator's
+ * descriptor (`bench` in lib/calc/<slug>.ts); without one a number reads in its unit.
+ */
 
-/** Fractions a person reads as percentages. */
-const PERCENT = new Set(["resistor-drift.deviation", "colour-code.tolerance", "preferred-value.errorOfNearest"]);
-/** Unitless values that still read best with a prefix (a preferred value may be ohms or farads). */
-const BARE_PREFIX = new Set(["preferred-value.nearest", "preferred-value.below", "preferred-value.above"]);
+export type OutputView = Pick<BenchDescriptor, "format" | "words" | "tones">;
 
-const WORDS: Record<string, string> = { within: "Within tolerance", high: "Drifted high", low: "Drifted low", open: "Open circuit" };
+const isPercent = (view: OutputView | undefined, name: string) => {
+  const f = view?.format?.[name];
+  return f === "percent" || f === "signed-percent";
+};
 
-/** The label without "(fraction)" when the value is shown as a percentage. */
-export function outputLabel(slug: string, meta: OutputMeta): string {
-  return PERCENT.has(`${slug}.${meta.name}`) ? meta.label.replace(/\s*\((signed )?fraction(, signed)?\)/, "") : meta.label;
+/** The label without "(fraction)" when the value is shown as a percentage ("(fraction of the true voltage)" keeps "of …"). */
+export function outputLabel(view: OutputView | undefined, meta: OutputMeta): string {
+  if (!isPercent(view, meta.name)) return meta.label;
+  return meta.label.replace(/\s*\((signed )?fraction(, signed)?\)/, "").replace(/\(fraction of /, "(of ");
 }
 
 /** Significant figures: four for a resistance someone will pick a part for, three otherwise. */
@@ -20,17 +25,17 @@ function sigFor(unit: string): number {
   return unit === "Ω" ? 4 : 3;
 }
 
-export function formatOutput(slug: string, meta: OutputMeta, value: OutputValue): string {
+export function formatOutput(view: OutputView | undefined, meta: OutputMeta, value: OutputValue): string {
   if (value === null || value === undefined) return "—";
   if (typeof value === "boolean") return value ? "Yes" : "No";
-  if (typeof value === "string") return WORDS[value] ?? value.charAt(0).toUpperCase() + value.slice(1);
+  if (typeof value === "string") return view?.words?.[meta.name]?.[value] ?? value.charAt(0).toUpperCase() + value.slice(1);
   if (typeof value === "number") {
-    const key = `${slug}.${meta.name}`;
-    if (PERCENT.has(key)) {
+    const format = view?.format?.[meta.name];
+    if (format === "percent" || format === "signed-percent") {
       const pct = Number((value * 100).toPrecision(3));
-      return `${pct > 0 && key !== "colour-code.tolerance" ? "+" : ""}${pct} %`;
+      return `${pct > 0 && format === "signed-percent" ? "+" : ""}${pct} %`;
     }
-    if (BARE_PREFIX.has(key)) {
+    if (format === "bare-prefix") {
       const e = toEngineering(value, "Ω", 3);
       return `${e.mantissa}${e.prefix}`;
     }
@@ -40,7 +45,16 @@ export function formatOutput(slug: string, meta: OutputMeta, value: OutputValue)
   return JSON.stringify(value);
 }
 
+/** The colour a figure is shown in when its value is bad news: hazard (danger alone), caution, or none. */
+export function outputTone(view: OutputView | undefined, name: string, value: OutputValue): "hazard" | "caution" | null {
+  for (const rule of view?.tones ?? []) {
+    if (rule.output !== name) continue;
+    if ("when" in rule ? value === rule.when : value !== rule.unless) return rule.tone;
+  }
+  return null;
+}
+
 /** Plain-text quantity for tables inside a result (stage rows and the like). */
 export function formatPlain(value: OutputValue, unit: string, sig = 3): string {
-  return typeof value === "number" ? formatQuantity(value, unit, sig) : formatOutput("", { name: "", label: "", unit }, value);
+  return typeof value === "number" ? formatQuantity(value, unit, sig) : formatOutput(undefined, { name: "", label: "", unit }, value);
 }

@@ -1,4 +1,4 @@
-import type { InputMeta } from "@/lib/calc/types";
+import type { BenchDescriptor, InputMeta } from "@/lib/calc/types";
 
 /**
  * The form holds what a person typed (text for quantities, arrays for lists); the calculator's schema
@@ -7,34 +7,22 @@ import type { InputMeta } from "@/lib/calc/types";
 
 export type FormValues = Record<string, unknown>;
 
-/** Calculators whose list input has an alternative: heaters or tube types, bands or a resistance. */
-export const MODES: Record<string, { modes: readonly { id: string; label: string; fields: readonly string[] }[] }> = {
-  "heater-string": {
-    modes: [
-      { id: "tubes", label: "By tube type", fields: ["tubes"] },
-      { id: "heaters", label: "By heater rating", fields: ["heaters"] },
-    ],
-  },
-  "colour-code": {
-    modes: [
-      { id: "bands", label: "Read the bands", fields: ["bands"] },
-      { id: "value", label: "Code a value", fields: ["resistance", "tolerance", "temperatureCoefficient"] },
-    ],
-  },
-};
+/** What the form needs of a calculator: its inputs, and its descriptor's ways of entering a list (heaters or tube types, bands or a resistance). */
+export interface FormShape {
+  inputs: readonly InputMeta[];
+  bench: Pick<BenchDescriptor, "modes">;
+}
 
-export function hiddenFields(slug: string, mode: string | undefined): Set<string> {
-  const m = MODES[slug];
-  if (!m) return new Set();
-  return new Set(m.modes.filter((x) => x.id !== mode).flatMap((x) => x.fields));
+export function hiddenFields(modes: BenchDescriptor["modes"], mode: string | undefined): Set<string> {
+  if (!modes) return new Set();
+  return new Set(modes.filter((x) => x.id !== mode).flatMap((x) => x.fields));
 }
 
 /** The mode the initial inputs imply (the first one with a value, else the first). */
-export function initialMode(slug: string, values: FormValues): string | undefined {
-  const m = MODES[slug];
-  if (!m) return undefined;
-  const given = m.modes.find((x) => x.fields.some((f) => !isBlank(values[f]) && !(Array.isArray(values[f]) && (values[f] as unknown[]).length === 0)));
-  return (given ?? m.modes[0]).id;
+export function initialMode(modes: BenchDescriptor["modes"], values: FormValues): string | undefined {
+  if (!modes) return undefined;
+  const given = modes.find((x) => x.fields.some((f) => !isBlank(values[f]) && !(Array.isArray(values[f]) && (values[f] as unknown[]).length === 0)));
+  return (given ?? modes[0]).id;
 }
 
 function isBlank(v: unknown): boolean {
@@ -76,10 +64,10 @@ function listValue(name: string, v: unknown): unknown[] {
 }
 
 /** What the schema (and the URL, and a saved job) gets from the form. */
-export function toRaw(slug: string, inputs: readonly InputMeta[], values: FormValues, mode?: string): FormValues {
-  const hidden = hiddenFields(slug, mode);
+export function toRaw(form: FormShape, values: FormValues, mode?: string): FormValues {
+  const hidden = hiddenFields(form.bench.modes, mode);
   const out: FormValues = {};
-  for (const meta of inputs) {
+  for (const meta of form.inputs) {
     if (hidden.has(meta.name)) continue;
     const v = values[meta.name];
     if (meta.control === "boolean") {
@@ -129,11 +117,3 @@ function cleanLamp(v: unknown): Record<string, string> | null {
   if (!voltage && !current && !rectifierCurrent) return null;
   return rectifierCurrent ? { voltage, current, rectifierCurrent } : { voltage, current };
 }
-
-/** Inputs most people leave alone, folded under "More figures" until needed. */
-export const ADVANCED: Record<string, { title: string; fields: readonly string[] }> = {
-  "cathode-bias": { title: "Tube figures, for a better bypass estimate", fields: ["amplificationFactor", "plateResistance", "plateLoad", "transconductance"] },
-  "triode-stage": { title: "Koren's triode model: override the table, or model another tube", fields: ["mu", "ex", "kg1", "kp", "kvb"] },
-  "heater-string": { title: "Pilot lamp on the rectifier's heater tap", fields: ["pilotLamp"] },
-  "arc-clearance": { title: "Air, altitude and safety factor", fields: ["pressure", "temperature", "altitude", "safetyFactor"] },
-};

@@ -120,7 +120,16 @@ export const calculator = defineCalculator({
   slug: "arc-clearance",
   title: "Arc clearance in air",
   purpose: "The air gap a peak voltage needs: the uniform-field breakdown gap and IEC 60664-1's clearance, whichever is larger.",
-  group: "safety",
+  bench: {
+    group: "first-power",
+    example: { peakVoltage: "15 kV", gap: "5 mm" },
+    headlines: ["recommendedClearance", "standardClearance"],
+    alwaysDanger: true,
+    chart: "breakdown",
+    advanced: { title: "Air, altitude and safety factor", fields: ["pressure", "temperature", "altitude", "safetyFactor"] },
+    // Only an arc at the typed voltage is shown in the hazard colour.
+    tones: [{ output: "willArc", when: true, tone: "hazard" }],
+  },
   inputs: [
     { name: "peakVoltage", label: "Peak voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The highest instantaneous voltage across the gap; for sine-wave AC that is 1.414 × the rms value." },
     { name: "gap", label: "Gap", unit: "m", required: false, control: "quantity", quantity: "length", help: "Optional: the air gap to check, e.g. \"3 mm\"." },

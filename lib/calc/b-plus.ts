@@ -87,7 +87,13 @@ export const calculator = defineCalculator({
   slug: "b-plus",
   title: "B+ from the transformer",
   purpose: "The DC a transformer, rectifier and reservoir capacitor give under load, and its ripple.",
-  group: "supplies",
+  bench: {
+    group: "supplies",
+    example: { secondaryVoltage: "350 V", rectifier: "full-wave", rectifierTube: "5Y3GT", loadCurrent: "90 mA", capacitance: "20 uF" },
+    headlines: ["dcOutput", "ripplePeakToPeak"],
+    alwaysDanger: false,
+    chart: null,
+  },
   inputs: [
     { name: "secondaryVoltage", label: "Secondary voltage (rms)", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "For a centre-tapped full-wave circuit, each half (centre tap to one end, the 350 of 350-0-350)." },
     { name: "rectifier", label: "Rectifier circuit", unit: "", required: true, control: "select", options: B_PLUS_RECTIFIERS, help: "Full-wave here means a centre-tapped winding with two rectifiers (or one two-plate tube)." },

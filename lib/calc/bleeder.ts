@@ -71,7 +71,14 @@ export const calculator = defineCalculator({
   slug: "bleeder",
   title: "Bleeder resistor",
   purpose: "The bleeder that brings a filter capacitor below a residual-voltage limit within a given time after switch-off.",
-  group: "safety",
+  bench: {
+    group: "first-power",
+    example: { capacitance: "40 uF", workingVoltage: "450 V" },
+    // The rating that allows for the voltage as well as the power (a chain's cautions follow in the notes).
+    headlines: ["suggestedResistance", "resistorRating"],
+    alwaysDanger: true,
+    chart: "bleeder-discharge",
+  },
   inputs: [
     { name: "capacitance", label: "Filter capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance", help: "Total nominal capacitance the bleeder drains (add up capacitors in parallel)." },
     { name: "workingVoltage", label: "Working voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The highest voltage the capacitor reaches, e.g. B+ with no load." },

@@ -74,7 +74,15 @@ export const calculator = defineCalculator({
   slug: "cathode-bias",
   title: "Cathode bias resistor",
   purpose: "The cathode resistor that sets a tube's bias, its wattage, and the bypass capacitor's corner frequency.",
-  group: "stages",
+  bench: {
+    group: "stages",
+    example: { biasVoltage: "1.5 V", plateCurrent: "1 mA", bypassCapacitance: "25 uF" },
+    headlines: ["cathodeResistance", "suggestedRating"],
+    // The resistor sits under a plate at B+, even when the bias typed is 1.5 V.
+    alwaysDanger: true,
+    chart: null,
+    advanced: { title: "Tube figures, for a better bypass estimate", fields: ["amplificationFactor", "plateResistance", "plateLoad", "transconductance"] },
+  },
   inputs: [
     {
       name: "biasVoltage",

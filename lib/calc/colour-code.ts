@@ -73,7 +73,18 @@ export const calculator = defineCalculator({
   slug: "colour-code",
   title: "Resistor colour code",
   purpose: "Read a resistor's colour bands, or find the bands for a value.",
-  group: "parts",
+  bench: {
+    group: "parts",
+    example: { bands: ["yellow", "violet", "red", "gold"] },
+    headlines: ["resistance", "tolerance"],
+    alwaysDanger: false,
+    chart: null,
+    modes: [
+      { id: "bands", label: "Read the bands", fields: ["bands"] },
+      { id: "value", label: "Code a value", fields: ["resistance", "tolerance", "temperatureCoefficient"] },
+    ],
+    format: { tolerance: "percent" },
+  },
   inputs: [
     {
       name: "bands",

@@ -47,7 +47,14 @@ export const calculator = defineCalculator({
   slug: "coupling-cap",
   title: "Coupling capacitor",
   purpose: "Where a coupling capacitor rolls off the bass, and how far a leaky one pulls the next grid positive.",
-  group: "stages",
+  bench: {
+    group: "stages",
+    example: { capacitance: ".05 mfd", gridResistance: "470k", sourceResistance: "47k", leakageCurrent: "2 uA" },
+    headlines: ["cornerFrequency", "gridShift"],
+    // The capacitor's other side sits at the driving plate's B+.
+    alwaysDanger: true,
+    chart: "coupling-response",
+  },
   inputs: [
     { name: "capacitance", label: "Coupling capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance" },
     { name: "gridResistance", label: "Grid resistor", unit: "Ω", required: true, control: "quantity", quantity: "resistance", help: "The resistor from the next tube's grid to ground (or to the bias supply)." },

@@ -43,7 +43,13 @@ export const calculator = defineCalculator({
   slug: "dropping-resistor",
   title: "Dropping resistor",
   purpose: "The series resistor that drops a supply to the voltage a stage needs, and its wattage.",
-  group: "stages",
+  bench: {
+    group: "supplies",
+    example: { supplyVoltage: "300 V", loadVoltage: "250 V", loadCurrent: "10 mA" },
+    headlines: ["resistance", "suggestedRating"],
+    alwaysDanger: false,
+    chart: null,
+  },
   inputs: [
     { name: "supplyVoltage", label: "Supply voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The B+ point the resistor is fed from." },
     { name: "loadVoltage", label: "Voltage wanted at the stage", unit: "V", required: true, control: "quantity", quantity: "voltage" },

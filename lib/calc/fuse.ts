@@ -68,7 +68,13 @@ export const calculator = defineCalculator({
   slug: "fuse",
   title: "Mains fuse",
   purpose: "The running current of a set and the IEC 60127 fuse rating that suits it.",
-  group: "safety",
+  bench: {
+    group: "first-power",
+    example: { loadPower: "85 W", lineVoltage: "120 V", kind: "time-lag" },
+    headlines: ["suggestedRating", "runningCurrent"],
+    alwaysDanger: false,
+    chart: null,
+  },
   inputs: [
     { name: "loadPower", label: "Set's power", unit: "W", required: false, control: "quantity", quantity: "power", help: "From the label or service data. Or give the load current instead." },
     { name: "loadCurrent", label: "Set's current", unit: "A", required: false, control: "quantity", quantity: "current", help: "Measured or from the service data (rms). Or give the power instead." },

@@ -106,7 +106,20 @@ export const calculator = defineCalculator({
   slug: "heater-string",
   title: "Series heater string",
   purpose: "Whether a string of heaters in series suits the mains, the dropping resistor it needs, and a shunt for each odd heater.",
-  group: "supplies",
+  bench: {
+    group: "supplies",
+    example: { lineVoltage: "120 V", tubes: ["12BE6", "12BA6", "12AV6", "35C5", "35W4"] },
+    headlines: ["droppingResistance", "suggestedRating"],
+    alwaysDanger: false,
+    chart: null,
+    modes: [
+      { id: "tubes", label: "By tube type", fields: ["tubes"] },
+      { id: "heaters", label: "By heater rating", fields: ["heaters"] },
+    ],
+    advanced: { title: "Pilot lamp on the rectifier's heater tap", fields: ["pilotLamp"] },
+    // Unequal heater currents need shunts: a caution, not a danger.
+    tones: [{ output: "currentsMatch", when: false, tone: "caution" }],
+  },
   inputs: [
     { name: "lineVoltage", label: "Line voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The mains voltage (rms) across the whole string." },
     { name: "heaters", label: "Heaters", unit: "", required: false, control: "list", help: "Each heater's rated voltage and current, e.g. { voltage: 12.6, current: 0.15 }. Or name the tubes instead." },

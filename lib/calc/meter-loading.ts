@@ -71,7 +71,14 @@ export const calculator = defineCalculator({
   slug: "meter-loading",
   title: "Meter loading",
   purpose: "What a voltmeter will read across a high-resistance point, and how far below the true voltage.",
-  group: "parts",
+  bench: {
+    group: "parts",
+    example: { trueVoltage: "100 V", sourceResistance: "1M", ohmsPerVolt: "20k", range: "250 V" },
+    headlines: ["indicatedVoltage", "error"],
+    alwaysDanger: false,
+    chart: null,
+    format: { error: "signed-percent" },
+  },
   inputs: [
     { name: "trueVoltage", label: "True voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The voltage with no meter connected (negative for bias or AVC)." },
     {

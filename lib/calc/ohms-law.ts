@@ -134,7 +134,13 @@ export const calculator = defineCalculator({
   slug: "ohms-law",
   title: "Ohm's law and power",
   purpose: "Any two of voltage, current, resistance and power give the other two.",
-  group: "parts",
+  bench: {
+    group: "parts",
+    example: { voltage: "250 V", resistance: "100k" },
+    headlines: ["current", "power"],
+    alwaysDanger: false,
+    chart: null,
+  },
   inputs: [
     { name: "voltage", label: "Voltage across", unit: "V", required: false, control: "quantity", quantity: "voltage", help: "Enter exactly two of the four fields." },
     { name: "current", label: "Current through", unit: "A", required: false, control: "quantity", quantity: "current" },

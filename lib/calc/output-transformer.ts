@@ -70,7 +70,14 @@ export const calculator = defineCalculator({
   slug: "output-transformer",
   title: "Output transformer",
   purpose: "The turns ratio of an output transformer, and the plate load a different speaker presents.",
-  group: "stages",
+  bench: {
+    group: "stages",
+    example: { primaryImpedance: "5k", secondaryImpedance: "8 ohm", newLoad: "4 ohm" },
+    headlines: ["turnsRatio", "reflectedImpedance"],
+    // The primary carries the plate's B+ and an unloaded secondary lets its voltage soar.
+    alwaysDanger: true,
+    chart: null,
+  },
   inputs: [
     { name: "primaryImpedance", label: "Primary impedance (plate load)", unit: "Ω", required: true, control: "quantity", quantity: "resistance", help: "The load the output tube wants, from its data sheet or the transformer's marking; plate to plate for push-pull." },
     { name: "secondaryImpedance", label: "Secondary impedance (tap)", unit: "Ω", required: true, control: "quantity", quantity: "resistance", help: "The speaker impedance the winding or tap is made for." },

@@ -129,7 +129,14 @@ export const calculator = defineCalculator({
   slug: "plate-dissipation",
   title: "Plate dissipation",
   purpose: "How hot a tube's plate runs at its operating point, as a fraction of the data sheet's maximum.",
-  group: "stages",
+  bench: {
+    group: "stages",
+    example: { plateVoltage: "250 V", cathodeVoltage: "12.5 V", plateCurrent: "45 mA", tube: "6V6GT", stageClass: "A" },
+    headlines: ["dissipation", "fractionOfMax"],
+    alwaysDanger: false,
+    chart: null,
+    format: { fractionOfMax: "percent", screenFractionOfMax: "percent" },
+  },
   inputs: [
     { name: "plateVoltage", label: "Plate voltage (to chassis)", unit: "V", required: true, control: "quantity", quantity: "voltage" },
     { name: "cathodeVoltage", label: "Cathode voltage (to chassis)", unit: "V", required: false, default: 0, control: "quantity", quantity: "voltage", help: "Across the cathode resistor; 0 with fixed bias." },

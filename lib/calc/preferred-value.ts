@@ -64,7 +64,15 @@ export const calculator = defineCalculator({
   slug: "preferred-value",
   title: "Preferred value",
   purpose: "The standard value nearest to a calculated one, and the next ones below and above it.",
-  group: "parts",
+  bench: {
+    group: "parts",
+    example: { value: "5.13k" },
+    headlines: ["nearest", "errorOfNearest"],
+    alwaysDanger: false,
+    chart: null,
+    // A preferred value may be ohms or farads, so it reads best as a bare prefix.
+    format: { errorOfNearest: "signed-percent", nearest: "bare-prefix", below: "bare-prefix", above: "bare-prefix" },
+  },
   inputs: [
     {
       name: "value",

@@ -37,7 +37,13 @@ export const calculator = defineCalculator({
   slug: "reactance",
   title: "Reactance and resonance",
   purpose: "The reactance of a capacitor or inductor at a frequency, and where a pair resonates.",
-  group: "parts",
+  bench: {
+    group: "radio",
+    example: { frequency: "1 kHz", capacitance: "100 nF", inductance: "10 mH" },
+    headlines: ["capacitiveReactance", "resonantFrequency"],
+    alwaysDanger: false,
+    chart: null,
+  },
   inputs: [
     {
       name: "frequency",

@@ -78,7 +78,13 @@ export const calculator = defineCalculator({
   slug: "reforming",
   title: "Reforming an electrolytic",
   purpose: "The leakage a capacitor should come down to, and a step-by-step voltage schedule to reform it.",
-  group: "parts",
+  bench: {
+    group: "first-power",
+    example: { capacitance: "40 uF", ratedVoltage: "450 V", seriesResistance: "10k" },
+    headlines: ["leakageLimit", "resistorPower"],
+    alwaysDanger: false,
+    chart: "reforming-schedule",
+  },
   inputs: [
     { name: "capacitance", label: "Capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance" },
     { name: "ratedVoltage", label: "Rated voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The working voltage printed on the capacitor." },

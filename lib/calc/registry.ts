@@ -25,8 +25,8 @@ import { calculator as triodeStage } from "./triode-stage";
 import { calculator as vintageMarkings } from "./vintage-markings";
 import { calculator as vrTube } from "./vr-tube";
 
-/** Every calculator of the Bench, in the order the index shows them. */
-export const calculators: readonly Calculator[] = [
+/** Every calculator of the Bench, in the order the index shows them within their groups. */
+const ALL = [
   cathodeBias,
   triodeStage,
   superhet,
@@ -52,12 +52,21 @@ export const calculators: readonly Calculator[] = [
   vintageMarkings,
   ohmsLaw,
   reactance,
-] as unknown as readonly Calculator[];
+] as const;
 
-const bySlug = new Map(calculators.map((c) => [c.slug, c]));
+/** Every calculator's URL name, as a literal union: a table keyed by `Slug` misses none. */
+export type Slug = (typeof ALL)[number]["slug"];
+
+export const calculators = ALL as unknown as readonly (Calculator & { slug: Slug })[];
+
+const bySlug = new Map<string, Calculator>(calculators.map((c) => [c.slug, c]));
 
 export function getCalculator(slug: string): Calculator | undefined {
   return bySlug.get(slug);
+}
+
+export function isSlug(slug: string): slug is Slug {
+  return bySlug.has(slug);
 }
 
 /** GET /api/calculators metadata, as PRODUCT.md gives it. */
@@ -65,7 +74,7 @@ export function describeCalculators() {
   return calculators.map((c) => ({
     slug: c.slug,
     title: c.title,
-    group: c.group,
+    group: c.bench.group,
     purpose: c.purpose,
     inputs: c.inputs.map(({ name, unit, required, default: d }) => ({ name, unit, required, default: d ?? null })),
     outputs: c.outputs.map(({ name, unit }) => ({ name, unit })),

@@ -72,7 +72,19 @@ export const calculator = defineCalculator({
   slug: "resistor-drift",
   title: "Resistor drift",
   purpose: "Is a measured resistor still within tolerance of its marked value?",
-  group: "parts",
+  bench: {
+    group: "parts",
+    example: { nominal: "100k", measured: "128k" },
+    headlines: ["verdict", "deviation"],
+    alwaysDanger: false,
+    chart: null,
+    format: { deviation: "signed-percent" },
+    words: { verdict: { within: "Within tolerance", high: "Drifted high", low: "Drifted low", open: "Open circuit" } },
+    tones: [
+      { output: "verdict", unless: "within", tone: "caution" },
+      { output: "withinTolerance", unless: true, tone: "caution" },
+    ],
+  },
   inputs: [
     { name: "nominal", label: "Marked (nominal) value", unit: "Ω", required: true, control: "quantity", quantity: "resistance" },
     {

@@ -3,6 +3,7 @@ import { texQuantity, tex } from "./format";
 import { HAZARD_VOLTS, highVoltageWarning } from "./safety";
 import { defineCalculator, type Step, type Warning } from "./types";
 import { optionalQuantity, quantityWithDefault, quantity } from "./units";
+import { COLD_FRACTION, lampCircuitCurrent } from "./series-lamp-circuit";
 
 /**
  * Series lamp (the "dim-bulb tester"): an incandescent lamp in series with a set on first power-up.
@@ -13,8 +14,7 @@ import { optionalQuantity, quantityWithDefault, quantity } from "./units";
  * memory); we take exactly ½, so R_lamp(I) = max(R_cold, R_hot·I/I_rated), which has a closed form.
  */
 
-/** Cold (room-temperature) resistance as a fraction of hot: tungsten, common practice. */
-export const COLD_FRACTION = 0.1;
+export { COLD_FRACTION };
 
 export const seriesLampSchema = z.object({
   lineVoltage: quantityWithDefault("voltage", 120, { positive: true, min: 1, max: 500, label: "Line voltage" }),
@@ -23,16 +23,6 @@ export const seriesLampSchema = z.object({
 });
 
 export type SeriesLampInput = z.output<typeof seriesLampSchema>;
-
-/** Set current with the set as a fixed resistance rSet and the lamp as R_lamp(I) above. Stable forms, no cancellation. */
-function solveCurrent(v: number, rHot: number, iRated: number, rSet: number): number {
-  const rCold = rHot * COLD_FRACTION;
-  const cold = v / (rCold + rSet);
-  if (cold <= iRated * COLD_FRACTION) return cold;
-  // k·I² + rSet·I − V = 0 with k = rHot/iRated; I = 2V / (rSet + √(rSet² + 4kV)).
-  const k = rHot / iRated;
-  return (2 * v) / (rSet + Math.sqrt(rSet * rSet + 4 * k * v));
-}
 
 const NOT_VOLTAGE =
   "A series lamp limits current, not voltage. The set stays connected to the mains: its chassis and circuits are " +
@@ -49,7 +39,13 @@ export const calculator = defineCalculator({
   slug: "series-lamp",
   title: "Series lamp",
   purpose: "What an incandescent lamp in series with a set lets through on first power-up, and what the set sees.",
-  group: "safety",
+  bench: {
+    group: "first-power",
+    example: { lineVoltage: "120 V", lampPower: "60 W", setPower: "35 W" },
+    headlines: ["maxCurrent", "setVoltage"],
+    alwaysDanger: false,
+    chart: "lamp-current",
+  },
   inputs: [
     { name: "lineVoltage", label: "Line voltage", unit: "V", required: false, default: 120, control: "quantity", quantity: "voltage", help: "The mains voltage (rms); the lamp is taken as rated for it." },
     { name: "lampPower", label: "Lamp wattage", unit: "W", required: true, control: "quantity", quantity: "power", help: "The wattage printed on the lamp, at the line voltage." },
@@ -93,7 +89,7 @@ export const calculator = defineCalculator({
     if (v > HAZARD_VOLTS) warnings.push({ level: "caution", message: NOT_VOLTAGE });
     if (ps !== undefined) {
       const rSet = (v * v) / ps;
-      setCurrent = solveCurrent(v, rHot, maxCurrent, rSet);
+      setCurrent = lampCircuitCurrent(v, rHot, maxCurrent, rSet);
       setVoltage = setCurrent * rSet;
       warnings.push({
         level: "info",

@@ -63,7 +63,14 @@ export const calculator = defineCalculator({
   slug: "series-parallel",
   title: "Two-resistor value",
   purpose: "The two preferred values that make a value the series lacks, in series or in parallel.",
-  group: "parts",
+  bench: {
+    group: "parts",
+    example: { target: "5.13k", series: "E12", mode: "either" },
+    headlines: ["combined", "error"],
+    alwaysDanger: false,
+    chart: null,
+    format: { error: "signed-percent" },
+  },
   inputs: [
     { name: "target", label: "Value wanted", unit: "Ω", required: true, control: "quantity", quantity: "resistance", help: "2 Ω to 10 MΩ, e.g. 3.3k, 5k13, 27.5k." },
     { name: "series", label: "Series", unit: "", required: false, default: "E12", control: "select", options: SERIES_NAMES, help: "The values in the drawer: E6 ±20 %, E12 ±10 %, E24 ±5 %, E48 ±2 %, E96 ±1 %." },

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { formatQuantity, texQuantity, tex } from "./format";
 import { defineCalculator, type Step, type Warning } from "./types";
+import { tunedCircuitRejection } from "./tuned-circuit";
 import { optionalQuantity, quantity, quantityWithDefault } from "./units";
 
 /**
@@ -49,11 +50,8 @@ export const superhetSchema = z
 
 export type SuperhetInput = z.output<typeof superhetSchema>;
 
-/** Image rejection of one tuned circuit: √(1 + Q²ρ²). */
-function rejection(q: number, fs: number, fim: number): number {
-  const rho = fim / fs - fs / fim;
-  return Math.sqrt(1 + q * q * rho * rho);
-}
+/** Image rejection of one tuned circuit: √(1 + Q²ρ²) (lib/calc/tuned-circuit.ts). */
+const rejection = tunedCircuitRejection;
 
 const BELOW_NOTE: Warning = {
   level: "info",
@@ -76,7 +74,13 @@ export const calculator = defineCalculator({
   slug: "superhet",
   title: "Superhet frequencies",
   purpose: "Where a superhet's oscillator and its image sit for a signal and IF, and how well one tuned circuit keeps the image out.",
-  group: "stages",
+  bench: {
+    group: "radio",
+    example: { signalFrequency: "1000 kHz", intermediateFrequency: "455 kHz", loadedQ: "100" },
+    headlines: ["oscillatorFrequency", "imageFrequency"],
+    alwaysDanger: false,
+    chart: "superhet-dial",
+  },
   inputs: [
     { name: "signalFrequency", label: "Signal frequency", unit: "Hz", required: true, control: "quantity", quantity: "frequency", help: "The station the set is tuned to, e.g. 1000 kHz." },
     { name: "intermediateFrequency", label: "Intermediate frequency", unit: "Hz", required: false, default: 455e3, control: "quantity", quantity: "frequency", help: "455 kHz for most AM sets (some older ones 175, 262 or 465 kHz); 10.7 MHz for FM." },

@@ -60,7 +60,21 @@ export const calculator = defineCalculator({
   slug: "supply-ripple",
   title: "Supply ripple",
   purpose: "The hum left on B+ by a capacitor-input filter, and how much each RC or LC stage after it removes.",
-  group: "supplies",
+  bench: {
+    group: "supplies",
+    example: {
+      loadCurrent: "60 mA",
+      capacitance: "40 uF",
+      rectifier: "full-wave",
+      // A 5Y3GT with the 40 µF a recap often fits: the page shows the data sheet's 20 µF limit straight away.
+      rectifierTube: "5Y3GT",
+      stages: [{ kind: "rc", resistance: "470", capacitance: "20 uF" }],
+    },
+    headlines: ["rippleRms", "finalRippleRms"],
+    // The ripple filter is the B+ supply itself, even when the figures typed are a load current.
+    alwaysDanger: true,
+    chart: "ripple",
+  },
   inputs: [
     { name: "loadCurrent", label: "Load current", unit: "A", required: true, control: "quantity", quantity: "current", help: "Total DC current the supply delivers." },
     { name: "capacitance", label: "Reservoir capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance", help: "The first capacitor after the rectifier." },

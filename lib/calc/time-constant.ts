@@ -35,7 +35,13 @@ export const calculator = defineCalculator({
   slug: "time-constant",
   title: "RC time constant and discharge",
   purpose: "How fast a capacitor discharges through a resistor, and how long until it reaches a given voltage.",
-  group: "supplies",
+  bench: {
+    group: "first-power",
+    example: { resistance: "220k", capacitance: "47 uF", initialVoltage: "350 V", targetVoltage: "30 V" },
+    headlines: ["timeConstant", "timeToTarget"],
+    alwaysDanger: false,
+    chart: "rc-discharge",
+  },
   inputs: [
     { name: "resistance", label: "Discharge resistance", unit: "Ω", required: true, control: "quantity", quantity: "resistance" },
     { name: "capacitance", label: "Capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance" },

@@ -122,7 +122,14 @@ export const calculator = defineCalculator({
   slug: "triode-stage",
   title: "Triode gain stage",
   purpose: "Operating point, plate dissipation and voltage gain of a cathode-biased triode stage.",
-  group: "stages",
+  bench: {
+    group: "stages",
+    example: { tube: "12AX7", supplyVoltage: "250 V", plateResistor: "100k", cathodeResistor: "1.5k", cathodeBypassed: true, loadResistance: "470k" },
+    headlines: ["plateVoltage", "gain"],
+    alwaysDanger: false,
+    chart: "plate-curves",
+    advanced: { title: "Koren's triode model: override the table, or model another tube", fields: ["mu", "ex", "kg1", "kp", "kvb"] },
+  },
   inputs: [
     { name: "tube", label: "Tube type", unit: "", required: false, control: "select", options: TRIODE_NAMES, blankLabel: "None (enter the figures below)", help: "Pick a type from the built-in table, or leave it blank and enter the five parameters of Koren's model below." },
     // The five parameters of Koren's improved triode model, named and written as his article sets them;

@@ -1,5 +1,8 @@
 import type { z } from "zod";
+import type { BenchDescriptor, CalculatorGroup } from "./bench-descriptor";
 import type { QuantityKind } from "./units";
+
+export type { BenchDescriptor, CalculatorGroup };
 
 /** Shared shapes of every calculator in lib/calc. PRODUCT.md's HTTP contract is built from these. */
 
@@ -22,9 +25,6 @@ export interface Reference {
 }
 
 export type OutputValue = number | boolean | string | null | OutputValue[] | { [key: string]: OutputValue };
-
-/** Bench-task groups used by the /bench index. */
-export type CalculatorGroup = "stages" | "supplies" | "safety" | "parts";
 
 export interface InputMeta {
   name: string;
@@ -65,12 +65,21 @@ export interface CalcResult<O extends Record<string, OutputValue>> extends Compu
   steps: Step[];
 }
 
-export interface Calculator<S extends z.ZodType = z.ZodType, O extends Record<string, OutputValue> = Record<string, OutputValue>> {
-  slug: string;
+/** A schema's input names; any string when the schema's input is not an object type (the general Calculator). */
+export type InputName<S extends z.ZodType> = [keyof z.input<S>] extends [never] ? string : keyof z.input<S> & string;
+
+export interface Calculator<
+  S extends z.ZodType = z.ZodType,
+  O extends Record<string, OutputValue> = Record<string, OutputValue>,
+  L extends string = string,
+> {
+  /** The URL name, a literal type so the registry's `Slug` union can be derived from the calculators. */
+  slug: L;
   title: string;
   /** One line: what bench task it answers. */
   purpose: string;
-  group: CalculatorGroup;
+  /** The Bench's knowledge of this calculator (lib/calc/bench-descriptor.ts), typed by its own input and output names. */
+  bench: BenchDescriptor<NoInfer<InputName<S>>, NoInfer<keyof O & string>>;
   inputs: readonly InputMeta[];
   outputs: readonly OutputMeta[];
   /** Parses raw inputs (numbers or engineering text) into normalised SI values. */
@@ -89,9 +98,9 @@ export interface Calculator<S extends z.ZodType = z.ZodType, O extends Record<st
   explain(input: z.output<S>, outputs: O): Step[];
 }
 
-/** Identity helper that keeps the schema's output type flowing into compute. */
-export function defineCalculator<S extends z.ZodType, O extends Record<string, OutputValue>>(
-  c: Calculator<S, O>,
-): Calculator<S, O> {
+/** Identity helper that keeps the schema's output type flowing into compute, and the slug a literal. */
+export function defineCalculator<S extends z.ZodType, O extends Record<string, OutputValue>, const L extends string>(
+  c: Calculator<S, O, L>,
+): Calculator<S, O, L> {
   return c;
 }

@@ -98,7 +98,14 @@ export const calculator = defineCalculator({
   slug: "vintage-markings",
   title: "Vintage resistor markings",
   purpose: "Read a pre-war body-end-dot resistor: body, end and dot colours to its value.",
-  group: "parts",
+  bench: {
+    group: "parts",
+    example: { scheme: "body-end-dot", body: "brown", end: "black", dot: "orange" },
+    headlines: ["resistance", "tolerance"],
+    alwaysDanger: false,
+    chart: null,
+    format: { tolerance: "percent" },
+  },
   inputs: [
     { name: "scheme", label: "Marking scheme", unit: "", required: false, default: "body-end-dot", control: "select", options: VINTAGE_SCHEMES, help: "Body-end-dot: the 1920s–40s RMA colour code." },
     { name: "body", label: "Body colour", unit: "", required: true, control: "select", options: FIGURE_COLOURS.filter((c) => c !== "black"), help: "The colour of the whole body: the first figure." },

@@ -95,7 +95,13 @@ export const calculator = defineCalculator({
   slug: "vr-tube",
   title: "VR tube regulator",
   purpose: "The series resistor that keeps a glow-discharge regulator tube in regulation from no load to full load.",
-  group: "supplies",
+  bench: {
+    group: "supplies",
+    example: { supplyVoltage: "250 V", tube: "0A2", loadCurrentMax: "20 mA" },
+    headlines: ["seriesResistance", "tubeCurrentAtMinLoad"],
+    alwaysDanger: false,
+    chart: null,
+  },
   inputs: [
     { name: "supplyVoltage", label: "Supply voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The unregulated B+ the series resistor is fed from." },
     { name: "tube", label: "Regulator tube", unit: "", required: false, control: "select", options: VR_TYPES, help: "From the built-in table; or leave empty and give the figures below." },

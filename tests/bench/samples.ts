@@ -1,9 +1,11 @@
+import type { Slug } from "../../lib/calc/registry";
+
 /**
  * One typical input per calculator for the micro-benchmark, keyed by slug, with the input
  * names of PRODUCT.md. Values are the kind a bench would enter, written as the form sends
  * them (engineering text where a person would type it), so validation does real parsing.
  */
-export const samples: Record<string, Record<string, unknown>> = {
+const bySlug = {
   "cathode-bias": {
     biasVoltage: "1.5 V",
     plateCurrent: "1 mA",
@@ -46,7 +48,10 @@ export const samples: Record<string, Record<string, unknown>> = {
   "vintage-markings": { scheme: "body-end-dot", body: "brown", end: "black", dot: "orange", toleranceEnd: "silver" },
   "preferred-value": { value: "5.13k", series: "E12" },
   "series-parallel": { target: "5.13k", series: "E12", mode: "either" },
-};
+} satisfies Record<Slug, Record<string, unknown>>;
+
+/** Keyed by every `Slug` (a calculator without a sample fails to compile), read by any slug string. */
+export const samples: Readonly<Record<string, Record<string, unknown>>> = bySlug;
 
 /** Slugs that are closed-form (no iteration), measured against the closed-form targets. */
 export const ITERATIVE_SLUGS: readonly string[] = ["triode-stage"];

@@ -13,7 +13,7 @@ export function expected(slug: string, raw: Record<string, unknown>): Calculatio
 
 export function shown(slug: string, result: CalculationResponse, name: string): string {
   const meta = getCalculator(slug)!.outputs.find((o) => o.name === name)!;
-  return formatOutput(slug, meta, result.outputs[name]);
+  return formatOutput(getCalculator(slug)!.bench, meta, result.outputs[name]);
 }
 
 export async function expectOutput(page: Page, slug: string, result: CalculationResponse, name: string) {

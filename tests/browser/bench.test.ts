@@ -3,7 +3,7 @@ import { afterAll, beforeAll, expect, test } from "vitest";
 import { launchBrowser } from "../helpers/browser";
 import { baseUrl } from "../helpers/http";
 import { expectOutput, expectSteps, expected, ready } from "./bench-helpers";
-import { EXAMPLES } from "@/lib/bench/examples";
+import { getCalculator } from "@/lib/calc/registry";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -50,12 +50,13 @@ test("supply ripple: adding an LC stage shows the ripple after it, in the table 
   const page = await open("/bench/supply-ripple");
   await page.getByRole("button", { name: "Add LC stage" }).click();
   await page.fill("#in-stages-1-inductance", "8 H");
-  // The page opens on the worked example of lib/bench/examples.ts; the test adds one LC stage to it.
+  // The page opens on the worked example of the calculator's descriptor; the test adds one LC stage to it.
+  const example = getCalculator("supply-ripple")!.bench.example as Record<string, unknown>;
   const raw = {
-    ...EXAMPLES["supply-ripple"],
+    ...example,
     lineFrequency: "60",
     stages: [
-      ...(EXAMPLES["supply-ripple"].stages as unknown[]),
+      ...(example.stages as unknown[]),
       { kind: "lc", inductance: "8 H", capacitance: "20 uF" },
     ],
   };

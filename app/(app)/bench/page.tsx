@@ -4,7 +4,7 @@ import { calculators } from "@/lib/calc/registry";
 
 export const metadata: Metadata = {
   title: "Bench",
-  description: "Bench calculators for tube-era sets that show their working: bias, supplies, safety and parts.",
+  description: "Bench calculators for tube-era sets that show their working: first power, supplies and heaters, stages, radio alignment, parts and measuring.",
 };
 
 export default function BenchPage() {
@@ -12,7 +12,7 @@ export default function BenchPage() {
     slug: c.slug,
     title: c.title,
     purpose: c.purpose,
-    group: c.group,
+    group: c.bench.group,
     words: c.inputs.map((i) => i.label).join(" "),
   }));
   return (

@@ -7,8 +7,8 @@ import type { ChartProps } from "../chart-slot";
 import { C, ChartFrame, fmt, tick } from "./chart-frame";
 
 /** Capacitor voltage falling through the resistor, with the limit or target level (and the bleeder's deadline) marked. */
-export default function DischargeChart({ slug, inputs, outputs }: ChartProps) {
-  const d = slug === "bleeder" ? bleederDischarge(inputs, outputs) : timeConstantDischarge(inputs, outputs);
+export default function DischargeChart({ kind, inputs, outputs }: ChartProps) {
+  const d = kind === "bleeder-discharge" ? bleederDischarge(inputs, outputs) : timeConstantDischarge(inputs, outputs);
   if (!d) return null;
   const late = d.deadline !== undefined && d.tSafe > d.deadline;
   return (

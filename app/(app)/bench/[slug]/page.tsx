@@ -4,9 +4,8 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { CalculatorView } from "@/components/bench/calculator-view";
-import { EXAMPLES } from "@/lib/bench/examples";
 import { initialMode, initialValues, toRaw } from "@/lib/bench/form-values";
-import { ALWAYS_DANGER_SLUGS, GROUP_TITLES } from "@/lib/bench/groups";
+import { GROUP_TITLES } from "@/lib/bench/groups";
 import { can } from "@/lib/auth/can";
 import { getMember } from "@/server/auth/member";
 import { getCalculator } from "@/lib/calc/registry";
@@ -28,9 +27,9 @@ export default async function CalculatorPage({ params, searchParams }: Params) {
   if (!calc) notFound();
   const fromUrl = decodeInputs(await searchParams);
   const hasInputs = calc.inputs.some((i) => fromUrl[i.name] !== undefined);
-  const example = initialValues(calc.inputs, EXAMPLES[slug] ?? {});
+  const example = initialValues(calc.inputs, calc.bench.example);
   const initial = hasInputs ? initialValues(calc.inputs, fromUrl) : example;
-  const initialRun = runCalculator(calc, toRaw(slug, calc.inputs, initial, initialMode(slug, initial)));
+  const initialRun = runCalculator(calc, toRaw(calc, initial, initialMode(calc.bench.modes, initial)));
   const serverHtml = initialRun.ok ? Object.fromEntries(initialRun.result.steps.map((s) => [s.latex, tex(s.latex, true)])) : {};
   const member = await getMember();
 
@@ -69,7 +68,7 @@ export default async function CalculatorPage({ params, searchParams }: Params) {
         <span className="px-2 text-muted" aria-hidden="true">
           /
         </span>
-        <span className="text-muted">{GROUP_TITLES[calc.group]}</span>
+        <span className="text-muted">{GROUP_TITLES[calc.bench.group]}</span>
       </nav>
       <h1 className="text-display font-bold">{calc.title}</h1>
       <p className="mb-6 mt-2 max-w-3xl text-lead text-muted">{calc.purpose}</p>
@@ -77,6 +76,7 @@ export default async function CalculatorPage({ params, searchParams }: Params) {
         slug={slug}
         inputs={[...calc.inputs]}
         outputs={[...calc.outputs]}
+        bench={calc.bench}
         initial={initial}
         example={example}
         initialRun={initialRun}
@@ -84,7 +84,6 @@ export default async function CalculatorPage({ params, searchParams }: Params) {
         workingOpen={member?.role === "apprentice"}
         signedIn={!!member}
         canCreateJob={!!member && can.editJobs(member)}
-        alwaysDanger={ALWAYS_DANGER_SLUGS.has(slug)}
         formulas={formulas}
         sources={sources}
         why={why}
