@@ -1,0 +1,47 @@
+"use client";
+
+import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { formatQuantity } from "@/lib/calc/format";
+import { couplingResponse } from "@/lib/bench/chart-data-signal";
+import type { ChartProps } from "../chart-slot";
+import { C, ChartFrame, fmt, tick } from "./chart-frame";
+import { endLabel } from "./end-label";
+
+const db = (v: number) => `${Number(v.toFixed(1))} dB`;
+const hz = fmt("Hz");
+
+/** The share of the signal reaching the next grid against frequency, around the coupling network's corner. */
+export default function CouplingChart({ outputs, inputs }: ChartProps) {
+  const d = couplingResponse(inputs, outputs);
+  if (!d) return null;
+  const lo = d.points[0].f;
+  const hi = d.points[d.points.length - 1].f;
+  const ticks = [lo, d.corner, d.corner * 10, hi];
+  return (
+    <ChartFrame
+      title="Response around the corner"
+      caption={
+        <>
+          How much of the driving stage&apos;s signal reaches the next grid, from a tenth of the corner frequency to a hundred times it (frequency on a log
+          scale). At the corner, <strong className="text-ink">{formatQuantity(d.corner, "Hz", 3)}</strong>, the capacitor&apos;s reactance equals the resistance
+          in series with it and the grid gets 71 % of the signal (−3 dB); below it the response falls 6 dB for every halving of frequency. This network alone:
+          other coupling and bypass capacitors and the output transformer roll off the bass too.
+        </>
+      }
+    >
+      <ResponsiveContainer width="100%" height="100%">
+        <LineChart data={d.points} margin={{ top: 10, right: 16, bottom: 4, left: 8 }}>
+          <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
+          <XAxis dataKey="f" type="number" scale="log" domain={[lo, hi]} ticks={ticks} tickFormatter={hz} tick={tick} stroke={C.muted} />
+          <YAxis type="number" domain={[-21, 3]} ticks={[-20, -15, -10, -6, -3, 0]} tickFormatter={db} tick={tick} stroke={C.muted} width={64} />
+          <Tooltip formatter={(v) => [db(Number(v)), "Reaching the grid"]} labelFormatter={(f) => hz(Number(f))} contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }} />
+          <ReferenceLine x={d.corner} stroke={C.signal} strokeDasharray="6 4" label={{ value: "Corner (−3 dB)", fill: C.signal, position: "insideBottomRight", fontSize: 13 }} />
+          <ReferenceLine y={-3} stroke={C.muted} strokeDasharray="2 4" label={{ value: "−3 dB: 71 % of the signal", fill: C.muted, position: "insideTopLeft", fontSize: 13 }} />
+          <Line type="monotone" dataKey="db" name="Signal reaching the next grid" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false}
+            label={endLabel("Signal reaching the next grid", C.glow, d.points.map((p) => p.db), 3)} />
+          <ReferenceDot x={d.corner} y={-10 * Math.log10(2)} r={6} fill={C.signal} stroke={C.panel} strokeWidth={2} />
+        </LineChart>
+      </ResponsiveContainer>
+    </ChartFrame>
+  );
+}

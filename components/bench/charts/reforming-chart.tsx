@@ -1,0 +1,45 @@
+"use client";
+
+import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { formatQuantity } from "@/lib/calc/format";
+import { reformingSchedule } from "@/lib/bench/chart-data-power-up";
+import type { ChartProps } from "../chart-slot";
+import { C, ChartFrame, fmt, tick } from "./chart-frame";
+
+const minutes = (m: number) => (m >= 120 && m % 60 === 0 ? `${m / 60} h` : `${Math.round(m)} min`);
+
+/** The reforming schedule as a staircase: the voltage applied against time, each step held for its least time. */
+export default function ReformingChart({ inputs, outputs }: ChartProps) {
+  const d = reformingSchedule(inputs, outputs);
+  if (!d) return null;
+  const first = d.steps[0];
+  const last = d.steps[d.steps.length - 1];
+  return (
+    <ChartFrame
+      title="Reforming schedule: voltage against time"
+      caption={
+        <>
+          The voltage applied through the series resistor, raised in {d.steps.length} steps from {formatQuantity(first.voltage, "V")} to the rated{" "}
+          {formatQuantity(d.rated, "V")}. Each step is held at least the time drawn ({minutes(first.minutes)} for the first, {minutes(last.minutes)} at rated
+          voltage) <strong className="text-ink">and until the leakage falls below that step&apos;s figure</strong> in the schedule above, so{" "}
+          {minutes(d.totalMinutes)} is the shortest it can take, not a promise. A capacitor that warms, bulges or whose leakage keeps rising is replaced.
+        </>
+      }
+    >
+      <ResponsiveContainer width="100%" height="100%">
+        <LineChart data={d.points} margin={{ top: 10, right: 16, bottom: 4, left: 8 }}>
+          <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
+          <XAxis dataKey="t" type="number" domain={[0, "dataMax"]} tickFormatter={minutes} tick={tick} stroke={C.muted} />
+          <YAxis type="number" domain={[0, Number((d.rated * 1.15).toPrecision(2))]} tickFormatter={fmt("V")} tick={tick} stroke={C.muted} width={64} />
+          <Tooltip
+            formatter={(v) => [formatQuantity(Number(v), "V"), "Voltage applied"]}
+            labelFormatter={(t) => `From ${minutes(Number(t))}`}
+            contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
+          />
+          <ReferenceLine y={d.rated} stroke={C.ink} strokeDasharray="6 4" label={{ value: `Rated voltage (${formatQuantity(d.rated, "V")})`, fill: C.ink, position: "insideTopLeft", fontSize: 13 }} />
+          <Line type="stepAfter" dataKey="v" name="Voltage applied" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} />
+        </LineChart>
+      </ResponsiveContainer>
+    </ChartFrame>
+  );
+}
