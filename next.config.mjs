@@ -4,7 +4,7 @@ const nextConfig = {
   distDir: process.env.GLOWBENCH_DIST_DIR || ".next",
   poweredByHeader: false,
   reactStrictMode: true,
-  serverExternalPackages: ["better-sqlite3", "sharp", "smtp-server", "nodemailer", "@react-pdf/renderer"],
+  serverExternalPackages: ["better-sqlite3", "sharp", "smtp-server", "nodemailer", "mailparser", "@react-pdf/renderer"],
   async headers() {
     // The Content-Security-Policy carries a per-request nonce, so proxy.ts sets it; these are static.
     return [

@@ -26,8 +26,8 @@ export interface StoredMail {
 
 const MAX_MESSAGE_BYTES = 25 * 1024 * 1024;
 
-export function storeMessage(dir: string, raw: Buffer, envelope: StoredMail["envelope"]): StoredMail {
-  const parsed = parseMail(raw);
+export async function storeMessage(dir: string, raw: Buffer, envelope: StoredMail["envelope"]): Promise<StoredMail> {
+  const parsed = await parseMail(raw);
   const receivedAt = new Date();
   // Time first so a plain sort of the names is the order of arrival.
   const id = `${receivedAt.getTime().toString().padStart(14, "0")}-${randomUUID().slice(0, 8)}`;
@@ -71,16 +71,14 @@ export function startMailSink(dir: string, port = 0): Promise<MailSink> {
       const chunks: Buffer[] = [];
       stream.on("data", (c: Buffer) => chunks.push(c));
       stream.on("end", () => {
-        try {
-          const envelope = {
-            from: session.envelope.mailFrom ? session.envelope.mailFrom.address : "",
-            to: session.envelope.rcptTo.map((r) => r.address),
-          };
-          storeMessage(dir, Buffer.concat(chunks), envelope);
-          callback();
-        } catch (err) {
-          callback(err as Error);
-        }
+        const envelope = {
+          from: session.envelope.mailFrom ? session.envelope.mailFrom.address : "",
+          to: session.envelope.rcptTo.map((r) => r.address),
+        };
+        storeMessage(dir, Buffer.concat(chunks), envelope).then(
+          () => callback(),
+          (err: Error) => callback(err),
+        );
       });
     },
   });

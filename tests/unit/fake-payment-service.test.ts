@@ -59,6 +59,13 @@ describe("the fake payment service through the Stripe SDK", () => {
     expect(again.payment_status).toBe("unpaid");
   });
 
+  test("reads every line of a long form body (qs stops arrays at 20 unless told otherwise)", async () => {
+    const line_items = Array.from({ length: 25 }, (_, i) => ({ quantity: 2, price_data: { currency: "gbp", unit_amount: 100 + i, product_data: { name: `Line ${i}` } } }));
+    const session = await client().checkout.sessions.create({ ...params, line_items });
+    // 2 × (100 + 101 + … + 124) = 2 × 2800
+    expect(session.amount_total).toBe(5600);
+  });
+
   test("refuses a wrong key and reports a missing session as the SDK's errors", async () => {
     await expect(client("sk_test_wrong").checkout.sessions.create(params)).rejects.toBeInstanceOf(Stripe.errors.StripeAuthenticationError);
     await expect(client().checkout.sessions.retrieve("cs_test_nope")).rejects.toBeInstanceOf(Stripe.errors.StripeInvalidRequestError);

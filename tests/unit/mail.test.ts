@@ -3,7 +3,7 @@ import os from "node:os";
 import path from "node:path";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { localMailEnabled } from "@/server/mail/config";
-import { decodeQuotedPrintable, decodeWords } from "@/lib/mail/parse";
+import { parseMail } from "@/lib/mail/parse";
 import { sendMail } from "@/server/mail/send";
 import { startMailSink, type MailSink, type StoredMail } from "@/lib/mail/sink";
 
@@ -64,11 +64,18 @@ describe("sendMail over SMTP to the local sink", () => {
 });
 
 describe("MIME decoding", () => {
-  test("encoded words in B and Q form", () => {
-    expect(decodeWords("=?UTF-8?B?Y2Fmw6k=?= and =?UTF-8?Q?caf=C3=A9_bar?=")).toBe("café and café bar");
+  // RFC 2047 encoded words and RFC 2045 quoted-printable, written out by hand rather than by our sender.
+  const raw = (headers: string[], body: string) => Buffer.from([...headers, "MIME-Version: 1.0", "", body].join("\r\n"));
+
+  test("encoded words in B and Q form", async () => {
+    const mail = await parseMail(raw(["From: =?UTF-8?Q?Caf=C3=A9_bench?= <bench@example.com>", "To: a@example.com", "Subject: =?UTF-8?B?Y2Fmw6k=?= and =?UTF-8?Q?caf=C3=A9_bar?="], "Hi"));
+    expect(mail.subject).toBe("café and café bar");
+    expect(mail.from).toContain("Café bench");
+    expect(mail.headers.subject).toBe("=?UTF-8?B?Y2Fmw6k=?= and =?UTF-8?Q?caf=C3=A9_bar?=");
   });
-  test("quoted-printable soft breaks and escapes", () => {
-    expect(decodeQuotedPrintable("a=3Db=\r\nc =E2=9C=93").toString("utf8")).toBe("a=bc ✓");
+  test("quoted-printable soft breaks and escapes", async () => {
+    const mail = await parseMail(raw(["Subject: QP", "Content-Type: text/plain; charset=utf-8", "Content-Transfer-Encoding: quoted-printable"], "a=3Db=\r\nc =E2=9C=93"));
+    expect(mail.text.trimEnd()).toBe("a=bc ✓");
   });
 });
 
