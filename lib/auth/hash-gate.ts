@@ -1,3 +1,5 @@
+import { processSingleton } from "@/lib/singleton";
+
 /**
  * A bound on password hashing running at once. scrypt at N = 2^17 takes 128 MiB and a libuv pool thread
  * (four by default, shared with file reads, DNS and zlib) for a few hundred milliseconds; 32 at once
@@ -48,6 +50,5 @@ export class HashGate {
   }
 }
 
-const globalGate = globalThis as unknown as { __glowbenchHashGate?: HashGate };
 /** The process's one gate: every password hash and check of the server goes through it. */
-export const hashGate = (globalGate.__glowbenchHashGate ??= new HashGate());
+export const hashGate = processSingleton("HashGate", () => new HashGate());

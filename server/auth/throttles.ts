@@ -2,11 +2,12 @@ import "server-only";
 import { HashGateFullError, hashGate } from "@/lib/auth/hash-gate";
 import { burnPasswordCheck, hashPassword, verifyPassword } from "@/lib/auth/password";
 import { ClientThrottle, GrowingDelay, clientId, type ClientId } from "@/lib/auth/rate-limit";
+import { processSingleton } from "@/lib/singleton";
 import { HttpError } from "@/server/http/errors";
 
 /**
  * The throttles in front of every password hash (sign-in, sign-up, reset, invitation, password change),
- * one set per process on globalThis so that every route bundle shares them. Each route checks its
+ * one set per process (processSingleton) so that every route bundle shares them. Each route checks its
  * throttle, then hashes through the gate, which answers 429 when too many hashes are already running.
  */
 
@@ -25,8 +26,7 @@ function create() {
   };
 }
 
-const state = globalThis as unknown as { __glowbenchThrottles?: ReturnType<typeof create> };
-export const throttles = (state.__glowbenchThrottles ??= create());
+export const throttles = processSingleton("Throttles", create);
 
 export { clientId, type ClientId };
 

@@ -2,6 +2,7 @@ import "server-only";
 import fs from "node:fs/promises";
 import path from "node:path";
 import { knownStoredNames } from "@/db/queries/files";
+import { processSingleton } from "@/lib/singleton";
 import { thumbnailName, uploadsDir } from "./uploads";
 
 /**
@@ -41,13 +42,11 @@ export async function sweepOrphanUploads(options: { now?: number; graceMs?: numb
   return orphans;
 }
 
-const state = globalThis as unknown as { __glowbenchUploadSweep?: NodeJS.Timeout };
-
 /** Once now (in the background, so it never delays a request) and then hourly, for the life of the process. */
 export function startUploadSweeps(): void {
-  if (state.__glowbenchUploadSweep) return;
-  const run = () => void sweepOrphanUploads().catch((err) => console.error("Upload sweep failed", err));
-  run();
-  state.__glowbenchUploadSweep = setInterval(run, HOUR);
-  state.__glowbenchUploadSweep.unref();
+  processSingleton("UploadSweep", () => {
+    const run = () => void sweepOrphanUploads().catch((err) => console.error("Upload sweep failed", err));
+    run();
+    return setInterval(run, HOUR).unref();
+  });
 }

@@ -2,14 +2,14 @@ import { NextResponse, after } from "next/server";
 import { createPasswordReset } from "@/db/queries/password-resets";
 import { RateLimiter } from "@/lib/auth/rate-limit";
 import { RESET_ANSWER, resetRequestSchema } from "@/lib/auth/reset-schemas";
+import { processSingleton } from "@/lib/singleton";
 import { passwordResetMail } from "@/lib/mail/messages";
 import { clientId, takeAttempt, throttles } from "@/server/auth/throttles";
 import { route } from "@/server/http/route";
 import { emailLinkOrigin } from "@/server/http/public-origin";
 import { sendMail } from "@/server/mail/send";
 
-const limits = globalThis as unknown as { __glowbenchResetEmailLimit?: RateLimiter };
-const perAddress = (limits.__glowbenchResetEmailLimit ??= new RateLimiter({ max: 3, windowMs: 15 * 60 * 1000 }));
+const perAddress = processSingleton("ResetEmailLimit", () => new RateLimiter({ max: 3, windowMs: 15 * 60 * 1000 }));
 
 /** Same answer, same timing, whether or not the address exists: the e-mail goes out after the response. */
 export const POST = route({ auth: "public", body: resetRequestSchema }, async ({ request, body: { email } }) => {
