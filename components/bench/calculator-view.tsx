@@ -4,11 +4,11 @@ import { toNestErrors } from "@hookform/resolvers";
 import dynamic from "next/dynamic";
 import Link from "next/link";
 import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState, type ReactNode } from "react";
-import { FormProvider, useForm, useWatch, type FieldError, type Resolver } from "react-hook-form";
+import { FormProvider, useForm, useWatch, type Resolver } from "react-hook-form";
 import { runCalculator, type RunResult } from "@/lib/calc/run";
 import { encodeInputs } from "@/lib/calc/share";
 import type { BenchDescriptor, Calculator, InputMeta, OutputMeta } from "@/lib/calc/types";
-import { plain } from "@/lib/bench/errors";
+import { plain, runFieldErrors } from "@/lib/bench/errors";
 import { hiddenFields, initialMode, toRaw, type FormValues } from "@/lib/bench/form-values";
 import { loadCalculator } from "@/lib/bench/load-calculator";
 import { highestTypedVoltage, quickParse, typedHazard, type Parse } from "@/lib/bench/typed-volts";
@@ -62,11 +62,8 @@ export function CalculatorView(p: CalculatorViewProps) {
   // below, and the resolver hands that same run's field messages to the form instead of parsing again.
   const latest = useRef<RunResult | null>(null);
   const resolver = useCallback<Resolver<FormValues>>((values, _context, options) => {
-    const last = latest.current;
-    if (!last || last.ok) return { values, errors: {} };
-    const flat: Record<string, FieldError> = {};
-    for (const [path, message] of Object.entries(last.error.fields)) if (path !== "_") flat[path] = { type: "validate", message };
-    return { values: {}, errors: toNestErrors(flat, options) };
+    const errors = runFieldErrors(latest.current);
+    return Object.keys(errors).length ? { values: {}, errors: toNestErrors(errors, options) } : { values, errors: {} };
   }, []);
   const form = useForm<FormValues>({ defaultValues: p.initial, resolver, mode: "onSubmit", reValidateMode: "onSubmit" });
   const values = useWatch({ control: form.control }) as FormValues;

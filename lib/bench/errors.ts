@@ -1,4 +1,5 @@
-import type { FieldErrors } from "react-hook-form";
+import type { FieldError, FieldErrors } from "react-hook-form";
+import type { RunResult } from "@/lib/calc/run";
 
 /** The message at a dotted path ("stages.0.resistance") of react-hook-form's nested errors, in plain words. */
 export function errorAt(errors: FieldErrors, path: string): string | undefined {
@@ -15,4 +16,15 @@ export function errorAt(errors: FieldErrors, path: string): string | undefined {
 export function plain(message: string): string {
   const m = message.replace(/^[a-zA-Z]+\.\d+:\s*/, "");
   return m.charAt(0).toUpperCase() + m.slice(1);
+}
+
+/**
+ * A run's field messages as react-hook-form errors keyed by dotted path ("stages.0.resistance"), so the
+ * form shows what the one parse behind the result found; the whole-form message ("_") is shown apart.
+ */
+export function runFieldErrors(run: RunResult | null): Record<string, FieldError> {
+  const out: Record<string, FieldError> = {};
+  if (!run || run.ok) return out;
+  for (const [path, message] of Object.entries(run.error.fields)) if (path !== "_") out[path] = { type: "validate", message };
+  return out;
 }
