@@ -1,8 +1,9 @@
 import { defineConfig } from "drizzle-kit";
+import { databasePath } from "./db/env";
 
 export default defineConfig({
   dialect: "sqlite",
   schema: "./db/schema.ts",
   out: "./db/migrations",
-  dbCredentials: { url: process.env.GLOWBENCH_DB ?? "data/glowbench.db" },
+  dbCredentials: { url: databasePath() },
 });

@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { sessionCookieName } from "@/server/auth/session-cookie";
+import { serverEnv } from "@/server/env";
 import { addHsts } from "@/server/http/hsts";
 
 /**
@@ -20,7 +21,7 @@ export function proxy(request: NextRequest) {
   }
 
   const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
-  const dev = process.env.NODE_ENV !== "production";
+  const dev = serverEnv().NODE_ENV !== "production";
   const csp = [
     "default-src 'self'",
     `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${dev ? " 'unsafe-eval'" : ""}`,

@@ -3,7 +3,7 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import * as tar from "tar";
-import { databasePath } from "./client";
+import { databasePath, uploadsFolder } from "./env";
 
 /**
  * One dated archive of a running workshop: the database copied with SQLite's online backup API (a
@@ -17,10 +17,6 @@ export interface BackupManifest {
   uploads: string;
   /** Rows per table at the moment of the snapshot, so a restore can be checked. */
   rows: Record<string, number>;
-}
-
-export function uploadsFolder(dbFile: string): string {
-  return path.resolve(process.env.GLOWBENCH_UPLOADS || path.join(path.dirname(dbFile), "uploads"));
 }
 
 function stamp(d = new Date()): string {

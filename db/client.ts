@@ -4,6 +4,7 @@ import { migrate } from "drizzle-orm/better-sqlite3/migrator";
 import fs from "node:fs";
 import path from "node:path";
 import { processSingleton } from "../lib/singleton";
+import { databasePath } from "./env";
 import * as schema from "./schema";
 
 /** The one database client of the process: opened once, migrated once. */
@@ -13,10 +14,6 @@ export type Db = BetterSQLite3Database<typeof schema>;
 export type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 /** Query helpers take either, so they run alone or inside a caller's transaction. */
 export type DbOrTx = Db | Tx;
-
-export function databasePath(): string {
-  return path.resolve(/*turbopackIgnore: true*/ process.env.GLOWBENCH_DB ?? path.join("data", "glowbench.db"));
-}
 
 export const MIGRATIONS_FOLDER = path.join(process.cwd(), "db", "migrations");
 

@@ -1,4 +1,5 @@
-import { databasePath, openDatabase } from "./client";
+import { openDatabase } from "./client";
+import { databasePath } from "./env";
 
 // Opening the database applies every pending migration in db/migrations.
 const { sqlite } = openDatabase();

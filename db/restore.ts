@@ -3,8 +3,8 @@ import fs from "node:fs";
 import os from "node:os";
 import path from "node:path";
 import * as tar from "tar";
-import { tableCounts, uploadsFolder, type BackupManifest } from "./backup";
-import { databasePath } from "./client";
+import { tableCounts, type BackupManifest } from "./backup";
+import { databasePath, uploadsFolder } from "./env";
 
 /**
  * Puts an archive of db/backup.ts back: checks the snapshot (integrity and the row counts its manifest

@@ -1,4 +1,5 @@
 import "server-only";
+import { serverEnv } from "@/server/env";
 import { startUploadSweeps } from "@/server/files/sweep";
 import { PUBLIC_URL_MISSING, realProduction } from "@/server/http/public-origin";
 import { scryptParams } from "@/lib/auth/password";
@@ -8,7 +9,7 @@ import { scryptParams } from "@/lib/auth/password";
  * member's request, are checked now and said loudly in the log; then the background upload sweep starts.
  */
 export function startServerTasks(): void {
-  if (realProduction() && !process.env.GLOWBENCH_PUBLIC_URL) console.error(`Glowbench: ${PUBLIC_URL_MISSING}`);
+  if (realProduction() && !serverEnv().GLOWBENCH_PUBLIC_URL) console.error(`Glowbench: ${PUBLIC_URL_MISSING}`);
   try {
     scryptParams();
   } catch (err) {

@@ -1,4 +1,5 @@
 import "server-only";
+import { serverEnv } from "@/server/env";
 
 /**
  * The cookie's name and security flags alone, importable by proxy.ts without pulling in iron-session or
@@ -10,8 +11,9 @@ export const SESSION_COOKIE_PLAIN = "glowbench_session";
 export const SESSION_COOKIE_HOST = "__Host-glowbench_session";
 
 export function secureCookies(): boolean {
-  if (process.env.GLOWBENCH_INSECURE_COOKIES === "1") return false;
-  return process.env.NODE_ENV === "production";
+  const env = serverEnv();
+  if (env.GLOWBENCH_INSECURE_COOKIES === "1") return false;
+  return env.NODE_ENV === "production";
 }
 
 export function sessionCookieName(): string {

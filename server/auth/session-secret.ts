@@ -2,6 +2,8 @@ import "server-only";
 import { randomBytes } from "node:crypto";
 import fs from "node:fs";
 import path from "node:path";
+import { databasePath } from "@/db/env";
+import { realProduction, serverEnv } from "@/server/env";
 
 /**
  * The session-sealing secret. Production requires SESSION_SECRET (32+ characters); development,
@@ -11,17 +13,13 @@ let cached: string | undefined;
 
 export function sessionSecret(): string {
   if (cached) return cached;
-  const fromEnv = process.env.SESSION_SECRET;
-  if (fromEnv) {
-    if (fromEnv.length < 32) throw new Error("SESSION_SECRET must be at least 32 characters.");
-    return (cached = fromEnv);
-  }
-  const mayGenerate = process.env.NODE_ENV !== "production" || process.env.GLOWBENCH_DEMO === "1";
-  if (!mayGenerate) {
+  // serverEnv() refuses a SESSION_SECRET shorter than 32 characters.
+  const fromEnv = serverEnv().SESSION_SECRET;
+  if (fromEnv) return (cached = fromEnv);
+  if (realProduction()) {
     throw new Error("SESSION_SECRET is required in production (32+ random characters). See README.md.");
   }
-  const dbFile = process.env.GLOWBENCH_DB ?? path.join("data", "glowbench.db");
-  const file = path.join(path.dirname(path.resolve(/*turbopackIgnore: true*/ dbFile)), "session-secret");
+  const file = path.join(path.dirname(databasePath()), "session-secret");
   try {
     cached = fs.readFileSync(file, "utf8").trim();
     if (cached.length >= 32) return cached;

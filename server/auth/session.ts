@@ -2,6 +2,7 @@ import "server-only";
 import { getIronSession, type SessionOptions } from "iron-session";
 import { cookies } from "next/headers";
 import { createSession, deleteSession } from "@/db/queries/sessions";
+import { serverEnv } from "@/server/env";
 import { sessionSecret } from "./session-secret";
 import { secureCookies, sessionCookieName } from "./session-cookie";
 
@@ -25,8 +26,9 @@ export const SESSION_MAX_AGE_SECONDS = 60 * 60 * 24 * 14;
 
 /** A session unused this long ends: GLOWBENCH_IDLE_TIMEOUT_MINUTES, 8 hours (a working day at the bench) by default. */
 export function idleTimeoutMs(): number {
-  const minutes = Number(process.env.GLOWBENCH_IDLE_TIMEOUT_MINUTES || 480);
-  const clamped = Number.isFinite(minutes) ? Math.min(Math.max(minutes, 1), SESSION_MAX_AGE_SECONDS / 60) : 480;
+  // serverEnv() refuses a value that is not a number.
+  const minutes = serverEnv().GLOWBENCH_IDLE_TIMEOUT_MINUTES ?? 480;
+  const clamped = Math.min(Math.max(minutes, 1), SESSION_MAX_AGE_SECONDS / 60);
   return clamped * 60 * 1000;
 }
 

@@ -4,7 +4,7 @@ import fs from "node:fs/promises";
 import path from "node:path";
 import { fileTypeFromBuffer } from "file-type";
 import sharp from "sharp";
-import { databasePath } from "@/db/client";
+import { uploadsFolder } from "@/db/env";
 import { TooLargeError, UnsupportedTypeError, ValidationError } from "@/lib/errors";
 
 /**
@@ -30,7 +30,7 @@ export const ALLOWED_TYPES: Record<string, string> = {
 };
 
 export function uploadsDir(): string {
-  return path.resolve(/*turbopackIgnore: true*/ process.env.GLOWBENCH_UPLOADS || path.join(path.dirname(databasePath()), "uploads"));
+  return uploadsFolder();
 }
 
 /** A browser sends only a base name; anything with folders, "..", or control characters is refused. */

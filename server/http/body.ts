@@ -1,4 +1,5 @@
 import "server-only";
+import { serverEnv } from "@/server/env";
 import { HttpError } from "./errors";
 
 /** What a state-changing request must look like before its body is read: same origin, the right type, bounded. */
@@ -31,7 +32,7 @@ export function sameOrigin(request: Request): boolean {
   } catch {
     return false; // "null" (sandboxed frames, file: pages) and garbage
   }
-  const configured = process.env.GLOWBENCH_PUBLIC_URL;
+  const configured = serverEnv().GLOWBENCH_PUBLIC_URL;
   if (configured && URL.canParse(configured) && new URL(configured).origin === sent) return true;
   return sent === requestOrigin(request);
 }

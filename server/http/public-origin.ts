@@ -1,11 +1,9 @@
 import "server-only";
 import { NotConfiguredError } from "@/lib/errors";
+import { realProduction, serverEnv, type EnvFor } from "@/server/env";
 import { requestOrigin } from "./body";
 
-/** True for a real deployment: a production build that is not the demo. */
-export function realProduction(env: NodeJS.ProcessEnv = process.env): boolean {
-  return env.NODE_ENV === "production" && env.GLOWBENCH_DEMO !== "1";
-}
+export { realProduction };
 
 export const PUBLIC_URL_MISSING =
   "GLOWBENCH_PUBLIC_URL is not set: a production server needs it (e.g. https://bench.example) to put links in e-mails and payment pages. See README.md.";
@@ -18,7 +16,7 @@ export const PUBLIC_URL_MISSING =
  * (503) instead: Host is the client's to write, and a reset link built from it would carry someone's
  * token to a site of the sender's choosing.
  */
-export function publicOrigin(request: Request, env: NodeJS.ProcessEnv = process.env): string {
+export function publicOrigin(request: Request, env: EnvFor<"NODE_ENV" | "GLOWBENCH_DEMO" | "GLOWBENCH_PUBLIC_URL"> = serverEnv()): string {
   const configured = env.GLOWBENCH_PUBLIC_URL;
   if (configured) {
     if (!URL.canParse(configured)) throw new NotConfiguredError(`GLOWBENCH_PUBLIC_URL is not a URL: ${configured}`);

@@ -1,6 +1,7 @@
 import "server-only";
 import path from "node:path";
-import { databasePath } from "@/db/client";
+import { databasePath } from "@/db/env";
+import { realProduction, serverEnv, type EnvFor } from "@/server/env";
 
 /**
  * Where mail goes. A real deployment sets SMTP_URL. Development, the demo (GLOWBENCH_DEMO=1) and the
@@ -9,17 +10,17 @@ import { databasePath } from "@/db/client";
  */
 
 /** True unless this is a real production deployment: dev, demo, or an explicit local mail folder. */
-export function localMailEnabled(): boolean {
-  return process.env.NODE_ENV !== "production" || process.env.GLOWBENCH_DEMO === "1" || !!process.env.GLOWBENCH_MAIL_DIR;
+export function localMailEnabled(env: EnvFor<"NODE_ENV" | "GLOWBENCH_DEMO" | "GLOWBENCH_MAIL_DIR"> = serverEnv()): boolean {
+  return !realProduction(env) || !!env.GLOWBENCH_MAIL_DIR;
 }
 
 export function mailDir(): string {
-  return path.resolve(/*turbopackIgnore: true*/ process.env.GLOWBENCH_MAIL_DIR ?? path.join(path.dirname(databasePath()), "mail"));
+  return path.resolve(/*turbopackIgnore: true*/ serverEnv().GLOWBENCH_MAIL_DIR ?? path.join(path.dirname(databasePath()), "mail"));
 }
 
 /** The sender shown on every message; an operator with a real relay sets MAIL_FROM. */
 export function mailFrom(): string {
-  return process.env.MAIL_FROM ?? "Glowbench <no-reply@glowbench.invalid>";
+  return serverEnv().MAIL_FROM;
 }
 
 export { publicOrigin as appUrl } from "@/server/http/public-origin";

@@ -1,5 +1,7 @@
 import "server-only";
 import nodemailer, { type Transporter } from "nodemailer";
+import { processSingletonFor } from "@/lib/singleton";
+import { serverEnv } from "@/server/env";
 import { mailFrom } from "./config";
 
 /** One outgoing message. `workshopId` tags it so each owner's outbox shows only their workshop's mail. */
@@ -18,17 +20,11 @@ export class MailNotConfiguredError extends Error {
   }
 }
 
-const globalForMail = globalThis as unknown as { __glowbenchTransport?: { url: string; transport: Transporter } };
-
 function transport(): Transporter {
-  // Read at send time: the local sink sets SMTP_URL when it starts (instrumentation.ts).
-  const url = process.env.SMTP_URL;
+  // Read at send time: the local sink fills SMTP_URL in when it starts (instrumentation.ts).
+  const url = serverEnv().SMTP_URL;
   if (!url) throw new MailNotConfiguredError();
-  const cached = globalForMail.__glowbenchTransport;
-  if (cached?.url === url) return cached.transport;
-  const created = nodemailer.createTransport(url);
-  globalForMail.__glowbenchTransport = { url, transport: created };
-  return created;
+  return processSingletonFor("Transport", url, () => nodemailer.createTransport(url));
 }
 
 /** Sends one message over SMTP; rejects when the server does not accept it. */

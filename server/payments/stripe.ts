@@ -1,5 +1,7 @@
 import "server-only";
 import Stripe from "stripe";
+import { processSingletonFor } from "@/lib/singleton";
+import { serverEnv } from "@/server/env";
 
 /**
  * The one payment-service client of the process, through the Stripe Node SDK. In development, the demo and
@@ -9,33 +11,26 @@ import Stripe from "stripe";
 
 export class PaymentsNotConfigured extends Error {}
 
-function env(name: string): string {
-  const value = process.env[name];
+function required(name: "STRIPE_SECRET_KEY" | "STRIPE_WEBHOOK_SECRET"): string {
+  const value = serverEnv()[name];
   if (!value) throw new PaymentsNotConfigured(`${name} is not set, so card payments are switched off.`);
   return value;
 }
 
-const globalForStripe = globalThis as unknown as { __glowbenchStripe?: { key: string; base: string; client: Stripe } };
-
 export function getStripe(): Stripe {
-  const key = env("STRIPE_SECRET_KEY");
-  const base = process.env.STRIPE_API_BASE ?? "";
-  const cached = globalForStripe.__glowbenchStripe;
-  if (cached && cached.key === key && cached.base === base) return cached.client;
-  let options: Stripe.StripeConfig = { maxNetworkRetries: 1, timeout: 15_000, telemetry: false };
-  if (base) {
-    const url = new URL(base);
-    options = { ...options, host: url.hostname, port: url.port || (url.protocol === "https:" ? 443 : 80), protocol: url.protocol === "https:" ? "https" : "http" };
-  }
-  const client = new Stripe(key, options);
-  globalForStripe.__glowbenchStripe = { key, base, client };
-  return client;
+  const key = required("STRIPE_SECRET_KEY");
+  const base = serverEnv().STRIPE_API_BASE ?? "";
+  // Made again if the key or the address changes (the local fake fills them in after start).
+  return processSingletonFor("Stripe", `${key} ${base}`, () => {
+    let options: Stripe.StripeConfig = { maxNetworkRetries: 1, timeout: 15_000, telemetry: false };
+    if (base) {
+      const url = new URL(base);
+      options = { ...options, host: url.hostname, port: url.port || (url.protocol === "https:" ? 443 : 80), protocol: url.protocol === "https:" ? "https" : "http" };
+    }
+    return new Stripe(key, options);
+  });
 }
 
 export function webhookSecret(): string {
-  return env("STRIPE_WEBHOOK_SECRET");
-}
-
-export function paymentsConfigured(): boolean {
-  return !!process.env.STRIPE_SECRET_KEY && !!process.env.STRIPE_WEBHOOK_SECRET;
+  return required("STRIPE_WEBHOOK_SECRET");
 }
