@@ -92,7 +92,6 @@ export function findInvitation(token: string) {
   const account = getDb().select({ id: users.id }).from(users).where(eq(users.email, row.email)).get();
   return { id: row.id, workshopId: row.workshopId, workshopName: row.workshopName, email: row.email, role: row.role, expiresAt: row.expiresAt, inviterName: row.inviterName, state: stateOf(row), accountExists: !!account };
 }
-export type InvitationView = NonNullable<ReturnType<typeof findInvitation>>;
 
 export const INVITATION_GONE: Record<Exclude<InvitationState, "pending">, string> = {
   expired: "This invitation has expired. Ask the workshop owner to send a new one.",

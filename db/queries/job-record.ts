@@ -18,4 +18,3 @@ export function getJobRecord(member: Member, jobId: number) {
     log: listLog(member, jobId),
   };
 }
-export type JobRecord = ReturnType<typeof getJobRecord>;

@@ -38,8 +38,6 @@ export function listLog(member: Member, jobId: number) {
     .map(({ authorId, authorName, ...rest }) => ({ ...rest, author: authorId === null ? null : { id: authorId, name: authorName ?? "" } }));
 }
 
-export type LogRow = ReturnType<typeof listLog>[number];
-
 export function addLogEntry(member: Member, jobId: number, input: LogEntryValues) {
   assertCan(member, "addNotes", "write in the log");
   return getDb().transaction((tx) => {

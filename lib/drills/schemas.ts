@@ -44,7 +44,6 @@ export const drillAnswerSchema = z.object(
   },
   { error: 'Send a JSON object: { "answer": … }.' },
 );
-export type DrillAnswerForm = z.input<typeof drillAnswerSchema>;
 
 /** `?member={userId}`: whose progress or assignments; left out, the member's own. */
 export const drillMemberQuerySchema = z.object({ member: idField("a member of your workshop").optional() });
@@ -85,4 +84,3 @@ export const drillAssignmentSchema = z
     }
   });
 export type DrillAssignmentInput = z.output<typeof drillAssignmentSchema>;
-export type DrillAssignmentForm = z.input<typeof drillAssignmentSchema>;

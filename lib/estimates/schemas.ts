@@ -38,8 +38,6 @@ export const linesSchema = z.object({
 export type LinesInput = z.input<typeof linesSchema>;
 export type LinesValues = z.output<typeof linesSchema>;
 
-export const sendEstimateSchema = z.object({}).strict();
-
 export const answerSchema = z.object({
   token: z.string({ error: "The link is missing its token." }).min(20, "The link is not complete.").max(200, "The link is not valid."),
   decision: z.enum(["approve", "decline"], { error: "Choose approve or decline." }),

@@ -18,5 +18,4 @@ export const powerUpSchema = z.object({
 export const logEntrySchema = z.discriminatedUnion("kind", [logNoteSchema, powerUpSchema], {
   error: "Choose a note or a power-up entry.",
 });
-export type LogEntryInput = z.input<typeof logEntrySchema>;
 export type LogEntryValues = z.output<typeof logEntrySchema>;

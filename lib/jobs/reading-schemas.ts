@@ -56,5 +56,4 @@ export const voltageReadingSchema = z.object({
 export const readingSchema = z.discriminatedUnion("kind", [resistorReadingSchema, voltageReadingSchema], {
   error: "Choose resistor or voltage as the kind of reading.",
 });
-export type ReadingInput = z.input<typeof readingSchema>;
 export type ReadingValues = z.output<typeof readingSchema>;
