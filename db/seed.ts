@@ -1,7 +1,8 @@
 import { eq } from "drizzle-orm";
 import { hashPassword } from "../lib/auth/password";
 import { openDatabase, type Db } from "./client";
-import { calculations, jobs, logEntries, memberships, parts, readings, users, workshops } from "./schema";
+import { calculations, jobs, logEntries, memberships, parts, powerUpSteps, powerUps, readings, users, workshops } from "./schema";
+import { seedTelevision } from "./seed-bench-record";
 
 /**
  * The demo scenario: two invented workshops, their people, customers and sets. Every name here is
@@ -21,7 +22,11 @@ const HOUR = 3_600_000;
 
 export async function seedDemo(db: Db): Promise<{ created: boolean }> {
   const existing = db.select({ id: users.id }).from(users).where(eq(users.email, DEMO_USERS.owner.email)).get();
-  if (existing) return { created: false };
+  if (existing) {
+    // A demo database from before the bench record gains the television job; a second run adds nothing.
+    addTelevisionTo(db, existing.id);
+    return { created: false };
+  }
   // Hash outside the transaction (scrypt is async); write everything inside one.
   const hash = await hashPassword(DEMO_PASSWORD);
   const now = Date.now();
@@ -164,7 +169,8 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
         createdAt: at(20),
       })
       .run();
-    tx.insert(logEntries)
+    const radioLog = tx
+      .insert(logEntries)
       .values([
         { jobId: radio, workshopId: w, authorId: tech, kind: "note", text: "Booked in. Back cover off; all paper capacitors original and leaking wax.", createdAt: at(72) },
         {
@@ -178,9 +184,28 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
         },
         { jobId: radio, workshopId: w, authorId: apprentice, kind: "note", text: "Resistor survey done: R4 and R7 drifted high.", createdAt: at(20) },
       ])
-      .run();
+      .returning({ id: logEntries.id, kind: logEntries.kind, text: logEntries.text, createdAt: logEntries.createdAt })
+      .all();
+    // The radio's power-up entry as a session of its own, as the bench-record migration moves older ones.
+    const entry = radioLog.find((e) => e.kind === "power-up")!;
+    const session = tx
+      .insert(powerUps)
+      .values({ jobId: radio, workshopId: w, authorId: tech, logEntryId: entry.id, startedAt: entry.createdAt })
+      .returning({ id: powerUps.id })
+      .get().id;
+    tx.insert(powerUpSteps).values({ powerUpId: session, supplyVoltage: 120, currentDrawn: 0.21, note: entry.text, createdAt: entry.createdAt }).run();
+    seedTelevision(tx, { workshopId: w, tech, apprentice }, now);
   });
   return { created: true };
+}
+
+function addTelevisionTo(db: Db, ownerId: number): void {
+  const id = (email: string) => db.select({ id: users.id }).from(users).where(eq(users.email, email)).get()?.id;
+  const workshop = db.select({ id: memberships.workshopId }).from(memberships).where(eq(memberships.userId, ownerId)).get();
+  const tech = id(DEMO_USERS.technician.email);
+  const apprentice = id(DEMO_USERS.apprentice.email);
+  if (!workshop || !tech || !apprentice) return;
+  db.transaction((tx) => seedTelevision(tx, { workshopId: workshop.id, tech, apprentice }));
 }
 
 if (process.argv[1] && /seed\.ts$/.test(process.argv[1])) {
