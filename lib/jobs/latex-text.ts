@@ -102,16 +102,17 @@ export function latexToText(latex: string): string {
   return readUntil(new Reader(latex)).replace(/\s+/g, " ").replace(/\(\s+/g, "(").replace(/\s+\)/g, ")").trim();
 }
 
-/** The PDF's embedded font covers Latin only: spell out the few symbols it lacks. */
+/**
+ * The PDF's fonts (server/pdf/fonts.ts) cover Latin, µ, Ω and the Greek letters, but not the math
+ * symbols: those few are written out. Ω and µ stay as they are (never "kohm"), and so do τ, π, ω.
+ */
 const PDF_REPLACEMENTS: [RegExp, string][] = [
-  [/μ/g, "µ"], [/√/g, "sqrt"], [/≤/g, "<="], [/≥/g, ">="], [/≠/g, "!="], [/≈/g, "~"], [/⇒/g, "=>"], [/→/g, "->"],
-  [/∞/g, "infinity"], [/∥/g, "||"], [/π/g, "pi"], [/τ/g, "tau"], [/ω/g, "omega"], [/α/g, "alpha"], [/β/g, "beta"], [/γ/g, "gamma"],
-  [/δ/g, "delta"], [/Δ/g, "Delta"], [/ρ/g, "rho"], [/θ/g, "theta"], [/φ/g, "phi"], [/ε/g, "epsilon"], [/λ/g, "lambda"],
-  [/σ/g, "sigma"], [/Σ/g, "Sum"], [/[\u0370-\u03ff]/g, "?"],
+  [/\u2126/g, "Ω"], [/μ/g, "µ"], [/√/g, "sqrt"], [/≤/g, "<="], [/≥/g, ">="], [/≠/g, "!="], [/≈/g, "~"], [/⇒/g, "=>"], [/→/g, "->"],
+  [/∞/g, "infinity"], [/∥/g, "||"],
 ];
 
 export function pdfText(text: string): string {
-  return PDF_REPLACEMENTS.reduce((t, [re, to]) => t.replace(re, /^[a-z]{2,}$/i.test(to) ? ` ${to} ` : to), text.replace(/Ω/g, "ohm"))
+  return PDF_REPLACEMENTS.reduce((t, [re, to]) => t.replace(re, /^[a-z]{2,}$/i.test(to) ? ` ${to} ` : to), text)
     .replace(/ {2,}/g, " ")
     .replace(/\( /g, "(")
     .replace(/ \)/g, ")")

@@ -10,6 +10,7 @@ import type { OutputValue } from "@/lib/calc/types";
 import { latexToText, pdfText } from "@/lib/jobs/latex-text";
 import { PART_KIND_LABELS } from "@/lib/jobs/part-schemas";
 import { VERDICT_LABELS } from "@/lib/jobs/reading-verdict";
+import { benchRecordData } from "./record-data";
 
 /** Everything the PDF bench sheet prints, as plain strings the embedded font can show. */
 
@@ -72,6 +73,7 @@ export function benchSheetData(member: Member, jobId: number) {
         kind: PART_KIND_LABELS[p.kind],
         original: t([p.originalValue, p.originalRating].filter(Boolean).join(", ") || "—"),
         replacement: t([p.replacementValue, p.replacementRating].filter(Boolean).join(", ") || "—"),
+        checked: p.checkedBy ? t(p.checkedBy.name) : "not yet",
       })),
     partsOutstanding: record.parts.filter((p) => p.state !== "fitted").map((p) => `${t(p.designator)} (${PART_STATE_LABELS[p.state].toLowerCase()})`),
     resistors: resistorRows.map((r) => ({
@@ -90,6 +92,7 @@ export function benchSheetData(member: Member, jobId: number) {
       verdict: VERDICT_LABELS[r.verdict],
     })),
     calculations,
+    ...benchRecordData(member, jobId),
   };
 }
 

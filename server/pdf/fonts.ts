@@ -10,6 +10,10 @@ import { Font } from "@react-pdf/renderer";
 
 export const PDF_BODY = "Body";
 export const PDF_FIGURES = "Figures";
+/** JetBrains Mono's Greek subset: Ω, τ, π, ω and the rest, which the Latin faces lack. */
+export const PDF_GREEK = "Greek";
+/** Body text with the Greek face behind it: react-pdf takes each character from the first face that has it. */
+export const PDF_BODY_STACK = [PDF_BODY, PDF_GREEK];
 
 const fontFile = (name: string) => path.join(/*turbopackIgnore: true*/ process.cwd(), "fonts", name);
 
@@ -26,6 +30,14 @@ Font.register({
   fonts: [
     { src: fontFile("jetbrains-mono-latin-400-normal.woff") },
     { src: fontFile("jetbrains-mono-latin-600-normal.woff"), fontWeight: 600 },
+  ],
+});
+Font.register({
+  family: PDF_GREEK,
+  fonts: [
+    { src: fontFile("jetbrains-mono-greek-400-normal.woff") },
+    { src: fontFile("jetbrains-mono-greek-700-normal.woff"), fontWeight: 700 },
+    { src: fontFile("jetbrains-mono-greek-400-italic.woff"), fontStyle: "italic" },
   ],
 });
 // Whole words only: a part number or value split by a hyphen misleads at the bench.

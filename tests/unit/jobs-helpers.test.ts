@@ -90,7 +90,11 @@ describe("formulas as text for the bench sheet", () => {
     expect(latexToText(String.raw`R_k = \frac{V_k}{I_k}`)).toBe("R_k = V_k / I_k");
     expect(latexToText(String.raw`t = \tau\,\ln\frac{V_0}{V_t}`)).toBe("t = τ ln(V_0 / V_t)");
     expect(latexToText(String.raw`P = I^2 R`)).toBe("P = I² R");
-    expect(pdfText(latexToText(String.raw`X_C = \frac{1}{2\pi f C}`))).toBe("X_C = 1 / (2 pi f C)");
-    expect(pdfText("470 kΩ")).toBe("470 kohm");
+    // The bench sheet's fonts carry Ω, µ and the Greek letters: they print as themselves, never spelt out.
+    expect(pdfText(latexToText(String.raw`X_C = \frac{1}{2\pi f C}`))).toBe("X_C = 1 / (2π f C)");
+    expect(pdfText("470 kΩ")).toBe("470 kΩ");
+    expect(pdfText("470 k\u2126, 47 μF")).toBe("470 kΩ, 47 µF");
+    expect(pdfText(latexToText(String.raw`t = 5\tau`))).toBe("t = 5τ");
+    expect(pdfText(latexToText(String.raw`V \le \sqrt{2} V_\text{rms}`))).toBe("V <= sqrt 2 V_rms");
   });
 });
