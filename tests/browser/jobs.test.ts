@@ -22,7 +22,8 @@ afterAll(async () => {
 async function signedInPage(): Promise<Page> {
   const context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1280, height: 900 } });
   const [name, value] = team.technician.cookies.split("; ")[0].split(/=(.*)/s);
-  await context.addCookies([{ name, value, url: baseUrl() }]);
+  // The session cookie is __Host- (Secure) in production; Chromium sends Secure cookies to http://localhost.
+  await context.addCookies([{ name, value, url: baseUrl().replace(/^http:/, "https:") }]);
   return context.newPage();
 }
 async function shot(page: Page, name: string) {
