@@ -6,6 +6,7 @@ import {
   ESTIMATE_STATUSES,
   FAULT_CANDIDATE_STATUSES,
   FILE_KINDS,
+  FIRST_JOB_STATUS,
   INVOICE_STATUSES,
   JOB_STATUSES,
   LINE_KINDS,
@@ -157,7 +158,7 @@ export const jobs = sqliteTable(
     year: integer("year"),
     customerName: text("customer_name"),
     customerEmail: text("customer_email"),
-    status: text("status", { enum: JOB_STATUSES }).notNull().default("booked-in"),
+    status: text("status", { enum: JOB_STATUSES }).notNull().default(FIRST_JOB_STATUS),
     notes: text("notes"),
     createdAt: createdAt(),
     updatedAt: integer("updated_at", { mode: "timestamp_ms" })
@@ -434,8 +435,19 @@ export const invoices = sqliteTable(
     checkoutSessionId: text("checkout_session_id"),
     issuedAt: integer("issued_at", { mode: "timestamp_ms" }).notNull(),
     paidAt: integer("paid_at", { mode: "timestamp_ms" }),
+    /** The customer's pay link (db/queries/invoice-links.ts): only the SHA-256 of its token, its expiry, to whom and when it went, when it was first opened. */
+    payTokenHash: text("pay_token_hash"),
+    payTokenExpiresAt: integer("pay_token_expires_at", { mode: "timestamp_ms" }),
+    sentTo: text("sent_to"),
+    sentAt: integer("sent_at", { mode: "timestamp_ms" }),
+    viewedAt: integer("viewed_at", { mode: "timestamp_ms" }),
   },
-  (t) => [uniqueIndex("invoices_workshop_number").on(t.workshopId, t.number), index("invoices_job").on(t.jobId)],
+  (t) => [
+    uniqueIndex("invoices_workshop_number").on(t.workshopId, t.number),
+    index("invoices_job").on(t.jobId),
+    uniqueIndex("invoices_pay_token").on(t.payTokenHash),
+    index("invoices_checkout_session").on(t.checkoutSessionId),
+  ],
 );
 
 export const invoiceLines = sqliteTable(

@@ -110,7 +110,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
       equipmentKind: "television",
       year: 1953,
       customerName: "Gwen Hallorann",
-      status: "booked-in",
+      status: "on-the-rack",
       notes: "Collector's set. EHT section to be checked before any power is applied.",
       createdAt: at(4),
       updatedAt: at(4),
@@ -120,7 +120,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
       equipmentKind: "test-gear",
       customerName: "Ivo Thackeray",
       customerEmail: "ivo.thackeray@example.com",
-      status: "ready",
+      status: "at-the-counter",
       notes: "Output attenuator cleaned; recalibrated against the workshop's frequency counter.",
       createdAt: at(400),
       updatedAt: at(50),
@@ -136,7 +136,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
       },
       harbour.id,
     );
-    job({ title: "FM tuner, early 1960s", equipmentKind: "tuner", status: "booked-in", createdAt: at(8), updatedAt: at(8) }, harbour.id);
+    job({ title: "FM tuner, early 1960s", equipmentKind: "tuner", status: "on-the-rack", createdAt: at(8), updatedAt: at(8) }, harbour.id);
 
     const w = lamplight.id;
     tx.insert(parts)
@@ -172,7 +172,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
     const radioLog = tx
       .insert(logEntries)
       .values([
-        { jobId: radio, workshopId: w, authorId: tech, kind: "note", text: "Booked in. Back cover off; all paper capacitors original and leaking wax.", createdAt: at(72) },
+        { jobId: radio, workshopId: w, authorId: tech, kind: "note", text: "Arrived this morning. Back cover off; all paper capacitors original and leaking wax.", createdAt: at(72) },
         {
           jobId: radio,
           workshopId: w,

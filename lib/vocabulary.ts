@@ -28,29 +28,38 @@ export const EQUIPMENT_KIND_LABELS: Record<EquipmentKind, string> = {
   other: "Other",
 };
 
-/** A set's path through the shop, from the day it arrives to the day it goes home. */
+/**
+ * A set's path through the shop, from the day it arrives to the day it goes home. The ends are named for
+ * where the set sits (on the rack, at the counter) and what the customer is doing; the middle is the trade's.
+ * Renamed values are moved in db/migrations/0006 (on-the-rack was booked-in, customer-weighing-up was
+ * awaiting-go-ahead, at-the-counter was ready).
+ */
 export const JOB_STATUSES = [
-  "booked-in",
+  "on-the-rack",
   "inspecting",
-  "awaiting-go-ahead",
+  "customer-weighing-up",
   "recapping",
   "slow-start",
   "fault-finding",
   "aligning",
-  "ready",
+  "at-the-counter",
   "returned",
 ] as const;
 export type JobStatus = (typeof JOB_STATUSES)[number];
 
+/** Where a new job starts, and the status the checks before collection guard (lib/jobs/ready-checks.ts). */
+export const FIRST_JOB_STATUS = "on-the-rack" satisfies JobStatus;
+export const COLLECTION_STATUS = "at-the-counter" satisfies JobStatus;
+
 export const JOB_STATUS_LABELS: Record<JobStatus, string> = {
-  "booked-in": "Booked in",
+  "on-the-rack": "On the rack",
   inspecting: "Inspecting",
-  "awaiting-go-ahead": "Awaiting go-ahead",
+  "customer-weighing-up": "Customer weighing it up",
   recapping: "Recapping",
   "slow-start": "Slow start",
   "fault-finding": "Fault-finding",
   aligning: "Aligning",
-  ready: "Ready to collect",
+  "at-the-counter": "At the counter",
   returned: "Gone home",
 };
 

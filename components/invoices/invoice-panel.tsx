@@ -2,7 +2,7 @@ import Link from "next/link";
 import { Card } from "@/components/ui/card";
 import { editorLines } from "@/lib/estimates/editor-lines";
 import { LinesEditor, type EditorPart } from "@/components/estimates/lines-editor";
-import { JOB_STATUS_LABELS, type JobStatus } from "@/lib/vocabulary";
+import { COLLECTION_STATUS, JOB_STATUS_LABELS, type JobStatus } from "@/lib/vocabulary";
 import type { getEstimateForJob } from "@/db/queries/estimates";
 import type { listInvoicesForJob } from "@/db/queries/invoices";
 import type { Member } from "@/lib/auth/can";
@@ -27,7 +27,7 @@ export function InvoicePanel({
   parts: EditorPart[];
 }) {
   const standing = invoices.find((i) => i.status !== "void");
-  const ready = jobStatus === "ready" || jobStatus === "returned";
+  const ready = jobStatus === COLLECTION_STATUS || jobStatus === "returned";
   return (
     <Card>
       <h2 className="mb-4 text-lead font-bold">Invoice</h2>
@@ -63,7 +63,7 @@ export function InvoicePanel({
         </>
       ) : (
         <p className="text-muted">
-          The invoice is issued when the set is ready to collect; it is now “{JOB_STATUS_LABELS[jobStatus]}”.
+          The invoice is issued once the set is “{JOB_STATUS_LABELS[COLLECTION_STATUS]}”; it is now “{JOB_STATUS_LABELS[jobStatus]}”.
         </p>
       )}
     </Card>

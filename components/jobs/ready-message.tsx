@@ -92,7 +92,7 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
           </ul>
         </div>
       ) : null}
-      <form onSubmit={onSubmit} noValidate className="flex flex-col gap-1" aria-label="Ready to collect message">
+      <form onSubmit={onSubmit} noValidate className="flex flex-col gap-1" aria-label="Collection message">
         <Field id={`ready-subject-${jobId}`} label="Subject" error={errors.subject?.message} {...register("subject")} />
         <TextareaField id={`ready-text-${jobId}`} label="Message" rows={10} error={errors.text?.message} {...register("text")} />
         <div className="flex flex-wrap items-center gap-4">

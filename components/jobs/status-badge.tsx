@@ -2,14 +2,14 @@ import { JOB_STATUS_LABELS, type JobStatus } from "@/lib/vocabulary";
 
 /** Colour by stage: waiting (neutral), on the bench (the primary's tint), done (green). Caution and hazard colours are kept for results. */
 const TONE: Record<JobStatus, string> = {
-  "booked-in": "border-rule bg-sunk text-ink",
+  "on-the-rack": "border-rule bg-sunk text-ink",
   inspecting: "border-glow/40 bg-glow-bg text-glow",
-  "awaiting-go-ahead": "border-rule bg-sunk text-ink",
+  "customer-weighing-up": "border-rule bg-sunk text-ink",
   recapping: "border-glow/40 bg-glow-bg text-glow",
   "slow-start": "border-glow/40 bg-glow-bg text-glow",
   "fault-finding": "border-glow/40 bg-glow-bg text-glow",
   aligning: "border-glow/40 bg-glow-bg text-glow",
-  ready: "border-ok/40 bg-ok-bg text-ok",
+  "at-the-counter": "border-ok/40 bg-ok-bg text-ok",
   returned: "border-rule bg-panel text-muted",
 };
 

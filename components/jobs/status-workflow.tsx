@@ -9,14 +9,14 @@ import { ReadyChecksPanel, sendReady } from "./ready-checks";
 
 /** What each step means at the bench, in our words. */
 const HINTS: Record<JobStatus, string> = {
-  "booked-in": "Arrived; not yet opened.",
+  "on-the-rack": "In, labelled and on the rack; not opened yet.",
   inspecting: "Back off, looking for damage and cooked parts.",
-  "awaiting-go-ahead": "Waiting for the customer to agree the work.",
+  "customer-weighing-up": "The customer has the estimate and is deciding whether we go ahead.",
   recapping: "Replacing the paper and electrolytic capacitors.",
   "slow-start": "First power-up on a current-limited supply.",
   "fault-finding": "Tracing what still does not work.",
   aligning: "Peaking the IF and dial tracking.",
-  ready: "Finished and tested; waiting for collection.",
+  "at-the-counter": "Finished and tested; on the counter for its owner to collect.",
   returned: "Back with its owner.",
 };
 

@@ -48,7 +48,7 @@ export function SettingsForm({ initial }: { initial: WorkshopSettingsForm }) {
       <Field id="ws-address" label="Address" error={errors.address?.message} {...register("address")} />
       <TextareaField
         id="ws-ready"
-        label="“Ready to collect” message"
+        label="Collection message"
         rows={9}
         placeholder={DEFAULT_READY_TEMPLATE}
         hint={

@@ -3,6 +3,7 @@ import { assertCan, type Member } from "@/lib/auth/can";
 import type { LinesValues } from "@/lib/estimates/schemas";
 import { ConflictError, notFound } from "@/lib/errors";
 import { computeTotals } from "@/lib/money";
+import { COLLECTION_STATUS, JOB_STATUS_LABELS } from "@/lib/vocabulary";
 import { getDb } from "../client";
 import { estimateLines, estimates, invoiceLines, invoices, jobs, workshops } from "../schema";
 import { touchJob } from "./job-access";
@@ -14,7 +15,7 @@ import { jobInWorkshop, priceLines, type PricedLineRow } from "./money-lines";
  * workshop without gaps: the counter is bumped inside the same transaction that inserts the invoice.
  */
 
-const INVOICEABLE = ["ready", "returned"] as const;
+const INVOICEABLE = [COLLECTION_STATUS, "returned"] as const;
 
 export function listInvoicesForJob(member: Member, jobId: number) {
   assertCan(member, "seeMoney", "see invoices");
@@ -65,7 +66,7 @@ export function issueInvoice(member: Member, jobId: number, input: { lines?: Lin
   const id = getDb().transaction((tx) => {
     const job = jobInWorkshop(tx, member.workshopId, jobId);
     if (!job) throw notFound("That job");
-    if (!(INVOICEABLE as readonly string[]).includes(job.status)) throw new ConflictError("Invoice a job once it is ready to collect.");
+    if (!(INVOICEABLE as readonly string[]).includes(job.status)) throw new ConflictError(`Invoice a job once it is “${JOB_STATUS_LABELS[COLLECTION_STATUS]}”: finished and ready for its owner.`);
     const open = tx
       .select({ number: invoices.number })
       .from(invoices)

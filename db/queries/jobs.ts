@@ -1,5 +1,5 @@
 import { and, asc, desc, eq, inArray, or, sql, type AnyColumn, type SQL } from "drizzle-orm";
-import { JOB_STATUS_LABELS, type JobStatus } from "@/lib/vocabulary";
+import { FIRST_JOB_STATUS, JOB_STATUS_LABELS, type JobStatus } from "@/lib/vocabulary";
 import { assertCan, type Member } from "@/lib/auth/can";
 import { notFound } from "@/lib/errors";
 import type { JobCreate, JobListQuery, JobUpdate } from "@/lib/jobs/job-schemas";
@@ -92,10 +92,10 @@ export function createJob(member: Member, input: JobCreate) {
   return getDb().transaction((tx) => {
     const job = tx
       .insert(jobs)
-      .values({ ...input, workshopId: member.workshopId, status: "booked-in" })
+      .values({ ...input, workshopId: member.workshopId, status: FIRST_JOB_STATUS })
       .returning(detailColumns)
       .get();
-    insertLogEntry(tx, { jobId: job.id, workshopId: member.workshopId, authorId: member.userId, kind: "status", text: `Booked in: ${job.title}.`, data: { to: "booked-in" } });
+    insertLogEntry(tx, { jobId: job.id, workshopId: member.workshopId, authorId: member.userId, kind: "status", text: `${JOB_STATUS_LABELS[FIRST_JOB_STATUS]}: ${job.title}.`, data: { to: FIRST_JOB_STATUS } });
     return job;
   });
 }

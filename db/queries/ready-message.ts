@@ -1,5 +1,5 @@
 import { and, eq } from "drizzle-orm";
-import { JOB_STATUS_LABELS } from "@/lib/vocabulary";
+import { COLLECTION_STATUS, JOB_STATUS_LABELS } from "@/lib/vocabulary";
 import { notFound } from "@/lib/errors";
 import { can, type Member } from "@/lib/auth/can";
 import { readySubject, renderReadyMessage } from "@/lib/mail/ready-message";
@@ -43,11 +43,11 @@ export function readyMessageDraft(member: Member, jobId: number): ReadyDraft {
   const subject = readySubject(row.workshopName, row.title);
   const base = { to: row.customerEmail, subject, text };
   if (!can(member, "changeStatus")) return { canSend: false, blocked: "role", reason: "Technicians and owners send customers their messages.", ...base };
-  if (row.status !== "ready") return { canSend: false, blocked: "status", reason: `The job is at “${JOB_STATUS_LABELS[row.status]}”; the message can go when it reaches “${JOB_STATUS_LABELS.ready}”.`, ...base };
+  if (row.status !== COLLECTION_STATUS) return { canSend: false, blocked: "status", reason: `The job is at “${JOB_STATUS_LABELS[row.status]}”; the message can go when it reaches “${JOB_STATUS_LABELS[COLLECTION_STATUS]}”.`, ...base };
   if (!row.customerEmail) return { canSend: false, blocked: "no-email", reason: "Add the customer's e-mail to the job first.", ...base };
   return { canSend: true, ...base, to: row.customerEmail };
 }
 
 export function recordReadyMessageSent(member: Member, jobId: number, sent: { to: string; subject: string; attachment: string }) {
-  insertLogEntry(getDb(), { jobId, workshopId: member.workshopId, authorId: member.userId, kind: "mail", text: `“Ready to collect” e-mail sent to ${sent.to}, bench sheet attached.`, data: sent });
+  insertLogEntry(getDb(), { jobId, workshopId: member.workshopId, authorId: member.userId, kind: "mail", text: `Collection message e-mailed to ${sent.to}, bench sheet attached.`, data: sent });
 }

@@ -5,6 +5,7 @@ import { notFound } from "@/lib/errors";
 import { faultState } from "@/lib/jobs/fault-state";
 import { ReadyChecksError, readyChecks, type ReadyIssue, type ReadyRecord } from "@/lib/jobs/ready-checks";
 import type { StatusChangeWithChecks } from "@/lib/jobs/ready-schemas";
+import { COLLECTION_STATUS, JOB_STATUS_LABELS } from "@/lib/vocabulary";
 import { getDb, type Db } from "../client";
 import { faultCandidates, faults, jobs, parts, powerUps } from "../schema";
 import { assertJobInWorkshop, type Tx } from "./job-access";
@@ -61,17 +62,17 @@ export function recordReadyOverride(member: Member, jobId: number, issues: reado
   else getDb().transaction(write);
 }
 
-/** The status change of POST /api/jobs/{id}/status: moving to "ready" passes the checks first. */
+/** The status change of POST /api/jobs/{id}/status: moving to the collection status ("at-the-counter") passes the checks first. */
 export function changeStatusWithChecks(member: Member, jobId: number, input: StatusChangeWithChecks) {
-  if (input.status !== "ready") return changeJobStatus(member, jobId, input.status);
+  if (input.status !== COLLECTION_STATUS) return changeJobStatus(member, jobId, input.status);
   assertCan(member, "changeStatus", "change a job's status");
   return getDb().transaction((tx) => {
     const now = tx.select({ status: jobs.status }).from(jobs).where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId))).get();
     if (!now) throw notFound("That job");
-    const issues = now.status === "ready" ? [] : assertReadyOrOverride(member, jobId, input, tx);
+    const issues = now.status === COLLECTION_STATUS ? [] : assertReadyOrOverride(member, jobId, input, tx);
     // changeJobStatus opens its own transaction: inside this one it runs as a savepoint.
-    const job = changeJobStatus(member, jobId, "ready");
-    recordReadyOverride(member, jobId, issues, input.reason ?? "", "Moved to ready to collect", tx);
+    const job = changeJobStatus(member, jobId, COLLECTION_STATUS);
+    recordReadyOverride(member, jobId, issues, input.reason ?? "", `Moved to “${JOB_STATUS_LABELS[COLLECTION_STATUS]}”`, tx);
     return job;
   });
 }

@@ -61,7 +61,7 @@ export function benchSheetData(member: Member, jobId: number) {
         ["Year", job.year ? String(job.year) : null],
         ["Customer", job.customerName],
         ["Status", JOB_STATUS_LABELS[job.status]],
-        ["Booked in", date(job.createdAt)],
+        ["Came in", date(job.createdAt)],
       ]
         .filter((f): f is [string, string] => !!f[1])
         .map(([k, v]) => [k, t(v)] as [string, string]),

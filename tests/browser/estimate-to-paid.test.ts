@@ -29,7 +29,7 @@ async function signIn(page: Page, email: string, password = DEMO_PASSWORD) {
 test("a technician quotes, the customer approves from the e-mail, the owner invoices and the card payment lands", async () => {
   const email = `journey-${Date.now()}@example.com`;
   const { jobId } = createJob(workshopIdByName("Lamplight Radio Workshop"), {
-    status: "awaiting-go-ahead",
+    status: "customer-weighing-up",
     customerEmail: email,
     parts: [{ designator: "C5a", unitCostMinor: 240 }],
   });
@@ -63,7 +63,7 @@ test("a technician quotes, the customer approves from the e-mail, the owner invo
   expect(logTexts(jobId, "estimate").at(-1)).toBe("Iona Testwell approved the estimate.");
 
   // The set is ready; the owner issues the invoice from the approved lines and takes the payment.
-  setJobStatus(jobId, "ready");
+  setJobStatus(jobId, "at-the-counter");
   const owner = await (await browser.newContext()).newPage();
   await signIn(owner, "owner@demo.test");
   await owner.goto(`${baseUrl()}/jobs/${jobId}`);

@@ -170,7 +170,7 @@ describe("the customer's approval link", () => {
     await tech.post(`/api/jobs/${jobId}/estimate/send`, {});
     const token = (await approvalLinkFor(email)).split("/estimate/")[1];
     await answer(token, "approve");
-    testDb().prepare("UPDATE jobs SET status = 'ready' WHERE id = ?").run(jobId);
+    testDb().prepare("UPDATE jobs SET status = 'at-the-counter' WHERE id = ?").run(jobId);
     const owner = await signedIn("owner@demo.test");
     const res = await owner.post(`/api/jobs/${jobId}/invoices`, {});
     expect(res.status).toBe(201);

@@ -13,7 +13,7 @@ beforeAll(async () => {
 
 describe("issuing invoices", () => {
   test("numbers run 1, 2, 3 per workshop with no gaps, even across voids, refusals and parallel requests", async () => {
-    const first = createJob(A.workshopId, { status: "ready" });
+    const first = createJob(A.workshopId, { status: "at-the-counter" });
     const r1 = await A.owner.post(`/api/jobs/${first.jobId}/invoices`, { lines });
     expect(r1.status).toBe(201);
     const inv1 = await r1.json();
@@ -28,30 +28,30 @@ describe("issuing invoices", () => {
     const r2 = await A.owner.post(`/api/jobs/${first.jobId}/invoices`, { lines });
     expect((await r2.json()).number).toBe(2);
 
-    const jobs = [0, 1, 2].map(() => createJob(A.workshopId, { status: "ready" }).jobId);
+    const jobs = [0, 1, 2].map(() => createJob(A.workshopId, { status: "at-the-counter" }).jobId);
     const parallel = await Promise.all(jobs.map((j) => A.owner.post(`/api/jobs/${j}/invoices`, { lines })));
     const numbers = (await Promise.all(parallel.map((r) => r.json()))).map((i) => i.number).sort();
     expect(numbers).toEqual([3, 4, 5]);
     expect(logTexts(first.jobId, "invoice")).toEqual(["Invoice 1 issued.", "Invoice 1 voided.", "Invoice 2 issued."]);
   });
 
-  test("a job is invoiced only once it is ready to collect", async () => {
+  test("a job is invoiced only once it is at the counter", async () => {
     const { jobId } = createJob(A.workshopId, { status: "recapping" });
     const res = await A.owner.post(`/api/jobs/${jobId}/invoices`, { lines });
     expect(res.status).toBe(409);
-    expect((await res.json()).error.message).toMatch(/ready/);
-    setJobStatus(jobId, "ready");
+    expect((await res.json()).error.message).toMatch(/At the counter/);
+    setJobStatus(jobId, "at-the-counter");
     expect((await A.owner.post(`/api/jobs/${jobId}/invoices`, { lines })).status).toBe(201);
   });
 
   test("without lines and without an approved estimate there is nothing to invoice", async () => {
-    const { jobId } = createJob(A.workshopId, { status: "ready" });
+    const { jobId } = createJob(A.workshopId, { status: "at-the-counter" });
     const res = await A.owner.post(`/api/jobs/${jobId}/invoices`, {});
     expect(res.status).toBe(409);
   });
 
   test("a paid invoice cannot be voided, a void one not voided twice", async () => {
-    const { jobId } = createJob(A.workshopId, { status: "ready" });
+    const { jobId } = createJob(A.workshopId, { status: "at-the-counter" });
     const inv = await (await A.owner.post(`/api/jobs/${jobId}/invoices`, { lines })).json();
     expect((await A.owner.post(`/api/invoices/${inv.id}/void`, {})).status).toBe(200);
     expect((await A.owner.post(`/api/invoices/${inv.id}/void`, {})).status).toBe(409);
@@ -63,7 +63,7 @@ describe("who may see invoices", () => {
   let invoiceId: number;
   beforeAll(async () => {
     const lamplight = workshopIdByName("Lamplight Radio Workshop");
-    jobId = createJob(lamplight, { status: "ready" }).jobId;
+    jobId = createJob(lamplight, { status: "at-the-counter" }).jobId;
     const owner = await signedIn("owner@demo.test");
     const res = await owner.post(`/api/jobs/${jobId}/invoices`, { lines });
     expect(res.status).toBe(201);

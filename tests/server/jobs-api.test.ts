@@ -39,8 +39,8 @@ describe("GET /api/jobs", () => {
     const amps = await (await t().get("/api/jobs?kind=amplifier&sort=title&dir=desc")).json();
     expect(amps.jobs.map((j: { title: string }) => j.title)).toEqual(["Paging set E", "Paging set C", "Paging set A"]);
     expect((await (await t().get("/api/jobs?q=o'dare")).json()).jobs[0].customerName).toBe("Wren O'Dare");
-    expect((await (await t().get("/api/jobs?status=ready")).json()).total).toBe(0);
-    expect((await (await t().get("/api/jobs?status=booked-in,ready")).json()).total).toBe(6);
+    expect((await (await t().get("/api/jobs?status=at-the-counter")).json()).total).toBe(0);
+    expect((await (await t().get("/api/jobs?status=on-the-rack,at-the-counter")).json()).total).toBe(6);
   });
 
   test("bad query parameters are a 400 naming each one", async () => {
@@ -64,7 +64,7 @@ describe("jobs", () => {
     const record = await (await team.apprentice.get(`/api/jobs/${job}`)).json();
     expect(Object.keys(record).sort()).toEqual(["calculations", "files", "job", "log", "parts", "readings"]);
     expect(record.job).toMatchObject({ status: "inspecting", year: 1949, maker: "Fernhill Radio Co." });
-    expect(record.log.map((e: { text: string }) => e.text)).toContain("Status: Booked in → Inspecting.");
+    expect(record.log.map((e: { text: string }) => e.text)).toContain("Status: On the rack → Inspecting.");
   });
 });
 

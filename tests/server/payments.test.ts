@@ -19,7 +19,7 @@ const invoiceLines = [
 ];
 
 async function readyInvoice(owner: Client, workshopId: number) {
-  const { jobId } = createJob(workshopId, { status: "ready" });
+  const { jobId } = createJob(workshopId, { status: "at-the-counter" });
   const res = await owner.post(`/api/jobs/${jobId}/invoices`, { lines: invoiceLines });
   expect(res.status).toBe(201);
   return { jobId, invoice: await res.json() };

@@ -63,7 +63,7 @@ describe("jobs queries", () => {
     const amps = jobsQ.searchJobs(owner, query({ q: marker, kind: "amplifier" }));
     expect(amps.total).toBe(3);
     expect(jobsQ.searchJobs(owner, query({ q: "%" })).jobs.map((j) => j.title)).toEqual(["100% original chassis"]);
-    expect(jobsQ.searchJobs(owner, query({ q: marker, status: "ready,returned" })).total).toBe(0);
+    expect(jobsQ.searchJobs(owner, query({ q: marker, status: "at-the-counter,returned" })).total).toBe(0);
     expect(jobsQ.searchJobs(other, query({ q: marker })).total).toBe(0);
   });
 
@@ -78,10 +78,10 @@ describe("jobs queries", () => {
     const job = newJob(tech, "Role check set");
     expect(() => newJob(apprentice, "nope")).toThrow(ForbiddenError);
     expect(() => jobsQ.updateJob(apprentice, job.id, { title: "x" } as never)).toThrow(ForbiddenError);
-    expect(() => jobsQ.changeJobStatus(apprentice, job.id, "ready")).toThrow(ForbiddenError);
+    expect(() => jobsQ.changeJobStatus(apprentice, job.id, "at-the-counter")).toThrow(ForbiddenError);
     expect(() => jobsQ.deleteJob(tech, job.id)).toThrow(ForbiddenError);
     expect(() => jobsQ.getJob(other, job.id)).toThrow(NotFoundError);
-    expect(() => jobsQ.changeJobStatus(other, job.id, "ready")).toThrow(NotFoundError);
+    expect(() => jobsQ.changeJobStatus(other, job.id, "at-the-counter")).toThrow(NotFoundError);
     expect(() => jobsQ.deleteJob(other, job.id)).toThrow(NotFoundError);
     expect(jobsQ.deleteJob(owner, job.id)).toEqual({ storedNames: [] });
     expect(jobsQ.findJob(owner, job.id)).toBeUndefined();
@@ -92,7 +92,7 @@ describe("jobs queries", () => {
     jobsQ.changeJobStatus(tech, job.id, "inspecting");
     jobsQ.changeJobStatus(owner, job.id, "inspecting");
     const log = logQ.listLog(apprentice, job.id).filter((e) => e.kind === "status");
-    expect(log.map((e) => e.text)).toEqual(["Status: Booked in → Inspecting.", "Booked in: Workflow set."]);
+    expect(log.map((e) => e.text)).toEqual(["Status: On the rack → Inspecting.", "On the rack: Workflow set."]);
     expect(log[0].author?.name).toBe(DEMO_USERS.technician.name);
   });
 });

@@ -11,6 +11,7 @@ import { listFiles } from "@/db/queries/files";
 import { listParts } from "@/db/queries/parts";
 import { listReadings } from "@/db/queries/readings";
 import { can } from "@/lib/auth/can";
+import { COLLECTION_STATUS } from "@/lib/vocabulary";
 
 export async function generateMetadata({ params }: JobPageProps): Promise<Metadata> {
   const { job } = await loadJobPage((await params).id);
@@ -35,7 +36,7 @@ export default async function JobOverviewPage({ params }: JobPageProps) {
         <h2 className="mb-4 text-lead font-bold">Where it is</h2>
         <StatusWorkflow key={job.status} jobId={job.id} status={job.status} canChange={can.changeStatus(member)} />
       </Card>
-      {job.status === "ready" && can.changeStatus(member) ? (
+      {job.status === COLLECTION_STATUS && can.changeStatus(member) ? (
         <div className="lg:col-span-2">
           <ReadyMessage jobId={job.id} status={job.status} />
         </div>

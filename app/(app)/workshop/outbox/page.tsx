@@ -39,7 +39,7 @@ export default async function OutboxPage() {
         sent for {member.workshopName}, newest first. Nothing on this page left this computer.
       </p>
       {mail.length === 0 ? (
-        <EmptyState title="No mail sent yet">Invite someone from the workshop page, or send a customer their “ready to collect” message from a job.</EmptyState>
+        <EmptyState title="No mail sent yet">Invite someone from the workshop page, or send a customer their collection message from a job.</EmptyState>
       ) : (
         <ul className="flex flex-col gap-4" aria-label="Sent mail">
           {mail.map((m) => (
