@@ -2,7 +2,7 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { NEW_PASSWORD_HINT, changePasswordSchema, type ChangePasswordInput } from "@/lib/auth/schemas";
@@ -15,10 +15,11 @@ const NAMES = ["currentPassword", "newPassword"] as const;
 export function ChangePasswordForm({ context }: { context: string[] }) {
   const [formError, setFormError] = useState<string | null>(null);
   const [done, setDone] = useState(false);
-  const { register, handleSubmit, setError, reset, watch, formState: { errors, isSubmitting } } = useForm<ChangePasswordInput>({
+  const { register, handleSubmit, setError, reset, control, formState: { errors, isSubmitting } } = useForm<ChangePasswordInput>({
     resolver: zodResolver(changePasswordSchema),
     defaultValues: { currentPassword: "", newPassword: "" },
   });
+  const newPassword = useWatch({ control, name: "newPassword" });
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     setDone(false);
@@ -35,7 +36,7 @@ export function ChangePasswordForm({ context }: { context: string[] }) {
     <form onSubmit={onSubmit} noValidate className="flex max-w-md flex-col gap-2">
       <Field id="currentPassword" label="Current password" type="password" autoComplete="current-password" error={errors.currentPassword?.message} {...register("currentPassword")} />
       <Field id="newPassword" label="New password" type="password" autoComplete="new-password" hint={NEW_PASSWORD_HINT} error={errors.newPassword?.message} {...register("newPassword")} />
-      <PasswordStrength id="new-password-strength" password={watch("newPassword")} context={context} />
+      <PasswordStrength id="new-password-strength" password={newPassword} context={context} />
       <p role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
         {formError ?? ""}
       </p>

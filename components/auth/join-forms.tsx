@@ -4,7 +4,7 @@ import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { sendJson } from "@/lib/client/fetch-json";
@@ -40,7 +40,8 @@ function FormError({ message }: { message: string | null }) {
 /** No account yet for the invited address: choose a name and password. */
 export function JoinNewForm({ token, email }: { token: string; email: string }) {
   const { join, formError } = useJoin(token);
-  const { register, handleSubmit, setError, watch, formState: { errors, isSubmitting } } = useForm<JoinNewForm>({ resolver: zodResolver(joinNewSchema), defaultValues: { name: "", password: "" } });
+  const { register, handleSubmit, setError, control, formState: { errors, isSubmitting } } = useForm<JoinNewForm>({ resolver: zodResolver(joinNewSchema), defaultValues: { name: "", password: "" } });
+  const [password, name] = useWatch({ control, name: ["password", "name"] });
   const onSubmit = handleSubmit(async (values) => {
     const fields = await join({ mode: "sign-up", ...values });
     if (fields?.name) setError("name", { message: fields.name });
@@ -51,7 +52,7 @@ export function JoinNewForm({ token, email }: { token: string; email: string }) 
       <Field id="join-email" label="E-mail" value={email} readOnly disabled hint="The address the invitation was sent to." />
       <Field id="name" label="Your name" autoComplete="name" error={errors.name?.message} {...register("name")} />
       <Field id="password" label="Choose a password" type="password" autoComplete="new-password" hint={NEW_PASSWORD_HINT} error={errors.password?.message} {...register("password")} />
-      <PasswordStrength id="password-strength" password={watch("password")} context={[email, watch("name")]} />
+      <PasswordStrength id="password-strength" password={password} context={[email, name]} />
       <FormError message={formError} />
       <Button type="submit" disabled={isSubmitting}>
         {isSubmitting ? "Joining…" : "Create my account and join"}

@@ -19,17 +19,14 @@ const LABELS = ["Very easy to guess", "Easy to guess", "Could be guessed", "Good
  * `context` holds the person's name, e-mail and workshop: a password made of them counts as weak.
  */
 export function PasswordStrength({ id, password, context = [] }: { id: string; password: string; context?: string[] }) {
-  const [result, setResult] = useState<Strength | null>(null);
+  const [checked, setChecked] = useState<Strength | null>(null);
   const contextKey = context.join("\n");
   useEffect(() => {
-    if (!password) {
-      setResult(null);
-      return;
-    }
+    if (!password) return;
     let live = true;
     const timer = setTimeout(() => {
       void loadChecker().then((check) => {
-        if (live) setResult(check(password, contextKey ? contextKey.split("\n") : []));
+        if (live) setChecked(check(password, contextKey ? contextKey.split("\n") : []));
       });
     }, 150);
     return () => {
@@ -37,6 +34,8 @@ export function PasswordStrength({ id, password, context = [] }: { id: string; p
       clearTimeout(timer);
     };
   }, [password, contextKey]);
+  // The last verdict stays up while the next is worked out; an empty field shows none.
+  const result = password ? checked : null;
 
   const score = result?.score ?? -1;
   const tone = score >= 3 ? "bg-ok" : score >= 0 ? "bg-caution" : "bg-sunk";

@@ -3,7 +3,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { newPasswordFormSchema, resetRequestSchema, type NewPasswordForm, type ResetRequestForm } from "@/lib/auth/reset-schemas";
@@ -50,7 +50,8 @@ export function ResetRequestForm() {
 export function NewPasswordFormView({ token }: { token: string }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, setError, watch, formState: { errors, isSubmitting } } = useForm<NewPasswordForm>({ resolver: zodResolver(newPasswordFormSchema), defaultValues: { password: "", confirm: "" } });
+  const { register, handleSubmit, setError, control, formState: { errors, isSubmitting } } = useForm<NewPasswordForm>({ resolver: zodResolver(newPasswordFormSchema), defaultValues: { password: "", confirm: "" } });
+  const password = useWatch({ control, name: "password" });
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     const res = await sendJson("/api/auth/password-reset/complete", { token, password: values.password });
@@ -65,7 +66,7 @@ export function NewPasswordFormView({ token }: { token: string }) {
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
       <Field id="password" label="New password" type="password" autoComplete="new-password" hint={NEW_PASSWORD_HINT} error={errors.password?.message} {...register("password")} />
-      <PasswordStrength id="password-strength" password={watch("password")} />
+      <PasswordStrength id="password-strength" password={password} />
       <Field id="confirm" label="The same again" type="password" autoComplete="new-password" error={errors.confirm?.message} {...register("confirm")} />
       <p role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
         {formError ?? ""}

@@ -3,7 +3,7 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { NEW_PASSWORD_HINT, signUpSchema, type SignUpInput } from "@/lib/auth/schemas";
@@ -19,12 +19,14 @@ export function SignUpForm() {
     register,
     handleSubmit,
     setError,
-    watch,
+    control,
     formState: { errors, isSubmitting },
   } = useForm<SignUpInput>({
     resolver: zodResolver(signUpSchema),
     defaultValues: { workshopName: "", name: "", email: "", password: "" },
   });
+
+  const [password, email, name, workshopName] = useWatch({ control, name: ["password", "email", "name", "workshopName"] });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
@@ -52,7 +54,7 @@ export function SignUpForm() {
         error={errors.password?.message}
         {...register("password")}
       />
-      <PasswordStrength id="password-strength" password={watch("password")} context={[watch("email"), watch("name"), watch("workshopName")]} />
+      <PasswordStrength id="password-strength" password={password} context={[email, name, workshopName]} />
       <p role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
         {formError ?? ""}
       </p>
