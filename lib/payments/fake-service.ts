@@ -71,11 +71,7 @@ async function readBody(req: http.IncomingMessage): Promise<string> {
 }
 
 type Params = Record<string, unknown>;
-
-/**
- * The payment API's form encoding (`line_items[0][price_data][currency]=gbp`, qs's "indices" format, which
- * the Stripe SDK writes) read back with qs; room for an invoice's 100 lines, where qs stops at 20 by default.
- */
+// The SDK's form bodies (`line_items[0][price_data][currency]=gbp`); qs makes arrays only up to index 20 unless told.
 const readForm = (body: string): Params => parseForm(body, { arrayLimit: 1000, parameterLimit: 10_000 });
 const str = (v: unknown) => (typeof v === "string" ? v : undefined);
 const int = (v: unknown) => (typeof v === "string" && /^\d+$/.test(v) ? Number(v) : undefined);
