@@ -12,6 +12,11 @@ export function processSingleton<T>(name: string, make: () => T): T {
   return slots[key] as T;
 }
 
+/** Forgets `name`'s value, so the next processSingleton call makes it again (a start that failed, retried). */
+export function forgetProcessSingleton(name: string): void {
+  delete slots[`__glowbench${name}`];
+}
+
 /**
  * The same for a client built from settings that may change while the process runs (the local sink and the
  * fake payment service fill theirs in after start): made again when `settings` differ from last time.
