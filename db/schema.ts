@@ -42,6 +42,8 @@ export const workshops = sqliteTable("workshops", {
   taxRateBp: integer("tax_rate_bp").notNull().default(0),
   /** Last invoice number issued; incremented inside the issuing transaction, so numbers have no gaps. */
   lastInvoiceNumber: integer("last_invoice_number").notNull().default(0),
+  /** Last job number given; bumped inside the transaction that books a job in, so each workshop counts its own. */
+  lastJobNumber: integer("last_job_number").notNull().default(0),
   readyMessageTemplate: text("ready_message_template"),
   createdAt: createdAt(),
 });
@@ -144,6 +146,27 @@ export const auditEvents = sqliteTable(
   (t) => [index("audit_workshop_time").on(t.workshopId, t.createdAt)],
 );
 
+/** A workshop's customer; their jobs point here. E-mail is stored lower-case, one customer per address. */
+export const customers = sqliteTable(
+  "customers",
+  {
+    id: id(),
+    workshopId: integer("workshop_id")
+      .notNull()
+      .references(() => workshops.id, { onDelete: "cascade" }),
+    name: text("name").notNull(),
+    email: text("email"),
+    phone: text("phone"),
+    address: text("address"),
+    notes: text("notes"),
+    createdAt: createdAt(),
+    updatedAt: integer("updated_at", { mode: "timestamp_ms" })
+      .notNull()
+      .default(sql`(unixepoch('subsec') * 1000)`),
+  },
+  (t) => [index("customers_workshop_name").on(t.workshopId, t.name), uniqueIndex("customers_workshop_email").on(t.workshopId, t.email)],
+);
+
 export const jobs = sqliteTable(
   "jobs",
   {
@@ -151,6 +174,12 @@ export const jobs = sqliteTable(
     workshopId: integer("workshop_id")
       .notNull()
       .references(() => workshops.id, { onDelete: "cascade" }),
+    /**
+     * The job's number in its workshop ("Job 12"), from workshops.lastJobNumber. 0 only for an instant: a
+     * row inserted without a number (scripts, fixtures) is numbered by the jobs_number trigger of the
+     * customers-and-ordering migration.
+     */
+    number: integer("number").notNull().default(0),
     title: text("title").notNull(),
     equipmentKind: text("equipment_kind", { enum: EQUIPMENT_KINDS }).notNull(),
     maker: text("maker"),
@@ -158,6 +187,11 @@ export const jobs = sqliteTable(
     year: integer("year"),
     customerName: text("customer_name"),
     customerEmail: text("customer_email"),
+    /** The customer record; customerName and customerEmail stay as its copy, so older readers keep working. */
+    customerId: integer("customer_id").references(() => customers.id, { onDelete: "set null" }),
+    /** Intake: the set's serial or chassis number and what came in with it ("Knobs", "Back cover"). */
+    serialNumber: text("serial_number"),
+    accessories: text("accessories", { mode: "json" }).$type<string[]>(),
     status: text("status", { enum: JOB_STATUSES }).notNull().default(FIRST_JOB_STATUS),
     notes: text("notes"),
     createdAt: createdAt(),
@@ -170,6 +204,8 @@ export const jobs = sqliteTable(
     // Status filter with the list's default order: an ordered scan that stops after one page.
     index("jobs_workshop_status_updated").on(t.workshopId, t.status, t.updatedAt),
     index("jobs_workshop_kind").on(t.workshopId, t.equipmentKind),
+    uniqueIndex("jobs_workshop_number").on(t.workshopId, t.number),
+    index("jobs_customer").on(t.customerId),
   ],
 );
 
@@ -197,12 +233,25 @@ export const parts = sqliteTable(
     state: text("state", { enum: PART_STATES }).notNull().default("to-order"),
     /** Unit cost in the workshop's minor currency unit, for estimates. */
     unitCostMinor: integer("unit_cost_minor"),
+    /** Ordering: how many, from whom, under the supplier's own part number, and when it was ordered. */
+    quantity: integer("quantity").notNull().default(1),
+    supplier: text("supplier"),
+    supplierPartNumber: text("supplier_part_number"),
+    orderedAt: integer("ordered_at", { mode: "timestamp_ms" }),
+    /**
+     * The value and rating texts read with the calculators' unit parser, in SI (F or Ω; V for a capacitor's
+     * rating, W for a resistor's), so the list can be sorted and checked. Null: blank or not readable.
+     */
+    originalValueSi: real("original_value_si"),
+    originalRatingSi: real("original_rating_si"),
+    replacementValueSi: real("replacement_value_si"),
+    replacementRatingSi: real("replacement_rating_si"),
     /** A technician's check of a part recorded as fitted (apprentices may record fitting); cleared when the state changes. */
     checkedBy: integer("checked_by").references(() => users.id, { onDelete: "set null" }),
     checkedAt: integer("checked_at", { mode: "timestamp_ms" }),
     createdAt: createdAt(),
   },
-  (t) => [index("parts_job").on(t.jobId)],
+  (t) => [index("parts_job").on(t.jobId), index("parts_workshop_state").on(t.workshopId, t.state)],
 );
 
 export const readings = sqliteTable(
@@ -537,6 +586,7 @@ export const drills = sqliteTable(
 export type Workshop = typeof workshops.$inferSelect;
 export type User = typeof users.$inferSelect;
 export type Membership = typeof memberships.$inferSelect;
+export type Customer = typeof customers.$inferSelect;
 export type Job = typeof jobs.$inferSelect;
 export type NewJob = typeof jobs.$inferInsert;
 export type Part = typeof parts.$inferSelect;

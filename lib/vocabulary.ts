@@ -143,9 +143,11 @@ export const FAULT_STATE_LABELS: Record<FaultState, string> = {
 export const READING_KINDS = ["resistor", "voltage"] as const;
 export type ReadingKind = (typeof READING_KINDS)[number];
 
-/** What an uploaded file is for: a PDF is always a schematic. */
-export const FILE_KINDS = ["photo", "schematic"] as const;
+/** What an uploaded file is for: a PDF is always a schematic; an intake photo shows the set as it came in. */
+export const FILE_KINDS = ["photo", "schematic", "intake"] as const;
 export type FileKind = (typeof FILE_KINDS)[number];
+
+export const FILE_KIND_LABELS: Record<FileKind, string> = { photo: "Photo", schematic: "Schematic", intake: "Intake photo" };
 
 /** A line of an estimate or an invoice. */
 export const LINE_KINDS = ["labour", "part", "fee"] as const;
