@@ -11,12 +11,25 @@ import { SelectField } from "@/components/ui/select-field";
 import { sendJson } from "@/lib/client/fetch-json";
 import { PART_KIND_LABELS, partSchema, type PartInput, type PartValues } from "@/lib/jobs/part-schemas";
 
-const EMPTY: PartInput = { designator: "", kind: "paper", originalValue: "", originalRating: "", replacementValue: "", replacementRating: "", state: "to-order" };
+const EMPTY: PartInput = {
+  designator: "",
+  kind: "paper",
+  originalValue: "",
+  originalRating: "",
+  replacementValue: "",
+  replacementRating: "",
+  state: "to-order",
+  quantity: "1",
+  supplier: "",
+  supplierPartNumber: "",
+  unitCost: "",
+};
 
-export function PartAddForm({ jobId }: { jobId: number }) {
+/** Adds one part; the unit cost field only for those who see prices (`currency`), typed as text and priced by the server. */
+export function PartAddForm({ jobId, currency = null }: { jobId: number; currency?: string | null }) {
   const router = useRouter();
   const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, reset, setError, setFocus, formState: { errors, isSubmitting } } = useForm<PartInput, unknown, PartValues>({
+  const { register, handleSubmit, reset, setError, setFocus, getValues, formState: { errors, isSubmitting } } = useForm<PartInput, unknown, PartValues>({
     resolver: zodResolver(partSchema),
     defaultValues: EMPTY,
   });
@@ -27,7 +40,8 @@ export function PartAddForm({ jobId }: { jobId: number }) {
       for (const [name, message] of Object.entries(res.fields)) if (name in EMPTY) setError(name as keyof PartInput, { message });
       return setFormError(res.message);
     }
-    reset({ ...EMPTY, kind: values.kind });
+    // The next part is often from the same supplier: keep the kind and the supplier.
+    reset({ ...EMPTY, kind: values.kind, supplier: getValues("supplier") });
     setFocus("designator");
     router.refresh();
   });
@@ -36,13 +50,16 @@ export function PartAddForm({ jobId }: { jobId: number }) {
     <form onSubmit={onSubmit} noValidate aria-label="Add a part" className="grid gap-x-3 sm:grid-cols-4">
       <Field id={id("designator")} label="Ref." placeholder="C12" error={errors.designator?.message} {...register("designator")} />
       <SelectField id={id("kind")} label="Kind" options={PART_KINDS.map((k) => ({ value: k, label: PART_KIND_LABELS[k] }))} error={errors.kind?.message} {...register("kind")} />
-      <Field id={id("original-value")} label="Original value" placeholder="0.05 µF" error={errors.originalValue?.message} {...register("originalValue")} />
+      <Field id={id("original-value")} label="Original value" placeholder="0.05 mfd" error={errors.originalValue?.message} {...register("originalValue")} />
       <Field id={id("original-rating")} label="Original rating" placeholder="400 V" error={errors.originalRating?.message} {...register("originalRating")} />
       <SelectField id={id("state")} label="State" options={PART_STATES.map((s) => ({ value: s, label: PART_STATE_LABELS[s] }))} error={errors.state?.message} {...register("state")} />
-      <div className="hidden sm:block" />
+      <Field id={id("quantity")} label="Quantity" inputMode="numeric" error={errors.quantity?.message} {...register("quantity")} />
       <Field id={id("replacement-value")} label="Replacement value" placeholder="0.047 µF" error={errors.replacementValue?.message} {...register("replacementValue")} />
       <Field id={id("replacement-rating")} label="Replacement rating" placeholder="630 V" error={errors.replacementRating?.message} {...register("replacementRating")} />
-      <div className="flex items-center gap-3 sm:col-span-4">
+      <Field id={id("supplier")} label="Supplier" list="part-suppliers" autoComplete="off" error={errors.supplier?.message} {...register("supplier")} />
+      <Field id={id("supplier-part-number")} label="Their part no." autoComplete="off" error={errors.supplierPartNumber?.message} {...register("supplierPartNumber")} />
+      {currency ? <Field id={id("unit-cost")} label={`Unit cost (${currency})`} inputMode="decimal" placeholder="1.20" error={errors.unitCost?.message} {...register("unitCost")} /> : null}
+      <div className="flex flex-wrap items-center gap-3 sm:col-span-4">
         <Button type="submit" disabled={isSubmitting}>
           Add part
         </Button>

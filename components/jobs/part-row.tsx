@@ -4,23 +4,48 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { PART_KINDS, PART_STATES, PART_STATE_LABELS, type PartState } from "@/lib/vocabulary";
 import { sendJson } from "@/lib/client/fetch-json";
+import { formatMoney, minorExponent, toDecimalString } from "@/lib/money";
+import type { PartFlag } from "@/lib/jobs/part-flags";
 import { PART_KIND_LABELS } from "@/lib/jobs/part-schemas";
 import type { PartRow as Part } from "@/db/queries/parts";
 
-const TEXT_FIELDS = ["designator", "originalValue", "originalRating", "replacementValue", "replacementRating"] as const;
 const cell = "px-3 py-2 align-top";
-const input = "w-full min-h-9 rounded-chip border border-edge bg-panel px-2 py-1";
+const input = "w-full min-h-11 rounded-chip border border-edge bg-panel px-2 py-1";
 const STATE_TONE: Record<PartState, string> = { "to-order": "text-caution", ordered: "text-signal", fitted: "text-ok" };
+const TEXTS = ["designator", "kind", "originalValue", "originalRating", "replacementValue", "replacementRating", "quantity", "supplier", "supplierPartNumber", "unitCost"] as const;
+type Draft = Record<(typeof TEXTS)[number], string>;
 
-/** One part, edited in place: click Edit, change the cells, Save (PATCH with only what changed). */
-export function PartRow({ jobId, part, canEdit, caution, readingNote }: { jobId: number; part: Part; canEdit: boolean; caution: boolean; readingNote?: string }) {
+/** The row as the edit fields hold it: every value as text, the unit cost as the exact decimal of its minor units. */
+function toDraft(part: Part, currency: string | null): Draft {
+  const cost = currency && part.unitCostMinor != null ? toDecimalString(part.unitCostMinor, minorExponent(currency)) : "";
+  const text = (v: string | number | null | undefined) => (v == null ? "" : String(v));
+  return {
+    designator: part.designator,
+    kind: part.kind,
+    originalValue: text(part.originalValue),
+    originalRating: text(part.originalRating),
+    replacementValue: text(part.replacementValue),
+    replacementRating: text(part.replacementRating),
+    quantity: String(part.quantity),
+    supplier: text(part.supplier),
+    supplierPartNumber: text(part.supplierPartNumber),
+    unitCost: cost,
+  };
+}
+
+/**
+ * One part, edited in place: click Edit, change the cells, Save (PATCH with only what changed). The order
+ * column shows how many, the supplier and their part number, and the unit cost when `currency` is given
+ * (never to apprentices). `flags` are what the read values tell (lib/jobs/part-flags.ts).
+ */
+export function PartRow({ jobId, part, canEdit, caution, readingNote, currency = null, flags = [] }: { jobId: number; part: Part; canEdit: boolean; caution: boolean; readingNote?: string; currency?: string | null; flags?: PartFlag[] }) {
   const router = useRouter();
   const [editing, setEditing] = useState(false);
-  const [draft, setDraft] = useState(part);
+  const [draft, setDraft] = useState(() => toDraft(part, currency));
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [message, setMessage] = useState<string | null>(null);
 
-  async function save(changes: Partial<Part>) {
+  async function save(changes: Record<string, unknown>) {
     setMessage(null);
     const res = await sendJson(`/api/jobs/${jobId}/parts/${part.id}`, changes, "PATCH");
     if (!res.ok) {
@@ -39,38 +64,47 @@ export function PartRow({ jobId, part, canEdit, caution, readingNote }: { jobId:
   }
 
   if (editing) {
-    const changed = Object.fromEntries(Object.entries(draft).filter(([k, v]) => (part as Record<string, unknown>)[k] !== v));
+    const before = toDraft(part, currency);
+    const changed = Object.fromEntries(TEXTS.filter((k) => draft[k] !== before[k]).map((k) => [k, draft[k]]));
+    const box = (f: (typeof TEXTS)[number], label: string, extra: React.ComponentProps<"input"> = {}) => (
+      <input aria-label={label} className={input} value={draft[f]} onChange={(e) => setDraft({ ...draft, [f]: e.target.value })} aria-invalid={errors[f] ? true : undefined} {...extra} />
+    );
     return (
       <tr className="bg-sunk/50" data-testid={`part-${part.designator}`}>
-        {TEXT_FIELDS.slice(0, 1).map((f) => (
-          <td key={f} className={cell}>
-            <input aria-label="Ref." className={input} value={draft[f] ?? ""} onChange={(e) => setDraft({ ...draft, [f]: e.target.value })} aria-invalid={errors[f] ? true : undefined} />
-          </td>
-        ))}
+        <td className={cell}>{box("designator", "Ref.")}</td>
         <td className={cell}>
-          <select aria-label="Kind" className={input} value={draft.kind} onChange={(e) => setDraft({ ...draft, kind: e.target.value as Part["kind"] })}>
+          <select aria-label="Kind" className={input} value={draft.kind} onChange={(e) => setDraft({ ...draft, kind: e.target.value })}>
             {PART_KINDS.map((k) => <option key={k} value={k}>{PART_KIND_LABELS[k]}</option>)}
           </select>
         </td>
-        {[["originalValue", "originalRating", "Original"], ["replacementValue", "replacementRating", "Replacement"]].map(([v, r, label]) => (
-          <td key={v} className={cell}>
+        {(["original", "replacement"] as const).map((side) => (
+          <td key={side} className={cell}>
             <div className="flex flex-col gap-1">
-              <input aria-label={`${label} value`} className={input} value={(draft[v as keyof Part] as string) ?? ""} onChange={(e) => setDraft({ ...draft, [v]: e.target.value })} />
-              <input aria-label={`${label} rating`} className={input} value={(draft[r as keyof Part] as string) ?? ""} onChange={(e) => setDraft({ ...draft, [r]: e.target.value })} />
+              {box(`${side}Value`, `${side === "original" ? "Original" : "Replacement"} value`)}
+              {box(`${side}Rating`, `${side === "original" ? "Original" : "Replacement"} rating`)}
             </div>
           </td>
         ))}
+        <td className={cell}>
+          <div className="flex flex-col gap-1">
+            {box("quantity", "Quantity", { inputMode: "numeric" })}
+            {box("supplier", "Supplier", { list: "part-suppliers" })}
+            {box("supplierPartNumber", "Supplier's part number")}
+            {currency ? box("unitCost", `Unit cost (${currency})`, { inputMode: "decimal", placeholder: "Unit cost" }) : null}
+          </div>
+        </td>
         <td className={cell} colSpan={2}>
           <div className="flex flex-wrap gap-2">
-            <button type="button" className="min-h-9 rounded-chip bg-glow px-3 font-bold text-glow-ink" onClick={() => save(changed)}>Save</button>
-            <button type="button" className="min-h-9 rounded-chip border border-rule px-3 font-bold" onClick={() => { setDraft(part); setEditing(false); setErrors({}); }}>Cancel</button>
+            <button type="button" className="min-h-11 rounded-chip bg-glow px-3 font-bold text-glow-ink" onClick={() => save(changed)}>Save</button>
+            <button type="button" className="min-h-11 rounded-chip border border-rule px-3 font-bold" onClick={() => { setDraft(before); setEditing(false); setErrors({}); }}>Cancel</button>
           </div>
           {message ? <p role="alert" className="mt-1 text-note font-bold text-flag">{Object.values(errors)[0] ?? message}</p> : null}
         </td>
       </tr>
     );
   }
-  const pair = (v: string | null, r: string | null) => (v || r ? <><span className="font-mono">{v ?? "—"}</span> <span className="text-muted">{r}</span></> : <span className="text-muted">—</span>);
+  const pair = (v: string | null | undefined, r: string | null | undefined) => (v || r ? <><span className="font-mono">{v ?? "—"}</span> <span className="text-muted">{r}</span></> : <span className="text-muted">—</span>);
+  const order = [part.quantity > 1 ? `×${part.quantity}` : null, part.supplier, part.supplierPartNumber].filter(Boolean).join(" · ");
   return (
     <tr className={caution ? "bg-caution-bg/60" : undefined} data-testid={`part-${part.designator}`}>
       <td className={`${cell} font-mono font-bold`}>{part.designator}</td>
@@ -78,6 +112,13 @@ export function PartRow({ jobId, part, canEdit, caution, readingNote }: { jobId:
       <td className={cell}>{pair(part.originalValue, part.originalRating)}</td>
       <td className={cell}>{pair(part.replacementValue, part.replacementRating)}{caution ? <span className="ml-2 font-bold text-caution" title="See the caution above">⚠</span> : null}
         {readingNote ? <span className="block text-note text-muted" data-testid={`reading-note-${part.designator}`}>{readingNote}</span> : null}
+        {flags.map((f) => (
+          <span key={f.message} className={`block text-note ${f.level === "caution" ? "font-bold text-caution" : "text-muted"}`} data-testid={`part-flag-${part.designator}`}>{f.message}</span>
+        ))}
+      </td>
+      <td className={cell} data-testid={`part-order-${part.designator}`}>
+        {order ? <span className="block text-note">{order}</span> : <span className="text-muted">—</span>}
+        {currency && part.unitCostMinor != null ? <span className="block font-mono text-note">{formatMoney(part.unitCostMinor, currency)} each</span> : null}
       </td>
       <td className={cell}>
         {canEdit ? (
@@ -91,8 +132,8 @@ export function PartRow({ jobId, part, canEdit, caution, readingNote }: { jobId:
       <td className={`${cell} whitespace-nowrap text-right`}>
         {canEdit ? (
           <>
-            <button type="button" className="min-h-9 rounded-chip px-2 font-bold text-signal hover:bg-sunk" onClick={() => setEditing(true)} aria-label={`Edit ${part.designator}`}>Edit</button>
-            <button type="button" className="min-h-9 rounded-chip px-2 font-bold text-flag hover:bg-flag-bg" onClick={remove} aria-label={`Remove ${part.designator}`}>Remove</button>
+            <button type="button" className="min-h-11 rounded-chip px-2 font-bold text-signal hover:bg-sunk" onClick={() => setEditing(true)} aria-label={`Edit ${part.designator}`}>Edit</button>
+            <button type="button" className="min-h-11 rounded-chip px-2 font-bold text-flag hover:bg-flag-bg" onClick={remove} aria-label={`Remove ${part.designator}`}>Remove</button>
           </>
         ) : null}
         {message && !editing ? <p role="alert" className="text-note font-bold text-flag">{message}</p> : null}

@@ -6,6 +6,7 @@ import type { PartUpdate, PartValues } from "@/lib/jobs/part-schemas";
 import { getDb } from "../client";
 import { parts, users } from "../schema";
 import { assertJobInWorkshop, touchJob } from "./job-access";
+import { newPartColumns, partChangeColumns } from "./part-columns";
 import { appendLog } from "./job-log";
 
 /**
@@ -25,7 +26,23 @@ export const partColumns = {
   state: parts.state,
   checkedAt: parts.checkedAt,
   createdAt: parts.createdAt,
+  quantity: parts.quantity,
+  supplier: parts.supplier,
+  supplierPartNumber: parts.supplierPartNumber,
+  orderedAt: parts.orderedAt,
+  unitCostMinor: parts.unitCostMinor,
+  originalValueSi: parts.originalValueSi,
+  originalRatingSi: parts.originalRatingSi,
+  replacementValueSi: parts.replacementValueSi,
+  replacementRatingSi: parts.replacementRatingSi,
 };
+
+/** Apprentices never see prices (docs/PRODUCT.md "Users and roles"): the unit cost leaves the row for them. */
+function priced<T extends { unitCostMinor: number | null }>(member: Member, row: T): Omit<T, "unitCostMinor"> & { unitCostMinor?: number | null } {
+  if (can.seeCharges(member)) return row;
+  const { unitCostMinor: _hidden, ...rest } = row;
+  return rest;
+}
 
 const checker = alias(users, "checker");
 
@@ -41,7 +58,7 @@ export function listParts(member: Member, jobId: number) {
     .where(and(eq(parts.jobId, jobId), eq(parts.workshopId, member.workshopId)))
     .orderBy(asc(parts.id))
     .all()
-    .map(({ checkerId, checkerName, ...p }) => ({ ...p, checkedBy: checkerId === null ? null : { id: checkerId, name: checkerName ?? "" } }));
+    .map(({ checkerId, checkerName, ...p }) => priced(member, { ...p, checkedBy: checkerId === null ? null : { id: checkerId, name: checkerName ?? "" } }));
 }
 
 function assertCanEdit(member: Member) {
@@ -52,9 +69,9 @@ export function createPart(member: Member, jobId: number, input: PartValues) {
   assertCanEdit(member);
   return getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
-    const part = tx.insert(parts).values({ ...input, jobId, workshopId: member.workshopId }).returning(partColumns).get();
+    const part = tx.insert(parts).values({ ...newPartColumns(tx, member.workshopId, input), jobId, workshopId: member.workshopId }).returning(partColumns).get();
     touchJob(member, jobId, tx);
-    return part;
+    return priced(member, part);
   });
 }
 
@@ -64,10 +81,10 @@ export function createParts(member: Member, jobId: number, rows: PartValues[]) {
   return getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
     const created = rows.length
-      ? tx.insert(parts).values(rows.map((r) => ({ ...r, jobId, workshopId: member.workshopId }))).returning(partColumns).all()
+      ? tx.insert(parts).values(rows.map((r) => ({ ...newPartColumns(tx, member.workshopId, r, "csv"), jobId, workshopId: member.workshopId }))).returning(partColumns).all()
       : [];
     touchJob(member, jobId, tx);
-    return created;
+    return created.map((p) => priced(member, p));
   });
 }
 
@@ -92,7 +109,7 @@ export function updatePart(member: Member, jobId: number, partId: number, input:
     if (!before) throw notFound("That part");
     const state = fields.state ?? before.state;
     if (checked && state !== "fitted") throw new ValidationError("Only a fitted part can be checked.", { checked: "Record the part as fitted before checking it." });
-    const changes: Record<string, unknown> = Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined));
+    const changes: Record<string, unknown> = partChangeColumns(tx, member, partId, fields);
     const fitting = fields.state === "fitted" && before.state !== "fitted";
     const check = checked ?? (fitting ? editor : state === "fitted" ? undefined : false);
     if (check === true) Object.assign(changes, { checkedBy: member.userId, checkedAt: new Date() });

@@ -13,6 +13,26 @@ export const PART_KIND_LABELS: Record<(typeof PART_KINDS)[number], string> = {
   other: "Other",
 };
 
+/** How many to order: whole pieces. */
+const quantityField = z
+  .union([z.number(), z.string()], { error: "Enter how many, as a whole number." })
+  .transform((v, ctx) => {
+    const n = typeof v === "number" ? v : v.trim() === "" ? Number.NaN : Number(v.trim());
+    if (!Number.isInteger(n) || n < 1 || n > 9999) {
+      ctx.addIssue({ code: "custom", message: "Enter how many as a whole number from 1 to 9999." });
+      return z.NEVER;
+    }
+    return n;
+  });
+
+/**
+ * A unit cost as typed ("1.20", "1,250.00"); blank clears it. The server turns it into minor units of the
+ * workshop's currency with parseMoney (lib/money), never through a float, and refuses extra decimals.
+ */
+const unitCostField = optionalText(20, "Unit cost")
+  .refine((v) => v == null || /^\d{1,9}(\.\d{1,3})?$/.test(v.replace(/,/g, "")), "Enter a price like 1.20, or leave it blank.")
+  .optional();
+
 export const partFields = {
   designator: requiredText(20, "The designator", "Give the part's designator, like C12 or R4."),
   kind: z.enum(PART_KINDS, { error: `Kind must be one of ${PART_KINDS.join(", ")}.` }),
@@ -21,6 +41,10 @@ export const partFields = {
   replacementValue: optionalText(40, "Replacement value"),
   replacementRating: optionalText(40, "Replacement rating"),
   state: z.enum(PART_STATES, { error: `State must be one of ${PART_STATES.join(", ")}.` }).default("to-order"),
+  quantity: quantityField.optional(),
+  unitCost: unitCostField,
+  supplier: optionalText(80, "Supplier").optional(),
+  supplierPartNumber: optionalText(60, "The supplier's part number").optional(),
 };
 
 export const partSchema = z.object(partFields);

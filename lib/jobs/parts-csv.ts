@@ -1,5 +1,6 @@
 import Papa from "papaparse";
 import { fieldErrors } from "@/lib/field-errors";
+import { minorExponent, toDecimalString } from "@/lib/money";
 import { partSchema, type PartValues } from "./part-schemas";
 
 /**
@@ -7,7 +8,22 @@ import { partSchema, type PartValues } from "./part-schemas";
  * and nothing is added; errors name the row as a spreadsheet numbers it (the header is row 1).
  */
 
-export const CSV_COLUMNS = ["designator", "kind", "original_value", "original_rating", "replacement_value", "replacement_rating", "state"] as const;
+export const CSV_COLUMNS = [
+  "designator",
+  "kind",
+  "original_value",
+  "original_rating",
+  "replacement_value",
+  "replacement_rating",
+  "state",
+  "quantity",
+  "supplier",
+  "supplier_part_number",
+  "unit_cost",
+] as const;
+
+/** Columns whose blank cell is left out: the default ("to-order", 1) or nothing for the ordering details. */
+const DEFAULTED = new Set<string>(["state", "quantity", "supplier", "supplier_part_number", "unit_cost"]);
 
 const TO_FIELD: Record<(typeof CSV_COLUMNS)[number], keyof PartValues> = {
   designator: "designator",
@@ -17,19 +33,32 @@ const TO_FIELD: Record<(typeof CSV_COLUMNS)[number], keyof PartValues> = {
   replacement_value: "replacementValue",
   replacement_rating: "replacementRating",
   state: "state",
+  quantity: "quantity",
+  supplier: "supplier",
+  supplier_part_number: "supplierPartNumber",
+  unit_cost: "unitCost",
 };
 
 export const MAX_IMPORT_ROWS = 500;
 
 /** A cell a spreadsheet would run as a formula gets a leading apostrophe (CSV injection). */
-function safeCell(v: string | null): string {
+export function safeCell(v: string | null): string {
   if (!v) return "";
   return /^[=+\-@\t\r]/.test(v) ? `'${v}` : v;
 }
 
-export function partsToCsv(parts: PartValues[]): string {
-  const rows = parts.map((p) => CSV_COLUMNS.map((c) => safeCell((p[TO_FIELD[c]] as string | null) ?? null)));
-  return Papa.unparse({ fields: [...CSV_COLUMNS], data: rows }, { newline: "\r\n" });
+type ExportedPart = Omit<PartValues, "unitCost" | "quantity"> & { quantity?: number; unitCostMinor?: number | null };
+
+/** The unit cost column only with `currency` (members who may see prices), as the exact decimal of its minor units. */
+export function partsToCsv(parts: ExportedPart[], currency: string | null = null): string {
+  const columns = CSV_COLUMNS.filter((c) => currency || c !== "unit_cost");
+  const cell = (p: ExportedPart, c: (typeof CSV_COLUMNS)[number]): string | null => {
+    if (c === "quantity") return p.quantity === undefined ? null : String(p.quantity);
+    if (c === "unit_cost") return p.unitCostMinor == null || !currency ? null : toDecimalString(p.unitCostMinor, minorExponent(currency));
+    return (p[TO_FIELD[c] as keyof ExportedPart] as string | null) ?? null;
+  };
+  const rows = parts.map((p) => columns.map((c) => safeCell(cell(p, c))));
+  return Papa.unparse({ fields: [...columns], data: rows }, { newline: "\r\n" });
 }
 
 const normaliseHeader = (h: string) => h.trim().toLowerCase().replace(/[\s-]+/g, "_");
@@ -60,7 +89,7 @@ export function parsePartsCsv(text: string): CsvImport {
     if (cells.every((c) => c === "")) return; // blank line
     const candidate: Record<string, string | undefined> = {};
     CSV_COLUMNS.forEach((c, k) => {
-      candidate[TO_FIELD[c]] = cells[k] === "" && c === "state" ? undefined : unescapeCell(cells[k]);
+      candidate[TO_FIELD[c]] = cells[k] === "" && DEFAULTED.has(c) ? undefined : unescapeCell(cells[k]);
     });
     const result = partSchema.safeParse(candidate);
     if (!result.success) {

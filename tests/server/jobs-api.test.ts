@@ -124,7 +124,8 @@ describe("parts CSV", () => {
     expect(out.headers.get("content-type")).toMatch(/^text\/csv/);
     expect(out.headers.get("content-disposition")).toMatch(/^attachment/);
     const text = await out.text();
-    expect(text.split(/\r\n/)[0].replace(/^\uFEFF/, "")).toBe(header);
+    // The ordering columns follow the original seven; unit_cost only for those who see prices.
+    expect(text.split(/\r\n/)[0].replace(/^\uFEFF/, "")).toBe(`${header},quantity,supplier,supplier_part_number,unit_cost`);
     expect(text).toContain('R5,resistor,"2,2 MΩ",0.5 W,2.2 MΩ,0.5 W,fitted');
   });
 
