@@ -3,6 +3,7 @@ import { hashPassword } from "../lib/auth/password";
 import { openDatabase, type Db } from "./client";
 import { calculations, jobs, logEntries, memberships, parts, powerUpSteps, powerUps, readings, users, workshops } from "./schema";
 import { seedTelevision } from "./seed-bench-record";
+import { addOrderingTo, seedCustomersAndOrders } from "./seed-customers";
 
 /**
  * The demo scenario: two invented workshops, their people, customers and sets. Every name here is
@@ -25,6 +26,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
   if (existing) {
     // A demo database from before the bench record gains the television job; a second run adds nothing.
     addTelevisionTo(db, existing.id);
+    addOrderingTo(db, existing.id);
     return { created: false };
   }
   // Hash outside the transaction (scrypt is async); write everything inside one.
@@ -195,6 +197,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
       .get().id;
     tx.insert(powerUpSteps).values({ powerUpId: session, supplyVoltage: 120, currentDrawn: 0.21, note: entry.text, createdAt: entry.createdAt }).run();
     seedTelevision(tx, { workshopId: w, tech, apprentice }, now);
+    seedCustomersAndOrders(tx, w, now);
   });
   return { created: true };
 }

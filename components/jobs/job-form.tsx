@@ -6,46 +6,73 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { EQUIPMENT_KINDS, EQUIPMENT_KIND_LABELS } from "@/lib/vocabulary";
+import { CustomerPicker, type PickedCustomer } from "@/components/customers/customer-picker";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
 import { TextareaField } from "@/components/ui/textarea-field";
 import { sendJson } from "@/lib/client/fetch-json";
 import { jobCreateSchema, type JobCreate, type JobCreateInput } from "@/lib/jobs/job-schemas";
+import { AccessoriesField } from "./intake-fields";
 
-type Values = { title: string; equipmentKind: string; maker: string; model: string; year: string; customerName: string; customerEmail: string; notes: string };
-const NAMES = ["title", "equipmentKind", "maker", "model", "year", "customerName", "customerEmail", "notes"] as const;
+const NAMES = ["title", "equipmentKind", "maker", "model", "year", "customerName", "customerEmail", "customerPhone", "serialNumber", "notes"] as const;
+type Name = (typeof NAMES)[number];
+type Values = Record<Name, string>;
+type EditedJob = { id: number; customerId?: number | null; accessories?: string[] | null } & Partial<Record<Name, string | number | null>>;
 
-/** Book in a set (POST /api/jobs) or edit its details (PATCH /api/jobs/[id]); one zod schema with the server. */
-export function JobForm({ job, onDone }: { job?: { id: number } & Partial<Record<keyof Values, string | number | null>>; onDone?: () => void }) {
+/** Uploads the intake photos of a job just booked in; returns how many failed. */
+async function uploadIntakePhotos(jobId: number, photos: File[]): Promise<number> {
+  let failed = 0;
+  for (const photo of photos) {
+    const form = new FormData();
+    form.set("file", photo);
+    form.set("kind", "intake");
+    const res = await fetch(`/api/jobs/${jobId}/files`, { method: "POST", body: form }).catch(() => null);
+    if (!res?.ok) failed++;
+  }
+  return failed;
+}
+
+/**
+ * Book in a set (POST /api/jobs) or edit its details (PATCH /api/jobs/[id]); one zod schema with the server.
+ * The customer is picked from the list or typed new; intake records the serial number, what came with the
+ * set and, when booking in, photos of it as it arrived (Files, kind "intake").
+ */
+export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDone?: () => void; bookFor?: PickedCustomer }) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const [formError, setFormError] = useState<string | null>(null);
+  const [picked, setPicked] = useState<PickedCustomer>(job?.customerId ? { id: job.customerId, name: String(job.customerName ?? ""), email: (job.customerEmail as string | null) ?? null } : bookFor);
+  const [accessories, setAccessories] = useState<string[]>(job?.accessories ?? []);
+  const [photos, setPhotos] = useState<File[]>([]);
+  const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
   const initial = Object.fromEntries(NAMES.map((n) => [n, job?.[n] == null ? "" : String(job[n])])) as Values;
   if (!initial.equipmentKind) initial.equipmentKind = "table-radio";
-  const {
-    register,
-    handleSubmit,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm<JobCreateInput, unknown, JobCreate>({ resolver: zodResolver(jobCreateSchema), defaultValues: initial as JobCreateInput });
+  const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<JobCreateInput, unknown, JobCreate>({ resolver: zodResolver(jobCreateSchema), defaultValues: initial as JobCreateInput });
 
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
-    const res = job ? await sendJson<{ job: { id: number } }>(`/api/jobs/${job.id}`, values, "PATCH") : await sendJson<{ job: { id: number } }>("/api/jobs", values);
+    setFieldErrors({});
+    const customer = picked ? { customerId: picked.id, customerName: null, customerEmail: null, customerPhone: null } : { customerId: job ? null : undefined };
+    const body = { ...values, ...customer, accessories };
+    const res = job ? await sendJson<{ job: { id: number } }>(`/api/jobs/${job.id}`, body, "PATCH") : await sendJson<{ job: { id: number } }>("/api/jobs", body);
     if (!res.ok) {
-      for (const [name, message] of Object.entries(res.fields)) if ((NAMES as readonly string[]).includes(name)) setError(name as keyof Values, { message });
+      for (const [name, message] of Object.entries(res.fields)) if ((NAMES as readonly string[]).includes(name)) setError(name as Name, { message });
+      setFieldErrors(res.fields);
       setFormError(res.message);
       return;
     }
     await queryClient.invalidateQueries({ queryKey: ["jobs"] });
     if (job) {
       router.refresh();
-      onDone?.();
-    } else router.push(`/jobs/${res.data.job.id}`);
+      return onDone?.();
+    }
+    const failed = photos.length ? await uploadIntakePhotos(res.data.job.id, photos) : 0;
+    router.push(`/jobs/${res.data.job.id}${failed ? "/files" : ""}`);
   });
 
   const id = (n: string) => `job-${n}`;
+  const heading = "sm:col-span-2 mt-3 border-t border-rule pt-3 text-lead font-bold";
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-x-4 gap-y-1 sm:grid-cols-2" aria-describedby="job-form-error">
       <Field id={id("title")} label="Title" placeholder="Five-tube table radio, 1950s" className="sm:col-span-2" error={errors.title?.message} {...register("title")} />
@@ -53,15 +80,48 @@ export function JobForm({ job, onDone }: { job?: { id: number } & Partial<Record
       <Field id={id("year")} label="Year" inputMode="numeric" placeholder="1952" error={errors.year?.message} {...register("year")} />
       <Field id={id("maker")} label="Maker" error={errors.maker?.message} {...register("maker")} />
       <Field id={id("model")} label="Model" error={errors.model?.message} {...register("model")} />
-      <Field id={id("customer-name")} label="Customer name" error={errors.customerName?.message} {...register("customerName")} />
-      <Field id={id("customer-email")} label="Customer e-mail" type="email" error={errors.customerEmail?.message} {...register("customerEmail")} />
+      <h3 className={heading}>Customer</h3>
+      <div className="sm:col-span-2">
+        <CustomerPicker
+          picked={picked}
+          onPick={setPicked}
+          newCustomer={
+            <>
+              <Field id={id("customer-name")} label="Name" autoComplete="off" error={errors.customerName?.message} {...register("customerName")} />
+              <Field id={id("customer-email")} label="E-mail" type="email" inputMode="email" autoComplete="off" error={errors.customerEmail?.message} {...register("customerEmail")} />
+              <Field id={id("customer-phone")} label="Phone" type="tel" inputMode="tel" autoComplete="off" error={errors.customerPhone?.message} {...register("customerPhone")} />
+            </>
+          }
+        />
+        {fieldErrors.customerId ? <p role="alert" className="mt-1 text-note font-bold text-flag">{fieldErrors.customerId}</p> : null}
+      </div>
+      <h3 className={heading}>Intake</h3>
+      <Field id={id("serial")} label="Serial or chassis number" autoComplete="off" error={errors.serialNumber?.message} {...register("serialNumber")} />
+      <div className="sm:col-span-2">
+        <AccessoriesField value={accessories} onChange={setAccessories} error={fieldErrors.accessories} />
+      </div>
+      {!job ? (
+        <label className="flex flex-col gap-1 sm:col-span-2">
+          <span className="font-bold">Intake photos</span>
+          <input
+            type="file"
+            accept="image/jpeg,image/png,image/webp"
+            capture="environment"
+            multiple
+            onChange={(e) => setPhotos([...(e.target.files ?? [])])}
+            aria-describedby="job-photos-hint"
+            className="min-h-11 rounded-chip border border-edge bg-panel px-3 py-2 file:mr-3 file:rounded-chip file:border-0 file:bg-sunk file:px-3 file:py-1 file:font-bold"
+          />
+          <span id="job-photos-hint" className="text-note text-muted">The set as it came in: cabinet, back, chassis. JPEG, PNG or WebP, up to 20 MB each; they go to the job&rsquo;s Files.</span>
+        </label>
+      ) : null}
       <TextareaField id={id("notes")} label="Notes" className="sm:col-span-2" hint="Symptoms, condition, what the customer asked for." error={errors.notes?.message} {...register("notes")} />
       <p id="job-form-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-flag sm:col-span-2">
         {formError ?? ""}
       </p>
-      <div className="flex gap-3 sm:col-span-2">
+      <div className="flex flex-wrap gap-3 sm:col-span-2">
         <Button type="submit" disabled={isSubmitting}>
-          {isSubmitting ? "Saving…" : job ? "Save details" : "Book in"}
+          {isSubmitting ? (photos.length ? "Saving and uploading…" : "Saving…") : job ? "Save details" : "Book in"}
         </Button>
         {onDone ? (
           <Button type="button" variant="secondary" onClick={onDone}>

@@ -14,6 +14,7 @@ import { StatusBadge } from "./status-badge";
 
 export interface JobListItem {
   id: number;
+  number: number;
   title: string;
   equipmentKind: EquipmentKind;
   maker: string | null;
@@ -40,7 +41,7 @@ const columns = [
         <Link href={`/jobs/${row.original.id}`} className="font-bold text-ink underline-offset-4 hover:underline">
           {row.original.title}
         </Link>
-        <div className="text-note text-muted">{[row.original.maker, row.original.model, row.original.year].filter(Boolean).join(" · ") || `Job ${row.original.id}`}</div>
+        <div className="text-note text-muted">{[`Job ${row.original.number}`, row.original.maker, row.original.model, row.original.year].filter(Boolean).join(" · ")}</div>
       </div>
     ),
   }),

@@ -6,6 +6,7 @@ import { usePathname } from "next/navigation";
 const LINKS = [
   { href: "/bench", label: "Bench", members: false },
   { href: "/jobs", label: "Jobs", members: true },
+  { href: "/customers", label: "Customers", members: true },
   { href: "/workshop", label: "Workshop", members: true },
 ];
 

@@ -1,5 +1,6 @@
 import { and, desc, eq, inArray } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
+import type { FileKind } from "@/lib/vocabulary";
 import { notFound } from "@/lib/errors";
 import { getDb } from "../client";
 import { files, users } from "../schema";
@@ -41,7 +42,7 @@ export function assertCanUpload(member: Member, jobId: number) {
 export function createFileRecord(
   member: Member,
   jobId: number,
-  input: { storedName: string; originalName: string; type: string; size: number; kind: "photo" | "schematic"; hasThumbnail: boolean },
+  input: { storedName: string; originalName: string; type: string; size: number; kind: FileKind; hasThumbnail: boolean },
 ) {
   assertCanUpload(member, jobId);
   return getDb().transaction((tx) => {

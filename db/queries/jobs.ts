@@ -5,25 +5,29 @@ import { notFound } from "@/lib/errors";
 import type { JobCreate, JobListQuery, JobUpdate } from "@/lib/jobs/job-schemas";
 import { getDb } from "../client";
 import { files, jobs } from "../schema";
+import { resolveJobCustomer } from "./customers";
 import { assertJobInWorkshop } from "./job-access";
+import { nextJobNumber } from "./job-numbers";
 import { insertLogEntry } from "./log";
 
 /** Jobs: every query here is scoped to the member's workshop and checks the role itself. */
 
 const listColumns = {
   id: jobs.id,
+  number: jobs.number,
   title: jobs.title,
   equipmentKind: jobs.equipmentKind,
   maker: jobs.maker,
   model: jobs.model,
   year: jobs.year,
   customerName: jobs.customerName,
+  customerId: jobs.customerId,
   status: jobs.status,
   createdAt: jobs.createdAt,
   updatedAt: jobs.updatedAt,
 };
 
-const detailColumns = { ...listColumns, customerEmail: jobs.customerEmail, notes: jobs.notes };
+const detailColumns = { ...listColumns, customerEmail: jobs.customerEmail, notes: jobs.notes, serialNumber: jobs.serialNumber, accessories: jobs.accessories };
 
 export type JobListRow = Awaited<ReturnType<typeof listJobs>>[number];
 export type JobDetail = NonNullable<ReturnType<typeof findJob>>;
@@ -57,7 +61,9 @@ export function searchJobs(member: Member, q: JobListQuery) {
   if (q.q) {
     const p = likePattern(q.q);
     const like = (col: AnyColumn) => sql`${col} like ${p} escape '\\'`;
-    where.push(or(like(jobs.title), like(jobs.maker), like(jobs.model), like(jobs.customerName), like(jobs.customerEmail))!);
+    // "12" or "Job 12" also finds job number 12.
+    const number = /^(?:job\s*)?(\d{1,9})$/i.exec(q.q);
+    where.push(or(like(jobs.title), like(jobs.maker), like(jobs.model), like(jobs.customerName), like(jobs.customerEmail), ...(number ? [eq(jobs.number, Number(number[1]))] : []))!);
   }
   const condition = and(...where);
   const order = q.dir === "asc" ? asc : desc;
@@ -90,9 +96,11 @@ export function getJob(member: Member, jobId: number) {
 export function createJob(member: Member, input: JobCreate) {
   assertCan(member, "editJobs", "book in jobs");
   return getDb().transaction((tx) => {
+    const { customerId, customerName, customerEmail, customerPhone, ...fields } = input;
+    const customer = resolveJobCustomer(tx, member, { customerId, customerName, customerEmail, customerPhone }) ?? { customerId: null, customerName: null, customerEmail: null };
     const job = tx
       .insert(jobs)
-      .values({ ...input, workshopId: member.workshopId, status: FIRST_JOB_STATUS })
+      .values({ ...fields, ...customer, number: nextJobNumber(tx, member.workshopId), workshopId: member.workshopId, status: FIRST_JOB_STATUS })
       .returning(detailColumns)
       .get();
     insertLogEntry(tx, { jobId: job.id, workshopId: member.workshopId, authorId: member.userId, kind: "status", text: `${JOB_STATUS_LABELS[FIRST_JOB_STATUS]}: ${job.title}.`, data: { to: FIRST_JOB_STATUS } });
@@ -103,13 +111,17 @@ export function createJob(member: Member, input: JobCreate) {
 export function updateJob(member: Member, jobId: number, input: JobUpdate) {
   assertCan(member, "editJobs", "edit job details");
   getJob(member, jobId);
-  const changes = Object.fromEntries(Object.entries(input).filter(([, v]) => v !== undefined));
-  return getDb()
-    .update(jobs)
-    .set({ ...changes, updatedAt: sql`(unixepoch('subsec') * 1000)` })
-    .where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId)))
-    .returning(detailColumns)
-    .get()!;
+  return getDb().transaction((tx) => {
+    const { customerId, customerName, customerEmail, customerPhone, ...fields } = input;
+    const changes = Object.fromEntries(Object.entries(fields).filter(([, v]) => v !== undefined));
+    const customer = resolveJobCustomer(tx, member, { customerId, customerName, customerEmail, customerPhone });
+    return tx
+      .update(jobs)
+      .set({ ...changes, ...customer, updatedAt: sql`(unixepoch('subsec') * 1000)` })
+      .where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId)))
+      .returning(detailColumns)
+      .get()!;
+  });
 }
 
 /** Moves a job along the workflow and writes the change to its log, in one transaction. */

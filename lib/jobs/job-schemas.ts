@@ -26,6 +26,22 @@ const customerEmailField = optionalText(254, "Customer e-mail").refine(
   "Enter a valid e-mail address, like name@example.com, or leave it blank.",
 );
 
+/** What came in with the set: a list, or the text of a form ("Knobs, back cover"); blank clears it. */
+const accessoriesField = z
+  .union([z.array(z.string({ error: "Each item must be text." })), z.string()], { error: "List what came in with the set." })
+  .nullable()
+  .optional()
+  .transform((v, ctx): string[] | null | undefined => {
+    if (v === undefined || v === null) return v;
+    const items = (typeof v === "string" ? v.split(/[,;\n]/) : v).map((x) => x.trim()).filter(Boolean);
+    const unique = items.filter((x, i) => items.findIndex((y) => y.toLowerCase() === x.toLowerCase()) === i);
+    if (unique.length > 20 || unique.some((x) => x.length > 60)) {
+      ctx.addIssue({ code: "custom", message: "List at most 20 items of up to 60 characters each." });
+      return z.NEVER;
+    }
+    return unique.length ? unique : null;
+  });
+
 export const jobFields = {
   title: requiredText(120, "The title", "Give the set a short title, like “Five-tube table radio, 1950s”."),
   equipmentKind: z.enum(EQUIPMENT_KINDS, { error: "Choose what kind of set it is." }),
@@ -34,7 +50,13 @@ export const jobFields = {
   year: yearField,
   customerName: optionalText(120, "Customer name"),
   customerEmail: customerEmailField,
+  /** A customer already on file; without it the name and e-mail find or make the record (db/queries/customers.ts). */
+  customerId: z.number({ error: "Choose a customer from the list." }).int("Choose a customer from the list.").positive("Choose a customer from the list.").nullable().optional(),
+  /** Only for a customer made at booking-in. */
+  customerPhone: optionalText(40, "Customer phone").optional(),
   notes: optionalText(4000, "Notes"),
+  serialNumber: optionalText(80, "Serial or chassis number").optional(),
+  accessories: accessoriesField.optional(),
 };
 
 export const jobCreateSchema = z.object(jobFields);

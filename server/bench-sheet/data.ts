@@ -52,7 +52,7 @@ export function benchSheetData(member: Member, jobId: number) {
     printedOn: date(new Date()),
     caution: HIGH_VOLTAGE_CAUTION,
     job: {
-      number: job.id,
+      number: job.number,
       title: t(job.title),
       facts: [
         ["Kind", EQUIPMENT_KIND_LABELS[job.equipmentKind]],

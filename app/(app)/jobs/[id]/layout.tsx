@@ -21,9 +21,20 @@ export default async function JobLayout({ children, params }: { children: ReactN
               {job.title}
             </h1>
             <p className="mt-1 flex flex-wrap items-center gap-x-3 gap-y-1 text-muted">
-              <span className="font-mono text-note text-ink">Job {job.id}</span>
+              <span className="font-mono text-note text-ink">Job {job.number}</span>
               <span>{facts}</span>
-              {job.customerName ? <span>for {job.customerName}</span> : null}
+              {job.customerName ? (
+                <span>
+                  for{" "}
+                  {job.customerId ? (
+                    <Link href={`/customers/${job.customerId}`} className="text-signal underline-offset-4 hover:underline">
+                      {job.customerName}
+                    </Link>
+                  ) : (
+                    job.customerName
+                  )}
+                </span>
+              ) : null}
               <StatusBadge status={job.status} />
             </p>
           </div>

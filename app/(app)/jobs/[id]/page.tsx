@@ -43,7 +43,12 @@ export default async function JobOverviewPage({ params }: JobPageProps) {
       ) : null}
       <Card>
         <h2 className="mb-4 text-lead font-bold">The set</h2>
-        <JobDetails job={job} canEdit={can.editJobs(member)} canDelete={can.deleteJobs(member)} />
+        <JobDetails
+          job={job}
+          canEdit={can.editJobs(member)}
+          canDelete={can.deleteJobs(member)}
+          intakePhotos={files.filter((f) => f.kind === "intake").map((f) => ({ id: f.id, name: f.originalName, hasThumbnail: f.hasThumbnail }))}
+        />
       </Card>
       <Card>
         <h2 className="mb-4 text-lead font-bold">At a glance</h2>

@@ -6,6 +6,7 @@ import { Card, EmptyState } from "@/components/ui/card";
 import { listFiles } from "@/db/queries/files";
 import { can } from "@/lib/auth/can";
 import { formatDate } from "@/lib/jobs/dates";
+import { FILE_KIND_LABELS } from "@/lib/vocabulary";
 
 export const metadata: Metadata = { title: "Files" };
 
@@ -43,7 +44,7 @@ export default async function FilesPage({ params }: JobPageProps) {
               <div className="flex flex-1 flex-col gap-1 p-3">
                 <p className="truncate font-bold" title={f.originalName}>{f.originalName}</p>
                 <p className="text-note text-muted">
-                  <span className="capitalize">{f.kind}</span> · {size(f.size)} · {formatDate(f.createdAt)}{f.uploaderName ? ` · ${f.uploaderName}` : ""}
+                  <span>{FILE_KIND_LABELS[f.kind]}</span> · {size(f.size)} · {formatDate(f.createdAt)}{f.uploaderName ? ` · ${f.uploaderName}` : ""}
                 </p>
                 <div className="mt-auto flex items-center justify-between pt-2">
                   <a href={url(f.id, "?download=1")} className="text-note font-bold text-signal underline underline-offset-4">Download</a>

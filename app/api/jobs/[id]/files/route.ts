@@ -8,7 +8,7 @@ import { MAX_UPLOAD_BYTES, checkOriginalName, prepareUpload, removeStored, store
 
 export const GET = route({ ids: { id: "That job" } }, ({ member, ids }) => NextResponse.json({ files: listFiles(member, ids.id) }));
 
-const kindField = z.enum(FILE_KINDS, { error: "Kind must be photo or schematic." }).default("photo");
+const kindField = z.enum(FILE_KINDS, { error: `Kind must be one of ${FILE_KINDS.join(", ")}.` }).default("photo");
 
 /** The file itself may be up to 20 MB; the form around it gets 64 KiB of room. */
 const uploadLimit = { bytes: MAX_UPLOAD_BYTES + 64 * 1024, message: "Files may be up to 20 MB.", fields: { file: "This file is over 20 MB; export a smaller copy." } };
