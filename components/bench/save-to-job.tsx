@@ -3,13 +3,12 @@
 import Link from "next/link";
 import { useEffect, useId, useState } from "react";
 import { Button } from "@/components/ui/button";
+import type { searchJobs } from "@/db/queries/jobs";
 import { EQUIPMENT_KINDS, EQUIPMENT_KIND_LABELS, type EquipmentKind } from "@/lib/vocabulary";
 import { getJson, sendJson } from "@/lib/client/fetch-json";
 
-interface JobSummary {
-  id: number;
-  title: string;
-}
+/** What this form reads of GET /api/jobs and POST /api/jobs. */
+type JobSummary = Pick<ReturnType<typeof searchJobs>["jobs"][number], "id" | "title">;
 
 const NEW = "new";
 const field = "min-h-11 w-full rounded-chip border border-edge bg-panel px-3 py-2 text-body text-ink";

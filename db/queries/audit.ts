@@ -1,6 +1,6 @@
 import { desc, eq } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
-import { getDb, type Db } from "../client";
+import { getDb, type DbOrTx } from "../client";
 import { auditEvents, users } from "../schema";
 
 /** Who did what to the workshop's membership and accounts. Written inside the change's own transaction. */
@@ -21,10 +21,8 @@ export type AuditAction =
   | "session.signed-out-everywhere"
   | "sign-in.delayed";
 
-type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
-
 export function recordAudit(
-  tx: Tx | Db,
+  tx: DbOrTx,
   event: { workshopId: number; actorUserId: number | null; action: AuditAction; detail?: Record<string, unknown> },
 ): void {
   tx.insert(auditEvents).values(event).run();

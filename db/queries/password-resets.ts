@@ -1,7 +1,7 @@
 import { and, asc, eq, gt, isNull, sql } from "drizzle-orm";
 import { hashToken, newToken } from "@/lib/auth/tokens";
 import { GoneError, NotFoundError } from "@/lib/errors";
-import { getDb, type Db } from "../client";
+import { getDb, type Tx } from "../client";
 import { memberships, passwordResets, users } from "../schema";
 import { recordAudit, type AuditAction } from "./audit";
 import { deleteUserSessions } from "./sessions";
@@ -13,8 +13,6 @@ import { deleteUserSessions } from "./sessions";
 
 /** An hour: time to find the e-mail, short enough that a forgotten one in an inbox is harmless. */
 export const RESET_TTL_MS = 60 * 60 * 1000;
-
-type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 function auditEveryWorkshop(tx: Tx, userId: number, action: AuditAction, detail: Record<string, unknown>) {
   const rows = tx.select({ workshopId: memberships.workshopId }).from(memberships).where(eq(memberships.userId, userId)).orderBy(asc(memberships.id)).all();

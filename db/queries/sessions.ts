@@ -1,6 +1,6 @@
 import { and, asc, eq, lt, ne, or, sql } from "drizzle-orm";
 import { hashToken, newToken } from "@/lib/auth/tokens";
-import { getDb, type Db } from "../client";
+import { getDb, type DbOrTx } from "../client";
 import { memberships, sessions, users } from "../schema";
 import { recordAudit, type AuditAction } from "./audit";
 
@@ -8,8 +8,6 @@ import { recordAudit, type AuditAction } from "./audit";
  * Server-side sessions: the cookie holds a random id, the table its SHA-256. These run before (or while)
  * a Member is known, so they take user ids; the session id is the credential.
  */
-
-type Tx = Parameters<Parameters<Db["transaction"]>[0]>[0];
 
 /** lastSeenAt is written at most this often, so reading a page is not a database write each time. */
 export const TOUCH_EVERY_MS = 60 * 1000;
@@ -50,7 +48,7 @@ export function deleteSession(token: string): void {
 }
 
 /** Ends every session of a user, or every one but `keepToken`'s. */
-export function deleteUserSessions(userId: number, keepToken?: string, tx: Tx | Db = getDb()): void {
+export function deleteUserSessions(userId: number, keepToken?: string, tx: DbOrTx = getDb()): void {
   const mine = eq(sessions.userId, userId);
   tx.delete(sessions).where(keepToken ? and(mine, ne(sessions.tokenHash, hashToken(keepToken))) : mine).run();
 }
