@@ -14,7 +14,7 @@ import {
   ValidationError,
 } from "@/lib/errors";
 
-/** PRODUCT.md's error shape, and the one place a thrown error becomes an HTTP answer. */
+/** docs/PRODUCT.md's error shape, and the one place a thrown error becomes an HTTP answer. */
 
 export interface ApiErrorBody {
   /** Some refusals add a list beside message and fields (the checks before "ready": `checks`). */
@@ -42,7 +42,7 @@ export class HttpError extends Error {
   }
 }
 
-/** The one mapping from the data layer's errors to HTTP statuses (PRODUCT.md, DEVELOPERS.md "Errors"). */
+/** The one mapping from the data layer's errors to HTTP statuses (docs/PRODUCT.md, DEVELOPERS.md "Errors"). */
 const STATUS_OF: [new (...args: never[]) => DomainError, number][] = [
   [ValidationError, 400],
   [NotSignedInError, 401],

@@ -13,7 +13,7 @@ import { idParam } from "./ids";
 /**
  * The one wrapper every route handler goes through. In order, before the handler runs:
  * Origin (every state-changing method) → session → role → ids → query → content type → body, read
- * with a byte limit → zod. Errors become PRODUCT.md's JSON shape; nothing but a public read is cached.
+ * with a byte limit → zod. Errors become docs/PRODUCT.md's JSON shape; nothing but a public read is cached.
  */
 
 type Auth = "public" | "optional" | "member";

@@ -2,7 +2,7 @@ import type { Slug } from "../../lib/calc/registry";
 
 /**
  * One typical input per calculator for the micro-benchmark, keyed by slug, with the input
- * names of PRODUCT.md. Values are the kind a bench would enter, written as the form sends
+ * names of docs/PRODUCT.md. Values are the kind a bench would enter, written as the form sends
  * them (engineering text where a person would type it), so validation does real parsing.
  */
 const bySlug = {
