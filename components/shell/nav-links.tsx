@@ -7,6 +7,7 @@ const LINKS = [
   { href: "/bench", label: "Bench", members: false },
   { href: "/jobs", label: "Jobs", members: true },
   { href: "/customers", label: "Customers", members: true },
+  { href: "/drills", label: "Drills", members: true },
   { href: "/workshop", label: "Workshop", members: true },
 ];
 

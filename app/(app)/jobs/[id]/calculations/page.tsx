@@ -1,11 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { DoItYourself } from "@/components/drills/do-it-yourself";
 import { DeleteButton } from "@/components/jobs/delete-button";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
 import { ButtonLink } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/card";
 import { InputLabel } from "@/components/ui/quantity-symbol";
 import { listCalculations } from "@/db/queries/calculations";
+import { listMembers } from "@/db/queries/members";
 import { can } from "@/lib/auth/can";
 import { formatQuantity } from "@/lib/calc/format";
 import { getCalculator } from "@/lib/calc/registry";
@@ -25,6 +27,8 @@ function show(value: unknown, unit: string): string {
 export default async function CalculationsPage({ params }: JobPageProps) {
   const { member, job } = await loadJobPage((await params).id, "calculations");
   const calcs = listCalculations(member, job.id);
+  // "Do this one yourself": mentors set it for an apprentice; an apprentice makes one at once (null).
+  const apprentices = can.assignDrills(member) ? listMembers(member).filter((m) => m.role === "apprentice").map((m) => ({ userId: m.userId, name: m.name })) : null;
   if (calcs.length === 0) {
     return (
       <EmptyState title="No calculations saved to this job" action={<ButtonLink href="/bench">Open the Bench</ButtonLink>}>
@@ -67,6 +71,7 @@ export default async function CalculationsPage({ params }: JobPageProps) {
             <Link href={benchHref(c.slug, calc ? reopenInputs(calc.inputs, c.inputs) : c.inputs)} className="mt-4 w-fit font-bold text-signal underline underline-offset-4">
               Reopen in the Bench
             </Link>
+            <DoItYourself calculationId={c.id} apprentices={apprentices} />
           </li>
         );
       })}

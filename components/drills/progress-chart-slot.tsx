@@ -1,0 +1,12 @@
+"use client";
+
+import dynamic from "next/dynamic";
+import type { ProgressPoint } from "@/lib/drills/progress";
+
+/** recharts is loaded only where a progress plot is drawn, as the Bench does for its pictures. */
+const Chart = dynamic(() => import("./progress-chart"), { ssr: false, loading: () => <div className="h-72 animate-pulse rounded-card bg-sunk" aria-hidden="true" /> });
+
+export function ProgressChartSlot({ points }: { points: readonly ProgressPoint[] }) {
+  if (points.length === 0) return <p className="text-muted">The plot of your progress appears after your first answer.</p>;
+  return <Chart points={points} />;
+}
