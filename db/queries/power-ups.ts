@@ -1,7 +1,7 @@
 import { and, asc, eq, inArray } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
 import { ConflictError, ValidationError, notFound } from "@/lib/errors";
-import { checklistWarnings, isOverStop, outcomeRefusal, stepWarnings } from "@/lib/jobs/power-up-steps";
+import { checklistWarnings, isOverStop, lowerFirst, outcomeRefusal, stepWarnings } from "@/lib/jobs/power-up-steps";
 import type { PowerUpOutcomeValues, PowerUpStepValues, PowerUpValues } from "@/lib/jobs/power-up-schemas";
 import { POWER_UP_CHECKLIST, POWER_UP_LIMITER_LABELS } from "@/lib/vocabulary";
 import { getDb, type Db } from "../client";
@@ -121,7 +121,7 @@ export function createPowerUp(member: Member, jobId: number, input: PowerUpValue
       .returning({ id: powerUps.id })
       .get();
     const undone = POWER_UP_CHECKLIST.filter((c) => !input.checklist[c.id]);
-    const checks = undone.length ? `${POWER_UP_CHECKLIST.length - undone.length} of ${POWER_UP_CHECKLIST.length} checks done (not done: ${undone.map((c) => c.label.toLowerCase()).join("; ")})` : "every check done";
+    const checks = undone.length ? `${POWER_UP_CHECKLIST.length - undone.length} of ${POWER_UP_CHECKLIST.length} checks done (not done: ${undone.map((c) => lowerFirst(c.label)).join("; ")})` : "every check done";
     appendLog(tx, member, jobId, "power-up", `Power-up session started ${limiterWords(input)}, stop current ${amps(input.stopCurrent)}; ${checks}.`, { powerUpId: id });
     return session(member, jobId, id, tx);
   });

@@ -47,10 +47,13 @@ export function stepWarnings(step: StepFigures, stopCurrent: number | null): Pow
   return [];
 }
 
+/** "Filter capacitors …" → "filter capacitors …", leaving "B+" and the rest as written. */
+export const lowerFirst = (text: string) => text.charAt(0).toLowerCase() + text.slice(1);
+
 /** The checklist is advice, not a gate: every unticked item is shown as not done. Null: a session moved from the Log, with no checklist. */
 export function checklistWarnings(checklist: Partial<Record<PowerUpChecklistId, boolean>> | null): ChecklistWarning[] {
   if (checklist === null) return [];
-  return POWER_UP_CHECKLIST.filter((c) => checklist[c.id] !== true).map((c) => ({ id: c.id, level: "caution", message: `Not done before first power: ${c.label.toLowerCase()}.` }));
+  return POWER_UP_CHECKLIST.filter((c) => checklist[c.id] !== true).map((c) => ({ id: c.id, level: "caution", message: `Not done before first power: ${lowerFirst(c.label)}.` }));
 }
 
 export interface PlotPoint {

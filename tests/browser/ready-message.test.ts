@@ -16,23 +16,25 @@ afterAll(async () => {
   await browser?.close();
 });
 
-test("the collection message panel appears only at the counter and sends the bench sheet", async () => {
+test("the ready-to-collect panel appears only at Ready to collect and sends the bench sheet", async () => {
   const customer = `customer-${Date.now()}@example.test`;
   const created = await team.technician.post("/api/jobs", { title: "Console radio, 1950s", equipmentKind: "console-radio", customerName: "Wren Halloway", customerEmail: customer });
   expect(created.status).toBe(201);
   const { job } = await created.json();
+  // A finished record, so the checks before "ready" have nothing to say: one power-up session, passed.
+  const { session } = await (await team.technician.post(`/api/jobs/${job.id}/power-ups`, { limiter: "variac", stopCurrent: "1 A" })).json();
+  expect((await team.technician.patch(`/api/jobs/${job.id}/power-ups/${session.id}`, { outcome: "passed" })).status).toBe(200);
 
   const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
   const [name, value] = team.technician.cookies.split("; ")[0].split(/=(.*)/s);
-  // The session cookie is __Host- (Secure) in production; Chromium sends Secure cookies to http://localhost.
-  await context.addCookies([{ name, value, url: baseUrl().replace(/^http:/, "https:") }]);
+  await context.addCookies([{ name, value, url: baseUrl() }]);
   const page = await context.newPage();
 
   await page.goto(`${baseUrl()}/jobs/${job.id}`);
   await page.getByRole("heading", { name: "Where it is" }).waitFor();
   expect(await page.getByRole("button", { name: "Send to customer" }).count()).toBe(0);
 
-  expect((await team.technician.post(`/api/jobs/${job.id}/status`, { status: "at-the-counter" })).status).toBe(200);
+  expect((await team.technician.post(`/api/jobs/${job.id}/status`, { status: "ready" })).status).toBe(200);
   await page.reload();
   await page.getByRole("button", { name: "Send to customer" }).click();
   await expect.poll(() => page.getByText(`Sent to ${customer} with the bench sheet attached.`).count()).toBe(1);

@@ -20,11 +20,17 @@ const partsQ = await import("@/db/queries/parts");
 const readingsQ = await import("@/db/queries/readings");
 const readyQ = await import("@/db/queries/ready-record");
 const logQ = await import("@/db/queries/log");
-const { tubeSchema } = await import("@/lib/jobs/tube-schemas");
+const { tubeSchema, tubeUpdateSchema } = await import("@/lib/jobs/tube-schemas");
+const { candidateUpdateSchema, faultSchema, faultUpdateSchema } = await import("@/lib/jobs/fault-schemas");
 const { powerUpSchema, powerUpStepSchema } = await import("@/lib/jobs/power-up-schemas");
 const { readingSchema } = await import("@/lib/jobs/reading-schemas");
+const { partSchema, partUpdateSchema } = await import("@/lib/jobs/part-schemas");
 const { ReadyChecksError } = await import("@/lib/jobs/ready-checks");
+const { statusChangeWithChecksSchema } = await import("@/lib/jobs/ready-schemas");
 const { users } = await import("@/db/schema");
+const { JOB_STATUSES } = await import("@/lib/vocabulary");
+/** Ready to collect: the step before the set goes home. */
+const READY = JOB_STATUSES[JOB_STATUSES.indexOf("returned") - 1];
 const { eq } = await import("drizzle-orm");
 
 type M = NonNullable<ReturnType<typeof loadMember>>;
@@ -56,7 +62,7 @@ describe("tubes", () => {
 
   test("a substitute comes back with its differences; the series string follows the line-up", () => {
     const v2 = tubesQ.listTubes(tech, job).tubes.find((t) => t.position === "V2")!;
-    const t = tubesQ.updateTube(apprentice, job, v2.id, { substitute: "12SN7GT", test: { reading: 48, minimum: 60 }, verdict: "weak" });
+    const t = tubesQ.updateTube(apprentice, job, v2.id, tubeUpdateSchema.parse({ substitute: "12SN7GT", test: { reading: 48, minimum: 60 }, verdict: "weak" }));
     expect(t.test).toEqual({ reading: 48, minimum: 60 });
     // RCA RC-30 (from memory): 6SN7GT 0.6 A, 12SN7GT 0.3 A. A parallel-heater line-up: information only.
     expect(t.differences.find((d) => d.what === "Heater current")!.level).toBe("info");
@@ -71,7 +77,7 @@ describe("tubes", () => {
     const t = tubesQ.listTubes(tech, job).tubes[0];
     expect(() => tubesQ.deleteTube(apprentice, job, t.id)).toThrow(ForbiddenError);
     expect(() => tubesQ.listTubes(other, job)).toThrow(NotFoundError);
-    expect(() => tubesQ.updateTube(other, job, t.id, { verdict: "strong" })).toThrow(NotFoundError);
+    expect(() => tubesQ.updateTube(other, job, t.id, tubeUpdateSchema.parse({ verdict: "strong" }))).toThrow(NotFoundError);
     tubesQ.deleteTube(tech, job, t.id);
     expect(tubesQ.listTubes(tech, job).tubes.some((x) => x.id === t.id)).toBe(false);
   });
@@ -111,21 +117,21 @@ describe("power-ups", () => {
 
 describe("faults", () => {
   test("state follows the candidates: open → found → fixed → open again when the cause is reopened", () => {
-    const f = faultsQ.createFault(apprentice, job, { symptom: "No vertical deflection", section: "vertical deflection" });
+    const f = faultsQ.createFault(apprentice, job, faultSchema.parse({ symptom: "No vertical deflection", section: "vertical deflection" }));
     expect(f.state).toBe("open");
     const c = ["Yoke", "Vertical output transformer", "Vertical output tube", "Vertical oscillator"].map((d) => faultsQ.addCandidate(apprentice, job, f.id, { description: d }));
     expect(c.map((x) => x.position)).toEqual([1, 2, 3, 4]);
-    expect(() => faultsQ.updateFault(apprentice, job, f.id, { resolution: "Replaced the tube" })).toThrow(ValidationError);
+    expect(() => faultsQ.updateFault(apprentice, job, f.id, faultUpdateSchema.parse({ resolution: "Replaced the tube" }))).toThrow(ValidationError);
     const reading = readingsQ.createReading(apprentice, job, readingSchema.parse({ kind: "voltage", designator: "V3 cathode", nominal: 18, measured: 2 }));
-    let now = faultsQ.updateCandidate(apprentice, job, f.id, c[2].id, { status: "cause", readingId: reading.id, evidence: "Cathode at 2 V against 18 V expected." });
+    let now = faultsQ.updateCandidate(apprentice, job, f.id, c[2].id, candidateUpdateSchema.parse({ status: "cause", readingId: reading.id, evidence: "Cathode at 2 V against 18 V expected." }));
     expect(now.state).toBe("found");
     expect(now.candidates[2].reading).toEqual({ designator: "V3 cathode", measured: 2, unit: "V" });
-    now = faultsQ.updateFault(apprentice, job, f.id, { resolution: "New vertical output tube; height and linearity set." });
+    now = faultsQ.updateFault(apprentice, job, f.id, faultUpdateSchema.parse({ resolution: "New vertical output tube; height and linearity set." }));
     expect(now.state).toBe("fixed");
-    now = faultsQ.updateCandidate(tech, job, f.id, c[2].id, { status: "open" });
+    now = faultsQ.updateCandidate(tech, job, f.id, c[2].id, candidateUpdateSchema.parse({ status: "open" }));
     expect(now.state).toBe("open");
     expect(logTexts()[0]).toMatch(/The fault is open again\.$/);
-    now = faultsQ.updateCandidate(tech, job, f.id, c[2].id, { status: "cause" });
+    now = faultsQ.updateCandidate(tech, job, f.id, c[2].id, candidateUpdateSchema.parse({ status: "cause" }));
     expect(now.state).toBe("fixed");
   });
 
@@ -134,7 +140,7 @@ describe("faults", () => {
     const elsewhere = jobsQ.createJob(tech, { title: "Other set", equipmentKind: "tuner" } as never).id;
     const r = readingsQ.createReading(tech, elsewhere, readingSchema.parse({ kind: "resistor", designator: "R1", nominal: "1k", measured: "1k" }));
     try {
-      faultsQ.updateCandidate(tech, job, f.id, f.candidates[0].id, { readingId: r.id });
+      faultsQ.updateCandidate(tech, job, f.id, f.candidates[0].id, candidateUpdateSchema.parse({ readingId: r.id }));
       expect.unreachable();
     } catch (e) {
       expect((e as ValidationError).fields).toHaveProperty("readingId");
@@ -145,15 +151,15 @@ describe("faults", () => {
 
 describe("parts fitted by apprentices, checked by technicians", () => {
   test("an apprentice records fitting only; the technician's check shows beside it", () => {
-    const p = partsQ.createPart(tech, job, { designator: "C40", kind: "electrolytic", originalValue: null, originalRating: null, replacementValue: null, replacementRating: null, state: "ordered" });
-    expect(() => partsQ.updatePart(apprentice, job, p.id, { state: "ordered" })).toThrow(ForbiddenError);
-    expect(() => partsQ.updatePart(apprentice, job, p.id, { state: "fitted", checked: true })).toThrow(ForbiddenError);
-    const fitted = partsQ.updatePart(apprentice, job, p.id, { state: "fitted" });
+    const p = partsQ.createPart(tech, job, partSchema.parse({ designator: "C40", kind: "electrolytic", state: "ordered" }));
+    expect(() => partsQ.updatePart(apprentice, job, p.id, partUpdateSchema.parse({ state: "ordered" }))).toThrow(ForbiddenError);
+    expect(() => partsQ.updatePart(apprentice, job, p.id, partUpdateSchema.parse({ state: "fitted", checked: true }))).toThrow(ForbiddenError);
+    const fitted = partsQ.updatePart(apprentice, job, p.id, partUpdateSchema.parse({ state: "fitted" }));
     expect([fitted.state, fitted.checkedBy]).toEqual(["fitted", null]);
-    const checked = partsQ.updatePart(tech, job, p.id, { checked: true });
+    const checked = partsQ.updatePart(tech, job, p.id, partUpdateSchema.parse({ checked: true }));
     expect(checked.checkedBy).toEqual({ id: tech.userId, name: tech.name });
     expect(logTexts().slice(0, 2)).toEqual([`Part C40: fitting checked by ${tech.name}.`, `Part C40 recorded as fitted by ${apprentice.name}, waiting for a technician's check.`]);
-    expect(partsQ.updatePart(tech, job, p.id, { state: "ordered" }).checkedBy).toBeNull();
+    expect(partsQ.updatePart(tech, job, p.id, partUpdateSchema.parse({ state: "ordered" })).checkedBy).toBeNull();
   });
 });
 
@@ -161,19 +167,19 @@ describe("checks before ready", () => {
   test("moving to ready is refused with the checks, then allowed with a reason that goes to the Log", () => {
     let err: unknown;
     try {
-      readyQ.changeStatusWithChecks(tech, job, { status: "at-the-counter" });
+      readyQ.changeStatusWithChecks(tech, job, statusChangeWithChecksSchema.parse({ status: "at-the-counter" }));
     } catch (e) {
       err = e;
     }
     expect(err).toBeInstanceOf(ReadyChecksError);
     expect((err as InstanceType<typeof ReadyChecksError>).checks.map((c) => c.id)).toEqual(["parts-not-fitted"]);
     expect(jobsQ.getJob(tech, job).status).not.toBe("at-the-counter");
-    expect(() => readyQ.changeStatusWithChecks(apprentice, job, { status: "at-the-counter", override: true, reason: "x" })).toThrow(ForbiddenError);
-    const moved = readyQ.changeStatusWithChecks(tech, job, { status: "at-the-counter", override: true, reason: "Customer collects today; C40 goes in at the counter." });
+    expect(() => readyQ.changeStatusWithChecks(apprentice, job, statusChangeWithChecksSchema.parse({ status: "at-the-counter", override: true, reason: "x" }))).toThrow(ForbiddenError);
+    const moved = readyQ.changeStatusWithChecks(tech, job, statusChangeWithChecksSchema.parse({ status: "at-the-counter", override: true, reason: "Customer collects today; C40 goes in at the counter." }));
     expect(moved.status).toBe("at-the-counter");
     const [override, status] = logQ.listLog(tech, job);
     expect(status.text).toBe("Status: On the rack → At the counter.");
     expect(override.text).toMatch(/^Moved to “At the counter” with checks still open — 1 part on the list is not fitted yet: C40\. Reason: Customer collects today/);
-    expect(readyQ.changeStatusWithChecks(tech, job, { status: "fault-finding" }).status).toBe("fault-finding");
+    expect(readyQ.changeStatusWithChecks(tech, job, statusChangeWithChecksSchema.parse({ status: "fault-finding" })).status).toBe("fault-finding");
   });
 });

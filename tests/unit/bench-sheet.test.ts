@@ -17,6 +17,7 @@ const { loadMember } = await import("@/db/queries/auth");
 const jobsQ = await import("@/db/queries/jobs");
 const partsQ = await import("@/db/queries/parts");
 const calcQ = await import("@/db/queries/calculations");
+const { partSchema } = await import("@/lib/jobs/part-schemas");
 const { benchSheetData } = await import("@/server/bench-sheet/data");
 const { BenchSheetDocument } = await import("@/server/bench-sheet/document");
 const { HEADING_AHEAD } = await import("@/server/bench-sheet/styles");
@@ -44,7 +45,7 @@ beforeAll(async () => {
     calcQ.saveCalculation(tech, big, { slug, inputs, note: i % 3 ? null : `Saved calculation ${i + 1}: checked against the schematic's figures.` });
   }
   for (let i = 0; i < 150; i++) {
-    partsQ.createPart(tech, big, { designator: `C${i + 1}`, kind: i % 2 ? "paper" : "electrolytic", originalValue: "0.05 µF", originalRating: "400 V", replacementValue: "47 nF", replacementRating: "630 V", state: i % 4 ? "fitted" : "to-order" });
+    partsQ.createPart(tech, big, partSchema.parse({ designator: `C${i + 1}`, kind: i % 2 ? "paper" : "electrolytic", originalValue: "0.05 µF", originalRating: "400 V", replacementValue: "47 nF", replacementRating: "630 V", state: i % 4 ? "fitted" : "to-order" }));
   }
 }, 120_000);
 afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));

@@ -47,6 +47,7 @@ describe("power-up steps", () => {
     const some = checklistWarnings({ "filters-replaced": true, "caps-discharged": true, "fuse-rating": true });
     expect(some.map((w) => w.id)).toEqual(["hv-lead-dressed", "no-bplus-short", "tubes-seated", "output-loaded"]);
     expect(some.every((w) => w.level === "caution")).toBe(true);
+    expect(some[1].message).toBe("Not done before first power: no short on B+, measured with an ohmmeter.");
     expect(checklistWarnings(Object.fromEntries(POWER_UP_CHECKLIST.map((c) => [c.id, true])))).toEqual([]);
     expect(checklistWarnings(null)).toEqual([]);
   });
