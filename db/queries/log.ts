@@ -2,7 +2,7 @@ import { and, desc, eq } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
 import type { LogEntryValues } from "@/lib/jobs/log-schemas";
 import { getDb, type DbOrTx } from "../client";
-import { logEntries, users } from "../schema";
+import { logEntries, powerUpSteps, powerUps, users } from "../schema";
 import { assertJobInWorkshop, touchJob } from "./job-access";
 
 /** The dated bench log of a job. Every member may write notes and power-up entries; entries are never edited. */
@@ -44,6 +44,15 @@ export function addLogEntry(member: Member, jobId: number, input: LogEntryValues
     assertJobInWorkshop(member, jobId, tx);
     const data = input.kind === "power-up" ? { supplyVoltage: input.supplyVoltage, currentDrawn: input.currentDrawn } : null;
     const row = insertLogEntry(tx, { jobId, workshopId: member.workshopId, authorId: member.userId, kind: input.kind, text: input.text, data });
+    // A power-up written in the Log is also a session of the Power-ups tab, as the bench-record migration made of older ones.
+    if (input.kind === "power-up") {
+      const session = tx
+        .insert(powerUps)
+        .values({ jobId, workshopId: member.workshopId, authorId: member.userId, logEntryId: row.id, startedAt: row.createdAt })
+        .returning({ id: powerUps.id })
+        .get();
+      tx.insert(powerUpSteps).values({ powerUpId: session.id, supplyVoltage: input.supplyVoltage, currentDrawn: input.currentDrawn, note: input.text, createdAt: row.createdAt }).run();
+    }
     touchJob(member, jobId, tx);
     return { ...row, author: { id: member.userId, name: member.name } };
   });

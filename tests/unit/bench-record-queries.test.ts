@@ -107,6 +107,13 @@ describe("power-ups", () => {
     expect(logTexts()[0]).toBe("Power-up session passed: Surge while the reformed filter charged; steady at 0.6 A after.");
   });
 
+  test("a power-up written in the Log is also a session with its one step", () => {
+    const entry = logQ.addLogEntry(apprentice, job, { kind: "power-up", supplyVoltage: 117, currentDrawn: 0.7, text: "Steady, no hum." });
+    const session = powerQ.listPowerUps(tech, job).find((x) => x.fromLog && x.startedAt.getTime() === entry.createdAt.getTime())!;
+    expect(session).toMatchObject({ limiter: null, stopCurrent: null, outcome: null, checklistWarnings: [] });
+    expect(session.steps.map((st) => [st.supplyVoltage, st.currentDrawn, st.minutes, st.note])).toEqual([[117, 0.7, null, "Steady, no hum."]]);
+  });
+
   test("the demo radio's power-up log entry was moved into a session by the migration or the seed", () => {
     const radio = jobsQ.searchJobs(tech, { page: 1, pageSize: 100, sort: "updatedAt", dir: "desc" } as never).jobs.find((j) => j.equipmentKind === "table-radio")!;
     const sessions = powerQ.listPowerUps(tech, radio.id);

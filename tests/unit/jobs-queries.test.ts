@@ -142,7 +142,7 @@ describe("parts, readings, calculations", () => {
     const data = benchSheetData(owner, radio.id);
     expect(data.partsFitted.map((p) => p.designator)).toEqual(["C1", "C2"]);
     expect(data.resistors.find((r) => r.designator === "R7")?.verdict).toBe("Drifted high");
-    expect(data.calculations[0].formulas[0].text).toContain("tau = R C");
+    expect(data.calculations[0].formulas[0].text).toContain("τ = R C");
     expect(data.caution).toMatch(/Lethal voltage/);
     const pdf = await renderBenchSheet(owner, radio.id);
     expect(pdf.subarray(0, 5).toString()).toBe("%PDF-");
