@@ -1,16 +1,16 @@
-import { HIGH_VOLTAGE_CAUTION } from "@/lib/calc/safety";
+import { KeepTheBackOn } from "@/components/customer/keep-the-back-on";
 
-/** Shown wherever a customer reads an estimate: the work involves lethal voltages, and an estimate is not a promise. */
+/**
+ * Shown wherever a customer reads an estimate: a plain reminder about the set (not the bench's safety
+ * wording, which is for whoever works on it), and that an estimate is not a promise.
+ */
 export function RepairDisclaimer() {
   return (
-    <aside className="rounded-card border-2 border-hazard bg-hazard-bg p-4 text-ink" aria-label="High-voltage notice">
-      <p className="font-bold text-hazard">High voltage inside</p>
-      <p className="mt-1">
-        Tube-era sets work at lethal voltages and hold a charge after they are unplugged. Please do not open or power the set yourself
-        while it waits for repair. The workshop follows local electrical codes and licensed practice; this estimate covers the work listed,
-        and we will ask you again before doing more.
+    <div className="flex flex-col gap-3">
+      <KeepTheBackOn when="waiting" />
+      <p className="text-note text-muted">
+        The estimate covers the work listed. If we find more that needs doing, we will ask you before we do it.
       </p>
-      <p className="mt-2 text-note text-muted">{HIGH_VOLTAGE_CAUTION}</p>
-    </aside>
+    </div>
   );
 }

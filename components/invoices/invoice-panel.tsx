@@ -39,6 +39,7 @@ export function InvoicePanel({
                 Invoice {i.number}
               </Link>
               <InvoiceStatus status={i.status} />
+              {i.status === "issued" && i.sentAt ? <span className="text-note text-muted">{i.viewedAt ? "e-mailed, opened by the customer" : "e-mailed, not opened yet"}</span> : null}
               <span className="ml-auto font-mono">{formatMoney(i.totalMinor, i.currency)}</span>
             </li>
           ))}

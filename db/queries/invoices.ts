@@ -1,4 +1,4 @@
-import { and, asc, desc, eq, inArray, sql } from "drizzle-orm";
+import { and, asc, desc, eq, inArray, isNull, sql } from "drizzle-orm";
 import { assertCan, type Member } from "@/lib/auth/can";
 import type { LinesValues } from "@/lib/estimates/schemas";
 import { ConflictError, notFound } from "@/lib/errors";
@@ -21,7 +21,7 @@ export function listInvoicesForJob(member: Member, jobId: number) {
   assertCan(member, "seeMoney", "see invoices");
   if (!jobInWorkshop(getDb(), member.workshopId, jobId)) throw notFound("That job");
   return getDb()
-    .select({ id: invoices.id, number: invoices.number, status: invoices.status, currency: invoices.currency, totalMinor: invoices.totalMinor, issuedAt: invoices.issuedAt, paidAt: invoices.paidAt })
+    .select({ id: invoices.id, number: invoices.number, status: invoices.status, currency: invoices.currency, totalMinor: invoices.totalMinor, issuedAt: invoices.issuedAt, paidAt: invoices.paidAt, sentAt: invoices.sentAt, viewedAt: invoices.viewedAt })
     .from(invoices)
     .where(and(eq(invoices.workshopId, member.workshopId), eq(invoices.jobId, jobId)))
     .orderBy(desc(invoices.number))
@@ -43,8 +43,10 @@ export function getInvoice(member: Member, invoiceId: number) {
   if (!row) throw notFound("That invoice");
   const lines = db.select().from(invoiceLines).where(eq(invoiceLines.invoiceId, invoiceId)).orderBy(asc(invoiceLines.position)).all();
   const job = jobInWorkshop(db, member.workshopId, row.invoice.jobId)!;
-  const { checkoutSessionId: _session, ...invoice } = row.invoice;
-  return { ...invoice, lines, job, workshop: row.workshop };
+  // Neither the payment session nor the pay link's hash leaves the server.
+  const { checkoutSessionId: _session, payTokenHash: _pay, ...invoice } = row.invoice;
+  const payLinkExpired = !!invoice.payTokenExpiresAt && invoice.payTokenExpiresAt.getTime() < Date.now();
+  return { ...invoice, payLinkExpired, lines, job, workshop: row.workshop };
 }
 
 function approvedEstimateLines(tx: Pick<ReturnType<typeof getDb>, "select">, workshopId: number, jobId: number) {
@@ -127,9 +129,10 @@ export function voidInvoice(member: Member, invoiceId: number) {
 export function invoiceForCheckout(member: Member, invoiceId: number) {
   assertCan(member, "seeMoney", "take payments");
   const invoice = getDb()
-    .select({ id: invoices.id, number: invoices.number, status: invoices.status, currency: invoices.currency, totalMinor: invoices.totalMinor, checkoutSessionId: invoices.checkoutSessionId, customerEmail: jobs.customerEmail, workshopId: invoices.workshopId })
+    .select({ id: invoices.id, number: invoices.number, status: invoices.status, currency: invoices.currency, totalMinor: invoices.totalMinor, checkoutSessionId: invoices.checkoutSessionId, customerEmail: jobs.customerEmail, workshopId: invoices.workshopId, workshopName: workshops.name })
     .from(invoices)
     .innerJoin(jobs, eq(jobs.id, invoices.jobId))
+    .innerJoin(workshops, eq(workshops.id, invoices.workshopId))
     .where(and(eq(invoices.id, invoiceId), eq(invoices.workshopId, member.workshopId)))
     .get();
   if (!invoice) throw notFound("That invoice");
@@ -137,11 +140,20 @@ export function invoiceForCheckout(member: Member, invoiceId: number) {
   return invoice;
 }
 
-export function recordCheckoutSession(member: Member, invoiceId: number, sessionId: string) {
+/**
+ * Stores a new session id only if the invoice still has the one the caller saw (`previous`): of two payment
+ * pages opened at once, one is kept and the other caller is told to use it. False when it lost.
+ */
+export function recordCheckoutSession(member: Member, invoiceId: number, sessionId: string, previous: string | null): boolean {
   assertCan(member, "seeMoney", "take payments");
-  getDb()
-    .update(invoices)
-    .set({ checkoutSessionId: sessionId })
-    .where(and(eq(invoices.id, invoiceId), eq(invoices.workshopId, member.workshopId), eq(invoices.status, "issued")))
-    .run();
+  return (
+    getDb()
+      .update(invoices)
+      .set({ checkoutSessionId: sessionId })
+      .where(and(eq(invoices.id, invoiceId), eq(invoices.workshopId, member.workshopId), eq(invoices.status, "issued"), sameSession(previous)))
+      .run().changes === 1
+  );
 }
+
+/** The compare half of recordCheckoutSession's compare-and-set; the pay link's recorder uses it too. */
+export const sameSession = (previous: string | null) => (previous === null ? isNull(invoices.checkoutSessionId) : eq(invoices.checkoutSessionId, previous));

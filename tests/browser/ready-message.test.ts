@@ -16,7 +16,7 @@ afterAll(async () => {
   await browser?.close();
 });
 
-test("the ready-to-collect panel appears only at Ready to collect and sends the bench sheet", async () => {
+test("the collection message panel appears only at the counter and sends the bench sheet", async () => {
   const customer = `customer-${Date.now()}@example.test`;
   const created = await team.technician.post("/api/jobs", { title: "Console radio, 1950s", equipmentKind: "console-radio", customerName: "Wren Halloway", customerEmail: customer });
   expect(created.status).toBe(201);
@@ -34,7 +34,7 @@ test("the ready-to-collect panel appears only at Ready to collect and sends the 
   await page.getByRole("heading", { name: "Where it is" }).waitFor();
   expect(await page.getByRole("button", { name: "Send to customer" }).count()).toBe(0);
 
-  expect((await team.technician.post(`/api/jobs/${job.id}/status`, { status: "ready" })).status).toBe(200);
+  expect((await team.technician.post(`/api/jobs/${job.id}/status`, { status: "at-the-counter" })).status).toBe(200);
   await page.reload();
   await page.getByRole("button", { name: "Send to customer" }).click();
   await expect.poll(() => page.getByText(`Sent to ${customer} with the bench sheet attached.`).count()).toBe(1);

@@ -118,7 +118,9 @@ describe("the customer's approval link", () => {
     expect(page.status).toBe(200);
     expect(html).toContain("Lamplight Radio Workshop");
     expect(html).toContain("£169.92");
-    expect(html).toContain("Lethal voltage");
+    // Written to the customer: a plain reminder about their set, not the bench's safety procedure.
+    expect(html).toContain("Please keep the back on");
+    expect(html).not.toMatch(/current-limited|Discharge every filter capacitor/);
 
     const first = await answer(token, "approve");
     expect(first.status).toBe(200);

@@ -166,7 +166,12 @@ describe("the payment webhook", () => {
     expect(await page.text()).toContain("£111.00");
     const pay = await fetch(`${inject("paymentsUrl")}/checkout/${sessionId}/pay`, { method: "POST", redirect: "manual" });
     expect(pay.status).toBe(303);
-    expect(pay.headers.get("location")).toMatch(new RegExp(`/invoices/${invoice.id}\\?paid=1$`));
+    // The payment service sends the payer to /pay/done; the owner who took the payment goes on to the invoice.
+    const back = new URL(pay.headers.get("location")!);
+    expect(back.pathname + back.search).toBe(`/pay/done?session=${sessionId}`);
+    const landing = await A.owner.get(back.pathname + back.search);
+    expect(landing.status).toBe(307);
+    expect(landing.headers.get("location")).toMatch(new RegExp(`/invoices/${invoice.id}\\?paid=1$`));
     expect((await invoiceStatus(A.owner, invoice.id)).status).toBe("paid");
     expect((await A.owner.post(`/api/invoices/${invoice.id}/checkout`, {})).status).toBe(409);
     // The SDK agrees the session completed.

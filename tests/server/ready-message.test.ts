@@ -25,10 +25,10 @@ describe("the customer's ready-to-collect e-mail", () => {
 
     const early = await tech.client.post(`/api/jobs/${id}/ready-message`, { subject: "Ready", text: "Ready" });
     expect(early.status).toBe(409);
-    expect((await early.json()).error.message).toMatch(/Ready to collect/);
+    expect((await early.json()).error.message).toMatch(/At the counter/);
     expect(mailTo(customer)).toEqual([]);
 
-    expect((await setStatus(tech.client, id, "ready")).status).toBe(200);
+    expect((await setStatus(tech.client, id, "at-the-counter")).status).toBe(200);
     const { draft } = await (await tech.client.get(`/api/jobs/${id}/ready-message`)).json();
     expect(draft).toMatchObject({ canSend: true, to: customer });
     expect(draft.text).toBe(`Dear Morwenna Kitto, your Two-band portable, early 1960s is ready at ${shop.workshopName}. Ring 01632 960 777.`);
@@ -43,14 +43,14 @@ describe("the customer's ready-to-collect e-mail", () => {
     expect(mail.attachments[0].content.subarray(0, 5).toString()).toBe("%PDF-");
 
     const log = await (await tech.client.get(`/api/jobs/${id}/log`)).json();
-    expect(JSON.stringify(log)).toContain(`sent to ${customer}`);
+    expect(JSON.stringify(log)).toContain(`Collection message e-mailed to ${customer}`);
   });
 
   test("apprentices cannot send; a job without a customer e-mail cannot be sent; bad input names fields", async () => {
     const shop = await ownWorkshop("Ready rules");
     const apprentice = await addMember(shop.client, "apprentice");
     const id = await readyJob(shop.client, null);
-    expect((await setStatus(shop.client, id, "ready")).status).toBe(200);
+    expect((await setStatus(shop.client, id, "at-the-counter")).status).toBe(200);
     expect((await apprentice.client.post(`/api/jobs/${id}/ready-message`, { subject: "Hi", text: "Hi" })).status).toBe(403);
     const noEmail = await shop.client.post(`/api/jobs/${id}/ready-message`, { subject: "Hi", text: "Hi" });
     expect(noEmail.status).toBe(409);

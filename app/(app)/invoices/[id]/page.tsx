@@ -3,6 +3,8 @@ import Link from "next/link";
 import { notFound, redirect } from "next/navigation";
 import { LinesTable } from "@/components/estimates/lines-table";
 import { InvoiceActions } from "@/components/invoices/invoice-actions";
+import { InvoiceDelivery } from "@/components/invoices/invoice-delivery";
+import { SendInvoice } from "@/components/invoices/send-invoice";
 import { InvoiceStatus } from "@/components/invoices/invoice-status";
 import { Card, EmptyState } from "@/components/ui/card";
 import { getInvoice } from "@/db/queries/invoices";
@@ -64,6 +66,17 @@ export default async function InvoicePage({ params, searchParams }: { params: Pr
         <LinesTable {...invoice} />
       </Card>
       <InvoiceActions invoiceId={invoice.id} status={invoice.status} />
+      {invoice.status !== "void" ? (
+        <Card>
+          <h2 className="mb-4 text-lead font-bold">With the customer</h2>
+          <InvoiceDelivery sentTo={invoice.sentTo} sentAt={invoice.sentAt} viewedAt={invoice.viewedAt} paidAt={invoice.paidAt} linkExpired={invoice.payLinkExpired} />
+          {invoice.status === "issued" ? (
+            <div className="mt-6">
+              <SendInvoice invoiceId={invoice.id} to={invoice.job.customerEmail} again={!!invoice.sentAt} />
+            </div>
+          ) : null}
+        </Card>
+      ) : null}
     </div>
   );
 }

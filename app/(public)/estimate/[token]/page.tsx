@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { AnswerButtons } from "@/components/estimates/answer-buttons";
-import { LinesTable } from "@/components/estimates/lines-table";
+import { BillLines } from "@/components/customer/bill-lines";
 import { RepairDisclaimer } from "@/components/estimates/repair-disclaimer";
 import { Card } from "@/components/ui/card";
 import { EQUIPMENT_KIND_LABELS } from "@/lib/vocabulary";
@@ -44,7 +44,7 @@ export default async function EstimateAnswerPage({ params }: { params: Promise<{
         </p>
       </div>
       <Card>
-        <LinesTable {...estimate} />
+        <BillLines {...estimate} />
       </Card>
       <RepairDisclaimer />
       <AnswerButtons token={token} />

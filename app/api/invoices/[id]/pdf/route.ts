@@ -1,6 +1,4 @@
-import { renderToBuffer } from "@react-pdf/renderer";
-import { createElement } from "react";
-import { InvoicePdf } from "@/components/invoices/invoice-pdf";
+import { renderInvoicePdf } from "@/components/invoices/render-invoice-pdf";
 import { getInvoice } from "@/db/queries/invoices";
 import { route } from "@/server/http/route";
 
@@ -8,7 +6,7 @@ export const runtime = "nodejs";
 
 export const GET = route({ role: "seeMoney", ids: { id: "That invoice" } }, async ({ member, ids }) => {
   const invoice = getInvoice(member, ids.id);
-  const pdf = await renderToBuffer(createElement(InvoicePdf, { invoice }) as Parameters<typeof renderToBuffer>[0]);
+  const pdf = await renderInvoicePdf(invoice);
   return new Response(new Uint8Array(pdf), {
     headers: {
       "content-type": "application/pdf",
