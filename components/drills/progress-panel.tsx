@@ -23,7 +23,7 @@ export function ProgressPanel({ progress, own }: { progress: DrillProgress; own:
           </div>
         ))}
       </dl>
-      <ProgressChartSlot points={timeline} />
+      <ProgressChartSlot points={timeline} own={own} />
       {kinds.length ? (
         <ul className="divide-y divide-rule rounded-card border border-rule bg-panel" aria-label="Progress by kind of drill">
           {kinds.map((k) => (

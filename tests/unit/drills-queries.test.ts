@@ -63,7 +63,7 @@ describe("drills queries", () => {
     expect(progress.totals.attempts).toBe(answered);
     expect(progress.kinds).toHaveLength(DRILL_KINDS.length);
     for (const k of progress.kinds) expect([k.attempts, k.correct, k.misses]).toEqual([100, 100, 0]);
-  }, 180_000);
+  }, 300_000);
 
   test("a wrong number and a wrong unit are judged wrong and told apart; a second answer is a conflict", () => {
     const numeric = DRILL_KINDS.filter((k) => k.asked.unit !== "text" && k.asked.unit !== "" && k.asked.unit !== "%");
