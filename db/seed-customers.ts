@@ -1,7 +1,7 @@
 import { and, eq, isNull, sql } from "drizzle-orm";
 import { readPartValues } from "../lib/jobs/part-values";
 import type { Db, Tx } from "./client";
-import { customers, jobs, logEntries, memberships, parts, users } from "./schema";
+import { customers, jobs, logEntries, memberships, parts, users, workshops } from "./schema";
 
 /**
  * The demo's customers and ordering: every demo job linked to a customer record (some with several jobs),
@@ -42,7 +42,17 @@ function linkCustomers(tx: Tx) {
   }
 }
 
-export function seedCustomersAndOrders(tx: Tx, workshopId: number, now = Date.now()): boolean {
+/**
+ * A fresh demo numbers its jobs in the order they came in (as the migration numbers older ones), since the
+ * seed inserts them in another order. Never on a database people have used: numbers once seen stay.
+ */
+function numberByArrival(tx: Tx, workshopId: number) {
+  tx.update(jobs).set({ number: sql`-${jobs.id}` }).where(eq(jobs.workshopId, workshopId)).run();
+  tx.run(sql`update ${jobs} set number = ranked.n from (select id, row_number() over (order by created_at, id) as n from ${jobs} where workshop_id = ${workshopId}) as ranked where ranked.id = ${jobs.id}`);
+  tx.update(workshops).set({ lastJobNumber: sql`(select count(*) from ${jobs} where ${jobs.workshopId} = ${workshopId})` }).where(eq(workshops.id, workshopId)).run();
+}
+
+export function seedCustomersAndOrders(tx: Tx, workshopId: number, now = Date.now(), { fresh = false } = {}): boolean {
   const have = tx.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.workshopId, workshopId), eq(jobs.title, DEMO_ORDERING_MARKER))).get();
   if (have) return false;
   const at = (hoursAgo: number) => new Date(now - hoursAgo * HOUR);
@@ -110,6 +120,7 @@ export function seedCustomersAndOrders(tx: Tx, workshopId: number, now = Date.no
   ]);
   add(consoleRadio, [{ designator: "W1", kind: "other", originalValue: "Two-core mains cord, perished", replacementValue: "Two-core cloth-covered mains cord, 2 m", quantity: 1, unitCostMinor: 650 }]);
   add(tv, [{ designator: "C31", kind: "ceramic", originalValue: "500 mmf", originalRating: "20 kV", replacementValue: "470 pF", replacementRating: "20 kV", quantity: 1, supplier: ANODE, supplierPartNumber: "AD-C470P-20K" }]);
+  if (fresh) numberByArrival(tx, workshopId);
   add(tuner, [{ designator: "C3", kind: "electrolytic", originalValue: "20-20 mfd 350 V", replacementValue: "22 µF", replacementRating: "450 V", quantity: 2, supplier: "valve cellar supplies", supplierPartNumber: "VCS-E22-450", unitCostMinor: 210 }]);
   return true;
 }

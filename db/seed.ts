@@ -197,7 +197,7 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
       .get().id;
     tx.insert(powerUpSteps).values({ powerUpId: session, supplyVoltage: 120, currentDrawn: 0.21, note: entry.text, createdAt: entry.createdAt }).run();
     seedTelevision(tx, { workshopId: w, tech, apprentice }, now);
-    seedCustomersAndOrders(tx, w, now);
+    seedCustomersAndOrders(tx, w, now, { fresh: true });
   });
   return { created: true };
 }

@@ -33,7 +33,7 @@ export function CustomerForm({ customer, onDone }: { customer?: Existing; onDone
   });
   const id = (n: string) => `customer-${n}`;
   return (
-    <form onSubmit={onSubmit} noValidate aria-label={customer ? "Edit the customer" : "Add a customer"} className="grid gap-x-4 gap-y-1 sm:grid-cols-2">
+    <form onSubmit={onSubmit} noValidate aria-label={customer ? "Edit the customer" : "Add a customer"} className="grid grid-cols-1 gap-x-4 gap-y-1 sm:grid-cols-2">
       <Field id={id("name")} label="Name" autoComplete="off" className="sm:col-span-2" error={errors.name?.message} {...register("name")} />
       <Field id={id("email")} label="E-mail" type="email" inputMode="email" autoComplete="off" error={errors.email?.message} {...register("email")} />
       <Field id={id("phone")} label="Phone" type="tel" inputMode="tel" autoComplete="off" error={errors.phone?.message} {...register("phone")} />

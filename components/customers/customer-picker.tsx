@@ -63,7 +63,7 @@ export function CustomerPicker({ picked, onPick, newCustomer }: { picked: Picked
         </ul>
       ) : null}
       <p id="customer-search-note" className="text-note text-muted">Or a new customer (leave blank for the workshop&rsquo;s own set):</p>
-      <div className="grid gap-x-4 gap-y-1 sm:grid-cols-2">{newCustomer}</div>
+      <div className="grid grid-cols-1 gap-x-4 gap-y-1 sm:grid-cols-2">{newCustomer}</div>
     </div>
   );
 }

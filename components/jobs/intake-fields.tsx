@@ -16,7 +16,7 @@ export function AccessoriesField({ value, onChange, error }: { value: string[]; 
   const merge = (commons: string[], otherText: string) => [...commons, ...otherText.split(",").map((x) => x.trim()).filter(Boolean)];
   const toggle = (item: string, on: boolean) => onChange(merge(on ? [...ticked, item] : ticked.filter((x) => x.toLowerCase() !== item.toLowerCase()), other));
   return (
-    <fieldset className="flex flex-col gap-2" aria-describedby={error ? "job-accessories-error" : undefined}>
+    <fieldset className="flex min-w-0 flex-col gap-2" aria-describedby={error ? "job-accessories-error" : undefined}>
       <legend className="mb-1 font-bold">Came in with</legend>
       <div className="flex flex-wrap gap-x-4">
         {COMMON_ACCESSORIES.map((item) => (

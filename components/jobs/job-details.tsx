@@ -67,7 +67,7 @@ export function JobDetails({ job, canEdit, canDelete, intakePhotos = [] }: { job
               <ul className="mt-1 flex flex-wrap gap-2" data-testid="intake-photos">
                 {intakePhotos.map((f) => (
                   <li key={f.id}>
-                    <a href={`/api/jobs/${job.id}/files/${f.id}`} target="_blank" rel="noopener" className="block size-20 overflow-hidden rounded-chip border border-rule bg-sunk">
+                    <a href={`/api/jobs/${job.id}/files/${f.id}`} target="_blank" rel="noopener" className="relative block size-20 overflow-hidden rounded-chip border border-rule bg-sunk">
                       {/* eslint-disable-next-line @next/next/no-img-element -- served by our authorised route, not next/image */}
                       {f.hasThumbnail ? <img src={`/api/jobs/${job.id}/files/${f.id}?thumb=1`} alt={f.name} className="size-full object-cover" /> : <span className="sr-only">{f.name}</span>}
                     </a>

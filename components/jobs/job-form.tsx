@@ -74,7 +74,7 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
   const id = (n: string) => `job-${n}`;
   const heading = "sm:col-span-2 mt-3 border-t border-rule pt-3 text-lead font-bold";
   return (
-    <form onSubmit={onSubmit} noValidate className="grid gap-x-4 gap-y-1 sm:grid-cols-2" aria-describedby="job-form-error">
+    <form onSubmit={onSubmit} noValidate className="grid grid-cols-1 gap-x-4 gap-y-1 sm:grid-cols-2" aria-describedby="job-form-error">
       <Field id={id("title")} label="Title" placeholder="Five-tube table radio, 1950s" className="sm:col-span-2" error={errors.title?.message} {...register("title")} />
       <SelectField id={id("kind")} label="Kind of set" options={EQUIPMENT_KINDS.map((k) => ({ value: k, label: EQUIPMENT_KIND_LABELS[k] }))} error={errors.equipmentKind?.message} {...register("equipmentKind")} />
       <Field id={id("year")} label="Year" inputMode="numeric" placeholder="1952" error={errors.year?.message} {...register("year")} />
@@ -87,9 +87,9 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
           onPick={setPicked}
           newCustomer={
             <>
-              <Field id={id("customer-name")} label="Name" autoComplete="off" error={errors.customerName?.message} {...register("customerName")} />
-              <Field id={id("customer-email")} label="E-mail" type="email" inputMode="email" autoComplete="off" error={errors.customerEmail?.message} {...register("customerEmail")} />
-              <Field id={id("customer-phone")} label="Phone" type="tel" inputMode="tel" autoComplete="off" error={errors.customerPhone?.message} {...register("customerPhone")} />
+              <Field id={id("customer-name")} label="Customer name" autoComplete="off" error={errors.customerName?.message} {...register("customerName")} />
+              <Field id={id("customer-email")} label="Customer e-mail" type="email" inputMode="email" autoComplete="off" error={errors.customerEmail?.message} {...register("customerEmail")} />
+              <Field id={id("customer-phone")} label="Customer phone" type="tel" inputMode="tel" autoComplete="off" error={errors.customerPhone?.message} {...register("customerPhone")} />
             </>
           }
         />
@@ -110,7 +110,7 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
             multiple
             onChange={(e) => setPhotos([...(e.target.files ?? [])])}
             aria-describedby="job-photos-hint"
-            className="min-h-11 rounded-chip border border-edge bg-panel px-3 py-2 file:mr-3 file:rounded-chip file:border-0 file:bg-sunk file:px-3 file:py-1 file:font-bold"
+            className="min-h-11 w-full min-w-0 rounded-chip border border-edge bg-panel px-3 py-2 file:mr-3 file:rounded-chip file:border-0 file:bg-sunk file:px-3 file:py-1 file:font-bold"
           />
           <span id="job-photos-hint" className="text-note text-muted">The set as it came in: cabinet, back, chassis. JPEG, PNG or WebP, up to 20 MB each; they go to the job&rsquo;s Files.</span>
         </label>

@@ -121,7 +121,7 @@ export function JobList({ firstPage }: { firstPage?: JobPage }) {
                     const sorted = h.column.getIsSorted();
                     return (
                       <th key={h.id} scope="col" aria-sort={sorted ? (sorted === "asc" ? "ascending" : "descending") : "none"} className="px-4 py-2 text-note font-bold uppercase tracking-wide text-muted">
-                        <button type="button" className="inline-flex min-h-9 items-center gap-1 hover:text-ink" onClick={h.column.getToggleSortingHandler()}>
+                        <button type="button" className="inline-flex min-h-11 items-center gap-1 hover:text-ink" onClick={h.column.getToggleSortingHandler()}>
                           {flexRender(h.column.columnDef.header, h.getContext())}
                           <span aria-hidden="true" className="font-mono">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
                         </button>

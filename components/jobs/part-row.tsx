@@ -122,7 +122,7 @@ export function PartRow({ jobId, part, canEdit, caution, readingNote, currency =
       </td>
       <td className={cell}>
         {canEdit ? (
-          <select aria-label={`State of ${part.designator}`} className={`${input} font-bold ${STATE_TONE[part.state]}`} value={part.state} onChange={(e) => save({ state: e.target.value as PartState })}>
+          <select aria-label={`State of ${part.designator}`} className={`${input} min-w-32 font-bold ${STATE_TONE[part.state]}`} value={part.state} onChange={(e) => save({ state: e.target.value as PartState })}>
             {PART_STATES.map((s) => <option key={s} value={s}>{PART_STATE_LABELS[s]}</option>)}
           </select>
         ) : (

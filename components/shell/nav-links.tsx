@@ -14,7 +14,7 @@ const LINKS = [
 export function NavLinks({ signedIn }: { signedIn: boolean }) {
   const pathname = usePathname();
   return (
-    <nav aria-label="Main" className="flex items-center gap-1">
+    <nav aria-label="Main" className="flex flex-wrap items-center gap-1">
       {LINKS.filter((l) => signedIn || !l.members).map((l) => {
         const active = pathname === l.href || pathname.startsWith(`${l.href}/`);
         return (

@@ -32,8 +32,9 @@ function likePattern(text: string): string {
 
 /** Every customer with how many jobs they have and when one last came in; most recent first. */
 export function listCustomers(member: Member, q?: string) {
-  const jobCount = sql<number>`(select count(*) from ${jobs} where ${jobs.customerId} = ${customers.id})`;
-  const lastJobAt = sql<number | null>`(select max(${jobs.createdAt}) from ${jobs} where ${jobs.customerId} = ${customers.id})`;
+  // Spelt out: in a one-table select Drizzle leaves columns unqualified, and inside the subquery "id" would be the job's.
+  const jobCount = sql<number>`(select count(*) from "jobs" as "j" where "j"."customer_id" = "customers"."id")`;
+  const lastJobAt = sql<number | null>`(select max("j"."created_at") from "jobs" as "j" where "j"."customer_id" = "customers"."id")`;
   const where = [eq(customers.workshopId, member.workshopId)];
   if (q) {
     const p = likePattern(q);

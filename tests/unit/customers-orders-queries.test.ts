@@ -69,6 +69,12 @@ describe("customers", () => {
     expect(list.some((c) => c.jobCount >= 2)).toBe(true);
     const edith = list.find((c) => c.email === "edith.marlow@example.com")!;
     expect(customersQ.getCustomer(tech, edith.id).jobs.length).toBeGreaterThanOrEqual(2);
+    // Each count is that customer's own, and the latest arrival is one of their jobs.
+    for (const c of list) {
+      const theirs = customersQ.getCustomer(tech, c.id).jobs;
+      expect(c.jobCount).toBe(theirs.length);
+      expect(c.lastJobAt?.getTime() ?? null).toBe(theirs.length ? Math.max(...theirs.map((j) => j.createdAt.getTime())) : null);
+    }
     expect(customersQ.listCustomers(other).some((c) => c.email === "edith.marlow@example.com")).toBe(false);
   });
 
