@@ -1,18 +1,22 @@
 /** Browser-side JSON calls to our route handlers, returning docs/PRODUCT.md's error shape as data. */
+import { OFFLINE_MESSAGE, readFailure, type Failure } from "./submit-errors";
 
-export type ApiResult<T> = { ok: true; data: T } | { ok: false; status: number; message: string; fields: Record<string, string> };
+export type ApiResult<T> = { ok: true; data: T } | Failure;
 
+/** Sends JSON, or a FormData as multipart (uploads), and reads the answer without throwing. */
 export async function sendJson<T>(url: string, body: unknown, method = "POST"): Promise<ApiResult<T>> {
   let res: Response;
   try {
-    res = await fetch(url, { method, headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+    res =
+      body instanceof FormData
+        ? await fetch(url, { method, body })
+        : await fetch(url, { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
   } catch {
-    return { ok: false, status: 0, message: "Could not reach Glowbench. Check the connection and try again.", fields: {} };
+    return { ok: false, status: 0, message: OFFLINE_MESSAGE, fields: {}, details: {} };
   }
   const json = await res.json().catch(() => null);
   if (res.ok) return { ok: true, data: json as T };
-  const error = json?.error ?? {};
-  return { ok: false, status: res.status, message: error.message ?? `Request failed (${res.status}).`, fields: error.fields ?? {} };
+  return readFailure(res.status, json);
 }
 
 export async function getJson<T>(url: string): Promise<T> {
