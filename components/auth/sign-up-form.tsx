@@ -2,43 +2,27 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { useForm, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { NEW_PASSWORD_HINT, signUpSchema, type SignUpInput } from "@/lib/auth/schemas";
 import { PasswordStrength } from "./password-strength";
-import { sendJson } from "@/lib/client/fetch-json";
+import { FormError } from "@/components/ui/form-error";
+import { useSubmit } from "@/components/ui/use-submit";
 
 const NAMES = ["workshopName", "name", "email", "password"] as const;
 
 export function SignUpForm() {
   const router = useRouter();
-  const [formError, setFormError] = useState<string | null>(null);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    control,
-    formState: { errors, isSubmitting },
-  } = useForm<SignUpInput>({
+  const form = useForm<SignUpInput>({
     resolver: zodResolver(signUpSchema),
     defaultValues: { workshopName: "", name: "", email: "", password: "" },
   });
+  const { register, control, formState: { errors } } = form;
 
   const [password, email, name, workshopName] = useWatch({ control, name: ["password", "email", "name", "workshopName"] });
 
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError(null);
-    const res = await sendJson("/api/auth/sign-up", values);
-    if (!res.ok) {
-      for (const n of NAMES) if (res.fields[n]) setError(n, { message: res.fields[n] });
-      setFormError(res.message);
-      return;
-    }
-    router.push("/jobs");
-    router.refresh();
-  });
+  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit(form, { url: "/api/auth/sign-up", fields: NAMES, onDone: () => router.push("/jobs") });
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
@@ -55,9 +39,7 @@ export function SignUpForm() {
         {...register("password")}
       />
       <PasswordStrength id="password-strength" password={password} context={[email, name, workshopName]} />
-      <p role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
-        {formError ?? ""}
-      </p>
+      <FormError message={formError} />
       <Button type="submit" disabled={isSubmitting}>
         {isSubmitting ? "Opening your workshop…" : "Open my workshop"}
       </Button>
