@@ -26,7 +26,8 @@ export default function ProgressChart({ points }: { points: readonly ProgressPoi
           <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
           <XAxis dataKey="label" tick={tick} stroke={C.muted} />
           <YAxis yAxisId="n" allowDecimals={false} tick={tick} stroke={C.muted} width={32} />
-          <YAxis yAxisId="m" orientation="right" domain={[0, 100]} tickFormatter={(v) => `${v} %`} tick={tick} stroke={C.muted} width={48} />
+          {/* A no-break space keeps "100 %" on one line in the axis. */}
+          <YAxis yAxisId="m" orientation="right" domain={[0, 100]} tickFormatter={(v) => `${v}\u00a0%`} tick={tick} stroke={C.muted} width={56} />
           <Tooltip contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }} />
           <Legend wrapperStyle={{ fontSize: 13 }} />
           <Bar yAxisId="n" dataKey="correct" stackId="a" name="Correct" fill={C.glow} isAnimationActive={false} />
