@@ -25,18 +25,14 @@ export function ChangePasswordForm({ context }: { context: string[] }) {
     url: "/api/auth/password",
     fields: NAMES,
     refresh: false,
+    onStart: () => setDone(false),
     onDone: () => {
       reset();
       setDone(true);
     },
   });
   return (
-    <form
-      onSubmit={(e) => {
-        setDone(false);
-        return submit(e);
-      }}
-      noValidate className="flex max-w-md flex-col gap-2">
+    <form onSubmit={submit} noValidate className="flex max-w-md flex-col gap-2">
       <Field id="currentPassword" label="Current password" type="password" autoComplete="current-password" error={errors.currentPassword?.message} {...register("currentPassword")} />
       <Field id="newPassword" label="New password" type="password" autoComplete="new-password" hint={NEW_PASSWORD_HINT} error={errors.newPassword?.message} {...register("newPassword")} />
       <PasswordStrength id="new-password-strength" password={newPassword} context={context} />

@@ -36,20 +36,26 @@ function useAfterSuccess() {
  * error (render it with <FormError>), then refresh and/or invalidate. `fields` limits which names
  * the form holds; `pending` follows react-hook-form's isSubmitting.
  */
-export function useSubmit<F extends FieldValues, D = unknown>(
-  form: UseFormReturn<F>,
-  opts: After<D> & {
-    url: string | ((values: F) => string);
+export function useSubmit<F extends FieldValues, D = unknown, T extends FieldValues = F>(
+  // eslint-disable-next-line @typescript-eslint/no-explicit-any -- any form context
+  form: UseFormReturn<F, any, T>,
+  opts: Omit<After<D>, "onDone"> & {
+    url: string | ((values: T) => string);
     method?: Method;
-    body?: (values: F) => unknown;
+    /** What to send; by default the values the resolver passed (T). */
+    body?: (values: T) => unknown;
+    /** The names the form holds; a message for any other name stays out of the form. */
     fields?: readonly string[];
-    onDone?: (data: D, values: F) => void | Promise<void>;
+    /** Runs once the values have passed the check, before sending (clear a "saved" note). */
+    onStart?: () => void;
+    onDone?: (data: D, values: T) => void | Promise<void>;
   },
 ) {
   const after = useAfterSuccess();
   const [formError, setFormError] = useState<string | null>(null);
   const submit = form.handleSubmit(async (values) => {
     setFormError(null);
+    opts.onStart?.();
     const url = typeof opts.url === "function" ? opts.url(values) : opts.url;
     const res = await sendJson<D>(url, opts.body ? opts.body(values) : values, opts.method ?? "POST");
     if (!res.ok) {
@@ -67,16 +73,17 @@ export function useSubmit<F extends FieldValues, D = unknown>(
 /**
  * The same path for a button without a form (delete, a status change, send): `run(body?)` sends,
  * shows the server's message as `error` and returns the answer, so the caller may branch on it.
+ * A list of rows passes each row's `url` (and `method`) to `run` instead.
  */
-export function useAction<D = unknown>(opts: After<D> & { url: string; method?: Method }) {
+export function useAction<D = unknown>(opts: After<D> & { url?: string; method?: Method }) {
   const after = useAfterSuccess();
   const [error, setError] = useState<string | null>(null);
   const [pending, setPending] = useState(false);
-  async function run(body?: unknown, url = opts.url): Promise<ApiResult<D>> {
+  async function run(body?: unknown, to: { url?: string; method?: Method } = {}): Promise<ApiResult<D>> {
     setError(null);
     setPending(true);
     try {
-      const res = await sendJson<D>(url, body, opts.method ?? "POST");
+      const res = await sendJson<D>(to.url ?? opts.url ?? "", body, to.method ?? opts.method ?? "POST");
       if (!res.ok) {
         setError(res.message);
         opts.onFail?.(res);

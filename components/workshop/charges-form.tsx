@@ -1,44 +1,33 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useSubmit } from "@/components/ui/use-submit";
 import { CHARGE_CURRENCIES, chargesSchema, type ChargesForm as ChargesFormValues, type ChargesInput } from "@/lib/workshop/charges-schema";
 
 const NAMES = ["currency", "hourlyRate", "taxRate"] as const;
 
 export function ChargesForm({ initial, currencyLocked }: { initial: ChargesFormValues; currencyLocked: boolean }) {
-  const router = useRouter();
-  const [status, setStatus] = useState<{ ok: boolean; message: string } | null>(null);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    reset,
-    getValues,
-    watch,
-    formState: { errors, isSubmitting, isDirty },
-  } = useForm<ChargesFormValues, unknown, ChargesInput>({ resolver: zodResolver(chargesSchema), defaultValues: initial });
+  const [saved, setSaved] = useState<string | null>(null);
+  const form = useForm<ChargesFormValues, unknown, ChargesInput>({ resolver: zodResolver(chargesSchema), defaultValues: initial });
+  const { register, reset, getValues, watch, formState: { errors, isDirty } } = form;
   const currency = watch("currency");
 
   // The server parses the same schema, so it gets the typed text rather than the minor units.
-  const onSubmit = handleSubmit(async () => {
-    const values = getValues();
-    setStatus(null);
-    const res = await sendJson("/api/workshop/charges", values, "PATCH");
-    if (!res.ok) {
-      for (const n of NAMES) if (res.fields[n]) setError(n, { message: res.fields[n] });
-      setStatus({ ok: false, message: res.message });
-      return;
-    }
-    reset(values);
-    setStatus({ ok: true, message: "Charges saved." });
-    router.refresh();
+  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit(form, {
+    url: "/api/workshop/charges",
+    method: "PATCH",
+    body: () => getValues(),
+    fields: NAMES,
+    onStart: () => setSaved(null),
+    onDone: () => {
+      reset(getValues());
+      setSaved("Charges saved.");
+    },
   });
 
   return (
@@ -62,8 +51,8 @@ export function ChargesForm({ initial, currencyLocked }: { initial: ChargesFormV
         <Button type="submit" disabled={isSubmitting || !isDirty}>
           {isSubmitting ? "Saving…" : "Save charges"}
         </Button>
-        <p role="status" aria-live="polite" className={`text-note font-bold ${status?.ok ? "text-ok" : "text-flag"}`}>
-          {status?.message ?? ""}
+        <p role="status" aria-live="polite" className={`text-note font-bold ${formError ? "text-flag" : "text-ok"}`}>
+          {formError ?? saved ?? ""}
         </p>
       </div>
     </form>

@@ -4,14 +4,15 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import type { InvitationRow } from "@/db/queries/invitations";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 import { ROLE_LABELS } from "./role-labels";
 
 const day = (date: Date) => date.toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
 
 export function InvitationList({ invitations }: { invitations: InvitationRow[] }) {
   const router = useRouter();
-  const [error, setError] = useState<string | null>(null);
+  // A refused withdrawal still reads the list again: the invitation may have gone meanwhile.
+  const { run, error } = useAction({ method: "DELETE", onFail: () => router.refresh() });
   const [busy, setBusy] = useState<number | null>(null);
   if (invitations.length === 0) {
     return <p className="text-muted">No invitations waiting. Invite a technician or apprentice above; they get an e-mail with a link to join.</p>;
@@ -35,11 +36,8 @@ export function InvitationList({ invitations }: { invitations: InvitationRow[] }
               aria-label={`Withdraw the invitation to ${i.email}`}
               onClick={async () => {
                 setBusy(i.id);
-                setError(null);
-                const res = await sendJson(`/api/workshop/invitations/${i.id}`, undefined, "DELETE");
+                await run(undefined, { url: `/api/workshop/invitations/${i.id}` });
                 setBusy(null);
-                if (!res.ok) setError(res.message);
-                router.refresh();
               }}
             >
               Withdraw

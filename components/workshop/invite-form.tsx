@@ -1,39 +1,27 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useSubmit } from "@/components/ui/use-submit";
 import { invitationSchema, type InvitationForm } from "@/lib/workshop/schemas";
 import { ROLE_OPTIONS } from "./role-labels";
 
 export function InviteForm() {
-  const router = useRouter();
-  const [status, setStatus] = useState<{ ok: boolean; message: string } | null>(null);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    reset,
-    formState: { errors, isSubmitting },
-  } = useForm<InvitationForm>({ resolver: zodResolver(invitationSchema), defaultValues: { email: "", role: "technician" } });
-
-  const onSubmit = handleSubmit(async (values) => {
-    setStatus(null);
-    const res = await sendJson<{ invitation: { email: string } }>("/api/workshop/invitations", values);
-    if (!res.ok) {
-      if (res.fields.email) setError("email", { message: res.fields.email });
-      if (res.fields.role) setError("role", { message: res.fields.role });
-      setStatus({ ok: false, message: res.message });
-      return;
-    }
-    setStatus({ ok: true, message: `Invitation sent to ${res.data.invitation.email}.` });
-    reset({ email: "", role: values.role });
-    router.refresh();
+  const [sent, setSent] = useState<string | null>(null);
+  const form = useForm<InvitationForm>({ resolver: zodResolver(invitationSchema), defaultValues: { email: "", role: "technician" } });
+  const { register, reset, formState: { errors } } = form;
+  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit<InvitationForm, { invitation: { email: string } }>(form, {
+    url: "/api/workshop/invitations",
+    fields: ["email", "role"],
+    onStart: () => setSent(null),
+    onDone: (data, values) => {
+      setSent(`Invitation sent to ${data.invitation.email}.`);
+      reset({ email: "", role: values.role });
+    },
   });
 
   return (
@@ -43,8 +31,8 @@ export function InviteForm() {
       <Button type="submit" disabled={isSubmitting} className="sm:mt-7">
         {isSubmitting ? "Sending…" : "Send invitation"}
       </Button>
-      <p role="status" aria-live="polite" className={`min-h-6 text-note font-bold sm:col-span-3 ${status?.ok ? "text-ok" : "text-flag"}`}>
-        {status?.message ?? ""}
+      <p role="status" aria-live="polite" className={`min-h-6 text-note font-bold sm:col-span-3 ${formError ? "text-flag" : "text-ok"}`}>
+        {formError ?? sent ?? ""}
       </p>
     </form>
   );

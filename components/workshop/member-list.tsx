@@ -5,7 +5,7 @@ import { useState } from "react";
 import { RoleBadge } from "@/components/ui/card";
 import { Button } from "@/components/ui/button";
 import type { MemberRow } from "@/db/queries/members";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 import { ROLE_OPTIONS } from "./role-labels";
 
 /** The workshop's people. Owners change roles and remove members here; everyone else reads. */
@@ -13,16 +13,17 @@ export function MemberList({ members, manage, selfUserId }: { members: MemberRow
   const router = useRouter();
   const [busy, setBusy] = useState<number | null>(null);
   const [confirming, setConfirming] = useState<number | null>(null);
-  const [error, setError] = useState<{ id: number; message: string } | null>(null);
+  const [errorId, setErrorId] = useState<number | null>(null);
+  // A refused change still reads the list again, so the select shows the role that stands.
+  const { run, error: message } = useAction({ onFail: () => router.refresh() });
+  const error = message && errorId !== null ? { id: errorId, message } : null;
 
-  async function act(id: number, url: string, body: unknown, method: string) {
+  async function act(id: number, url: string, body: unknown, method: "PATCH" | "DELETE") {
     setBusy(id);
-    setError(null);
-    const res = await sendJson(url, body, method);
+    setErrorId(id);
+    await run(body, { url, method });
     setBusy(null);
     setConfirming(null);
-    if (!res.ok) setError({ id, message: res.message });
-    router.refresh();
   }
 
   return (

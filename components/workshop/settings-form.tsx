@@ -1,43 +1,33 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useSubmit } from "@/components/ui/use-submit";
 import { DEFAULT_READY_TEMPLATE, READY_PLACEHOLDERS } from "@/lib/mail/ready-message";
 import { workshopSettingsSchema, type WorkshopSettingsForm, type WorkshopSettingsInput } from "@/lib/workshop/schemas";
 
 const NAMES = ["name", "contactEmail", "contactPhone", "address", "readyMessageTemplate"] as const;
 
 export function SettingsForm({ initial }: { initial: WorkshopSettingsForm }) {
-  const router = useRouter();
-  const [status, setStatus] = useState<{ ok: boolean; message: string } | null>(null);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    reset,
-    getValues,
-    formState: { errors, isSubmitting, isDirty },
-  } = useForm<WorkshopSettingsForm, unknown, WorkshopSettingsInput>({ resolver: zodResolver(workshopSettingsSchema), defaultValues: initial });
+  const [saved, setSaved] = useState<string | null>(null);
+  const form = useForm<WorkshopSettingsForm, unknown, WorkshopSettingsInput>({ resolver: zodResolver(workshopSettingsSchema), defaultValues: initial });
+  const { register, reset, getValues, formState: { errors, isDirty } } = form;
 
   // The server parses the same schema, so it gets the typed text, not the parsed values (blank → null).
-  const onSubmit = handleSubmit(async () => {
-    const values = getValues();
-    setStatus(null);
-    const res = await sendJson("/api/workshop", values, "PATCH");
-    if (!res.ok) {
-      for (const n of NAMES) if (res.fields[n]) setError(n, { message: res.fields[n] });
-      setStatus({ ok: false, message: res.message });
-      return;
-    }
-    reset(values);
-    setStatus({ ok: true, message: "Settings saved." });
-    router.refresh();
+  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit(form, {
+    url: "/api/workshop",
+    method: "PATCH",
+    body: () => getValues(),
+    fields: NAMES,
+    onStart: () => setSaved(null),
+    onDone: () => {
+      reset(getValues());
+      setSaved("Settings saved.");
+    },
   });
 
   return (
@@ -66,8 +56,8 @@ export function SettingsForm({ initial }: { initial: WorkshopSettingsForm }) {
         <Button type="submit" disabled={isSubmitting || !isDirty}>
           {isSubmitting ? "Saving…" : "Save settings"}
         </Button>
-        <p role="status" aria-live="polite" className={`text-note font-bold ${status?.ok ? "text-ok" : "text-flag"}`}>
-          {status?.message ?? ""}
+        <p role="status" aria-live="polite" className={`text-note font-bold ${formError ? "text-flag" : "text-ok"}`}>
+          {formError ?? saved ?? ""}
         </p>
       </div>
     </form>
