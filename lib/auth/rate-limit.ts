@@ -133,7 +133,7 @@ export interface ClientId {
  * the client sent none, so the header stays the client's to write). Every direct client then shares one
  * key, with limits sized for that, and changing a header changes nothing.
  */
-export function clientId(request: Request, env: NodeJS.ProcessEnv = process.env): ClientId {
+export function clientId(request: Request, env: { GLOWBENCH_TRUST_PROXY?: string }): ClientId {
   if (env.GLOWBENCH_TRUST_PROXY === "1") {
     const hops = (request.headers.get("x-forwarded-for") ?? "").split(",").map((s) => s.trim()).filter(Boolean);
     const last = hops.at(-1);

@@ -1,8 +1,9 @@
 import "server-only";
 import { HashGateFullError, hashGate } from "@/lib/auth/hash-gate";
 import { burnPasswordCheck, hashPassword, verifyPassword } from "@/lib/auth/password";
-import { ClientThrottle, GrowingDelay, clientId, type ClientId } from "@/lib/auth/rate-limit";
+import { ClientThrottle, GrowingDelay, clientId as clientIdIn, type ClientId } from "@/lib/auth/rate-limit";
 import { processSingleton } from "@/lib/singleton";
+import { serverEnv } from "@/server/env";
 import { HttpError } from "@/server/http/errors";
 
 /**
@@ -28,7 +29,10 @@ function create() {
 
 export const throttles = processSingleton("Throttles", create);
 
-export { clientId, type ClientId };
+export type { ClientId };
+
+/** The client as far as this server can know it (lib/auth/rate-limit.ts says how). */
+export const clientId = (request: Request): ClientId => clientIdIn(request, serverEnv());
 
 /** Answers 429 with Retry-After when `seconds` is above zero. */
 export function refuseIfWaiting(seconds: number, what = "attempts"): void {
