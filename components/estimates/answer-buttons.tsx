@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import type { answerEstimate } from "@/db/queries/estimates";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 import type { AnswerInput } from "@/lib/estimates/schemas";
 
 type Answered = ReturnType<typeof answerEstimate>["status"];
@@ -11,18 +11,16 @@ type Answered = ReturnType<typeof answerEstimate>["status"];
 /** Approve or decline, once. The server re-checks the token; this only shows what it said. */
 export function AnswerButtons({ token }: { token: string }) {
   const [note, setNote] = useState("");
-  const [busy, setBusy] = useState(false);
   const [done, setDone] = useState<Answered | null>(null);
-  const [error, setError] = useState("");
+  // The note is the only field here, so its message stands in for the form's.
+  const { run, error, setError, pending: busy } = useAction<{ status: Answered }>({
+    url: "/api/estimates/answer",
+    refresh: false,
+    onDone: (data) => setDone(data.status),
+    onFail: (f) => f.fields.note && setError(f.fields.note),
+  });
 
-  async function answer(decision: AnswerInput["decision"]) {
-    setBusy(true);
-    setError("");
-    const res = await sendJson<{ status: Answered }>("/api/estimates/answer", { token, decision, note: note || undefined });
-    setBusy(false);
-    if (res.ok) setDone(res.data.status);
-    else setError(res.fields.note ?? res.message);
-  }
+  const answer = (decision: AnswerInput["decision"]) => run({ token, decision, note: note || undefined });
 
   if (done) {
     return (
@@ -55,7 +53,7 @@ export function AnswerButtons({ token }: { token: string }) {
         </Button>
       </div>
       <p id="answer-error" role="alert" className="min-h-6 font-bold text-flag">
-        {error}
+        {error ?? ""}
       </p>
     </div>
   );

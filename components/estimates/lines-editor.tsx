@@ -6,7 +6,8 @@ import { useState } from "react";
 import { useFieldArray, useForm, useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import { sendJson } from "@/lib/client/fetch-json";
+import { FormError } from "@/components/ui/form-error";
+import { useSubmit } from "@/components/ui/use-submit";
 import { linesSchema, type LinesInput, type LinesValues } from "@/lib/estimates/schemas";
 import { LINE_KIND_LABELS } from "@/lib/vocabulary";
 import { computeTotals, formatMoney, formatTaxRate, parseMoney, parseQuantityMilli } from "@/lib/money";
@@ -49,10 +50,9 @@ export function LinesEditor({
   afterSave?: "refresh" | "open-invoice";
 }) {
   const router = useRouter();
-  const [formError, setFormError] = useState("");
   const [saved, setSaved] = useState("");
   const form = useForm<LinesInput, unknown, LinesValues>({ resolver: zodResolver(linesSchema), defaultValues: { lines: initial } });
-  const { register, control, handleSubmit, setError, formState } = form;
+  const { register, control, formState } = form;
   const { fields, append, remove } = useFieldArray({ control, name: "lines" });
   const watched = useWatch({ control, name: "lines" }) ?? [];
   const money = (m: number) => formatMoney(m, currency);
@@ -66,22 +66,17 @@ export function LinesEditor({
   });
   const totals = computeTotals(priced, taxRateBp);
 
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError("");
-    setSaved("");
-    const res = await sendJson(url, values, method);
-    if (!res.ok) {
-      for (const [name, message] of Object.entries(res.fields)) setError(name as `lines.${number}.description`, { message });
-      setFormError(res.message);
-      return;
-    }
-    const created = res.data as { id?: number };
-    if (afterSave === "open-invoice" && created.id) {
-      router.push(`/invoices/${created.id}`);
-      return;
-    }
-    setSaved("Saved.");
-    router.refresh();
+  // A new invoice opens its own page; anything else reads the job again here.
+  const { submit: onSubmit, formError } = useSubmit<LinesInput, { id?: number } | null, LinesValues>(form, {
+    url,
+    method,
+    refresh: false,
+    onStart: () => setSaved(""),
+    onDone: (created) => {
+      if (afterSave === "open-invoice" && created?.id) return router.push(`/invoices/${created.id}`);
+      setSaved("Saved.");
+      router.refresh();
+    },
   });
 
   const addPart = (id: number) => {
@@ -172,9 +167,7 @@ export function LinesEditor({
           {money(totals.totalMinor)}
         </dd>
       </dl>
-      <p id="lines-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-flag">
-        {formError}
-      </p>
+      <FormError id="lines-error" message={formError} />
       <div className="flex items-center gap-3">
         <Button type="submit" disabled={formState.isSubmitting}>
           {formState.isSubmitting ? "Saving…" : submitLabel}

@@ -3,34 +3,29 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button, buttonClass } from "@/components/ui/button";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 import type { InvoiceStatus } from "@/lib/vocabulary";
 
 /** Pay by card (the payment service's checkout page), the PDF, and voiding an unpaid invoice. */
 export function InvoiceActions({ invoiceId, status }: { invoiceId: number; status: InvoiceStatus }) {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState("");
+  // Once the payment page is opening, the buttons stay off until the browser leaves.
+  const [leaving, setLeaving] = useState(false);
+  const { run, error, pending } = useAction({ refresh: false });
+  const busy = pending || leaving;
 
   async function pay() {
-    setBusy(true);
-    setError("");
-    const res = await sendJson<{ url: string }>(`/api/invoices/${invoiceId}/checkout`, {});
+    const res = await run({}, { url: `/api/invoices/${invoiceId}/checkout` });
     if (res.ok) {
-      window.location.assign(res.data.url);
-      return;
+      setLeaving(true);
+      window.location.assign((res.data as { url: string }).url);
     }
-    setBusy(false);
-    setError(res.message);
   }
 
   async function voidIt() {
     if (!window.confirm("Void this invoice? Its number stays used, and a new invoice can then be issued.")) return;
-    setBusy(true);
-    const res = await sendJson(`/api/invoices/${invoiceId}/void`, {});
-    setBusy(false);
+    const res = await run({}, { url: `/api/invoices/${invoiceId}/void` });
     if (res.ok) router.refresh();
-    else setError(res.message);
   }
 
   return (
@@ -51,7 +46,7 @@ export function InvoiceActions({ invoiceId, status }: { invoiceId: number; statu
         ) : null}
       </div>
       <p role="alert" className="min-h-6 font-bold text-flag">
-        {error}
+        {error ?? ""}
       </p>
     </div>
   );
