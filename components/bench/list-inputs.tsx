@@ -5,7 +5,7 @@ import { Field } from "@/components/ui/field";
 import { buttonClass } from "@/components/ui/button";
 import type { InputMeta } from "@/lib/calc/types";
 import { errorAt } from "@/lib/bench/errors";
-import { DEFAULT_CHOKE_RESISTANCE } from "@/lib/calc/ripple-stages";
+import { DEFAULT_CHOKE_RESISTANCE } from "@/lib/calc/choke-default";
 import { PilotLampInput } from "./pilot-lamp-input";
 
 /** The list inputs: filter stages, heaters, tube types and colour bands, each editable row by row. */

@@ -1,5 +1,8 @@
 import { z } from "zod";
+import { DEFAULT_CHOKE_RESISTANCE } from "./choke-default";
 import { optionalQuantity, quantity } from "./units";
+
+export { DEFAULT_CHOKE_RESISTANCE };
 
 /**
  * The smoothing stages after a reservoir capacitor, for the supply-ripple calculator. Each stage is a
@@ -11,13 +14,6 @@ import { optionalQuantity, quantity } from "./units";
  * At resonance (ω²LC = 1) the LC stage passes 1/(ω₀RC) = √(L/C)/R = Q times the ripple: finite
  * because a real choke has resistance. The load, which damps the peak further, is left out.
  */
-
-/**
- * Choke DC resistance used when none is given. Receiver and amplifier filter chokes of 5–10 H at
- * 50–200 mA measure roughly 50–300 Ω (common practice); 100 Ω sits in that range, on the low side,
- * so a resonant peak is not understated. The form asks the person to measure theirs.
- */
-export const DEFAULT_CHOKE_RESISTANCE = 100;
 
 const capacitance = quantity("capacitance", { positive: true, min: 1e-12, max: 10, label: "Stage capacitance" });
 const current = optionalQuantity("current", { positive: true, min: 1e-6, max: 100, label: "Stage current" });
