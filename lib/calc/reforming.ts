@@ -84,6 +84,8 @@ export const calculator = defineCalculator({
     headlines: ["leakageLimit", "resistorPower"],
     alwaysDanger: false,
     chart: "reforming-schedule",
+    // General-purpose parts take the defaults; another series' data sheet prints its own k, offset and floor.
+    advanced: { title: "Data-sheet leakage figures: k, offset and floor", fields: ["leakageFactor", "leakageOffset", "leakageFloor"] },
   },
   inputs: [
     { name: "capacitance", label: "Capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance" },

@@ -1,5 +1,8 @@
 import type { ReactElement } from "react";
 
+/** A panel-coloured outline behind a label's letters, so a line passing under it never makes it hard to read. */
+export const halo = { stroke: "rgb(var(--gb-panel))", strokeWidth: 3, paintOrder: "stroke" } as const;
+
 interface PointLabelProps {
   x?: number | string;
   y?: number | string;
@@ -11,7 +14,7 @@ export function lineLabel(text: string, color: string, index: number, anchor: "s
   return function Label(props: PointLabelProps): ReactElement<SVGElement> {
     if (props.index !== index) return <g />;
     return (
-      <text x={Number(props.x)} y={Number(props.y) - 7} textAnchor={anchor} fill={color} fontSize={13} fontWeight={700} paintOrder="stroke" stroke="rgb(var(--gb-panel))" strokeWidth={3}>
+      <text x={Number(props.x)} y={Number(props.y) - 7} textAnchor={anchor} fill={color} fontSize={13} fontWeight={700} {...halo}>
         {text}
       </text>
     );

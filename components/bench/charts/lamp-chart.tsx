@@ -5,7 +5,7 @@ import { formatQuantity } from "@/lib/calc/format";
 import { lampCurves } from "@/lib/bench/chart-data-power-up";
 import type { ChartProps } from "../chart-slot";
 import { C, ChartFrame, fmt, tick } from "./chart-frame";
-import { endLabel } from "./end-label";
+import { endLabel, halo } from "./end-label";
 
 const watts = (v: number) => `${Math.round(v)} W`;
 
@@ -25,7 +25,7 @@ export default function LampChart({ inputs, outputs }: ChartProps) {
       caption={
         <>
           What a set of each power draws from {formatQuantity(d.lineVoltage, "V")} mains through lamps of common sizes (thin lines), through your {yours.label} (thick
-          line), and with no lamp at all (dashed). A lamp never lets through more than it draws alone across the line: your lamp&apos;s{" "}
+          line), and with no lamp at all (dashed). Once its filament is hot, a lamp passes no more than its rated current however much the set draws: your lamp&apos;s{" "}
           <strong className="text-ink">{formatQuantity(d.maxCurrent, "A")}</strong> with a dead short in the set (the dotted line).{" "}
           {d.set ? (
             <>
@@ -48,7 +48,7 @@ export default function LampChart({ inputs, outputs }: ChartProps) {
             labelFormatter={(p) => `Set of ${watts(Number(p))}`}
             contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
           />
-          <ReferenceLine y={d.maxCurrent} stroke={C.ink} strokeDasharray="2 4" label={{ value: `Dead short, ${yours.label}`, fill: C.ink, position: "insideBottomLeft", fontSize: 13 }} />
+          <ReferenceLine y={d.maxCurrent} stroke={C.ink} strokeDasharray="2 4" label={{ value: `Dead short, ${yours.label}`, fill: C.ink, position: "insideBottomLeft", fontSize: 13, ...halo }} />
           {d.lines.map((l) => {
             const alone = l.lampPower === null;
             const color = alone ? C.signal : l.yours ? C.glow : C.muted;

@@ -5,8 +5,21 @@ import { formatQuantity } from "@/lib/calc/format";
 import { reformingSchedule } from "@/lib/bench/chart-data-power-up";
 import type { ChartProps } from "../chart-slot";
 import { C, ChartFrame, fmt, tick } from "./chart-frame";
+import { halo, lineLabel } from "./end-label";
 
-const minutes = (m: number) => (m >= 120 && m % 60 === 0 ? `${m / 60} h` : `${Math.round(m)} min`);
+/** 45 min, 1 h, 1 h 30: a bench clock's way of saying it. */
+const minutes = (m: number) => {
+  const r = Math.round(m);
+  if (r < 60) return `${r} min`;
+  const h = Math.floor(r / 60);
+  return r % 60 ? `${h} h ${String(r % 60).padStart(2, "0")}` : `${h} h`;
+};
+
+/** Tick marks every 10, 15, 30 or 60 minutes, or whole hours, about six across. */
+function timeTicks(total: number): number[] {
+  const step = [10, 15, 30, 60, 120, 240, 480].find((s) => total / s <= 6) ?? Math.ceil(total / 6 / 60) * 60;
+  return Array.from({ length: Math.floor(total / step) + 1 }, (_, i) => i * step);
+}
 
 /** The reforming schedule as a staircase: the voltage applied against time, each step held for its least time. */
 export default function ReformingChart({ inputs, outputs }: ChartProps) {
@@ -29,15 +42,16 @@ export default function ReformingChart({ inputs, outputs }: ChartProps) {
       <ResponsiveContainer width="100%" height="100%">
         <LineChart data={d.points} margin={{ top: 10, right: 16, bottom: 4, left: 8 }}>
           <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
-          <XAxis dataKey="t" type="number" domain={[0, "dataMax"]} tickFormatter={minutes} tick={tick} stroke={C.muted} />
+          <XAxis dataKey="t" type="number" domain={[0, "dataMax"]} ticks={timeTicks(d.totalMinutes)} tickFormatter={minutes} tick={tick} stroke={C.muted} />
           <YAxis type="number" domain={[0, Number((d.rated * 1.15).toPrecision(2))]} tickFormatter={fmt("V")} tick={tick} stroke={C.muted} width={64} />
           <Tooltip
             formatter={(v) => [formatQuantity(Number(v), "V"), "Voltage applied"]}
             labelFormatter={(t) => `From ${minutes(Number(t))}`}
             contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
           />
-          <ReferenceLine y={d.rated} stroke={C.ink} strokeDasharray="6 4" label={{ value: `Rated voltage (${formatQuantity(d.rated, "V")})`, fill: C.ink, position: "insideTopLeft", fontSize: 13 }} />
-          <Line type="stepAfter" dataKey="v" name="Voltage applied" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} />
+          <ReferenceLine y={d.rated} stroke={C.ink} strokeDasharray="6 4" label={{ value: `Rated voltage (${formatQuantity(d.rated, "V")})`, fill: C.ink, position: "insideTopLeft", fontSize: 13, ...halo }} />
+          <Line type="stepAfter" dataKey="v" name="Voltage applied" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false}
+            label={lineLabel("Voltage applied", C.glow, 3, "start")} />
         </LineChart>
       </ResponsiveContainer>
     </ChartFrame>
