@@ -1,24 +1,18 @@
 "use client";
 
-import { useRouter } from "next/navigation";
-import { useState } from "react";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 
 /** A small confirm-then-DELETE button for one record of a job. */
 export function DeleteButton({ url, confirm, label }: { url: string; confirm: string; label: string }) {
-  const router = useRouter();
-  const [error, setError] = useState<string | null>(null);
+  const { run, error } = useAction({ url, method: "DELETE" });
   return (
     <span>
       <button
         type="button"
         aria-label={label}
         className="min-h-9 rounded-chip px-2 text-note font-bold text-flag hover:bg-flag-bg"
-        onClick={async () => {
-          if (!window.confirm(confirm)) return;
-          const res = await sendJson(url, undefined, "DELETE");
-          if (!res.ok) return setError(res.message);
-          router.refresh();
+        onClick={() => {
+          if (window.confirm(confirm)) void run();
         }}
       >
         Remove

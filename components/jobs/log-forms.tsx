@@ -1,28 +1,20 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useSubmit } from "@/components/ui/use-submit";
 import { logNoteSchema, powerUpSchema } from "@/lib/jobs/log-schemas";
 
 function useLogForm<F extends Record<string, string>>(jobId: number, schema: typeof logNoteSchema | typeof powerUpSchema, empty: F) {
-  const router = useRouter();
-  const [formError, setFormError] = useState<string | null>(null);
   const form = useForm<F>({ resolver: zodResolver(schema) as never, defaultValues: empty as never });
-  const onSubmit = form.handleSubmit(async () => {
-    setFormError(null);
-    const res = await sendJson(`/api/jobs/${jobId}/log`, form.getValues());
-    if (!res.ok) {
-      for (const [name, message] of Object.entries(res.fields)) if (name in empty) form.setError(name as never, { message });
-      return setFormError(res.message);
-    }
-    form.reset(empty as never);
-    router.refresh();
+  const { submit: onSubmit, formError } = useSubmit(form, {
+    url: `/api/jobs/${jobId}/log`,
+    body: () => form.getValues(),
+    fields: Object.keys(empty),
+    onDone: () => form.reset(empty as never),
   });
   return { form, onSubmit, formError };
 }

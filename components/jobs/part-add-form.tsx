@@ -1,14 +1,12 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { PART_KINDS, PART_STATES, PART_STATE_LABELS } from "@/lib/vocabulary";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useSubmit } from "@/components/ui/use-submit";
 import { PART_KIND_LABELS, partSchema, type PartInput, type PartValues } from "@/lib/jobs/part-schemas";
 
 const EMPTY: PartInput = {
@@ -27,23 +25,19 @@ const EMPTY: PartInput = {
 
 /** Adds one part; the unit cost field only for those who see prices (`currency`), typed as text and priced by the server. */
 export function PartAddForm({ jobId, currency = null }: { jobId: number; currency?: string | null }) {
-  const router = useRouter();
-  const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, reset, setError, setFocus, getValues, formState: { errors, isSubmitting } } = useForm<PartInput, unknown, PartValues>({
+  const form = useForm<PartInput, unknown, PartValues>({
     resolver: zodResolver(partSchema),
     defaultValues: EMPTY,
   });
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError(null);
-    const res = await sendJson(`/api/jobs/${jobId}/parts`, values);
-    if (!res.ok) {
-      for (const [name, message] of Object.entries(res.fields)) if (name in EMPTY) setError(name as keyof PartInput, { message });
-      return setFormError(res.message);
-    }
-    // The next part is often from the same supplier: keep the kind and the supplier.
-    reset({ ...EMPTY, kind: values.kind, supplier: getValues("supplier") });
-    setFocus("designator");
-    router.refresh();
+  const { register, reset, setFocus, getValues, formState: { errors, isSubmitting } } = form;
+  const { submit: onSubmit, formError } = useSubmit(form, {
+    url: `/api/jobs/${jobId}/parts`,
+    fields: Object.keys(EMPTY),
+    onDone: (_data, values) => {
+      // The next part is often from the same supplier: keep the kind and the supplier.
+      reset({ ...EMPTY, kind: values.kind, supplier: getValues("supplier") });
+      setFocus("designator");
+    },
   });
   const id = (n: string) => `part-${n}`;
   return (

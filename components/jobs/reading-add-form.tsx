@@ -1,13 +1,11 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useSubmit } from "@/components/ui/use-submit";
 import { readingSchema, type ReadingValues } from "@/lib/jobs/reading-schemas";
 
 type Form = { kind: "resistor" | "voltage"; designator: string; partDesignators: string; nominal: string; measured: string; tolerance: string };
@@ -18,24 +16,21 @@ const EMPTY: Form = { kind: "resistor", designator: "", partDesignators: "", nom
  * A voltage may name the capacitor(s) it was measured across: only then is it compared with their ratings.
  */
 export function ReadingAddForm({ jobId }: { jobId: number }) {
-  const router = useRouter();
-  const [formError, setFormError] = useState<string | null>(null);
-  const { register, handleSubmit, reset, watch, setError, setFocus, formState: { errors, isSubmitting } } = useForm<Form, unknown, ReadingValues>({
+  const form = useForm<Form, unknown, ReadingValues>({
     resolver: zodResolver(readingSchema) as never,
     defaultValues: EMPTY,
   });
+  const { register, reset, watch, setFocus, formState: { errors, isSubmitting } } = form;
   const kind = watch("kind");
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError(null);
-    const raw = watch();
-    const res = await sendJson(`/api/jobs/${jobId}/readings`, { ...raw, kind: values.kind });
-    if (!res.ok) {
-      for (const [name, message] of Object.entries(res.fields)) if (name in EMPTY) setError(name as keyof Form, { message });
-      return setFormError(res.message);
-    }
-    reset({ ...EMPTY, kind: values.kind, tolerance: raw.tolerance });
-    setFocus("designator");
-    router.refresh();
+  // The typed text goes to the server, which parses the same schema.
+  const { submit: onSubmit, formError } = useSubmit(form, {
+    url: `/api/jobs/${jobId}/readings`,
+    body: (values) => ({ ...watch(), kind: values.kind }),
+    fields: Object.keys(EMPTY),
+    onDone: (_data, values) => {
+      reset({ ...EMPTY, kind: values.kind, tolerance: watch("tolerance") });
+      setFocus("designator");
+    },
   });
   const resistor = kind === "resistor";
   return (
