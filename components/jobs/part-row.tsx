@@ -1,9 +1,8 @@
 "use client";
 
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { PART_KINDS, PART_STATES, PART_STATE_LABELS, type PartState } from "@/lib/vocabulary";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 import { formatMoney, minorExponent, toDecimalString } from "@/lib/money";
 import type { PartFlag } from "@/lib/jobs/part-flags";
 import { PART_KIND_LABELS } from "@/lib/jobs/part-schemas";
@@ -39,28 +38,20 @@ function toDraft(part: Part, currency: string | null): Draft {
  * (never to apprentices). `flags` are what the read values tell (lib/jobs/part-flags.ts).
  */
 export function PartRow({ jobId, part, canEdit, caution, readingNote, currency = null, flags = [] }: { jobId: number; part: Part; canEdit: boolean; caution: boolean; readingNote?: string; currency?: string | null; flags?: PartFlag[] }) {
-  const router = useRouter();
   const [editing, setEditing] = useState(false);
   const [draft, setDraft] = useState(() => toDraft(part, currency));
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [message, setMessage] = useState<string | null>(null);
+  const { run, error: message } = useAction({ url: `/api/jobs/${jobId}/parts/${part.id}` });
 
+  // The cells are plain inputs, not a react-hook-form form: the field messages are kept here.
   async function save(changes: Record<string, unknown>) {
-    setMessage(null);
-    const res = await sendJson(`/api/jobs/${jobId}/parts/${part.id}`, changes, "PATCH");
-    if (!res.ok) {
-      setErrors(res.fields);
-      return setMessage(res.message);
-    }
-    setErrors({});
-    setEditing(false);
-    router.refresh();
+    const res = await run(changes, { method: "PATCH" });
+    setErrors(res.ok ? {} : res.fields);
+    if (res.ok) setEditing(false);
   }
   async function remove() {
     if (!window.confirm(`Remove ${part.designator} from the parts list?`)) return;
-    const res = await sendJson(`/api/jobs/${jobId}/parts/${part.id}`, undefined, "DELETE");
-    if (!res.ok) return setMessage(res.message);
-    router.refresh();
+    await run(undefined, { method: "DELETE" });
   }
 
   if (editing) {

@@ -1,24 +1,26 @@
 "use client";
 
-import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 import { CSV_COLUMNS } from "@/lib/jobs/parts-csv";
 
 /** Export the list as CSV; import a CSV back (all rows or none, errors by spreadsheet row). */
 export function PartsCsvTools({ jobId, canEdit }: { jobId: number; canEdit: boolean }) {
-  const router = useRouter();
   const input = useRef<HTMLInputElement>(null);
   const [result, setResult] = useState<{ ok: boolean; message: string; rows: string[] } | null>(null);
+
+  // The field messages here are spreadsheet rows, listed under the message rather than put on inputs.
+  const { run } = useAction<{ imported: number }>({
+    url: `/api/jobs/${jobId}/parts/import`,
+    onDone: (data) => setResult({ ok: true, message: `Imported ${data.imported} part${data.imported === 1 ? "" : "s"}.`, rows: [] }),
+    onFail: (f) => setResult({ ok: false, message: f.message, rows: Object.values(f.fields) }),
+  });
 
   async function importFile(file: File) {
     setResult(null);
     const csv = await file.text();
-    const res = await sendJson<{ imported: number }>(`/api/jobs/${jobId}/parts/import`, { csv });
+    await run({ csv });
     if (input.current) input.current.value = "";
-    if (!res.ok) return setResult({ ok: false, message: res.message, rows: Object.values(res.fields) });
-    setResult({ ok: true, message: `Imported ${res.data.imported} part${res.data.imported === 1 ? "" : "s"}.`, rows: [] });
-    router.refresh();
   }
 
   return (
