@@ -1,32 +1,28 @@
 "use client";
 
-import { useRouter } from "next/navigation";
 import { useRef, useState } from "react";
 import { Button } from "@/components/ui/button";
+import { useAction } from "@/components/ui/use-submit";
 
 /** Multipart upload of one photo or schematic; the server sniffs the type and answers in plain words. */
 export function FileUploadForm({ jobId }: { jobId: number }) {
-  const router = useRouter();
   const form = useRef<HTMLFormElement>(null);
-  const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
+  const { run, pending: busy } = useAction({
+    url: `/api/jobs/${jobId}/files`,
+    onDone: () => form.current?.reset(),
+    // The server's word on the file goes after its message; a body that is not ours reads as an upload failure.
+    onFail: (f) =>
+      setError(f.fields.file ? `${f.message} ${f.fields.file}` : f.message === `Request failed (${f.status}).` ? `Upload failed (${f.status}).` : f.message),
+  });
   async function onSubmit(e: React.FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const data = new FormData(e.currentTarget);
     const file = data.get("file");
     if (!(file instanceof File) || file.size === 0) return setError("Choose a photo or schematic first.");
     if (file.size > 20 * 1024 * 1024) return setError("Files may be up to 20 MB; export a smaller copy.");
-    setBusy(true);
     setError(null);
-    const res = await fetch(`/api/jobs/${jobId}/files`, { method: "POST", body: data }).catch(() => null);
-    setBusy(false);
-    if (!res) return setError("Could not reach Glowbench. Check the connection and try again.");
-    if (!res.ok) {
-      const body = await res.json().catch(() => null);
-      return setError(body?.error?.fields?.file ? `${body.error.message} ${body.error.fields.file}` : (body?.error?.message ?? `Upload failed (${res.status}).`));
-    }
-    form.current?.reset();
-    router.refresh();
+    await run(data);
   }
   return (
     <form ref={form} onSubmit={onSubmit} className="flex flex-wrap items-end gap-4" aria-describedby="upload-error upload-hint">

@@ -1,7 +1,6 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useQueryClient } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm } from "react-hook-form";
@@ -12,6 +11,7 @@ import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
 import { TextareaField } from "@/components/ui/textarea-field";
 import { sendJson } from "@/lib/client/fetch-json";
+import { useSubmit } from "@/components/ui/use-submit";
 import { jobCreateSchema, type JobCreate, type JobCreateInput } from "@/lib/jobs/job-schemas";
 import { AccessoriesField } from "./intake-fields";
 
@@ -27,8 +27,8 @@ async function uploadIntakePhotos(jobId: number, photos: File[]): Promise<number
     const form = new FormData();
     form.set("file", photo);
     form.set("kind", "intake");
-    const res = await fetch(`/api/jobs/${jobId}/files`, { method: "POST", body: form }).catch(() => null);
-    if (!res?.ok) failed++;
+    const res = await sendJson(`/api/jobs/${jobId}/files`, form);
+    if (!res.ok) failed++;
   }
   return failed;
 }
@@ -40,35 +40,33 @@ async function uploadIntakePhotos(jobId: number, photos: File[]): Promise<number
  */
 export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDone?: () => void; bookFor?: PickedCustomer }) {
   const router = useRouter();
-  const queryClient = useQueryClient();
-  const [formError, setFormError] = useState<string | null>(null);
   const [picked, setPicked] = useState<PickedCustomer>(job?.customerId ? { id: job.customerId, name: String(job.customerName ?? ""), email: (job.customerEmail as string | null) ?? null } : bookFor);
   const [accessories, setAccessories] = useState<string[]>(job?.accessories ?? []);
   const [photos, setPhotos] = useState<File[]>([]);
   const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
   const initial = Object.fromEntries(NAMES.map((n) => [n, job?.[n] == null ? "" : String(job[n])])) as Values;
   if (!initial.equipmentKind) initial.equipmentKind = "table-radio";
-  const { register, handleSubmit, setError, formState: { errors, isSubmitting } } = useForm<JobCreateInput, unknown, JobCreate>({ resolver: zodResolver(jobCreateSchema), defaultValues: initial as JobCreateInput });
+  const form = useForm<JobCreateInput, unknown, JobCreate>({ resolver: zodResolver(jobCreateSchema), defaultValues: initial as JobCreateInput });
+  const { register, formState: { errors, isSubmitting } } = form;
 
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError(null);
-    setFieldErrors({});
-    const customer = picked ? { customerId: picked.id, customerName: null, customerEmail: null, customerPhone: null } : { customerId: job ? null : undefined };
-    const body = { ...values, ...customer, accessories };
-    const res = job ? await sendJson<{ job: { id: number } }>(`/api/jobs/${job.id}`, body, "PATCH") : await sendJson<{ job: { id: number } }>("/api/jobs", body);
-    if (!res.ok) {
-      for (const [name, message] of Object.entries(res.fields)) if ((NAMES as readonly string[]).includes(name)) setError(name as Name, { message });
-      setFieldErrors(res.fields);
-      setFormError(res.message);
-      return;
-    }
-    await queryClient.invalidateQueries({ queryKey: ["jobs"] });
-    if (job) {
-      router.refresh();
-      return onDone?.();
-    }
-    const failed = photos.length ? await uploadIntakePhotos(res.data.job.id, photos) : 0;
-    router.push(`/jobs/${res.data.job.id}${failed ? "/files" : ""}`);
+  // The customer and accessories live outside react-hook-form, so their messages are kept in fieldErrors.
+  const { submit: onSubmit, formError } = useSubmit<JobCreateInput, { job: { id: number } }, JobCreate>(form, {
+    url: job ? `/api/jobs/${job.id}` : "/api/jobs",
+    method: job ? "PATCH" : "POST",
+    body: (values) => {
+      const customer = picked ? { customerId: picked.id, customerName: null, customerEmail: null, customerPhone: null } : { customerId: job ? null : undefined };
+      return { ...values, ...customer, accessories };
+    },
+    fields: NAMES,
+    invalidate: [["jobs"]],
+    refresh: Boolean(job),
+    onStart: () => setFieldErrors({}),
+    onFail: (f) => setFieldErrors(f.fields),
+    onDone: async (data) => {
+      if (job) return onDone?.();
+      const failed = photos.length ? await uploadIntakePhotos(data.job.id, photos) : 0;
+      router.push(`/jobs/${data.job.id}${failed ? "/files" : ""}`);
+    },
   });
 
   const id = (n: string) => `job-${n}`;

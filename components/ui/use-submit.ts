@@ -14,18 +14,22 @@ type After<D> = {
   refresh?: boolean;
   /** TanStack Query keys to invalidate after a good answer (client-fetched lists). */
   invalidate?: QueryKey[];
-  /** Runs after a good answer, before the refresh. */
+  /** Runs after a good answer: after the invalidation, before the refresh (so it may navigate first). */
   onDone?: (data: D) => void | Promise<void>;
   /** Runs after a refusal, once the messages are shown (a 409's extra list, say). */
   onFail?: (failure: Failure) => void;
 };
 
-/** What every good answer is followed by; the query client is optional, as signed-out pages have none. */
+/**
+ * What every good answer is followed by: invalidate, the caller's own step, refresh. The query client is
+ * optional, as signed-out pages have no provider.
+ */
 function useAfterSuccess() {
   const router = useRouter();
   const queryClient = useContext(QueryClientContext);
-  return async (opts: { refresh?: boolean; invalidate?: QueryKey[] }) => {
+  return async (opts: { refresh?: boolean; invalidate?: QueryKey[] }, done?: () => void | Promise<void>) => {
     for (const queryKey of opts.invalidate ?? []) await queryClient?.invalidateQueries({ queryKey });
+    await done?.();
     if (opts.refresh ?? true) router.refresh();
   };
 }
@@ -64,8 +68,7 @@ export function useSubmit<F extends FieldValues, D = unknown, T extends FieldVal
       opts.onFail?.(res);
       return;
     }
-    await opts.onDone?.(res.data, values);
-    await after(opts);
+    await after(opts, () => opts.onDone?.(res.data, values));
   });
   return { submit, formError, setFormError, pending: form.formState.isSubmitting };
 }
@@ -89,8 +92,7 @@ export function useAction<D = unknown>(opts: After<D> & { url?: string; method?:
         opts.onFail?.(res);
         return res;
       }
-      await opts.onDone?.(res.data);
-      await after(opts);
+      await after(opts, () => opts.onDone?.(res.data));
       return res;
     } finally {
       setPending(false);
