@@ -3,15 +3,18 @@
 import Link from "next/link";
 import { useEffect, useId, useState } from "react";
 import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { SelectField } from "@/components/ui/select-field";
+import { TextareaField } from "@/components/ui/textarea-field";
+import { useAction } from "@/components/ui/use-submit";
 import type { searchJobs } from "@/db/queries/jobs";
 import { EQUIPMENT_KINDS, EQUIPMENT_KIND_LABELS, type EquipmentKind } from "@/lib/vocabulary";
-import { getJson, sendJson } from "@/lib/client/fetch-json";
+import { getJson } from "@/lib/client/fetch-json";
 
 /** What this form reads of GET /api/jobs and POST /api/jobs. */
 type JobSummary = Pick<ReturnType<typeof searchJobs>["jobs"][number], "id" | "title">;
 
 const NEW = "new";
-const field = "min-h-11 w-full rounded-chip border border-edge bg-panel px-3 py-2 text-body text-ink";
 
 /** Save this calculation to one of the workshop's jobs (or a new one), with a note. The server recomputes it. */
 export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { slug: string; inputs: Record<string, unknown>; disabled: boolean; canCreateJob: boolean }) {
@@ -23,6 +26,8 @@ export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { sl
   const [kind, setKind] = useState<EquipmentKind>("table-radio");
   const [note, setNote] = useState("");
   const [busy, setBusy] = useState(false);
+  // Two calls in a row (a new job, then the calculation): each refusal is put on its own field below.
+  const { run } = useAction({ refresh: false });
   const [errors, setErrors] = useState<Record<string, string>>({});
   const [saved, setSaved] = useState<{ jobId: number; title: string } | null>(null);
 
@@ -43,21 +48,22 @@ export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { sl
     setBusy(true);
     let target = jobs?.find((j) => String(j.id) === jobId) ?? null;
     if (jobId === NEW) {
-      const made = await sendJson<{ job: JobSummary }>("/api/jobs", { title: title.trim(), equipmentKind: kind });
+      const made = await run({ title: title.trim(), equipmentKind: kind }, { url: "/api/jobs" });
       if (!made.ok) {
         setBusy(false);
         return setErrors({ title: made.fields.title ?? made.message, ...(made.fields.equipmentKind ? { kind: made.fields.equipmentKind } : {}) });
       }
-      target = made.data.job;
-      setJobs((js) => [made.data.job, ...(js ?? [])]);
-      setJobId(String(made.data.job.id));
+      const job = (made.data as { job: JobSummary }).job;
+      target = job;
+      setJobs((js) => [job, ...(js ?? [])]);
+      setJobId(String(job.id));
       setTitle("");
     }
     if (!target) {
       setBusy(false);
       return setErrors({ job: "Pick a job to save to." });
     }
-    const res = await sendJson(`/api/jobs/${target.id}/calculations`, { slug, inputs, note: note.trim() });
+    const res = await run({ slug, inputs, note: note.trim() }, { url: `/api/jobs/${target.id}/calculations` });
     setBusy(false);
     if (!res.ok) return setErrors({ form: res.fields.note ?? res.message });
     setSaved({ jobId: target.id, title: target.title });
@@ -69,57 +75,45 @@ export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { sl
 
   return (
     <form onSubmit={save} className="grid gap-4 md:grid-cols-2" noValidate aria-label="Save to a job">
-      <div className="flex flex-col gap-1">
-        <label htmlFor={`${id}-job`} className="font-bold">
-          Job
-        </label>
-        <select id={`${id}-job`} value={jobId} onChange={(e) => setJobId(e.target.value)} className={field} aria-describedby={errors.job ? `${id}-job-error` : undefined}>
-          {jobs.map((j) => (
-            <option key={j.id} value={j.id}>
-              {j.title}
-            </option>
-          ))}
-          {canCreateJob ? <option value={NEW}>New job…</option> : null}
-          {!canCreateJob && jobs.length === 0 ? <option value="">No jobs yet: ask a technician to book the set in</option> : null}
-        </select>
-        <p id={`${id}-job-error`} role="alert" className="min-h-5 text-note font-bold text-flag">
-          {errors.job ?? ""}
-        </p>
-      </div>
+      <SelectField
+        id={`${id}-job`}
+        label="Job"
+        value={jobId}
+        onChange={(e) => setJobId(e.target.value)}
+        error={errors.job}
+        options={[
+          ...jobs.map((j) => ({ value: String(j.id), label: j.title })),
+          ...(canCreateJob ? [{ value: NEW, label: "New job…" }] : []),
+          ...(!canCreateJob && jobs.length === 0 ? [{ value: "", label: "No jobs yet: ask a technician to book the set in" }] : []),
+        ]}
+      />
       {jobId === NEW ? (
         <div className="grid gap-4 sm:grid-cols-2 md:col-span-2">
-          <div className="flex flex-col gap-1">
-            <label htmlFor={`${id}-title`} className="font-bold">
-              New job title
-            </label>
-            <input id={`${id}-title`} value={title} onChange={(e) => setTitle(e.target.value)} className={field} aria-invalid={errors.title ? true : undefined} aria-describedby={`${id}-title-error`} placeholder="Five-tube table radio, 1950s" />
-            <p id={`${id}-title-error`} role="alert" className="min-h-5 text-note font-bold text-flag">
-              {errors.title ?? ""}
-            </p>
-          </div>
-          <div className="flex flex-col gap-1">
-            <label htmlFor={`${id}-kind`} className="font-bold">
-              Kind of set
-            </label>
-            <select id={`${id}-kind`} value={kind} onChange={(e) => setKind(e.target.value as EquipmentKind)} className={field} aria-describedby={`${id}-kind-error`}>
-              {EQUIPMENT_KINDS.map((k) => (
-                <option key={k} value={k}>
-                  {EQUIPMENT_KIND_LABELS[k]}
-                </option>
-              ))}
-            </select>
-            <p id={`${id}-kind-error`} role="alert" className="min-h-5 text-note font-bold text-flag">
-              {errors.kind ?? ""}
-            </p>
-          </div>
+          <Field id={`${id}-title`} label="New job title" value={title} onChange={(e) => setTitle(e.target.value)} error={errors.title} placeholder="Five-tube table radio, 1950s" />
+          <SelectField
+            id={`${id}-kind`}
+            label="Kind of set"
+            value={kind}
+            onChange={(e) => setKind(e.target.value as EquipmentKind)}
+            error={errors.kind}
+            options={EQUIPMENT_KINDS.map((k) => ({ value: k, label: EQUIPMENT_KIND_LABELS[k] }))}
+          />
         </div>
       ) : null}
-      <div className="flex flex-col gap-1 md:col-span-2">
-        <label htmlFor={`${id}-note`} className="font-bold">
-          Note <span className="font-normal text-muted">(optional)</span>
-        </label>
-        <textarea id={`${id}-note`} value={note} onChange={(e) => setNote(e.target.value)} rows={2} maxLength={1000} className={field} placeholder="Where it goes, what you measured, what you fitted." />
-      </div>
+      <TextareaField
+        id={`${id}-note`}
+        label={
+          <>
+            Note <span className="font-normal text-muted">(optional)</span>
+          </>
+        }
+        className="md:col-span-2"
+        value={note}
+        onChange={(e) => setNote(e.target.value)}
+        rows={2}
+        maxLength={1000}
+        placeholder="Where it goes, what you measured, what you fitted."
+      />
       <div className="flex flex-wrap items-center gap-4 md:col-span-2">
         <Button type="submit" disabled={busy || disabled}>
           {busy ? "Saving…" : "Save to job"}
