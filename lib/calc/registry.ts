@@ -25,33 +25,38 @@ import { calculator as triodeStage } from "./triode-stage";
 import { calculator as vintageMarkings } from "./vintage-markings";
 import { calculator as vrTube } from "./vr-tube";
 
-/** Every calculator of the Bench, in the order the index shows them within their groups. */
+/** Every calculator of the Bench, group by group in the order the index shows them (each names its group in `bench.group`). */
 const ALL = [
-  cathodeBias,
-  triodeStage,
-  superhet,
-  droppingResistor,
-  couplingCap,
-  plateDissipation,
-  outputTransformer,
-  heaterString,
-  supplyRipple,
-  bPlus,
-  vrTube,
-  timeConstant,
-  bleeder,
+  // First power and safety
   seriesLamp,
   fuse,
+  reforming,
+  bleeder,
+  timeConstant,
   arcClearance,
+  // Supplies and heaters
+  bPlus,
+  supplyRipple,
+  vrTube,
+  droppingResistor,
+  heaterString,
+  // Stages and tubes
+  cathodeBias,
+  triodeStage,
+  plateDissipation,
+  couplingCap,
+  outputTransformer,
+  // Radio and alignment
+  superhet,
+  reactance,
+  // Parts and measuring
   resistorDrift,
   meterLoading,
-  reforming,
-  preferredValue,
-  seriesParallel,
   colourCode,
   vintageMarkings,
+  preferredValue,
+  seriesParallel,
   ohmsLaw,
-  reactance,
 ] as const;
 
 /** Every calculator's URL name, as a literal union: a table keyed by `Slug` misses none. */

@@ -111,6 +111,11 @@ describe("the registry and the generated loaders", () => {
     for (const g of GROUPS) expect(calculators.some((c) => c.bench.group === g.id), g.id).toBe(true);
   });
 
+  it("the registry lists the calculators group by group, in the index's order of groups", () => {
+    const order = calculators.map((c) => GROUPS.findIndex((g) => g.id === c.bench.group));
+    expect(order).toEqual([...order].sort((x, y) => x - y));
+  });
+
   it(`${LOADERS_FILE} matches the registry (run \`npm run gen:loaders\` when it does not)`, () => {
     expect(fs.readFileSync(LOADERS_FILE, "utf8")).toBe(loadersSource(registrySlugs()));
   });
