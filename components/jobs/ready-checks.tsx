@@ -70,13 +70,15 @@ export function ReadyChecksPanel({
   });
   const submit = handleSubmit(async (v) => onContinue({ override: true, reason: v.reason.trim() }));
   return (
-    <section role="alert" aria-labelledby={`${id}-h`} className="rounded-card border border-caution/60 bg-caution-bg p-4" data-testid="ready-checks">
-      <h3 id={`${id}-h`} className="font-bold text-caution">Before &ldquo;ready&rdquo;, the record shows</h3>
-      <ul className="mt-1 list-disc pl-5">
-        {checks.map((c) => (
-          <li key={c.id} data-check={c.id}>{c.message}</li>
-        ))}
-      </ul>
+    <section aria-labelledby={`${id}-h`} className="rounded-card border border-caution/60 bg-caution-bg p-4" data-testid="ready-checks">
+      <div role="alert">
+        <h3 id={`${id}-h`} className="font-bold text-caution">Before collection, the record shows</h3>
+        <ul className="mt-1 list-disc pl-5">
+          {checks.map((c) => (
+            <li key={c.id} data-check={c.id}>{c.message}</li>
+          ))}
+        </ul>
+      </div>
       <p className="mt-2 text-note text-muted">Finish these first, or go on and say why: the reason goes to the Log.</p>
       <form onSubmit={submit} noValidate aria-label="Continue with a reason" className="mt-3 flex flex-col gap-1">
         <TextareaField id={`${id}-reason`} label="Reason to continue" rows={2} placeholder="Customer collecting today; the hum is noted on the bench sheet" error={errors.reason?.message} {...register("reason")} />

@@ -9,9 +9,9 @@ import { TextareaField } from "@/components/ui/textarea-field";
 import { formatQuantity } from "@/lib/calc/format";
 import { sendJson } from "@/lib/client/fetch-json";
 import { candidateUpdateSchema } from "@/lib/jobs/fault-schemas";
-import { FAULT_CANDIDATE_STATUSES, type FaultCandidateStatus } from "@/lib/vocabulary";
+import { FAULT_CANDIDATE_STATUSES, FAULT_CANDIDATE_STATUS_LABELS, type FaultCandidateStatus } from "@/lib/vocabulary";
 import { fieldError, useRecordForm } from "../record-form";
-import { STATUS_LABEL, STATUS_TONE } from "./fault-state-badge";
+import { STATUS_TONE } from "./fault-state-badge";
 
 type CandidateView = Pick<FaultCandidate, "id" | "position" | "description" | "status" | "evidence" | "readingId" | "reading">;
 
@@ -20,8 +20,6 @@ export interface ReadingChoice {
   label: string;
 }
 
-/** The button words: what pressing it records. */
-const ACTION: Record<FaultCandidateStatus, string> = { open: "Still to test", "ruled-out": "Ruled out", cause: "The cause" };
 
 export function readingText(r: NonNullable<CandidateView["reading"]>): string {
   return `${r.designator}: ${r.measured === null ? "open" : formatQuantity(r.measured, r.unit)}`;
@@ -72,14 +70,11 @@ export function CandidateItem({ jobId, faultId, candidate, readings, next }: { j
   return (
     <li className={`rounded-card border p-3 ${STATUS_TONE[c.status]}`} data-testid={`candidate-${c.position}`} data-status={c.status}>
       <div className="flex flex-wrap items-baseline justify-between gap-x-3 gap-y-1">
-        <p className={`min-w-0 ${c.status === "ruled-out" ? "line-through decoration-muted/60" : ""}`}>
+        <p className={`min-w-0 ${c.status === "ruled-out" ? "text-muted line-through decoration-muted/60" : ""}`}>
           <span className="mr-2 font-mono font-bold">{c.position}.</span>
           <span className="font-bold">{c.description}</span>
         </p>
-        <p className="text-note font-bold">
-          {next ? <span className="mr-2 rounded-full bg-glow px-2 py-0.5 text-glow-ink">Test next</span> : null}
-          <span data-testid="candidate-status">{STATUS_LABEL[c.status]}</span>
-        </p>
+        {next ? <span className="rounded-full bg-glow px-2 py-0.5 text-note font-bold text-glow-ink">Test next</span> : null}
       </div>
       {c.evidence || c.reading ? (
         <p className="mt-1 text-note">
@@ -89,21 +84,27 @@ export function CandidateItem({ jobId, faultId, candidate, readings, next }: { j
           {c.reading ? <span className="font-mono">{readingText(c.reading)}</span> : null}
         </p>
       ) : null}
-      <div role="group" aria-label={`Status of ${c.description}`} className="mt-2 flex flex-wrap gap-2">
-        {FAULT_CANDIDATE_STATUSES.map((s) => (
-          <Button
-            key={s}
-            type="button"
-            variant={c.status === s ? "primary" : "secondary"}
-            aria-pressed={c.status === s}
-            disabled={busy}
-            onClick={() => (c.status === s ? undefined : mark(s))}
-          >
-            {ACTION[s]}
-          </Button>
-        ))}
+      <div className="mt-2 flex flex-wrap items-center gap-2">
+        {/* One control with three positions: the pressed one is the candidate's status. */}
+        <div role="group" aria-label={`Status of ${c.description}`} className="grid w-full grid-cols-3 overflow-hidden rounded-chip border border-edge sm:inline-grid sm:w-auto">
+          {FAULT_CANDIDATE_STATUSES.map((s) => {
+            const on = c.status === s;
+            return (
+              <button
+                key={s}
+                type="button"
+                aria-pressed={on}
+                disabled={busy}
+                onClick={() => (on ? undefined : mark(s))}
+                className={`min-h-11 border-l border-edge px-2 text-note font-bold leading-tight first:border-l-0 disabled:cursor-wait sm:px-4 sm:text-body ${on ? "bg-glow text-glow-ink" : "bg-panel text-ink hover:bg-sunk"}`}
+              >
+                {FAULT_CANDIDATE_STATUS_LABELS[s]}
+              </button>
+            );
+          })}
+        </div>
         {!editing ? (
-          <Button type="button" variant="quiet" onClick={() => setEditing(true)} aria-label={`Evidence for ${c.description}`}>
+          <Button type="button" variant="quiet" onClick={() => setEditing(true)} aria-label={`${c.evidence || c.reading ? "Edit" : "Add"} evidence for ${c.description}`}>
             {c.evidence || c.reading ? "Edit evidence" : "Add evidence"}
           </Button>
         ) : null}

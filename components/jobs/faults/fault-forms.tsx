@@ -58,7 +58,7 @@ export function ResolutionForm({ jobId, faultId, resolution }: { jobId: number; 
         {...form.register("resolution")}
       />
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" disabled={isSubmitting || !isDirty}>Save resolution</Button>
+        <Button type="submit" disabled={isSubmitting || !isDirty}>{!isDirty && resolution ? "Resolution saved" : "Save resolution"}</Button>
         <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
       </div>
     </form>

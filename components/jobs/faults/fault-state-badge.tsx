@@ -1,4 +1,4 @@
-import { FAULT_CANDIDATE_STATUS_LABELS, FAULT_STATE_LABELS, type FaultCandidateStatus, type FaultState } from "@/lib/vocabulary";
+import { FAULT_STATE_LABELS, type FaultCandidateStatus, type FaultState } from "@/lib/vocabulary";
 
 /** A fault's state in calm colours: amber while open, teal once the cause is known, green once the repair is written. */
 const STATE_TONE: Record<FaultState, string> = {
@@ -26,5 +26,3 @@ export const STATUS_TONE: Record<FaultCandidateStatus, string> = {
   "ruled-out": "border-rule bg-sunk text-muted",
   cause: "border-signal bg-glow-bg text-ink",
 };
-
-export const STATUS_LABEL = FAULT_CANDIDATE_STATUS_LABELS;

@@ -30,7 +30,7 @@ export default function CurrentChart({ steps, stopCurrent }: CurrentChartProps) 
       <LineChart data={d.points} margin={{ top: 16, right: 12, bottom: 4, left: 4 }}>
         <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
         <XAxis dataKey="supplyVoltage" type="number" domain={[0, d.maxVoltage]} tickFormatter={fmt("V")} tick={tick} stroke={C.muted} />
-        <YAxis dataKey="currentDrawn" type="number" domain={[0, d.maxCurrent]} tickFormatter={fmt("A")} tick={tick} stroke={C.muted} width={60} />
+        <YAxis dataKey="currentDrawn" type="number" domain={[0, d.maxCurrent]} tickFormatter={fmt("A")} tick={tick} stroke={C.muted} width={72} />
         <Tooltip
           formatter={(v) => [formatQuantity(Number(v), "A"), "Drawn"]}
           labelFormatter={(v) => `Supply ${formatQuantity(Number(v), "V")}`}

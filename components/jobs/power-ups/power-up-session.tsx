@@ -3,7 +3,7 @@ import { formatQuantity } from "@/lib/calc/format";
 import { benchHref } from "@/lib/calc/share";
 import { formatDateTime } from "@/lib/jobs/dates";
 import type { PowerUp } from "@/db/queries/power-ups";
-import { POWER_UP_LIMITER_LABELS, POWER_UP_OUTCOME_LABELS, type PowerUpOutcome } from "@/lib/vocabulary";
+import { POWER_UP_CHECKLIST, POWER_UP_LIMITER_LABELS, POWER_UP_OUTCOME_LABELS, type PowerUpOutcome } from "@/lib/vocabulary";
 import { CurrentChartSlot } from "./current-chart-slot";
 import { OutcomeForm } from "./outcome-form";
 import { StepAddForm } from "./step-add-form";
@@ -11,10 +11,11 @@ import { StepsTable } from "./steps-table";
 
 type PowerUpView = PowerUp;
 
+const CHECK_LABEL = new Map<string, string>(POWER_UP_CHECKLIST.map((c) => [c.id, c.label]));
 const A = (a: number) => formatQuantity(a, "A");
 
 function limiterText(s: PowerUpView): string {
-  if (s.limiter === null) return "moved from the Log, limiter not recorded";
+  if (s.limiter === null) return "from the Log, limiter not recorded";
   if (s.limiter === "series-lamp" && s.lampPower !== null) return `${POWER_UP_LIMITER_LABELS[s.limiter]}, ${formatQuantity(s.lampPower, "W")}`;
   if (s.limiter === "limited-supply" && s.currentLimit !== null) return `${POWER_UP_LIMITER_LABELS[s.limiter]}, limit ${A(s.currentLimit)}`;
   return POWER_UP_LIMITER_LABELS[s.limiter];
@@ -68,7 +69,7 @@ export function PowerUpSession({ jobId, session, number, canAdd }: { jobId: numb
           <p className="font-bold text-caution">Not done before first power</p>
           <ul className="mt-1 list-disc pl-5 text-note">
             {session.checklistWarnings.map((w) => (
-              <li key={w.id}>{w.message.replace(/^Not done before first power: /, "")}</li>
+              <li key={w.id}>{CHECK_LABEL.get(w.id) ?? w.message}</li>
             ))}
           </ul>
         </div>

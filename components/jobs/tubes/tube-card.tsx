@@ -68,17 +68,18 @@ function EditTube({ jobId, tube, onClose }: { jobId: number; tube: TubeView; onC
 export function TubeCard({ jobId, tube, canDelete }: { jobId: number; tube: TubeView; canDelete: boolean }) {
   const [editing, setEditing] = useState(false);
   const danger = tube.differences.some((d) => d.level === "danger");
+  const action = tube.test || tube.verdict !== "not-tested" ? "Edit result" : "Record result";
   return (
     <li className={`rounded-card border bg-panel p-4 shadow-card ${tube.verdict === "short" || danger ? "border-hazard/60" : "border-rule"}`} data-testid={`tube-${tube.position}`}>
-      <div className="flex flex-wrap items-start justify-between gap-x-4 gap-y-2">
-        <div className="min-w-0">
+      <div className="flex items-start justify-between gap-3">
+        <div className="min-w-0 flex-1">
           <p className="flex flex-wrap items-baseline gap-x-3">
             <span className="font-mono text-lead font-bold">{tube.position}</span>
             <span className="font-mono text-lead">{tube.type}</span>
           </p>
           {tube.function ? <p className="text-muted">{tube.function}</p> : null}
         </div>
-        <div className="flex flex-col items-end gap-1">
+        <div className="shrink-0">
           <VerdictBadge verdict={tube.verdict} />
         </div>
       </div>
@@ -93,8 +94,8 @@ export function TubeCard({ jobId, tube, canDelete }: { jobId: number; tube: Tube
         <EditTube jobId={jobId} tube={tube} onClose={() => setEditing(false)} />
       ) : (
         <div className="mt-3 flex flex-wrap items-center gap-2">
-          <Button type="button" variant="secondary" onClick={() => setEditing(true)} aria-label={`Edit ${tube.position} ${tube.type}`}>
-            Edit result
+          <Button type="button" variant="secondary" onClick={() => setEditing(true)} aria-label={`${action} of ${tube.position} ${tube.type}`}>
+            {action}
           </Button>
           {canDelete ? <RemoveButton url={`/api/jobs/${jobId}/tubes/${tube.id}`} confirm={`Remove ${tube.position} (${tube.type}) from the tubes?`} label={`Remove ${tube.position}`} /> : null}
         </div>

@@ -27,6 +27,7 @@ export function TubeLineupForm({ jobId, groups }: { jobId: number; groups: reado
     const now = form.getValues("types").trim();
     form.setValue("types", now ? `${now} ${pick}` : pick, { shouldDirty: true });
     form.clearErrors("types");
+    setPick("");
   };
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Add a tube line-up" className="flex flex-col gap-2">

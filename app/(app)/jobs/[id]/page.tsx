@@ -50,20 +50,20 @@ export default async function JobOverviewPage({ params }: JobPageProps) {
           intakePhotos={files.filter((f) => f.kind === "intake").map((f) => ({ id: f.id, name: f.originalName, hasThumbnail: f.hasThumbnail }))}
         />
       </Card>
-      <Card>
-        <h2 className="mb-4 text-lead font-bold">At a glance</h2>
-        <ul className="flex flex-col gap-3">
-          {stats.map((s) => (
-            <li key={s.label}>
-              <Link href={`/jobs/${job.id}/${s.href}`} className="flex items-baseline gap-3 hover:underline">
-                <span className="font-mono text-reading">{s.value}</span>
-                <span className="text-muted">{s.label}</span>
-              </Link>
-            </li>
-          ))}
-        </ul>
-      </Card>
-      <div className="lg:col-span-2">
+      <div className="flex flex-col gap-6">
+        <Card>
+          <h2 className="mb-4 text-lead font-bold">At a glance</h2>
+          <ul className="flex flex-col gap-3">
+            {stats.map((s) => (
+              <li key={s.label}>
+                <Link href={`/jobs/${job.id}/${s.href}`} className="flex items-baseline gap-3 hover:underline">
+                  <span className="font-mono text-reading">{s.value}</span>
+                  <span className="text-muted">{s.label}</span>
+                </Link>
+              </li>
+            ))}
+          </ul>
+        </Card>
         <OpenFaultsPanel jobId={job.id} faults={faults} />
       </div>
     </div>

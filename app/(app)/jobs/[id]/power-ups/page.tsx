@@ -1,5 +1,4 @@
 import type { Metadata } from "next";
-import { HighVoltageNote } from "@/components/jobs/high-voltage-note";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
 import { PowerUpSession } from "@/components/jobs/power-ups/power-up-session";
 import { PowerUpStartForm } from "@/components/jobs/power-ups/power-up-start-form";
@@ -13,11 +12,11 @@ export default async function PowerUpsPage({ params }: JobPageProps) {
   const { member, job } = await loadJobPage((await params).id, "power-ups");
   const sessions = listPowerUps(member, job.id);
   const canAdd = can.addNotes(member);
+  // The job layout carries the high-voltage note above every tab, this one included.
   // Newest first: the session under way is the one at the bench now.
   const shown = sessions.map((s, i) => ({ s, n: i + 1 })).reverse();
   return (
     <div className="flex flex-col gap-6">
-      <HighVoltageNote />
       <section aria-labelledby="pu-h" className="flex flex-col gap-4">
         <h2 id="pu-h" className="text-lead font-bold">Bring-ups</h2>
         {shown.length ? (

@@ -42,7 +42,7 @@ export default async function TubesPage({ params }: JobPageProps) {
           ) : null}
         </div>
         {tubes.length ? (
-          <ul className="grid gap-3 md:grid-cols-2 xl:grid-cols-3" data-testid="tubes">
+          <ul className="grid items-start gap-3 md:grid-cols-2 xl:grid-cols-3" data-testid="tubes">
             {tubes.map((t) => (
               <TubeCard key={t.id} jobId={job.id} tube={t} canDelete={can.editJobs(member)} />
             ))}
