@@ -5,7 +5,8 @@ import { partUpdateSchema } from "@/lib/jobs/part-schemas";
 
 const ids = { id: "That job", partId: "That part" };
 
-export const PATCH = route({ role: "editJobs", ids, body: partUpdateSchema }, ({ member, ids, body }) =>
+/** Technicians and owners edit; an apprentice may only record a part as fitted (the query checks which). */
+export const PATCH = route({ role: "addNotes", ids, body: partUpdateSchema }, ({ member, ids, body }) =>
   NextResponse.json({ part: updatePart(member, ids.id, ids.partId, body) }),
 );
 
