@@ -27,7 +27,8 @@ test("the collection message panel appears only at the counter and sends the ben
 
   const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
   const [name, value] = team.technician.cookies.split("; ")[0].split(/=(.*)/s);
-  await context.addCookies([{ name, value, url: baseUrl() }]);
+  // The session cookie is __Host- (Secure) in production; Chromium sends Secure cookies to http://localhost.
+  await context.addCookies([{ name, value, url: baseUrl().replace(/^http:/, "https:") }]);
   const page = await context.newPage();
 
   await page.goto(`${baseUrl()}/jobs/${job.id}`);
