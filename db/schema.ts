@@ -584,24 +584,14 @@ export const drills = sqliteTable(
 );
 
 export type Workshop = typeof workshops.$inferSelect;
-export type User = typeof users.$inferSelect;
 export type Membership = typeof memberships.$inferSelect;
 export type Customer = typeof customers.$inferSelect;
 export type Job = typeof jobs.$inferSelect;
-export type NewJob = typeof jobs.$inferInsert;
 export type Part = typeof parts.$inferSelect;
 export type Reading = typeof readings.$inferSelect;
-export type Calculation = typeof calculations.$inferSelect;
-export type StoredFile = typeof files.$inferSelect;
-export type LogEntry = typeof logEntries.$inferSelect;
 export type Invitation = typeof invitations.$inferSelect;
-export type AuditEvent = typeof auditEvents.$inferSelect;
 export type Estimate = typeof estimates.$inferSelect;
-export type EstimateLine = typeof estimateLines.$inferSelect;
 export type Invoice = typeof invoices.$inferSelect;
-export type InvoiceLine = typeof invoiceLines.$inferSelect;
-export type DrillRow = typeof drills.$inferSelect;
-export type DrillAssignment = typeof drillAssignments.$inferSelect;
 export type Tube = typeof tubes.$inferSelect;
 export type PowerUp = typeof powerUps.$inferSelect;
 export type PowerUpStep = typeof powerUpSteps.$inferSelect;

@@ -141,7 +141,6 @@ export const FAULT_STATE_LABELS: Record<FaultState, string> = {
 
 /** A reading is a resistor-survey row (Ω) or a voltage test point (V, nominal = expected). */
 export const READING_KINDS = ["resistor", "voltage"] as const;
-export type ReadingKind = (typeof READING_KINDS)[number];
 
 /** What an uploaded file is for: a PDF is always a schematic; an intake photo shows the set as it came in. */
 export const FILE_KINDS = ["photo", "schematic", "intake"] as const;

@@ -20,7 +20,6 @@ const columns = {
   uploaderName: users.name,
 };
 
-export type FileRow = ReturnType<typeof listFiles>[number];
 
 export function listFiles(member: Member, jobId: number) {
   assertJobInWorkshop(member, jobId);

@@ -29,14 +29,6 @@ const listColumns = {
 
 const detailColumns = { ...listColumns, customerEmail: jobs.customerEmail, notes: jobs.notes, serialNumber: jobs.serialNumber, accessories: jobs.accessories };
 
-export type JobListRow = Awaited<ReturnType<typeof listJobs>>[number];
-export type JobDetail = NonNullable<ReturnType<typeof findJob>>;
-
-/** Every job of the workshop, most recently worked on first (used where no paging is needed). */
-export function listJobs(member: Member) {
-  return getDb().select(listColumns).from(jobs).where(eq(jobs.workshopId, member.workshopId)).orderBy(desc(jobs.updatedAt)).all();
-}
-
 const SORT_COLUMNS = {
   updatedAt: jobs.updatedAt,
   createdAt: jobs.createdAt,
