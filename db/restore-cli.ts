@@ -8,7 +8,11 @@ if (!archive) {
 }
 restoreBackup(archive)
   .then(({ dbFile, rows, setAside }) => {
-    console.log(`Restored ${dbFile}: ${Object.entries(rows).map(([t, n]) => `${t} ${n}`).join(", ")}`);
+    console.log(
+      `Restored ${dbFile}: ${Object.entries(rows)
+        .map(([t, n]) => `${t} ${n}`)
+        .join(", ")}`,
+    );
     for (const f of setAside) console.log(`Kept the previous copy as ${f}`);
   })
   .catch((err: unknown) => {

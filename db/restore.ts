@@ -11,7 +11,10 @@ import { databasePath, uploadsFolder } from "./env";
  * recorded) before touching anything, then moves the current database and uploads aside (never deletes
  * them) and puts the archive's copies in their place. Stop the app first.
  */
-export async function restoreBackup(archive: string, opts: { dbFile?: string; uploads?: string } = {}): Promise<{ dbFile: string; rows: Record<string, number>; setAside: string[] }> {
+export async function restoreBackup(
+  archive: string,
+  opts: { dbFile?: string; uploads?: string } = {},
+): Promise<{ dbFile: string; rows: Record<string, number>; setAside: string[] }> {
   const dbFile = path.resolve(opts.dbFile ?? databasePath());
   const uploads = opts.uploads ?? uploadsFolder(dbFile);
   if (!fs.existsSync(archive)) throw new Error(`No archive at ${archive}`);

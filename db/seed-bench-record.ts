@@ -22,7 +22,11 @@ export interface DemoPeople {
 /** Adds the television job once; a second run finds it by title and adds nothing. */
 export function seedTelevision(tx: Tx, people: DemoPeople, now = Date.now()): boolean {
   const w = people.workshopId;
-  const have = tx.select({ id: jobs.id }).from(jobs).where(and(eq(jobs.workshopId, w), eq(jobs.title, DEMO_TELEVISION_TITLE))).get();
+  const have = tx
+    .select({ id: jobs.id })
+    .from(jobs)
+    .where(and(eq(jobs.workshopId, w), eq(jobs.title, DEMO_TELEVISION_TITLE)))
+    .get();
   if (have) return false;
   const at = (hoursAgo: number) => new Date(now - hoursAgo * HOUR);
   const jobId = tx
@@ -45,10 +49,54 @@ export function seedTelevision(tx: Tx, people: DemoPeople, now = Date.now()): bo
 
   tx.insert(parts)
     .values([
-      { ...own, designator: "C101", kind: "electrolytic", originalValue: "40 µF", originalRating: "450 V", replacementValue: "47 µF", replacementRating: "500 V", state: "fitted", checkedBy: people.tech, checkedAt: at(200), unitCostMinor: 320 },
-      { ...own, designator: "C102", kind: "electrolytic", originalValue: "40 µF", originalRating: "450 V", replacementValue: "47 µF", replacementRating: "500 V", state: "fitted", checkedBy: people.tech, checkedAt: at(200), unitCostMinor: 320 },
-      { ...own, designator: "C205", kind: "paper", originalValue: "0.1 µF", originalRating: "600 V", replacementValue: "0.1 µF", replacementRating: "630 V", state: "fitted", unitCostMinor: 110 },
-      { ...own, designator: "C310", kind: "paper", originalValue: "0.05 µF", originalRating: "1600 V", replacementValue: "0.047 µF", replacementRating: "2000 V", state: "ordered", unitCostMinor: 260 },
+      {
+        ...own,
+        designator: "C101",
+        kind: "electrolytic",
+        originalValue: "40 µF",
+        originalRating: "450 V",
+        replacementValue: "47 µF",
+        replacementRating: "500 V",
+        state: "fitted",
+        checkedBy: people.tech,
+        checkedAt: at(200),
+        unitCostMinor: 320,
+      },
+      {
+        ...own,
+        designator: "C102",
+        kind: "electrolytic",
+        originalValue: "40 µF",
+        originalRating: "450 V",
+        replacementValue: "47 µF",
+        replacementRating: "500 V",
+        state: "fitted",
+        checkedBy: people.tech,
+        checkedAt: at(200),
+        unitCostMinor: 320,
+      },
+      {
+        ...own,
+        designator: "C205",
+        kind: "paper",
+        originalValue: "0.1 µF",
+        originalRating: "600 V",
+        replacementValue: "0.1 µF",
+        replacementRating: "630 V",
+        state: "fitted",
+        unitCostMinor: 110,
+      },
+      {
+        ...own,
+        designator: "C310",
+        kind: "paper",
+        originalValue: "0.05 µF",
+        originalRating: "1600 V",
+        replacementValue: "0.047 µF",
+        replacementRating: "2000 V",
+        state: "ordered",
+        unitCostMinor: 260,
+      },
     ])
     .run();
 
@@ -114,28 +162,87 @@ export function seedTelevision(tx: Tx, people: DemoPeople, now = Date.now()): bo
   tx.insert(powerUpSteps)
     .values([
       { powerUpId: session, supplyVoltage: 40, currentDrawn: 0.45, minutes: 5, note: "Heaters glowing, lamp bright orange.", createdAt: at(190) },
-      { powerUpId: session, supplyVoltage: 70, currentDrawn: 0.75, minutes: 5, note: "No smoke, no smell. Lamp dimming as the heaters warm.", createdAt: at(189.9) },
+      {
+        powerUpId: session,
+        supplyVoltage: 70,
+        currentDrawn: 0.75,
+        minutes: 5,
+        note: "No smoke, no smell. Lamp dimming as the heaters warm.",
+        createdAt: at(189.9),
+      },
       { powerUpId: session, supplyVoltage: 90, currentDrawn: 1.35, minutes: 1, bPlus: 180, note: "Lamp flared as B+ came up.", createdAt: at(189.8) },
-      { powerUpId: session, supplyVoltage: 90, currentDrawn: 1.05, minutes: 10, bPlus: 195, note: "Settled. Sound from the speaker, faint raster.", createdAt: at(189.6) },
-      { powerUpId: session, supplyVoltage: 117, currentDrawn: 1.15, minutes: 15, bPlus: 255, note: "Full line: a bright horizontal line only, no height. High voltage present (line is lit).", createdAt: at(189.3) },
+      {
+        powerUpId: session,
+        supplyVoltage: 90,
+        currentDrawn: 1.05,
+        minutes: 10,
+        bPlus: 195,
+        note: "Settled. Sound from the speaker, faint raster.",
+        createdAt: at(189.6),
+      },
+      {
+        powerUpId: session,
+        supplyVoltage: 117,
+        currentDrawn: 1.15,
+        minutes: 15,
+        bPlus: 255,
+        note: "Full line: a bright horizontal line only, no height. High voltage present (line is lit).",
+        createdAt: at(189.3),
+      },
     ])
     .run();
 
   const fault = tx
     .insert(faults)
-    .values({ ...own, symptom: "No vertical deflection: a bright horizontal line across the screen", section: "vertical deflection", createdAt: at(188), updatedAt: at(20) })
+    .values({
+      ...own,
+      symptom: "No vertical deflection: a bright horizontal line across the screen",
+      section: "vertical deflection",
+      createdAt: at(188),
+      updatedAt: at(20),
+    })
     .returning({ id: faults.id })
     .get().id;
   tx.insert(faultCandidates)
     .values([
-      { faultId: fault, position: 1, description: "Yoke (vertical windings)", status: "ruled-out", evidence: "Both vertical halves measure alike, near the expected figure.", readingId: yoke.id, createdAt: at(187) },
-      { faultId: fault, position: 2, description: "Vertical output transformer", status: "ruled-out", evidence: "Primary continuous; B+ reaches the plate of V9.", readingId: plate.id, createdAt: at(187) },
-      { faultId: fault, position: 3, description: "Vertical output tube (V9)", status: "cause", evidence: "Cathode at 1.6 V where about 18 V is expected: the tube hardly conducts. Tested weak.", readingId: cathode.id, createdAt: at(187) },
+      {
+        faultId: fault,
+        position: 1,
+        description: "Yoke (vertical windings)",
+        status: "ruled-out",
+        evidence: "Both vertical halves measure alike, near the expected figure.",
+        readingId: yoke.id,
+        createdAt: at(187),
+      },
+      {
+        faultId: fault,
+        position: 2,
+        description: "Vertical output transformer",
+        status: "ruled-out",
+        evidence: "Primary continuous; B+ reaches the plate of V9.",
+        readingId: plate.id,
+        createdAt: at(187),
+      },
+      {
+        faultId: fault,
+        position: 3,
+        description: "Vertical output tube (V9)",
+        status: "cause",
+        evidence: "Cathode at 1.6 V where about 18 V is expected: the tube hardly conducts. Tested weak.",
+        readingId: cathode.id,
+        createdAt: at(187),
+      },
       { faultId: fault, position: 4, description: "Vertical oscillator (V8)", status: "open", createdAt: at(187) },
     ])
     .run();
 
-  const log = (hoursAgo: number, author: number, kind: (typeof logEntries.$inferInsert)["kind"], text: string) => ({ ...own, authorId: author, kind, text, createdAt: at(hoursAgo) });
+  const log = (hoursAgo: number, author: number, kind: (typeof logEntries.$inferInsert)["kind"], text: string) => ({
+    ...own,
+    authorId: author,
+    kind,
+    text,
+    createdAt: at(hoursAgo),
+  });
   tx.insert(logEntries)
     .values([
       log(240, people.tech, "status", `On the rack: ${DEMO_TELEVISION_TITLE}.`),
@@ -144,7 +251,12 @@ export function seedTelevision(tx: Tx, people: DemoPeople, now = Date.now()): bo
       log(190, people.tech, "power-up", "Power-up session started behind a 200 W series lamp, stop current 1.2 A; every check done."),
       log(189, people.tech, "power-up", "Power-up session passed: the 1.35 A at 90 V was the new filter capacitors charging."),
       log(188, people.tech, "fault", "Fault found: “No vertical deflection: a bright horizontal line across the screen” (points to the vertical deflection)."),
-      log(20, people.apprentice, "fault", "“No vertical deflection…” — Vertical output tube (V9): the cause; reading V9 cathode 1.6 V. The fault is now: cause found."),
+      log(
+        20,
+        people.apprentice,
+        "fault",
+        "“No vertical deflection…” — Vertical output tube (V9): the cause; reading V9 cathode 1.6 V. The fault is now: cause found.",
+      ),
     ])
     .run();
   return true;

@@ -70,7 +70,11 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
       .run();
 
     const job = (values: Omit<typeof jobs.$inferInsert, "workshopId">, workshopId = lamplight.id) =>
-      tx.insert(jobs).values({ ...values, workshopId }).returning({ id: jobs.id }).get().id;
+      tx
+        .insert(jobs)
+        .values({ ...values, workshopId })
+        .returning({ id: jobs.id })
+        .get().id;
 
     const radio = job({
       title: "Five-tube AC/DC table radio, early 1950s",
@@ -143,11 +147,66 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
     const w = lamplight.id;
     tx.insert(parts)
       .values([
-        { jobId: radio, workshopId: w, designator: "C1", kind: "paper", originalValue: "0.05 µF", originalRating: "400 V", replacementValue: "0.047 µF", replacementRating: "630 V", state: "fitted", unitCostMinor: 85 },
-        { jobId: radio, workshopId: w, designator: "C2", kind: "paper", originalValue: "0.02 µF", originalRating: "400 V", replacementValue: "0.022 µF", replacementRating: "630 V", state: "fitted", unitCostMinor: 85 },
-        { jobId: radio, workshopId: w, designator: "C5a", kind: "electrolytic", originalValue: "50 µF", originalRating: "150 V", replacementValue: "47 µF", replacementRating: "250 V", state: "ordered", unitCostMinor: 240 },
-        { jobId: radio, workshopId: w, designator: "C5b", kind: "electrolytic", originalValue: "30 µF", originalRating: "150 V", replacementValue: "33 µF", replacementRating: "250 V", state: "to-order", unitCostMinor: 210 },
-        { jobId: radio, workshopId: w, designator: "R7", kind: "resistor", originalValue: "2.2 MΩ", originalRating: "0.5 W", replacementValue: "2.2 MΩ", replacementRating: "0.5 W", state: "to-order", unitCostMinor: 30 },
+        {
+          jobId: radio,
+          workshopId: w,
+          designator: "C1",
+          kind: "paper",
+          originalValue: "0.05 µF",
+          originalRating: "400 V",
+          replacementValue: "0.047 µF",
+          replacementRating: "630 V",
+          state: "fitted",
+          unitCostMinor: 85,
+        },
+        {
+          jobId: radio,
+          workshopId: w,
+          designator: "C2",
+          kind: "paper",
+          originalValue: "0.02 µF",
+          originalRating: "400 V",
+          replacementValue: "0.022 µF",
+          replacementRating: "630 V",
+          state: "fitted",
+          unitCostMinor: 85,
+        },
+        {
+          jobId: radio,
+          workshopId: w,
+          designator: "C5a",
+          kind: "electrolytic",
+          originalValue: "50 µF",
+          originalRating: "150 V",
+          replacementValue: "47 µF",
+          replacementRating: "250 V",
+          state: "ordered",
+          unitCostMinor: 240,
+        },
+        {
+          jobId: radio,
+          workshopId: w,
+          designator: "C5b",
+          kind: "electrolytic",
+          originalValue: "30 µF",
+          originalRating: "150 V",
+          replacementValue: "33 µF",
+          replacementRating: "250 V",
+          state: "to-order",
+          unitCostMinor: 210,
+        },
+        {
+          jobId: radio,
+          workshopId: w,
+          designator: "R7",
+          kind: "resistor",
+          originalValue: "2.2 MΩ",
+          originalRating: "0.5 W",
+          replacementValue: "2.2 MΩ",
+          replacementRating: "0.5 W",
+          state: "to-order",
+          unitCostMinor: 30,
+        },
       ])
       .run();
     tx.insert(readings)
@@ -174,7 +233,14 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
     const radioLog = tx
       .insert(logEntries)
       .values([
-        { jobId: radio, workshopId: w, authorId: tech, kind: "note", text: "Arrived this morning. Back cover off; all paper capacitors original and leaking wax.", createdAt: at(72) },
+        {
+          jobId: radio,
+          workshopId: w,
+          authorId: tech,
+          kind: "note",
+          text: "Arrived this morning. Back cover off; all paper capacitors original and leaking wax.",
+          createdAt: at(72),
+        },
         {
           jobId: radio,
           workshopId: w,

@@ -7,15 +7,7 @@
 export const ROLES = ["owner", "technician", "apprentice"] as const;
 export type Role = (typeof ROLES)[number];
 
-export const EQUIPMENT_KINDS = [
-  "table-radio",
-  "console-radio",
-  "tuner",
-  "amplifier",
-  "television",
-  "test-gear",
-  "other",
-] as const;
+export const EQUIPMENT_KINDS = ["table-radio", "console-radio", "tuner", "amplifier", "television", "test-gear", "other"] as const;
 export type EquipmentKind = (typeof EQUIPMENT_KINDS)[number];
 
 export const EQUIPMENT_KIND_LABELS: Record<EquipmentKind, string> = {

@@ -9,9 +9,19 @@ import { readEnv, storageSchema } from "@/db/env";
  * stay the text that was set, so a test may hand a function its own variables in process.env's shape.
  */
 
-const flag = (name: string) => z.string().regex(/^[01]$/, `${name} is 1 (on), 0 or unset (off).`).optional();
+const flag = (name: string) =>
+  z
+    .string()
+    .regex(/^[01]$/, `${name} is 1 (on), 0 or unset (off).`)
+    .optional();
 const address = (name: string, example: string) => z.string().refine(URL.canParse, `${name} must be a full address, like ${example}.`).optional();
-const port = (name: string) => z.coerce.number({ error: `${name} must be a port number.` }).int(`${name} must be a port number.`).min(0).max(65_535).optional();
+const port = (name: string) =>
+  z.coerce
+    .number({ error: `${name} must be a port number.` })
+    .int(`${name} must be a port number.`)
+    .min(0)
+    .max(65_535)
+    .optional();
 
 const serverSchema = storageSchema.extend({
   NODE_ENV: z.enum(["development", "production", "test"]).default("development"),

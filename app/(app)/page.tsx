@@ -16,8 +16,8 @@ export default async function HomePage() {
       <p className="font-bold uppercase tracking-widest text-glow">For restorers of tube-era sets</p>
       <h1 className="mt-3 max-w-3xl text-display font-bold">The bench companion that shows its working.</h1>
       <p className="mt-4 max-w-2xl text-lead text-muted">
-        Cathode bias, bleeder resistors, filter ripple, heater strings and arc clearance, worked out step by step, and a
-        job record for every radio, amplifier and television in the shop.
+        Cathode bias, bleeder resistors, filter ripple, heater strings and arc clearance, worked out step by step, and a job record for every radio, amplifier
+        and television in the shop.
       </p>
       <div className="mt-8 flex flex-wrap gap-3">
         <ButtonLink href="/bench">Open the Bench</ButtonLink>

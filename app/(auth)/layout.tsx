@@ -32,8 +32,8 @@ export default function AuthLayout({ children }: { children: React.ReactNode }) 
         <aside aria-label="High voltage" className="flex gap-3 border-t border-rule bg-sunk px-6 py-4 text-note text-muted sm:px-8">
           <Bolt />
           <p>
-            <strong className="text-ink">Tube sets hold lethal voltages,</strong> in filter capacitors even when unplugged.
-            Glowbench works out the figures; discharging, isolating and your local codes stay with you.
+            <strong className="text-ink">Tube sets hold lethal voltages,</strong> in filter capacitors even when unplugged. Glowbench works out the figures;
+            discharging, isolating and your local codes stay with you.
           </p>
         </aside>
       </div>

@@ -19,9 +19,18 @@ export function ChangePasswordForm({ context }: { context: string[] }) {
     resolver: zodResolver(changePasswordSchema),
     defaultValues: { currentPassword: "", newPassword: "" },
   });
-  const { register, reset, control, formState: { errors } } = form;
+  const {
+    register,
+    reset,
+    control,
+    formState: { errors },
+  } = form;
   const newPassword = useWatch({ control, name: "newPassword" });
-  const { submit, formError, pending: isSubmitting } = useSubmit(form, {
+  const {
+    submit,
+    formError,
+    pending: isSubmitting,
+  } = useSubmit(form, {
     url: "/api/auth/password",
     fields: NAMES,
     refresh: false,
@@ -33,8 +42,23 @@ export function ChangePasswordForm({ context }: { context: string[] }) {
   });
   return (
     <form onSubmit={submit} noValidate className="flex max-w-md flex-col gap-2">
-      <Field id="currentPassword" label="Current password" type="password" autoComplete="current-password" error={errors.currentPassword?.message} {...register("currentPassword")} />
-      <Field id="newPassword" label="New password" type="password" autoComplete="new-password" hint={NEW_PASSWORD_HINT} error={errors.newPassword?.message} {...register("newPassword")} />
+      <Field
+        id="currentPassword"
+        label="Current password"
+        type="password"
+        autoComplete="current-password"
+        error={errors.currentPassword?.message}
+        {...register("currentPassword")}
+      />
+      <Field
+        id="newPassword"
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint={NEW_PASSWORD_HINT}
+        error={errors.newPassword?.message}
+        {...register("newPassword")}
+      />
       <PasswordStrength id="new-password-strength" password={newPassword} context={context} />
       <FormError message={formError} />
       {done ? (

@@ -22,9 +22,17 @@ function JoinError({ message }: { message: string | null }) {
 export function JoinNewForm({ token, email }: { token: string; email: string }) {
   const router = useRouter();
   const form = useForm<JoinNewForm>({ resolver: zodResolver(joinNewSchema), defaultValues: { name: "", password: "" } });
-  const { register, control, formState: { errors } } = form;
+  const {
+    register,
+    control,
+    formState: { errors },
+  } = form;
   const [password, name] = useWatch({ control, name: ["password", "name"] });
-  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit(form, {
+  const {
+    submit: onSubmit,
+    formError,
+    pending: isSubmitting,
+  } = useSubmit(form, {
     url: ACCEPT,
     body: (values) => ({ token, mode: "sign-up", ...values }),
     fields: ["name", "password"],
@@ -34,7 +42,15 @@ export function JoinNewForm({ token, email }: { token: string; email: string }) 
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
       <Field id="join-email" label="E-mail" value={email} readOnly disabled hint="The address the invitation was sent to." />
       <Field id="name" label="Your name" autoComplete="name" error={errors.name?.message} {...register("name")} />
-      <Field id="password" label="Choose a password" type="password" autoComplete="new-password" hint={NEW_PASSWORD_HINT} error={errors.password?.message} {...register("password")} />
+      <Field
+        id="password"
+        label="Choose a password"
+        type="password"
+        autoComplete="new-password"
+        hint={NEW_PASSWORD_HINT}
+        error={errors.password?.message}
+        {...register("password")}
+      />
       <PasswordStrength id="password-strength" password={password} context={[email, name]} />
       <JoinError message={formError} />
       <Button type="submit" disabled={isSubmitting}>
@@ -48,8 +64,15 @@ export function JoinNewForm({ token, email }: { token: string; email: string }) 
 export function JoinExistingForm({ token, email }: { token: string; email: string }) {
   const router = useRouter();
   const form = useForm<JoinExistingForm>({ resolver: zodResolver(joinExistingSchema), defaultValues: { password: "" } });
-  const { register, formState: { errors } } = form;
-  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit(form, {
+  const {
+    register,
+    formState: { errors },
+  } = form;
+  const {
+    submit: onSubmit,
+    formError,
+    pending: isSubmitting,
+  } = useSubmit(form, {
     url: ACCEPT,
     body: (values) => ({ token, mode: "sign-in", ...values }),
     fields: ["password"],
@@ -58,7 +81,14 @@ export function JoinExistingForm({ token, email }: { token: string; email: strin
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
       <Field id="join-email" label="E-mail" value={email} readOnly disabled />
-      <Field id="password" label="Your Glowbench password" type="password" autoComplete="current-password" error={errors.password?.message} {...register("password")} />
+      <Field
+        id="password"
+        label="Your Glowbench password"
+        type="password"
+        autoComplete="current-password"
+        error={errors.password?.message}
+        {...register("password")}
+      />
       <p className="-mt-2 mb-1 text-note">
         <Link href="/forgot-password" className="font-bold text-signal underline underline-offset-4">
           Forgot your password?

@@ -15,8 +15,15 @@ import { PasswordStrength } from "./password-strength";
 export function ResetRequestForm() {
   const [sent, setSent] = useState<string | null>(null);
   const form = useForm<ResetRequestForm>({ resolver: zodResolver(resetRequestSchema), defaultValues: { email: "" } });
-  const { register, formState: { errors } } = form;
-  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit<ResetRequestForm, { message: string }>(form, {
+  const {
+    register,
+    formState: { errors },
+  } = form;
+  const {
+    submit: onSubmit,
+    formError,
+    pending: isSubmitting,
+  } = useSubmit<ResetRequestForm, { message: string }>(form, {
     url: "/api/auth/password-reset",
     fields: ["email"],
     refresh: false,
@@ -45,9 +52,17 @@ export function ResetRequestForm() {
 export function NewPasswordFormView({ token }: { token: string }) {
   const router = useRouter();
   const form = useForm<NewPasswordForm>({ resolver: zodResolver(newPasswordFormSchema), defaultValues: { password: "", confirm: "" } });
-  const { register, control, formState: { errors } } = form;
+  const {
+    register,
+    control,
+    formState: { errors },
+  } = form;
   const password = useWatch({ control, name: "password" });
-  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit(form, {
+  const {
+    submit: onSubmit,
+    formError,
+    pending: isSubmitting,
+  } = useSubmit(form, {
     url: "/api/auth/password-reset/complete",
     body: (values) => ({ token, password: values.password }),
     fields: ["password"],
@@ -55,7 +70,15 @@ export function NewPasswordFormView({ token }: { token: string }) {
   });
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
-      <Field id="password" label="New password" type="password" autoComplete="new-password" hint={NEW_PASSWORD_HINT} error={errors.password?.message} {...register("password")} />
+      <Field
+        id="password"
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint={NEW_PASSWORD_HINT}
+        error={errors.password?.message}
+        {...register("password")}
+      />
       <PasswordStrength id="password-strength" password={password} />
       <Field id="confirm" label="The same again" type="password" autoComplete="new-password" error={errors.confirm?.message} {...register("confirm")} />
       <FormError message={formError} />

@@ -13,8 +13,15 @@ import { useSubmit } from "@/components/ui/use-submit";
 export function SignInForm({ next }: { next?: string }) {
   const router = useRouter();
   const form = useForm<SignInInput>({ resolver: zodResolver(signInSchema), defaultValues: { email: "", password: "" } });
-  const { register, formState: { errors } } = form;
-  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit(form, {
+  const {
+    register,
+    formState: { errors },
+  } = form;
+  const {
+    submit: onSubmit,
+    formError,
+    pending: isSubmitting,
+  } = useSubmit(form, {
     url: "/api/auth/sign-in",
     fields: ["email", "password"],
     onDone: () => router.push(safeNextPath(next)),

@@ -18,11 +18,19 @@ export function SignUpForm() {
     resolver: zodResolver(signUpSchema),
     defaultValues: { workshopName: "", name: "", email: "", password: "" },
   });
-  const { register, control, formState: { errors } } = form;
+  const {
+    register,
+    control,
+    formState: { errors },
+  } = form;
 
   const [password, email, name, workshopName] = useWatch({ control, name: ["password", "email", "name", "workshopName"] });
 
-  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit(form, { url: "/api/auth/sign-up", fields: NAMES, onDone: () => router.push("/jobs") });
+  const {
+    submit: onSubmit,
+    formError,
+    pending: isSubmitting,
+  } = useSubmit(form, { url: "/api/auth/sign-up", fields: NAMES, onDone: () => router.push("/jobs") });
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">

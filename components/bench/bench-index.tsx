@@ -66,7 +66,10 @@ export function BenchIndex({ entries }: { entries: IndexEntry[] }) {
           <ul className="flex flex-wrap gap-2">
             {GROUPS.map((g) => (
               <li key={g.id}>
-                <a href={`#group-${g.id}`} className="inline-flex min-h-11 items-center rounded-chip border border-rule bg-panel px-3 py-2 font-bold text-signal hover:border-glow">
+                <a
+                  href={`#group-${g.id}`}
+                  className="inline-flex min-h-11 items-center rounded-chip border border-rule bg-panel px-3 py-2 font-bold text-signal hover:border-glow"
+                >
                   {g.title}
                   <span className="ml-2 font-normal text-muted">{entries.filter((e) => e.group === g.id).length}</span>
                 </a>

@@ -69,7 +69,6 @@ export function CalculatorView(p: CalculatorViewProps) {
   const values = useWatch({ control: form.control }) as FormValues;
   const raw = useMemo(() => toRaw(shape, values, mode), [shape, values, mode]);
   const run = useMemo(() => (calc ? runCalculator(calc, raw) : p.initialRun), [calc, raw, p.initialRun]);
-  latest.current = calc ? run : null;
   const later = useDeferredValue(run);
   // The danger banner follows each typed voltage on its own, valid form or not. The full unit parser
   // (mathjs) shares the calculator module's chunk; until it arrives the quick reader serves.
@@ -99,8 +98,10 @@ export function CalculatorView(p: CalculatorViewProps) {
   // Re-check every field from the latest run, so a message that depends on another field (target below initial) stays current.
   const { trigger } = form;
   useEffect(() => {
+    // The resolver reads this run; it is set here, before the re-check, never during render.
+    latest.current = calc ? run : null;
     if (calc) void trigger();
-  }, [calc, raw, trigger]);
+  }, [calc, run, trigger]);
 
   // The address carries the inputs, so the page can be sent to a colleague or reopened later.
   useEffect(() => {
@@ -153,7 +154,10 @@ export function CalculatorView(p: CalculatorViewProps) {
               <legend className="mb-1 font-bold">How to enter it</legend>
               <div className="inline-flex rounded-chip border border-rule bg-sunk p-1">
                 {modes.map((m) => (
-                  <label key={m.id} className={`min-h-11 cursor-pointer rounded-chip px-3 py-2 font-bold has-[:focus-visible]:outline has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-glow ${mode === m.id ? "bg-panel text-ink shadow-sm" : "text-muted"}`}>
+                  <label
+                    key={m.id}
+                    className={`min-h-11 cursor-pointer rounded-chip px-3 py-2 font-bold has-[:focus-visible]:outline has-[:focus-visible]:outline-3 has-[:focus-visible]:outline-glow ${mode === m.id ? "bg-panel text-ink shadow-sm" : "text-muted"}`}
+                  >
                     <input type="radio" name="gb-mode" value={m.id} checked={mode === m.id} onChange={() => setMode(m.id)} className="sr-only" />
                     {m.label}
                   </label>
@@ -202,7 +206,17 @@ export function CalculatorView(p: CalculatorViewProps) {
         </div>
       </div>
       <div className="mt-8">
-        <Working view={bench} live={calc !== null} open={p.workingOpen} run={later} outputs={p.outputs} serverHtml={p.serverHtml} formulas={p.formulas} sources={p.sources} why={p.why} />
+        <Working
+          view={bench}
+          live={calc !== null}
+          open={p.workingOpen}
+          run={later}
+          outputs={p.outputs}
+          serverHtml={p.serverHtml}
+          formulas={p.formulas}
+          sources={p.sources}
+          why={p.why}
+        />
       </div>
       <section aria-labelledby="save-title" className="gb-no-print mt-8 rounded-card border border-rule bg-panel p-6 shadow-card">
         <h2 id="save-title" className="mb-3 text-lead font-bold">

@@ -66,10 +66,9 @@ export function HighVoltageNote() {
     <aside aria-label="High-voltage caution" data-testid="hv-note" className="flex gap-3 rounded-card border-2 border-hazard bg-hazard-bg p-4 text-ink">
       <Bolt className="h-7 w-7 shrink-0 text-hazard" />
       <p className="min-w-0 text-note md:text-body">
-        <strong className="text-hazard">Tube sets carry lethal voltages.</strong> B+ runs to hundreds of volts, and filter
-        capacitors keep their charge after the plug is pulled. Discharge them and check with a meter before you touch, bring a
-        set up on a current-limited supply, keep one hand away from the chassis, and follow local electrical codes and licensed
-        practice. The figures here are estimates, never a guarantee of safety.
+        <strong className="text-hazard">Tube sets carry lethal voltages.</strong> B+ runs to hundreds of volts, and filter capacitors keep their charge after
+        the plug is pulled. Discharge them and check with a meter before you touch, bring a set up on a current-limited supply, keep one hand away from the
+        chassis, and follow local electrical codes and licensed practice. The figures here are estimates, never a guarantee of safety.
       </p>
     </aside>
   );

@@ -51,7 +51,13 @@ export function InputControl({ meta, slug }: { meta: InputMeta; slug: string }) 
     return (
       <div className="flex flex-col gap-1">
         <label htmlFor={id} className="flex min-h-11 cursor-pointer items-center gap-3 font-bold">
-          <input id={id} type="checkbox" className="h-5 w-5 accent-[rgb(var(--gb-glow))]" aria-describedby={describedBy(id, error, meta.help)} {...register(meta.name)} />
+          <input
+            id={id}
+            type="checkbox"
+            className="h-5 w-5 accent-[rgb(var(--gb-glow))]"
+            aria-describedby={describedBy(id, error, meta.help)}
+            {...register(meta.name)}
+          />
           <InputLabel meta={meta} />
         </label>
         <Hint id={id} help={meta.help} />

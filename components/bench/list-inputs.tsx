@@ -40,9 +40,11 @@ function ListFrame({ meta, children, actions }: { meta: InputMeta; children: Rea
 
 /** The module's help describes the JSON shape; on a form, say it in words. */
 function listHelp(meta: InputMeta): string {
-  if (meta.name === "stages") return "In order after the reservoir capacitor: a resistor or a choke, each followed by a capacitor to ground, and the current each one carries.";
+  if (meta.name === "stages")
+    return "In order after the reservoir capacitor: a resistor or a choke, each followed by a capacitor to ground, and the current each one carries.";
   if (meta.name === "heaters") return "Each heater's rated voltage and current, from the tube's data.";
-  if (meta.name === "bands") return "From the end nearest a lead: figures, multiplier, then the tolerance band (gold, silver, …) and, on six-band parts, the temperature-coefficient band last.";
+  if (meta.name === "bands")
+    return "From the end nearest a lead: figures, multiplier, then the tolerance band (gold, silver, …) and, on six-band parts, the temperature-coefficient band last.";
   return meta.help ?? "";
 }
 
@@ -55,10 +57,18 @@ function StagesInput({ meta }: { meta: InputMeta }) {
       meta={meta}
       actions={
         <>
-          <button type="button" className={small} onClick={() => append({ kind: "rc", resistance: "1k", chokeResistance: "", inductance: "", capacitance: "20 uF", current: "" })}>
+          <button
+            type="button"
+            className={small}
+            onClick={() => append({ kind: "rc", resistance: "1k", chokeResistance: "", inductance: "", capacitance: "20 uF", current: "" })}
+          >
             Add RC stage
           </button>
-          <button type="button" className={small} onClick={() => append({ kind: "lc", resistance: "", chokeResistance: "", inductance: "10 H", capacitance: "20 uF", current: "" })}>
+          <button
+            type="button"
+            className={small}
+            onClick={() => append({ kind: "lc", resistance: "", chokeResistance: "", inductance: "10 H", capacitance: "20 uF", current: "" })}
+          >
             Add LC stage
           </button>
         </>
@@ -86,11 +96,32 @@ function StagesInput({ meta }: { meta: InputMeta }) {
             </div>
             <div className="grid gap-x-3 sm:grid-cols-2">
               {lc ? (
-                <Field id={`${idBase}-inductance`} label={`Stage ${i + 1} choke`} suffix="H" autoComplete="off" error={errorAt(formState.errors, `${base}.inductance`)} {...register(`${base}.inductance`)} />
+                <Field
+                  id={`${idBase}-inductance`}
+                  label={`Stage ${i + 1} choke`}
+                  suffix="H"
+                  autoComplete="off"
+                  error={errorAt(formState.errors, `${base}.inductance`)}
+                  {...register(`${base}.inductance`)}
+                />
               ) : (
-                <Field id={`${idBase}-resistance`} label={`Stage ${i + 1} resistor`} suffix="Ω" autoComplete="off" error={errorAt(formState.errors, `${base}.resistance`)} {...register(`${base}.resistance`)} />
+                <Field
+                  id={`${idBase}-resistance`}
+                  label={`Stage ${i + 1} resistor`}
+                  suffix="Ω"
+                  autoComplete="off"
+                  error={errorAt(formState.errors, `${base}.resistance`)}
+                  {...register(`${base}.resistance`)}
+                />
               )}
-              <Field id={`${idBase}-capacitance`} label={`Stage ${i + 1} capacitor`} suffix="F" autoComplete="off" error={errorAt(formState.errors, `${base}.capacitance`)} {...register(`${base}.capacitance`)} />
+              <Field
+                id={`${idBase}-capacitance`}
+                label={`Stage ${i + 1} capacitor`}
+                suffix="F"
+                autoComplete="off"
+                error={errorAt(formState.errors, `${base}.capacitance`)}
+                {...register(`${base}.capacitance`)}
+              />
               {lc ? (
                 // The form keeps the winding apart from an RC stage's resistor; the schema calls both "resistance".
                 <Field
@@ -137,8 +168,22 @@ function HeatersInput({ meta }: { meta: InputMeta }) {
       {fields.length === 0 ? <p className="text-note text-muted">No heaters yet: add one for each tube in the string.</p> : null}
       {fields.map((f, i) => (
         <div key={f.id} className="grid items-start gap-x-3 sm:grid-cols-[1fr_1fr_auto]" role="group" aria-label={`Heater ${i + 1}`}>
-          <Field id={`in-heaters-${i}-voltage`} label={`Heater ${i + 1} voltage`} suffix="V" autoComplete="off" error={errorAt(formState.errors, `heaters.${i}.voltage`)} {...register(`heaters.${i}.voltage`)} />
-          <Field id={`in-heaters-${i}-current`} label={`Heater ${i + 1} current`} suffix="A" autoComplete="off" error={errorAt(formState.errors, `heaters.${i}.current`)} {...register(`heaters.${i}.current`)} />
+          <Field
+            id={`in-heaters-${i}-voltage`}
+            label={`Heater ${i + 1} voltage`}
+            suffix="V"
+            autoComplete="off"
+            error={errorAt(formState.errors, `heaters.${i}.voltage`)}
+            {...register(`heaters.${i}.voltage`)}
+          />
+          <Field
+            id={`in-heaters-${i}-current`}
+            label={`Heater ${i + 1} current`}
+            suffix="A"
+            autoComplete="off"
+            error={errorAt(formState.errors, `heaters.${i}.current`)}
+            {...register(`heaters.${i}.current`)}
+          />
           <button type="button" className={`${remove} sm:mt-7`} onClick={() => drop(i)}>
             Remove<span className="sr-only"> heater {i + 1}</span>
           </button>
@@ -201,9 +246,21 @@ function NamesInput({ meta }: { meta: InputMeta }) {
 
 /** Screen colours for the bands (approximate paint, for recognition only). */
 export const BAND_PAINT: Record<string, string> = {
-  black: "#1c1917", brown: "#7c3f12", red: "#c81e1e", orange: "#ea7a0c", yellow: "#facc15", green: "#15803d",
-  blue: "#1d4ed8", violet: "#7e22ce", grey: "#8a8580", gray: "#8a8580", white: "#f8f7f4", gold: "#c9a227",
-  silver: "#b8bcc2", pink: "#f4a6c1", none: "transparent",
+  black: "#1c1917",
+  brown: "#7c3f12",
+  red: "#c81e1e",
+  orange: "#ea7a0c",
+  yellow: "#facc15",
+  green: "#15803d",
+  blue: "#1d4ed8",
+  violet: "#7e22ce",
+  grey: "#8a8580",
+  gray: "#8a8580",
+  white: "#f8f7f4",
+  gold: "#c9a227",
+  silver: "#b8bcc2",
+  pink: "#f4a6c1",
+  none: "transparent",
 };
 
 function BandsInput({ meta }: { meta: InputMeta }) {

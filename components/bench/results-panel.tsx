@@ -84,11 +84,21 @@ function ListValue({ name, value }: { name: string; value: OutputValue[] }) {
       <table className="mt-1 w-full text-right text-note">
         <thead className="font-sans text-muted">
           <tr>
-            <th scope="col" className="pr-3 text-left font-normal">Stage</th>
-            <th scope="col" className="pr-3 font-normal">Passes (fraction)</th>
-            <th scope="col" className="pr-3 font-normal">Ripple after</th>
-            <th scope="col" className="pr-3 font-normal">Current</th>
-            <th scope="col" className="font-normal">DC drop</th>
+            <th scope="col" className="pr-3 text-left font-normal">
+              Stage
+            </th>
+            <th scope="col" className="pr-3 font-normal">
+              Passes (fraction)
+            </th>
+            <th scope="col" className="pr-3 font-normal">
+              Ripple after
+            </th>
+            <th scope="col" className="pr-3 font-normal">
+              Current
+            </th>
+            <th scope="col" className="font-normal">
+              DC drop
+            </th>
           </tr>
         </thead>
         <tbody>
@@ -96,7 +106,9 @@ function ListValue({ name, value }: { name: string; value: OutputValue[] }) {
             const row = s as Record<string, OutputValue>;
             return (
               <tr key={i}>
-                <th scope="row" className="pr-3 text-left">{i + 1}</th>
+                <th scope="row" className="pr-3 text-left">
+                  {i + 1}
+                </th>
                 <td className="pr-3">{formatPlain(row.attenuation, "", 3)}</td>
                 <td className="pr-3">{formatPlain(row.rippleRms, "V")}</td>
                 <td className="pr-3">{row.current === undefined ? "" : formatPlain(row.current, "A")}</td>
@@ -139,10 +151,18 @@ function ScheduleTable({ value }: { value: OutputValue[] }) {
     <table className="mt-1 w-full text-right text-note">
       <thead className="font-sans text-muted">
         <tr>
-          <th scope="col" className="pr-3 text-left font-normal">Step</th>
-          <th scope="col" className="pr-3 font-normal">Voltage</th>
-          <th scope="col" className="pr-3 font-normal">Hold at least</th>
-          <th scope="col" className="font-normal">Leakage to wait for</th>
+          <th scope="col" className="pr-3 text-left font-normal">
+            Step
+          </th>
+          <th scope="col" className="pr-3 font-normal">
+            Voltage
+          </th>
+          <th scope="col" className="pr-3 font-normal">
+            Hold at least
+          </th>
+          <th scope="col" className="font-normal">
+            Leakage to wait for
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -150,7 +170,9 @@ function ScheduleTable({ value }: { value: OutputValue[] }) {
           const row = s as Record<string, OutputValue>;
           return (
             <tr key={i}>
-              <th scope="row" className="pr-3 text-left">{i + 1}</th>
+              <th scope="row" className="pr-3 text-left">
+                {i + 1}
+              </th>
               <td className="pr-3">{formatPlain(row.voltage, "V")}</td>
               <td className="pr-3">{typeof row.minutes === "number" ? `${row.minutes} min` : "—"}</td>
               <td>{formatPlain(row.leakageLimit, "A")}</td>

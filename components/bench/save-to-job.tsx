@@ -17,7 +17,17 @@ type JobSummary = Pick<ReturnType<typeof searchJobs>["jobs"][number], "id" | "ti
 const NEW = "new";
 
 /** Save this calculation to one of the workshop's jobs (or a new one), with a note. The server recomputes it. */
-export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { slug: string; inputs: Record<string, unknown>; disabled: boolean; canCreateJob: boolean }) {
+export default function SaveToJob({
+  slug,
+  inputs,
+  disabled,
+  canCreateJob,
+}: {
+  slug: string;
+  inputs: Record<string, unknown>;
+  disabled: boolean;
+  canCreateJob: boolean;
+}) {
   const id = useId();
   const [jobs, setJobs] = useState<JobSummary[] | null>(null);
   const [loadError, setLoadError] = useState("");
@@ -89,7 +99,14 @@ export default function SaveToJob({ slug, inputs, disabled, canCreateJob }: { sl
       />
       {jobId === NEW ? (
         <div className="grid gap-4 sm:grid-cols-2 md:col-span-2">
-          <Field id={`${id}-title`} label="New job title" value={title} onChange={(e) => setTitle(e.target.value)} error={errors.title} placeholder="Five-tube table radio, 1950s" />
+          <Field
+            id={`${id}-title`}
+            label="New job title"
+            value={title}
+            onChange={(e) => setTitle(e.target.value)}
+            error={errors.title}
+            placeholder="Five-tube table radio, 1950s"
+          />
           <SelectField
             id={`${id}-kind`}
             label="Kind of set"

@@ -12,11 +12,21 @@ export function ShuntsTable({ value }: { value: OutputValue[] }) {
       <caption className="sr-only">One shunt resistor across each heater rated below the string current</caption>
       <thead className="font-sans text-muted">
         <tr>
-          <th scope="col" className="pr-2 text-left align-bottom font-normal">Across heater</th>
-          <th scope="col" className="pr-2 align-bottom font-normal">Shunt</th>
-          <th scope="col" className="pr-2 align-bottom font-normal">E12</th>
-          <th scope="col" className="pr-2 align-bottom font-normal">Dissipation</th>
-          <th scope="col" className="align-bottom font-normal">Rating</th>
+          <th scope="col" className="pr-2 text-left align-bottom font-normal">
+            Across heater
+          </th>
+          <th scope="col" className="pr-2 align-bottom font-normal">
+            Shunt
+          </th>
+          <th scope="col" className="pr-2 align-bottom font-normal">
+            E12
+          </th>
+          <th scope="col" className="pr-2 align-bottom font-normal">
+            Dissipation
+          </th>
+          <th scope="col" className="align-bottom font-normal">
+            Rating
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -32,7 +42,13 @@ export function ShuntsTable({ value }: { value: OutputValue[] }) {
               <td className="py-1 pr-2">{formatPlain(row.resistance, "Ω", 4)}</td>
               <td className="py-1 pr-2">{formatPlain(row.nearestPreferred, "Ω")}</td>
               <td className="py-1 pr-2">{formatPlain(row.dissipation, "W")}</td>
-              <td className="py-1">{row.suggestedRating === null ? <span title="Above the largest standard rating: see the caution">over 100 W</span> : formatPlain(row.suggestedRating, "W")}</td>
+              <td className="py-1">
+                {row.suggestedRating === null ? (
+                  <span title="Above the largest standard rating: see the caution">over 100 W</span>
+                ) : (
+                  formatPlain(row.suggestedRating, "W")
+                )}
+              </td>
             </tr>
           );
         })}

@@ -47,4 +47,3 @@ export function Tex({ latex, katex, serverHtml }: { latex: string; katex: Katex 
   if (html === undefined) return <code className="font-mono text-note text-muted break-all">{latex}</code>;
   return <span className="gb-tex" dangerouslySetInnerHTML={{ __html: html }} />;
 }
-

@@ -33,7 +33,13 @@ export function Working({ view, live, open, run, outputs, serverHtml, formulas, 
   }, []);
   const headline: readonly string[] = view.headlines;
   return (
-    <details ref={ref} open={open} onToggle={(e) => setIsOpen(e.currentTarget.open)} data-testid="working" className="gb-working group rounded-card border border-rule bg-panel shadow-card">
+    <details
+      ref={ref}
+      open={open}
+      onToggle={(e) => setIsOpen(e.currentTarget.open)}
+      data-testid="working"
+      className="gb-working group rounded-card border border-rule bg-panel shadow-card"
+    >
       <summary className="flex min-h-11 cursor-pointer list-none items-center gap-3 rounded-card px-6 py-4 text-lead font-bold hover:bg-sunk [&::-webkit-details-marker]:hidden">
         <span aria-hidden="true" className="inline-block font-mono text-glow transition group-open:rotate-90">
           ▸

@@ -29,8 +29,22 @@ export function CustomerDetails({ customer, canEdit, canDelete }: { customer: De
     router.refresh();
   }
   const rows: [string, React.ReactNode][] = [
-    ["E-mail", customer.email ? <a href={`mailto:${customer.email}`} className="break-all text-signal underline underline-offset-4">{customer.email}</a> : null],
-    ["Phone", customer.phone ? <a href={`tel:${customer.phone.replace(/[^\d+]/g, "")}`} className="text-signal underline underline-offset-4">{customer.phone}</a> : null],
+    [
+      "E-mail",
+      customer.email ? (
+        <a href={`mailto:${customer.email}`} className="break-all text-signal underline underline-offset-4">
+          {customer.email}
+        </a>
+      ) : null,
+    ],
+    [
+      "Phone",
+      customer.phone ? (
+        <a href={`tel:${customer.phone.replace(/[^\d+]/g, "")}`} className="text-signal underline underline-offset-4">
+          {customer.phone}
+        </a>
+      ) : null,
+    ],
     ["Address", customer.address],
     ["Notes", customer.notes],
   ];
@@ -46,11 +60,21 @@ export function CustomerDetails({ customer, canEdit, canDelete }: { customer: De
       </dl>
       {canEdit || canDelete ? (
         <div className="mt-5 flex flex-wrap gap-3">
-          {canEdit ? <Button variant="secondary" onClick={() => setEditing(true)}>Edit details</Button> : null}
-          {canDelete ? <Button variant="destructive" onClick={remove}>Remove customer</Button> : null}
+          {canEdit ? (
+            <Button variant="secondary" onClick={() => setEditing(true)}>
+              Edit details
+            </Button>
+          ) : null}
+          {canDelete ? (
+            <Button variant="destructive" onClick={remove}>
+              Remove customer
+            </Button>
+          ) : null}
         </div>
       ) : null}
-      <p role="alert" className="mt-2 min-h-5 font-bold text-flag">{error ?? ""}</p>
+      <p role="alert" className="mt-2 min-h-5 font-bold text-flag">
+        {error ?? ""}
+      </p>
     </div>
   );
 }

@@ -47,22 +47,37 @@ export function CustomerPicker({ picked, onPick, newCustomer }: { picked: Picked
     <div className="flex flex-col gap-3">
       <label className="flex flex-col gap-1">
         <span className="font-bold">Customer on file</span>
-        <input type="search" value={text} onChange={(e) => setText(e.target.value)} placeholder="Find by name, e-mail or phone" className="min-h-11 w-full rounded-chip border border-edge bg-panel px-3 py-2" aria-describedby="customer-search-note" />
+        <input
+          type="search"
+          value={text}
+          onChange={(e) => setText(e.target.value)}
+          placeholder="Find by name, e-mail or phone"
+          className="min-h-11 w-full rounded-chip border border-edge bg-panel px-3 py-2"
+          aria-describedby="customer-search-note"
+        />
       </label>
       {q ? (
         <ul className="flex flex-col gap-2" aria-label="Customers found" aria-busy={found.isFetching}>
           {list.map((c) => (
             <li key={c.id}>
-              <button type="button" className="flex min-h-11 w-full flex-col items-start rounded-chip border border-rule bg-panel px-3 py-2 text-left hover:bg-sunk" onClick={() => onPick({ id: c.id, name: c.name, email: c.email })}>
+              <button
+                type="button"
+                className="flex min-h-11 w-full flex-col items-start rounded-chip border border-rule bg-panel px-3 py-2 text-left hover:bg-sunk"
+                onClick={() => onPick({ id: c.id, name: c.name, email: c.email })}
+              >
                 <span className="font-bold break-words">{c.name}</span>
-                <span className="text-note text-muted break-all">{[c.email, c.phone, `${c.jobCount} job${c.jobCount === 1 ? "" : "s"}`].filter(Boolean).join(" · ")}</span>
+                <span className="text-note text-muted break-all">
+                  {[c.email, c.phone, `${c.jobCount} job${c.jobCount === 1 ? "" : "s"}`].filter(Boolean).join(" · ")}
+                </span>
               </button>
             </li>
           ))}
           {found.data && list.length === 0 ? <li className="text-muted">Nobody on file matches; type them in as a new customer below.</li> : null}
         </ul>
       ) : null}
-      <p id="customer-search-note" className="text-note text-muted">Or a new customer (leave blank for the workshop&rsquo;s own set):</p>
+      <p id="customer-search-note" className="text-note text-muted">
+        Or a new customer (leave blank for the workshop&rsquo;s own set):
+      </p>
       <div className="grid grid-cols-1 gap-x-4 gap-y-1 sm:grid-cols-2">{newCustomer}</div>
     </div>
   );

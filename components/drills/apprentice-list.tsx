@@ -14,7 +14,11 @@ export function ApprenticeList({ apprentices, current }: { apprentices: readonly
         return (
           <li key={a.userId} className="flex flex-wrap items-center justify-between gap-x-4 gap-y-1 py-3">
             <span className="min-w-0 flex-1 basis-52">
-              <Link href={`/drills?member=${a.userId}`} aria-current={current === a.userId ? "page" : undefined} className="font-bold text-signal underline underline-offset-4">
+              <Link
+                href={`/drills?member=${a.userId}`}
+                aria-current={current === a.userId ? "page" : undefined}
+                className="font-bold text-signal underline underline-offset-4"
+              >
                 {a.name}
               </Link>
               <span className="block text-note text-muted">

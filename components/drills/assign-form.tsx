@@ -68,7 +68,13 @@ export function AssignForm({ apprentices, calculators }: { apprentices: { userId
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Set drills" className="flex flex-col gap-2">
       <div className="grid gap-x-3 sm:grid-cols-2">
-        <SelectField id="assign-apprentice" label="Apprentice" options={apprentices.map((a) => ({ value: String(a.userId), label: a.name }))} error={errors.apprentice?.message} {...register("apprentice")} />
+        <SelectField
+          id="assign-apprentice"
+          label="Apprentice"
+          options={apprentices.map((a) => ({ value: String(a.userId), label: a.name }))}
+          error={errors.apprentice?.message}
+          {...register("apprentice")}
+        />
         <Field id="assign-due" type="date" label="Due" error={errors.due?.message} {...register("due")} />
       </div>
       <fieldset aria-describedby="assign-kinds-error">
@@ -93,7 +99,15 @@ export function AssignForm({ apprentices, calculators }: { apprentices: { userId
         <FieldNotes id="assign-kinds" error={errors.kinds?.message} />
       </fieldset>
       <div className="grid gap-x-3 sm:grid-cols-[10rem_minmax(0,1fr)]">
-        <Field id="assign-count" label="How many" inputMode="numeric" placeholder="one each" hint="1 to 20, taken in turn" error={errors.count?.message} {...register("count")} />
+        <Field
+          id="assign-count"
+          label="How many"
+          inputMode="numeric"
+          placeholder="one each"
+          hint="1 to 20, taken in turn"
+          error={errors.count?.message}
+          {...register("count")}
+        />
         <Field id="assign-note" label="Note (optional)" placeholder="Before Thursday's bring-up" error={errors.note?.message} {...register("note")} />
       </div>
       <div className="flex flex-wrap items-center gap-3">

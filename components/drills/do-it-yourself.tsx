@@ -38,7 +38,12 @@ export function DoItYourself({ calculationId, apprentices }: { calculationId: nu
       <form onSubmit={submit} noValidate className="grid gap-2 px-3 pb-3 sm:grid-cols-2" aria-label="Set this calculation as a drill">
         <label className="flex flex-col gap-1 text-note font-bold" htmlFor={`${id}-who`}>
           For
-          <select id={`${id}-who`} value={apprentice} onChange={(e) => setApprentice(e.target.value)} className="min-h-11 rounded-chip border border-edge bg-panel px-2 font-normal">
+          <select
+            id={`${id}-who`}
+            value={apprentice}
+            onChange={(e) => setApprentice(e.target.value)}
+            className="min-h-11 rounded-chip border border-edge bg-panel px-2 font-normal"
+          >
             {apprentices.map((a) => (
               <option key={a.userId} value={a.userId}>
                 {a.name}
@@ -48,7 +53,13 @@ export function DoItYourself({ calculationId, apprentices }: { calculationId: nu
         </label>
         <label className="flex flex-col gap-1 text-note font-bold" htmlFor={`${id}-due`}>
           Due
-          <input id={`${id}-due`} type="date" value={due} onChange={(e) => setDue(e.target.value)} className="min-h-11 rounded-chip border border-edge bg-panel px-2 font-normal" />
+          <input
+            id={`${id}-due`}
+            type="date"
+            value={due}
+            onChange={(e) => setDue(e.target.value)}
+            className="min-h-11 rounded-chip border border-edge bg-panel px-2 font-normal"
+          />
         </label>
         <Button type="submit" variant="secondary" className="sm:col-span-2">
           Set the drill

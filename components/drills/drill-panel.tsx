@@ -25,7 +25,17 @@ const VERDICT: Record<DrillResult["verdict"], { title: string; tone: string }> =
   unreadable: { title: "Could not read that", tone: "border-flag bg-flag-bg" },
 };
 
-export function DrillPanel({ drill, initial, mine, serverHtml }: { drill: PublicDrill; initial: DrillResult | null; mine: boolean; serverHtml?: Record<string, string> }) {
+export function DrillPanel({
+  drill,
+  initial,
+  mine,
+  serverHtml,
+}: {
+  drill: PublicDrill;
+  initial: DrillResult | null;
+  mine: boolean;
+  serverHtml?: Record<string, string>;
+}) {
   const router = useRouter();
   const [result, setResult] = useState<DrillResult | null>(initial);
   const [formError, setFormError] = useState<string | null>(null);

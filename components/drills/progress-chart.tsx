@@ -15,9 +15,8 @@ export default function ProgressChart({ points }: { points: readonly ProgressPoi
       title="Progress over time"
       caption={
         <>
-          {data.length} {data.length === 1 ? "day" : "days"} with drills; {last.totalCorrect} correct answers so far. Mean mastery over the kinds
-          tried stands at <strong className="text-ink">{last.masteryPct} %</strong>: it rises with correct answers spread over days and falls
-          with misses.
+          {data.length} {data.length === 1 ? "day" : "days"} with drills; {last.totalCorrect} correct answers so far. Mean mastery over the kinds tried stands
+          at <strong className="text-ink">{last.masteryPct} %</strong>: it rises with correct answers spread over days and falls with misses.
         </>
       }
     >

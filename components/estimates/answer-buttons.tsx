@@ -13,7 +13,12 @@ export function AnswerButtons({ token }: { token: string }) {
   const [note, setNote] = useState("");
   const [done, setDone] = useState<Answered | null>(null);
   // The note is the only field here, so its message stands in for the form's.
-  const { run, error, setError, pending: busy } = useAction<{ status: Answered }>({
+  const {
+    run,
+    error,
+    setError,
+    pending: busy,
+  } = useAction<{ status: Answered }>({
     url: "/api/estimates/answer",
     refresh: false,
     onDone: (data) => setDone(data.status),
@@ -25,7 +30,9 @@ export function AnswerButtons({ token }: { token: string }) {
   if (done) {
     return (
       <div role="status" className="rounded-card border border-ok bg-ok-bg p-4">
-        <p className="font-bold">{done === "approved" ? "Thank you: the workshop will go ahead with the work." : "Thank you: the workshop will not do this work."}</p>
+        <p className="font-bold">
+          {done === "approved" ? "Thank you: the workshop will go ahead with the work." : "Thank you: the workshop will not do this work."}
+        </p>
         <p className="mt-1 text-muted">Your answer is with the workshop. You can close this page.</p>
       </div>
     );

@@ -31,7 +31,11 @@ export function EstimateSection({ member, jobId }: { member: Member; jobId: numb
         </div>
         {settings.hourlyRateMinor <= 0 ? (
           <p className="mb-4 rounded-chip bg-caution-bg p-3">
-            The workshop has no hourly rate yet, so labour lines cannot be priced. The owner sets it under <Link href="/workshop" className="underline">Workshop</Link>.
+            The workshop has no hourly rate yet, so labour lines cannot be priced. The owner sets it under{" "}
+            <Link href="/workshop" className="underline">
+              Workshop
+            </Link>
+            .
           </p>
         ) : null}
         {editable ? (
@@ -61,8 +65,17 @@ export function EstimateSection({ member, jobId }: { member: Member; jobId: numb
           </div>
         ) : null}
       </Card>
-      {can.seeMoney(member) ? <InvoicePanel member={member} jobId={jobId} jobStatus={job.status} invoices={listInvoicesForJob(member, jobId)} estimate={estimate} settings={settings} parts={parts} /> : null}
+      {can.seeMoney(member) ? (
+        <InvoicePanel
+          member={member}
+          jobId={jobId}
+          jobStatus={job.status}
+          invoices={listInvoicesForJob(member, jobId)}
+          estimate={estimate}
+          settings={settings}
+          parts={parts}
+        />
+      ) : null}
     </div>
   );
 }
-

@@ -88,7 +88,11 @@ export function LinesEditor({
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4" aria-describedby="lines-error">
-      {fields.length === 0 ? <p className="rounded-card border-2 border-dashed border-rule p-6 text-center text-muted">No lines yet. Add labour, a part from the Parts list or a fee below.</p> : null}
+      {fields.length === 0 ? (
+        <p className="rounded-card border-2 border-dashed border-rule p-6 text-center text-muted">
+          No lines yet. Add labour, a part from the Parts list or a fee below.
+        </p>
+      ) : null}
       <ol className="flex flex-col gap-3">
         {fields.map((f, i) => {
           const kind = watched[i]?.kind ?? f.kind;
@@ -97,8 +101,20 @@ export function LinesEditor({
           return (
             <li key={f.id} className="grid gap-x-3 rounded-card border border-rule bg-paper p-3 sm:grid-cols-[7rem_1fr_7rem_9rem_8rem_auto]">
               <div className="pt-8 font-bold">{LINE_KIND_LABELS[kind]}</div>
-              <Field id={`line-${i}-description`} label="Description" error={err?.description?.message ?? err?.partId?.message} {...register(`lines.${i}.description`)} />
-              <Field id={`line-${i}-quantity`} label={kind === "labour" ? "Hours" : "Qty"} inputMode="decimal" className="font-mono" error={err?.quantity?.message} {...register(`lines.${i}.quantity`)} />
+              <Field
+                id={`line-${i}-description`}
+                label="Description"
+                error={err?.description?.message ?? err?.partId?.message}
+                {...register(`lines.${i}.description`)}
+              />
+              <Field
+                id={`line-${i}-quantity`}
+                label={kind === "labour" ? "Hours" : "Qty"}
+                inputMode="decimal"
+                className="font-mono"
+                error={err?.quantity?.message}
+                {...register(`lines.${i}.quantity`)}
+              />
               {kind === "labour" ? (
                 <div className="flex flex-col gap-1">
                   <span className="font-bold">Rate</span>

@@ -33,10 +33,18 @@ export function LinesTable({
       <caption className="sr-only">Lines and totals</caption>
       <thead>
         <tr className="border-b-2 border-ink text-note uppercase tracking-wide text-muted">
-          <th scope="col" className="py-2 pr-3 font-bold">Description</th>
-          <th scope="col" className="py-2 pr-3 text-right font-bold">Qty</th>
-          <th scope="col" className="py-2 pr-3 text-right font-bold">Unit</th>
-          <th scope="col" className="py-2 text-right font-bold">Amount</th>
+          <th scope="col" className="py-2 pr-3 font-bold">
+            Description
+          </th>
+          <th scope="col" className="py-2 pr-3 text-right font-bold">
+            Qty
+          </th>
+          <th scope="col" className="py-2 pr-3 text-right font-bold">
+            Unit
+          </th>
+          <th scope="col" className="py-2 text-right font-bold">
+            Amount
+          </th>
         </tr>
       </thead>
       <tbody>
@@ -57,16 +65,24 @@ export function LinesTable({
       </tbody>
       <tfoot>
         <tr>
-          <th scope="row" colSpan={3} className="pt-3 pr-3 text-right font-normal text-muted">Subtotal</th>
+          <th scope="row" colSpan={3} className="pt-3 pr-3 text-right font-normal text-muted">
+            Subtotal
+          </th>
           <td className="pt-3 text-right font-mono">{money(subtotalMinor)}</td>
         </tr>
         <tr>
-          <th scope="row" colSpan={3} className="py-1 pr-3 text-right font-normal text-muted">Tax at {formatTaxRate(taxRateBp)}</th>
+          <th scope="row" colSpan={3} className="py-1 pr-3 text-right font-normal text-muted">
+            Tax at {formatTaxRate(taxRateBp)}
+          </th>
           <td className="py-1 text-right font-mono">{money(taxMinor)}</td>
         </tr>
         <tr className="text-lead">
-          <th scope="row" colSpan={3} className="pt-2 pr-3 text-right font-bold">Total</th>
-          <td className="pt-2 text-right font-mono font-bold" data-testid="total">{money(totalMinor)}</td>
+          <th scope="row" colSpan={3} className="pt-2 pr-3 text-right font-bold">
+            Total
+          </th>
+          <td className="pt-2 text-right font-mono font-bold" data-testid="total">
+            {money(totalMinor)}
+          </td>
         </tr>
       </tfoot>
     </table>

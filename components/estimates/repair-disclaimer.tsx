@@ -8,9 +8,7 @@ export function RepairDisclaimer() {
   return (
     <div className="flex flex-col gap-3">
       <KeepTheBackOn when="waiting" />
-      <p className="text-note text-muted">
-        The estimate covers the work listed. If we find more that needs doing, we will ask you before we do it.
-      </p>
+      <p className="text-note text-muted">The estimate covers the work listed. If we find more that needs doing, we will ask you before we do it.</p>
     </div>
   );
 }

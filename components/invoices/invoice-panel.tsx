@@ -39,7 +39,9 @@ export function InvoicePanel({
                 Invoice {i.number}
               </Link>
               <InvoiceStatus status={i.status} />
-              {i.status === "issued" && i.sentAt ? <span className="text-note text-muted">{i.viewedAt ? "e-mailed, opened by the customer" : "e-mailed, not opened yet"}</span> : null}
+              {i.status === "issued" && i.sentAt ? (
+                <span className="text-note text-muted">{i.viewedAt ? "e-mailed, opened by the customer" : "e-mailed, not opened yet"}</span>
+              ) : null}
               <span className="ml-auto font-mono">{formatMoney(i.totalMinor, i.currency)}</span>
             </li>
           ))}
@@ -48,7 +50,9 @@ export function InvoicePanel({
       {standing ? null : ready ? (
         <>
           <p className="mb-4 text-muted">
-            {estimate?.status === "approved" ? "These are the approved estimate's lines; change them to match the work done, then issue." : "There is no approved estimate; enter the lines to invoice."}
+            {estimate?.status === "approved"
+              ? "These are the approved estimate's lines; change them to match the work done, then issue."
+              : "There is no approved estimate; enter the lines to invoice."}
           </p>
           <LinesEditor
             initial={estimate?.status === "approved" ? editorLines(estimate.lines, settings.currency) : []}

@@ -13,8 +13,16 @@ export function SendInvoice({ invoiceId, to, again }: { invoiceId: number; to: s
   const [sent, setSent] = useState<string | null>(null);
   const [noteRefused, setNoteRefused] = useState(false);
   const form = useForm<SendInvoiceInput>({ resolver: zodResolver(sendInvoiceSchema), defaultValues: { note: "" } });
-  const { register, reset, formState: { errors } } = form;
-  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit<SendInvoiceInput, { sentTo: string }>(form, {
+  const {
+    register,
+    reset,
+    formState: { errors },
+  } = form;
+  const {
+    submit: onSubmit,
+    formError,
+    pending: isSubmitting,
+  } = useSubmit<SendInvoiceInput, { sentTo: string }>(form, {
     url: `/api/invoices/${invoiceId}/send`,
     fields: ["note"],
     onStart: () => setSent(null),
@@ -29,7 +37,14 @@ export function SendInvoice({ invoiceId, to, again }: { invoiceId: number; to: s
 
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-3" aria-label="Send the invoice">
-      <TextareaField id="invoice-note" label="A note at the top of the e-mail (optional)" rows={2} maxLength={1000} error={errors.note?.message} {...register("note")} />
+      <TextareaField
+        id="invoice-note"
+        label="A note at the top of the e-mail (optional)"
+        rows={2}
+        maxLength={1000}
+        error={errors.note?.message}
+        {...register("note")}
+      />
       <div className="flex flex-wrap items-center gap-3">
         <Button type="submit" disabled={isSubmitting}>
           {isSubmitting ? "Sending…" : again ? `Send again to ${to}` : `E-mail it to ${to}`}

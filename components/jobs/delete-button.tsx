@@ -17,7 +17,11 @@ export function DeleteButton({ url, confirm, label }: { url: string; confirm: st
       >
         Remove
       </button>
-      {error ? <span role="alert" className="ml-2 text-note font-bold text-flag">{error}</span> : null}
+      {error ? (
+        <span role="alert" className="ml-2 text-note font-bold text-flag">
+          {error}
+        </span>
+      ) : null}
     </span>
   );
 }

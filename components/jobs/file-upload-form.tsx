@@ -28,17 +28,34 @@ export function FileUploadForm({ jobId }: { jobId: number }) {
     <form ref={form} onSubmit={onSubmit} className="flex flex-wrap items-end gap-4" aria-describedby="upload-error upload-hint">
       <label className="flex flex-col gap-1">
         <span className="font-bold">File</span>
-        <input name="file" type="file" accept="image/jpeg,image/png,image/webp,application/pdf" className="min-h-11 rounded-chip border border-edge bg-panel px-3 py-2 file:mr-3 file:rounded-chip file:border-0 file:bg-sunk file:px-3 file:py-1 file:font-bold" />
+        <input
+          name="file"
+          type="file"
+          accept="image/jpeg,image/png,image/webp,application/pdf"
+          className="min-h-11 rounded-chip border border-edge bg-panel px-3 py-2 file:mr-3 file:rounded-chip file:border-0 file:bg-sunk file:px-3 file:py-1 file:font-bold"
+        />
       </label>
       <fieldset className="flex flex-wrap gap-x-4">
         <legend className="mb-1 font-bold">It is a</legend>
-        <label className="inline-flex min-h-11 items-center gap-2"><input type="radio" name="kind" value="photo" defaultChecked /> Photo</label>
-        <label className="inline-flex min-h-11 items-center gap-2"><input type="radio" name="kind" value="schematic" /> Schematic</label>
-        <label className="inline-flex min-h-11 items-center gap-2"><input type="radio" name="kind" value="intake" /> Intake photo</label>
+        <label className="inline-flex min-h-11 items-center gap-2">
+          <input type="radio" name="kind" value="photo" defaultChecked /> Photo
+        </label>
+        <label className="inline-flex min-h-11 items-center gap-2">
+          <input type="radio" name="kind" value="schematic" /> Schematic
+        </label>
+        <label className="inline-flex min-h-11 items-center gap-2">
+          <input type="radio" name="kind" value="intake" /> Intake photo
+        </label>
       </fieldset>
-      <Button type="submit" disabled={busy}>{busy ? "Uploading…" : "Attach"}</Button>
-      <p id="upload-hint" className="w-full text-note text-muted">JPEG, PNG or WebP photos; PDF or image schematics; up to 20 MB. The type is read from the file itself.</p>
-      <p id="upload-error" role="alert" aria-live="polite" className="w-full min-h-5 font-bold text-flag">{error ?? ""}</p>
+      <Button type="submit" disabled={busy}>
+        {busy ? "Uploading…" : "Attach"}
+      </Button>
+      <p id="upload-hint" className="w-full text-note text-muted">
+        JPEG, PNG or WebP photos; PDF or image schematics; up to 20 MB. The type is read from the file itself.
+      </p>
+      <p id="upload-error" role="alert" aria-live="polite" className="w-full min-h-5 font-bold text-flag">
+        {error ?? ""}
+      </p>
     </form>
   );
 }

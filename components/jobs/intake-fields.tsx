@@ -13,7 +13,13 @@ export function AccessoriesField({ value, onChange, error }: { value: string[]; 
   const isCommon = (x: string) => COMMON_ACCESSORIES.some((c) => c.toLowerCase() === x.toLowerCase());
   const [other, setOther] = useState(value.filter((x) => !isCommon(x)).join(", "));
   const ticked = value.filter(isCommon);
-  const merge = (commons: string[], otherText: string) => [...commons, ...otherText.split(",").map((x) => x.trim()).filter(Boolean)];
+  const merge = (commons: string[], otherText: string) => [
+    ...commons,
+    ...otherText
+      .split(",")
+      .map((x) => x.trim())
+      .filter(Boolean),
+  ];
   const toggle = (item: string, on: boolean) => onChange(merge(on ? [...ticked, item] : ticked.filter((x) => x.toLowerCase() !== item.toLowerCase()), other));
   return (
     <fieldset className="flex min-w-0 flex-col gap-2" aria-describedby={error ? "job-accessories-error" : undefined}>
@@ -21,7 +27,12 @@ export function AccessoriesField({ value, onChange, error }: { value: string[]; 
       <div className="flex flex-wrap gap-x-4">
         {COMMON_ACCESSORIES.map((item) => (
           <label key={item} className="inline-flex min-h-11 items-center gap-2">
-            <input type="checkbox" className="size-5 accent-glow" checked={ticked.some((x) => x.toLowerCase() === item.toLowerCase())} onChange={(e) => toggle(item, e.target.checked)} />
+            <input
+              type="checkbox"
+              className="size-5 accent-glow"
+              checked={ticked.some((x) => x.toLowerCase() === item.toLowerCase())}
+              onChange={(e) => toggle(item, e.target.checked)}
+            />
             {item}
           </label>
         ))}
@@ -38,7 +49,11 @@ export function AccessoriesField({ value, onChange, error }: { value: string[]; 
           className="min-h-11 w-full rounded-chip border border-edge bg-panel px-3 py-2"
         />
       </label>
-      {error ? <p id="job-accessories-error" role="alert" className="text-note font-bold text-flag">{error}</p> : null}
+      {error ? (
+        <p id="job-accessories-error" role="alert" className="text-note font-bold text-flag">
+          {error}
+        </p>
+      ) : null}
     </fieldset>
   );
 }

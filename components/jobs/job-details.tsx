@@ -29,7 +29,17 @@ export interface IntakePhoto {
   hasThumbnail: boolean;
 }
 
-export function JobDetails({ job, canEdit, canDelete, intakePhotos = [] }: { job: Details; canEdit: boolean; canDelete: boolean; intakePhotos?: IntakePhoto[] }) {
+export function JobDetails({
+  job,
+  canEdit,
+  canDelete,
+  intakePhotos = [],
+}: {
+  job: Details;
+  canEdit: boolean;
+  canDelete: boolean;
+  intakePhotos?: IntakePhoto[];
+}) {
   const router = useRouter();
   const [editing, setEditing] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -39,7 +49,16 @@ export function JobDetails({ job, canEdit, canDelete, intakePhotos = [] }: { job
     ["Maker", job.maker],
     ["Model", job.model],
     ["Year", job.year ? String(job.year) : null],
-    ["Customer", job.customerId ? <Link href={`/customers/${job.customerId}`} className="font-bold text-signal underline-offset-4 hover:underline">{job.customerName}</Link> : job.customerName],
+    [
+      "Customer",
+      job.customerId ? (
+        <Link href={`/customers/${job.customerId}`} className="font-bold text-signal underline-offset-4 hover:underline">
+          {job.customerName}
+        </Link>
+      ) : (
+        job.customerName
+      ),
+    ],
     ["Customer e-mail", job.customerEmail],
     ["Serial or chassis no.", job.serialNumber ? <span className="font-mono">{job.serialNumber}</span> : null],
     ["Came in with", job.accessories?.length ? job.accessories.join(", ") : null],
@@ -67,9 +86,18 @@ export function JobDetails({ job, canEdit, canDelete, intakePhotos = [] }: { job
               <ul className="mt-1 flex flex-wrap gap-2" data-testid="intake-photos">
                 {intakePhotos.map((f) => (
                   <li key={f.id}>
-                    <a href={`/api/jobs/${job.id}/files/${f.id}`} target="_blank" rel="noopener" className="relative block size-20 overflow-hidden rounded-chip border border-rule bg-sunk">
-                      {/* eslint-disable-next-line @next/next/no-img-element -- served by our authorised route, not next/image */}
-                      {f.hasThumbnail ? <img src={`/api/jobs/${job.id}/files/${f.id}?thumb=1`} alt={f.name} className="size-full object-cover" /> : <span className="sr-only">{f.name}</span>}
+                    <a
+                      href={`/api/jobs/${job.id}/files/${f.id}`}
+                      target="_blank"
+                      rel="noopener"
+                      className="relative block size-20 overflow-hidden rounded-chip border border-rule bg-sunk"
+                    >
+                      {f.hasThumbnail ? (
+                        // eslint-disable-next-line @next/next/no-img-element -- served by our authorised route, not next/image
+                        <img src={`/api/jobs/${job.id}/files/${f.id}?thumb=1`} alt={f.name} className="size-full object-cover" />
+                      ) : (
+                        <span className="sr-only">{f.name}</span>
+                      )}
                     </a>
                   </li>
                 ))}

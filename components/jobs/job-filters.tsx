@@ -15,7 +15,13 @@ export function JobFilters({ value, onChange }: { value: Filters; onChange: (f: 
     <div role="search" className="flex flex-wrap items-end gap-3 rounded-card border border-rule bg-panel p-4">
       <label className="flex min-w-56 flex-1 flex-col gap-1">
         <span className="text-note font-bold">Search</span>
-        <input type="search" value={value.q} onChange={(e) => onChange({ ...value, q: e.target.value })} placeholder="Title, maker, model or customer" className={control} />
+        <input
+          type="search"
+          value={value.q}
+          onChange={(e) => onChange({ ...value, q: e.target.value })}
+          placeholder="Title, maker, model or customer"
+          className={control}
+        />
       </label>
       <label className="flex flex-col gap-1">
         <span className="text-note font-bold">Status</span>
@@ -41,7 +47,11 @@ export function JobFilters({ value, onChange }: { value: Filters; onChange: (f: 
         </select>
       </label>
       {value.q || value.status || value.kind ? (
-        <button type="button" className="min-h-11 rounded-chip px-3 font-bold text-signal hover:bg-sunk" onClick={() => onChange({ q: "", status: "", kind: "" })}>
+        <button
+          type="button"
+          className="min-h-11 rounded-chip px-3 font-bold text-signal hover:bg-sunk"
+          onClick={() => onChange({ q: "", status: "", kind: "" })}
+        >
           Clear
         </button>
       ) : null}

@@ -40,21 +40,28 @@ async function uploadIntakePhotos(jobId: number, photos: File[]): Promise<number
  */
 export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDone?: () => void; bookFor?: PickedCustomer }) {
   const router = useRouter();
-  const [picked, setPicked] = useState<PickedCustomer>(job?.customerId ? { id: job.customerId, name: String(job.customerName ?? ""), email: (job.customerEmail as string | null) ?? null } : bookFor);
+  const [picked, setPicked] = useState<PickedCustomer>(
+    job?.customerId ? { id: job.customerId, name: String(job.customerName ?? ""), email: (job.customerEmail as string | null) ?? null } : bookFor,
+  );
   const [accessories, setAccessories] = useState<string[]>(job?.accessories ?? []);
   const [photos, setPhotos] = useState<File[]>([]);
   const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
   const initial = Object.fromEntries(NAMES.map((n) => [n, job?.[n] == null ? "" : String(job[n])])) as Values;
   if (!initial.equipmentKind) initial.equipmentKind = "table-radio";
   const form = useForm<JobCreateInput, unknown, JobCreate>({ resolver: zodResolver(jobCreateSchema), defaultValues: initial as JobCreateInput });
-  const { register, formState: { errors, isSubmitting } } = form;
+  const {
+    register,
+    formState: { errors, isSubmitting },
+  } = form;
 
   // The customer and accessories live outside react-hook-form, so their messages are kept in fieldErrors.
   const { submit: onSubmit, formError } = useSubmit<JobCreateInput, { job: { id: number } }, JobCreate>(form, {
     url: job ? `/api/jobs/${job.id}` : "/api/jobs",
     method: job ? "PATCH" : "POST",
     body: (values) => {
-      const customer = picked ? { customerId: picked.id, customerName: null, customerEmail: null, customerPhone: null } : { customerId: job ? null : undefined };
+      const customer = picked
+        ? { customerId: picked.id, customerName: null, customerEmail: null, customerPhone: null }
+        : { customerId: job ? null : undefined };
       return { ...values, ...customer, accessories };
     },
     fields: NAMES,
@@ -73,8 +80,21 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
   const heading = "sm:col-span-2 mt-3 border-t border-rule pt-3 text-lead font-bold";
   return (
     <form onSubmit={onSubmit} noValidate className="grid grid-cols-1 gap-x-4 gap-y-1 sm:grid-cols-2" aria-describedby="job-form-error">
-      <Field id={id("title")} label="Title" placeholder="Five-tube table radio, 1950s" className="sm:col-span-2" error={errors.title?.message} {...register("title")} />
-      <SelectField id={id("kind")} label="Kind of set" options={EQUIPMENT_KINDS.map((k) => ({ value: k, label: EQUIPMENT_KIND_LABELS[k] }))} error={errors.equipmentKind?.message} {...register("equipmentKind")} />
+      <Field
+        id={id("title")}
+        label="Title"
+        placeholder="Five-tube table radio, 1950s"
+        className="sm:col-span-2"
+        error={errors.title?.message}
+        {...register("title")}
+      />
+      <SelectField
+        id={id("kind")}
+        label="Kind of set"
+        options={EQUIPMENT_KINDS.map((k) => ({ value: k, label: EQUIPMENT_KIND_LABELS[k] }))}
+        error={errors.equipmentKind?.message}
+        {...register("equipmentKind")}
+      />
       <Field id={id("year")} label="Year" inputMode="numeric" placeholder="1952" error={errors.year?.message} {...register("year")} />
       <Field id={id("maker")} label="Maker" error={errors.maker?.message} {...register("maker")} />
       <Field id={id("model")} label="Model" error={errors.model?.message} {...register("model")} />
@@ -86,12 +106,32 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
           newCustomer={
             <>
               <Field id={id("customer-name")} label="Customer name" autoComplete="off" error={errors.customerName?.message} {...register("customerName")} />
-              <Field id={id("customer-email")} label="Customer e-mail" type="email" inputMode="email" autoComplete="off" error={errors.customerEmail?.message} {...register("customerEmail")} />
-              <Field id={id("customer-phone")} label="Customer phone" type="tel" inputMode="tel" autoComplete="off" error={errors.customerPhone?.message} {...register("customerPhone")} />
+              <Field
+                id={id("customer-email")}
+                label="Customer e-mail"
+                type="email"
+                inputMode="email"
+                autoComplete="off"
+                error={errors.customerEmail?.message}
+                {...register("customerEmail")}
+              />
+              <Field
+                id={id("customer-phone")}
+                label="Customer phone"
+                type="tel"
+                inputMode="tel"
+                autoComplete="off"
+                error={errors.customerPhone?.message}
+                {...register("customerPhone")}
+              />
             </>
           }
         />
-        {fieldErrors.customerId ? <p role="alert" className="mt-1 text-note font-bold text-flag">{fieldErrors.customerId}</p> : null}
+        {fieldErrors.customerId ? (
+          <p role="alert" className="mt-1 text-note font-bold text-flag">
+            {fieldErrors.customerId}
+          </p>
+        ) : null}
       </div>
       <h3 className={heading}>Intake</h3>
       <Field id={id("serial")} label="Serial or chassis number" autoComplete="off" error={errors.serialNumber?.message} {...register("serialNumber")} />
@@ -110,10 +150,19 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
             aria-describedby="job-photos-hint"
             className="min-h-11 w-full min-w-0 rounded-chip border border-edge bg-panel px-3 py-2 file:mr-3 file:rounded-chip file:border-0 file:bg-sunk file:px-3 file:py-1 file:font-bold"
           />
-          <span id="job-photos-hint" className="text-note text-muted">The set as it came in: cabinet, back, chassis. JPEG, PNG or WebP, up to 20 MB each; they go to the job&rsquo;s Files.</span>
+          <span id="job-photos-hint" className="text-note text-muted">
+            The set as it came in: cabinet, back, chassis. JPEG, PNG or WebP, up to 20 MB each; they go to the job&rsquo;s Files.
+          </span>
         </label>
       ) : null}
-      <TextareaField id={id("notes")} label="Notes" className="sm:col-span-2" hint="Symptoms, condition, what the customer asked for." error={errors.notes?.message} {...register("notes")} />
+      <TextareaField
+        id={id("notes")}
+        label="Notes"
+        className="sm:col-span-2"
+        hint="Symptoms, condition, what the customer asked for."
+        error={errors.notes?.message}
+        {...register("notes")}
+      />
       <p id="job-form-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-flag sm:col-span-2">
         {formError ?? ""}
       </p>

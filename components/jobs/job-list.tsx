@@ -41,7 +41,9 @@ const columns = [
         <Link href={`/jobs/${row.original.id}`} className="font-bold text-ink underline-offset-4 hover:underline">
           {row.original.title}
         </Link>
-        <div className="text-note text-muted">{[`Job ${row.original.number}`, row.original.maker, row.original.model, row.original.year].filter(Boolean).join(" · ")}</div>
+        <div className="text-note text-muted">
+          {[`Job ${row.original.number}`, row.original.maker, row.original.model, row.original.year].filter(Boolean).join(" · ")}
+        </div>
       </div>
     ),
   }),
@@ -69,7 +71,10 @@ export function JobList({ firstPage }: { firstPage?: JobPage }) {
   useEffect(() => setPage(1), [q, filters.status, filters.kind, sorting]);
 
   const params = new URLSearchParams({ page: String(page), pageSize: String(PAGE_SIZE) });
-  if (sorting[0]) params.set("sort", sorting[0].id), params.set("dir", sorting[0].desc ? "desc" : "asc");
+  if (sorting[0]) {
+    params.set("sort", sorting[0].id);
+    params.set("dir", sorting[0].desc ? "desc" : "asc");
+  }
   if (q) params.set("q", q);
   if (filters.status) params.set("status", filters.status);
   if (filters.kind) params.set("kind", filters.kind);
@@ -102,7 +107,10 @@ export function JobList({ firstPage }: { firstPage?: JobPage }) {
       <JobFilters value={filters} onChange={setFilters} />
       {query.isError ? (
         <p role="alert" className="rounded-card border border-flag bg-flag-bg p-4 font-bold text-flag">
-          {query.error.message} <button type="button" className="underline" onClick={() => query.refetch()}>Try again</button>
+          {query.error.message}{" "}
+          <button type="button" className="underline" onClick={() => query.refetch()}>
+            Try again
+          </button>
         </p>
       ) : null}
       {data && data.total === 0 ? (
@@ -120,10 +128,17 @@ export function JobList({ firstPage }: { firstPage?: JobPage }) {
                   {hg.headers.map((h) => {
                     const sorted = h.column.getIsSorted();
                     return (
-                      <th key={h.id} scope="col" aria-sort={sorted ? (sorted === "asc" ? "ascending" : "descending") : "none"} className="px-4 py-2 text-note font-bold uppercase tracking-wide text-muted">
+                      <th
+                        key={h.id}
+                        scope="col"
+                        aria-sort={sorted ? (sorted === "asc" ? "ascending" : "descending") : "none"}
+                        className="px-4 py-2 text-note font-bold uppercase tracking-wide text-muted"
+                      >
                         <button type="button" className="inline-flex min-h-11 items-center gap-1 hover:text-ink" onClick={h.column.getToggleSortingHandler()}>
                           {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden="true" className="font-mono">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}</span>
+                          <span aria-hidden="true" className="font-mono">
+                            {sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : "↕"}
+                          </span>
                         </button>
                       </th>
                     );
@@ -143,7 +158,9 @@ export function JobList({ firstPage }: { firstPage?: JobPage }) {
               ))}
               {!data ? (
                 <tr>
-                  <td colSpan={columns.length} className="px-4 py-10 text-center text-muted">Loading jobs…</td>
+                  <td colSpan={columns.length} className="px-4 py-10 text-center text-muted">
+                    Loading jobs…
+                  </td>
                 </tr>
               ) : null}
             </tbody>
@@ -156,13 +173,23 @@ export function JobList({ firstPage }: { firstPage?: JobPage }) {
             {first}–{first + data.jobs.length - 1} of {data.total} {data.total === 1 ? "job" : "jobs"}
           </p>
           <div className="flex items-center gap-2">
-            <button type="button" className="min-h-11 rounded-chip border border-rule bg-panel px-4 font-bold disabled:opacity-50" disabled={page <= 1} onClick={() => setPage((p) => p - 1)}>
+            <button
+              type="button"
+              className="min-h-11 rounded-chip border border-rule bg-panel px-4 font-bold disabled:opacity-50"
+              disabled={page <= 1}
+              onClick={() => setPage((p) => p - 1)}
+            >
               Previous
             </button>
             <span className="font-mono text-note">
               {page} / {pages}
             </span>
-            <button type="button" className="min-h-11 rounded-chip border border-rule bg-panel px-4 font-bold disabled:opacity-50" disabled={page >= pages} onClick={() => setPage((p) => p + 1)}>
+            <button
+              type="button"
+              className="min-h-11 rounded-chip border border-rule bg-panel px-4 font-bold disabled:opacity-50"
+              disabled={page >= pages}
+              onClick={() => setPage((p) => p + 1)}
+            >
               Next
             </button>
           </div>

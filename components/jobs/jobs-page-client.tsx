@@ -11,7 +11,17 @@ import { JobList, type JobPage } from "./job-list";
 const quietLink = "inline-flex min-h-11 items-center rounded-chip border border-rule bg-panel px-4 font-bold hover:bg-sunk";
 
 /** `bookFor`: a customer whose page asked to book a set in for them; the form opens with them chosen. */
-export function JobsPageClient({ workshopName, canCreate, firstPage, bookFor = null }: { workshopName: string; canCreate: boolean; firstPage: JobPage; bookFor?: PickedCustomer }) {
+export function JobsPageClient({
+  workshopName,
+  canCreate,
+  firstPage,
+  bookFor = null,
+}: {
+  workshopName: string;
+  canCreate: boolean;
+  firstPage: JobPage;
+  bookFor?: PickedCustomer;
+}) {
   const [creating, setCreating] = useState(bookFor !== null && canCreate);
   return (
     <>

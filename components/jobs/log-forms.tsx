@@ -26,8 +26,12 @@ export function NoteForm({ jobId }: { jobId: number }) {
     <form onSubmit={onSubmit} noValidate aria-label="Write a log entry">
       <TextareaField id="log-text" label="What you did or found" rows={3} error={errors.text?.message as string | undefined} {...form.register("text")} />
       <div className="flex items-center gap-3">
-        <Button type="submit" disabled={isSubmitting}>Add to log</Button>
-        <p role="alert" className="font-bold text-flag">{formError ?? ""}</p>
+        <Button type="submit" disabled={isSubmitting}>
+          Add to log
+        </Button>
+        <p role="alert" className="font-bold text-flag">
+          {formError ?? ""}
+        </p>
       </div>
     </form>
   );
@@ -42,10 +46,22 @@ export function PowerUpForm({ jobId }: { jobId: number }) {
     <form onSubmit={onSubmit} noValidate aria-label="Record a power-up" className="grid gap-x-3 sm:grid-cols-2">
       <Field id="pu-supply" label="Supply voltage" placeholder="60 V" suffix="V" error={msg("supplyVoltage")} {...form.register("supplyVoltage")} />
       <Field id="pu-current" label="Current drawn" placeholder="180 mA" suffix="A" error={msg("currentDrawn")} {...form.register("currentDrawn")} />
-      <TextareaField id="pu-text" label="What was seen" className="sm:col-span-2" rows={2} placeholder="Heaters lit, lamp dimmed after 20 s, no smoke, faint hum" error={msg("text")} {...form.register("text")} />
+      <TextareaField
+        id="pu-text"
+        label="What was seen"
+        className="sm:col-span-2"
+        rows={2}
+        placeholder="Heaters lit, lamp dimmed after 20 s, no smoke, faint hum"
+        error={msg("text")}
+        {...form.register("text")}
+      />
       <div className="flex items-center gap-3 sm:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>Record power-up</Button>
-        <p role="alert" className="font-bold text-flag">{formError ?? ""}</p>
+        <Button type="submit" disabled={isSubmitting}>
+          Record power-up
+        </Button>
+        <p role="alert" className="font-bold text-flag">
+          {formError ?? ""}
+        </p>
       </div>
     </form>
   );

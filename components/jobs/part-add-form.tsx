@@ -29,7 +29,13 @@ export function PartAddForm({ jobId, currency = null }: { jobId: number; currenc
     resolver: zodResolver(partSchema),
     defaultValues: EMPTY,
   });
-  const { register, reset, setFocus, getValues, formState: { errors, isSubmitting } } = form;
+  const {
+    register,
+    reset,
+    setFocus,
+    getValues,
+    formState: { errors, isSubmitting },
+  } = form;
   const { submit: onSubmit, formError } = useSubmit(form, {
     url: `/api/jobs/${jobId}/parts`,
     fields: Object.keys(EMPTY),
@@ -43,16 +49,55 @@ export function PartAddForm({ jobId, currency = null }: { jobId: number; currenc
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Add a part" className="grid gap-x-3 sm:grid-cols-4">
       <Field id={id("designator")} label="Ref." placeholder="C12" error={errors.designator?.message} {...register("designator")} />
-      <SelectField id={id("kind")} label="Kind" options={PART_KINDS.map((k) => ({ value: k, label: PART_KIND_LABELS[k] }))} error={errors.kind?.message} {...register("kind")} />
+      <SelectField
+        id={id("kind")}
+        label="Kind"
+        options={PART_KINDS.map((k) => ({ value: k, label: PART_KIND_LABELS[k] }))}
+        error={errors.kind?.message}
+        {...register("kind")}
+      />
       <Field id={id("original-value")} label="Original value" placeholder="0.05 mfd" error={errors.originalValue?.message} {...register("originalValue")} />
       <Field id={id("original-rating")} label="Original rating" placeholder="400 V" error={errors.originalRating?.message} {...register("originalRating")} />
-      <SelectField id={id("state")} label="State" options={PART_STATES.map((s) => ({ value: s, label: PART_STATE_LABELS[s] }))} error={errors.state?.message} {...register("state")} />
+      <SelectField
+        id={id("state")}
+        label="State"
+        options={PART_STATES.map((s) => ({ value: s, label: PART_STATE_LABELS[s] }))}
+        error={errors.state?.message}
+        {...register("state")}
+      />
       <Field id={id("quantity")} label="Quantity" inputMode="numeric" error={errors.quantity?.message} {...register("quantity")} />
-      <Field id={id("replacement-value")} label="Replacement value" placeholder="0.047 µF" error={errors.replacementValue?.message} {...register("replacementValue")} />
-      <Field id={id("replacement-rating")} label="Replacement rating" placeholder="630 V" error={errors.replacementRating?.message} {...register("replacementRating")} />
+      <Field
+        id={id("replacement-value")}
+        label="Replacement value"
+        placeholder="0.047 µF"
+        error={errors.replacementValue?.message}
+        {...register("replacementValue")}
+      />
+      <Field
+        id={id("replacement-rating")}
+        label="Replacement rating"
+        placeholder="630 V"
+        error={errors.replacementRating?.message}
+        {...register("replacementRating")}
+      />
       <Field id={id("supplier")} label="Supplier" list="part-suppliers" autoComplete="off" error={errors.supplier?.message} {...register("supplier")} />
-      <Field id={id("supplier-part-number")} label="Their part no." autoComplete="off" error={errors.supplierPartNumber?.message} {...register("supplierPartNumber")} />
-      {currency ? <Field id={id("unit-cost")} label={`Unit cost (${currency})`} inputMode="decimal" placeholder="1.20" error={errors.unitCost?.message} {...register("unitCost")} /> : null}
+      <Field
+        id={id("supplier-part-number")}
+        label="Their part no."
+        autoComplete="off"
+        error={errors.supplierPartNumber?.message}
+        {...register("supplierPartNumber")}
+      />
+      {currency ? (
+        <Field
+          id={id("unit-cost")}
+          label={`Unit cost (${currency})`}
+          inputMode="decimal"
+          placeholder="1.20"
+          error={errors.unitCost?.message}
+          {...register("unitCost")}
+        />
+      ) : null}
       <div className="flex flex-wrap items-center gap-3 sm:col-span-4">
         <Button type="submit" disabled={isSubmitting}>
           Add part

@@ -11,7 +11,18 @@ import type { PartRow as Part } from "@/db/queries/parts";
 const cell = "px-3 py-2 align-top";
 const input = "w-full min-h-11 rounded-chip border border-edge bg-panel px-2 py-1";
 const STATE_TONE: Record<PartState, string> = { "to-order": "text-caution", ordered: "text-signal", fitted: "text-ok" };
-const TEXTS = ["designator", "kind", "originalValue", "originalRating", "replacementValue", "replacementRating", "quantity", "supplier", "supplierPartNumber", "unitCost"] as const;
+const TEXTS = [
+  "designator",
+  "kind",
+  "originalValue",
+  "originalRating",
+  "replacementValue",
+  "replacementRating",
+  "quantity",
+  "supplier",
+  "supplierPartNumber",
+  "unitCost",
+] as const;
 type Draft = Record<(typeof TEXTS)[number], string>;
 
 /** The row as the edit fields hold it: every value as text, the unit cost as the exact decimal of its minor units. */
@@ -37,7 +48,23 @@ function toDraft(part: Part, currency: string | null): Draft {
  * column shows how many, the supplier and their part number, and the unit cost when `currency` is given
  * (never to apprentices). `flags` are what the read values tell (lib/jobs/part-flags.ts).
  */
-export function PartRow({ jobId, part, canEdit, caution, readingNote, currency = null, flags = [] }: { jobId: number; part: Part; canEdit: boolean; caution: boolean; readingNote?: string; currency?: string | null; flags?: PartFlag[] }) {
+export function PartRow({
+  jobId,
+  part,
+  canEdit,
+  caution,
+  readingNote,
+  currency = null,
+  flags = [],
+}: {
+  jobId: number;
+  part: Part;
+  canEdit: boolean;
+  caution: boolean;
+  readingNote?: string;
+  currency?: string | null;
+  flags?: PartFlag[];
+}) {
   const [editing, setEditing] = useState(false);
   const [draft, setDraft] = useState(() => toDraft(part, currency));
   const [errors, setErrors] = useState<Record<string, string>>({});
@@ -58,14 +85,25 @@ export function PartRow({ jobId, part, canEdit, caution, readingNote, currency =
     const before = toDraft(part, currency);
     const changed = Object.fromEntries(TEXTS.filter((k) => draft[k] !== before[k]).map((k) => [k, draft[k]]));
     const box = (f: (typeof TEXTS)[number], label: string, extra: React.ComponentProps<"input"> = {}) => (
-      <input aria-label={label} className={input} value={draft[f]} onChange={(e) => setDraft({ ...draft, [f]: e.target.value })} aria-invalid={errors[f] ? true : undefined} {...extra} />
+      <input
+        aria-label={label}
+        className={input}
+        value={draft[f]}
+        onChange={(e) => setDraft({ ...draft, [f]: e.target.value })}
+        aria-invalid={errors[f] ? true : undefined}
+        {...extra}
+      />
     );
     return (
       <tr className="bg-sunk/50" data-testid={`part-${part.designator}`}>
         <td className={cell}>{box("designator", "Ref.")}</td>
         <td className={cell}>
           <select aria-label="Kind" className={input} value={draft.kind} onChange={(e) => setDraft({ ...draft, kind: e.target.value })}>
-            {PART_KINDS.map((k) => <option key={k} value={k}>{PART_KIND_LABELS[k]}</option>)}
+            {PART_KINDS.map((k) => (
+              <option key={k} value={k}>
+                {PART_KIND_LABELS[k]}
+              </option>
+            ))}
           </select>
         </td>
         {(["original", "replacement"] as const).map((side) => (
@@ -86,25 +124,64 @@ export function PartRow({ jobId, part, canEdit, caution, readingNote, currency =
         </td>
         <td className={cell} colSpan={2}>
           <div className="flex flex-wrap gap-2">
-            <button type="button" className="min-h-11 rounded-chip bg-glow px-3 font-bold text-glow-ink" onClick={() => save(changed)}>Save</button>
-            <button type="button" className="min-h-11 rounded-chip border border-rule px-3 font-bold" onClick={() => { setDraft(before); setEditing(false); setErrors({}); }}>Cancel</button>
+            <button type="button" className="min-h-11 rounded-chip bg-glow px-3 font-bold text-glow-ink" onClick={() => save(changed)}>
+              Save
+            </button>
+            <button
+              type="button"
+              className="min-h-11 rounded-chip border border-rule px-3 font-bold"
+              onClick={() => {
+                setDraft(before);
+                setEditing(false);
+                setErrors({});
+              }}
+            >
+              Cancel
+            </button>
           </div>
-          {message ? <p role="alert" className="mt-1 text-note font-bold text-flag">{Object.values(errors)[0] ?? message}</p> : null}
+          {message ? (
+            <p role="alert" className="mt-1 text-note font-bold text-flag">
+              {Object.values(errors)[0] ?? message}
+            </p>
+          ) : null}
         </td>
       </tr>
     );
   }
-  const pair = (v: string | null | undefined, r: string | null | undefined) => (v || r ? <><span className="font-mono">{v ?? "—"}</span> <span className="text-muted">{r}</span></> : <span className="text-muted">—</span>);
+  const pair = (v: string | null | undefined, r: string | null | undefined) =>
+    v || r ? (
+      <>
+        <span className="font-mono">{v ?? "—"}</span> <span className="text-muted">{r}</span>
+      </>
+    ) : (
+      <span className="text-muted">—</span>
+    );
   const order = [part.quantity > 1 ? `×${part.quantity}` : null, part.supplier, part.supplierPartNumber].filter(Boolean).join(" · ");
   return (
     <tr className={caution ? "bg-caution-bg/60" : undefined} data-testid={`part-${part.designator}`}>
       <td className={`${cell} font-mono font-bold`}>{part.designator}</td>
       <td className={cell}>{PART_KIND_LABELS[part.kind]}</td>
       <td className={cell}>{pair(part.originalValue, part.originalRating)}</td>
-      <td className={cell}>{pair(part.replacementValue, part.replacementRating)}{caution ? <span className="ml-2 font-bold text-caution" title="See the caution above">⚠</span> : null}
-        {readingNote ? <span className="block text-note text-muted" data-testid={`reading-note-${part.designator}`}>{readingNote}</span> : null}
+      <td className={cell}>
+        {pair(part.replacementValue, part.replacementRating)}
+        {caution ? (
+          <span className="ml-2 font-bold text-caution" title="See the caution above">
+            ⚠
+          </span>
+        ) : null}
+        {readingNote ? (
+          <span className="block text-note text-muted" data-testid={`reading-note-${part.designator}`}>
+            {readingNote}
+          </span>
+        ) : null}
         {flags.map((f) => (
-          <span key={f.message} className={`block text-note ${f.level === "caution" ? "font-bold text-caution" : "text-muted"}`} data-testid={`part-flag-${part.designator}`}>{f.message}</span>
+          <span
+            key={f.message}
+            className={`block text-note ${f.level === "caution" ? "font-bold text-caution" : "text-muted"}`}
+            data-testid={`part-flag-${part.designator}`}
+          >
+            {f.message}
+          </span>
         ))}
       </td>
       <td className={cell} data-testid={`part-order-${part.designator}`}>
@@ -113,8 +190,17 @@ export function PartRow({ jobId, part, canEdit, caution, readingNote, currency =
       </td>
       <td className={cell}>
         {canEdit ? (
-          <select aria-label={`State of ${part.designator}`} className={`${input} min-w-32 font-bold ${STATE_TONE[part.state]}`} value={part.state} onChange={(e) => save({ state: e.target.value as PartState })}>
-            {PART_STATES.map((s) => <option key={s} value={s}>{PART_STATE_LABELS[s]}</option>)}
+          <select
+            aria-label={`State of ${part.designator}`}
+            className={`${input} min-w-32 font-bold ${STATE_TONE[part.state]}`}
+            value={part.state}
+            onChange={(e) => save({ state: e.target.value as PartState })}
+          >
+            {PART_STATES.map((s) => (
+              <option key={s} value={s}>
+                {PART_STATE_LABELS[s]}
+              </option>
+            ))}
           </select>
         ) : (
           <span className={`font-bold ${STATE_TONE[part.state]}`}>{PART_STATE_LABELS[part.state]}</span>
@@ -123,11 +209,29 @@ export function PartRow({ jobId, part, canEdit, caution, readingNote, currency =
       <td className={`${cell} whitespace-nowrap text-right`}>
         {canEdit ? (
           <>
-            <button type="button" className="min-h-11 rounded-chip px-2 font-bold text-signal hover:bg-sunk" onClick={() => setEditing(true)} aria-label={`Edit ${part.designator}`}>Edit</button>
-            <button type="button" className="min-h-11 rounded-chip px-2 font-bold text-flag hover:bg-flag-bg" onClick={remove} aria-label={`Remove ${part.designator}`}>Remove</button>
+            <button
+              type="button"
+              className="min-h-11 rounded-chip px-2 font-bold text-signal hover:bg-sunk"
+              onClick={() => setEditing(true)}
+              aria-label={`Edit ${part.designator}`}
+            >
+              Edit
+            </button>
+            <button
+              type="button"
+              className="min-h-11 rounded-chip px-2 font-bold text-flag hover:bg-flag-bg"
+              onClick={remove}
+              aria-label={`Remove ${part.designator}`}
+            >
+              Remove
+            </button>
           </>
         ) : null}
-        {message && !editing ? <p role="alert" className="text-note font-bold text-flag">{message}</p> : null}
+        {message && !editing ? (
+          <p role="alert" className="text-note font-bold text-flag">
+            {message}
+          </p>
+        ) : null}
       </td>
     </tr>
   );

@@ -26,7 +26,11 @@ export function PartsCsvTools({ jobId, canEdit }: { jobId: number; canEdit: bool
   return (
     <div className="flex flex-col gap-2">
       <div className="flex flex-wrap items-center gap-3">
-        <a href={`/api/jobs/${jobId}/parts/csv`} download className="inline-flex min-h-11 items-center rounded-chip border border-rule bg-panel px-4 font-bold hover:bg-sunk">
+        <a
+          href={`/api/jobs/${jobId}/parts/csv`}
+          download
+          className="inline-flex min-h-11 items-center rounded-chip border border-rule bg-panel px-4 font-bold hover:bg-sunk"
+        >
           Export CSV
         </a>
         {canEdit ? (
@@ -42,7 +46,9 @@ export function PartsCsvTools({ jobId, canEdit }: { jobId: number; canEdit: bool
           <p className={`font-bold ${result.ok ? "" : "text-flag"}`}>{result.message}</p>
           {result.rows.length ? (
             <ul className="mt-1 list-disc pl-5 text-note">
-              {result.rows.map((r) => <li key={r}>{r}</li>)}
+              {result.rows.map((r) => (
+                <li key={r}>{r}</li>
+              ))}
             </ul>
           ) : null}
         </div>

@@ -30,13 +30,17 @@ const key = (r: ReadingRow) => (r.verdict === "open" ? Number.POSITIVE_INFINITY 
 function RemoveButton({ jobId, r }: { jobId: number; r: ReadingRow }) {
   const router = useRouter();
   return (
-    <button type="button" className="min-h-9 rounded-chip px-2 text-note font-bold text-flag hover:bg-flag-bg" aria-label={`Remove reading ${r.designator}`}
+    <button
+      type="button"
+      className="min-h-9 rounded-chip px-2 text-note font-bold text-flag hover:bg-flag-bg"
+      aria-label={`Remove reading ${r.designator}`}
       onClick={async () => {
         if (!window.confirm(`Remove the reading for ${r.designator}?`)) return;
         const res = await sendJson(`/api/jobs/${jobId}/readings/${r.id}`, undefined, "DELETE");
         if (res.ok) router.refresh();
         else window.alert(res.message);
-      }}>
+      }}
+    >
       Remove
     </button>
   );
@@ -50,17 +54,34 @@ export function ResistorSurvey({ jobId, rows, canEdit }: { jobId: number; rows: 
     <table className="w-full min-w-[40rem] border-collapse text-left" data-testid="resistor-survey">
       <thead className="border-b border-rule bg-sunk/60">
         <tr>
-          <th scope="col" className={th}>Ref.</th>
-          <th scope="col" className={th}>Marked</th>
-          <th scope="col" className={th}>Tolerance</th>
-          <th scope="col" className={th}>Measured</th>
+          <th scope="col" className={th}>
+            Ref.
+          </th>
+          <th scope="col" className={th}>
+            Marked
+          </th>
+          <th scope="col" className={th}>
+            Tolerance
+          </th>
+          <th scope="col" className={th}>
+            Measured
+          </th>
           <th scope="col" className={th} aria-sort={dir === "none" ? "none" : dir === "asc" ? "ascending" : "descending"}>
             <button type="button" className="inline-flex min-h-9 items-center gap-1 uppercase hover:text-ink" onClick={() => setDir(next[dir])}>
-              Deviation <span aria-hidden="true" className="font-mono">{dir === "desc" ? "▼" : dir === "asc" ? "▲" : "↕"}</span>
+              Deviation{" "}
+              <span aria-hidden="true" className="font-mono">
+                {dir === "desc" ? "▼" : dir === "asc" ? "▲" : "↕"}
+              </span>
             </button>
           </th>
-          <th scope="col" className={th}>Verdict</th>
-          {canEdit ? <th scope="col" className={th}><span className="sr-only">Actions</span></th> : null}
+          <th scope="col" className={th}>
+            Verdict
+          </th>
+          {canEdit ? (
+            <th scope="col" className={th}>
+              <span className="sr-only">Actions</span>
+            </th>
+          ) : null}
         </tr>
       </thead>
       <tbody className="divide-y divide-rule">
@@ -71,8 +92,14 @@ export function ResistorSurvey({ jobId, rows, canEdit }: { jobId: number; rows: 
             <td className={`${td} font-mono`}>±{Math.round(r.tolerance * 100)} %</td>
             <td className={`${td} font-mono`}>{r.measured === null ? "open" : formatQuantity(r.measured, "Ω")}</td>
             <td className={`${td} font-mono`}>{pct(r.deviation)}</td>
-            <td className={td}><Verdict v={r.verdict} /></td>
-            {canEdit ? <td className={`${td} text-right`}><RemoveButton jobId={jobId} r={r} /></td> : null}
+            <td className={td}>
+              <Verdict v={r.verdict} />
+            </td>
+            {canEdit ? (
+              <td className={`${td} text-right`}>
+                <RemoveButton jobId={jobId} r={r} />
+              </td>
+            ) : null}
           </tr>
         ))}
       </tbody>
@@ -85,12 +112,26 @@ export function VoltageTable({ jobId, rows, canEdit }: { jobId: number; rows: Re
     <table className="w-full min-w-[36rem] border-collapse text-left" data-testid="voltage-readings">
       <thead className="border-b border-rule bg-sunk/60">
         <tr>
-          <th scope="col" className={th}>Test point</th>
-          <th scope="col" className={th}>Expected</th>
-          <th scope="col" className={th}>Measured</th>
-          <th scope="col" className={th}>Difference</th>
-          <th scope="col" className={th}>Verdict</th>
-          {canEdit ? <th scope="col" className={th}><span className="sr-only">Actions</span></th> : null}
+          <th scope="col" className={th}>
+            Test point
+          </th>
+          <th scope="col" className={th}>
+            Expected
+          </th>
+          <th scope="col" className={th}>
+            Measured
+          </th>
+          <th scope="col" className={th}>
+            Difference
+          </th>
+          <th scope="col" className={th}>
+            Verdict
+          </th>
+          {canEdit ? (
+            <th scope="col" className={th}>
+              <span className="sr-only">Actions</span>
+            </th>
+          ) : null}
         </tr>
       </thead>
       <tbody className="divide-y divide-rule">
@@ -98,13 +139,25 @@ export function VoltageTable({ jobId, rows, canEdit }: { jobId: number; rows: Re
           <tr key={r.id} data-testid={`reading-${r.designator}`}>
             <td className={`${td} font-bold`}>
               {r.designator}
-              {r.partDesignators ? <span className="block text-note font-normal text-muted">across <span className="font-mono">{r.partDesignators}</span></span> : null}
+              {r.partDesignators ? (
+                <span className="block text-note font-normal text-muted">
+                  across <span className="font-mono">{r.partDesignators}</span>
+                </span>
+              ) : null}
             </td>
-            <td className={`${td} font-mono`}>{formatQuantity(r.nominal, "V")} <span className="text-muted">±{Math.round(r.tolerance * 100)} %</span></td>
+            <td className={`${td} font-mono`}>
+              {formatQuantity(r.nominal, "V")} <span className="text-muted">±{Math.round(r.tolerance * 100)} %</span>
+            </td>
             <td className={`${td} font-mono`}>{r.measured === null ? "—" : formatQuantity(r.measured, "V")}</td>
             <td className={`${td} font-mono`}>{pct(r.deviation)}</td>
-            <td className={td}><Verdict v={r.verdict} /></td>
-            {canEdit ? <td className={`${td} text-right`}><RemoveButton jobId={jobId} r={r} /></td> : null}
+            <td className={td}>
+              <Verdict v={r.verdict} />
+            </td>
+            {canEdit ? (
+              <td className={`${td} text-right`}>
+                <RemoveButton jobId={jobId} r={r} />
+              </td>
+            ) : null}
           </tr>
         ))}
       </tbody>

@@ -22,7 +22,9 @@ function checksOf(error: Record<string, unknown>): ReadyIssue[] {
   const list = (error.checks ?? (error.details as { checks?: unknown } | undefined)?.checks) as unknown;
   if (Array.isArray(list)) return list.filter((c): c is ReadyIssue => typeof c?.id === "string" && typeof c?.message === "string");
   const fields = (error.fields ?? {}) as Record<string, string>;
-  return Object.entries(fields).filter(([id]) => isCheck(id)).map(([id, message]) => ({ id: id as ReadyIssue["id"], message }));
+  return Object.entries(fields)
+    .filter(([id]) => isCheck(id))
+    .map(([id, message]) => ({ id: id as ReadyIssue["id"], message }));
 }
 
 /** POST JSON; a 409 comes back with its checks. */
@@ -64,7 +66,11 @@ export function ReadyChecksPanel({
   onContinue: (body: { override: true; reason: string }) => Promise<void>;
   onCancel: () => void;
 }) {
-  const { register, handleSubmit, formState: { errors, isSubmitting } } = useForm<OverrideForm>({
+  const {
+    register,
+    handleSubmit,
+    formState: { errors, isSubmitting },
+  } = useForm<OverrideForm>({
     resolver: zodResolver(overrideSchema as never) as never,
     defaultValues: { override: true, reason: "" },
   });
@@ -72,20 +78,37 @@ export function ReadyChecksPanel({
   return (
     <section aria-labelledby={`${id}-h`} className="rounded-card border border-caution/60 bg-caution-bg p-4" data-testid="ready-checks">
       <div role="alert">
-        <h3 id={`${id}-h`} className="font-bold text-caution">Before collection, the record shows</h3>
+        <h3 id={`${id}-h`} className="font-bold text-caution">
+          Before collection, the record shows
+        </h3>
         <ul className="mt-1 list-disc pl-5">
           {checks.map((c) => (
-            <li key={c.id} data-check={c.id}>{c.message}</li>
+            <li key={c.id} data-check={c.id}>
+              {c.message}
+            </li>
           ))}
         </ul>
       </div>
       <p className="mt-2 text-note text-muted">Finish these first, or go on and say why: the reason goes to the Log.</p>
       <form onSubmit={submit} noValidate aria-label="Continue with a reason" className="mt-3 flex flex-col gap-1">
-        <TextareaField id={`${id}-reason`} label="Reason to continue" rows={2} placeholder="Customer collecting today; the hum is noted on the bench sheet" error={errors.reason?.message} {...register("reason")} />
+        <TextareaField
+          id={`${id}-reason`}
+          label="Reason to continue"
+          rows={2}
+          placeholder="Customer collecting today; the hum is noted on the bench sheet"
+          error={errors.reason?.message}
+          {...register("reason")}
+        />
         <div className="flex flex-wrap items-center gap-3">
-          <Button type="submit" disabled={isSubmitting}>{action}</Button>
-          <Button type="button" variant="secondary" onClick={onCancel}>Not yet</Button>
-          <p role="status" className="font-bold text-flag">{serverError ?? ""}</p>
+          <Button type="submit" disabled={isSubmitting}>
+            {action}
+          </Button>
+          <Button type="button" variant="secondary" onClick={onCancel}>
+            Not yet
+          </Button>
+          <p role="status" className="font-bold text-flag">
+            {serverError ?? ""}
+          </p>
         </div>
       </form>
     </section>

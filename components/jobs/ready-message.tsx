@@ -25,7 +25,13 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
   const [held, setHeld] = useState<{ values: ReadyMessageForm; checks: ReadyIssue[] } | null>(null);
   // The checks before "ready" still open when the draft loaded: shown ahead, asked about on sending.
   const [open, setOpen] = useState<ReadyIssue[]>([]);
-  const { register, handleSubmit, reset, setError, formState: { errors, isSubmitting } } = useForm<ReadyMessageForm>({
+  const {
+    register,
+    handleSubmit,
+    reset,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm<ReadyMessageForm>({
     resolver: zodResolver(readyMessageSchema),
     defaultValues: { subject: "", text: "" },
   });
@@ -79,8 +85,8 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
         Tell the customer it’s ready
       </h3>
       <p className="mb-3 mt-1 text-note text-muted">
-        To <strong className="text-ink">{draft.to}</strong>, with the bench sheet as a PDF. Edit the words for this customer if you like; the
-        template lives in the workshop settings.
+        To <strong className="text-ink">{draft.to}</strong>, with the bench sheet as a PDF. Edit the words for this customer if you like; the template lives in
+        the workshop settings.
       </p>
       {open.length && !held ? (
         <div role="note" className="mb-3 rounded-chip border border-caution/50 bg-caution-bg px-3 py-2 text-note" data-testid="ready-open-checks">

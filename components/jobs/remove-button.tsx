@@ -24,7 +24,11 @@ export function RemoveButton({ url, confirm, label }: { url: string; confirm: st
       >
         Remove
       </Button>
-      {error ? <span role="alert" className="text-note font-bold text-flag">{error}</span> : null}
+      {error ? (
+        <span role="alert" className="text-note font-bold text-flag">
+          {error}
+        </span>
+      ) : null}
     </span>
   );
 }

@@ -15,7 +15,10 @@ const TONE: Record<JobStatus, string> = {
 
 export function StatusBadge({ status }: { status: JobStatus }) {
   return (
-    <span className={`inline-flex items-center whitespace-nowrap rounded-full border px-2.5 py-0.5 text-note font-bold ${TONE[status]}`} data-testid="status-badge">
+    <span
+      className={`inline-flex items-center whitespace-nowrap rounded-full border px-2.5 py-0.5 text-note font-bold ${TONE[status]}`}
+      data-testid="status-badge"
+    >
       {JOB_STATUS_LABELS[status]}
     </span>
   );

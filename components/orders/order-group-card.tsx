@@ -24,7 +24,9 @@ export function OrderGroupCard({ group, currency, canMark }: { group: OrderGroup
         </div>
         {currency && group.totalMinor !== null ? (
           <p className="text-right">
-            <span className="block font-mono text-reading" data-testid="group-total">{money(group.totalMinor)}</span>
+            <span className="block font-mono text-reading" data-testid="group-total">
+              {money(group.totalMinor)}
+            </span>
             {group.unpriced ? <span className="block text-note text-caution">{group.unpriced} without a unit cost, not counted</span> : null}
           </p>
         ) : null}
@@ -41,13 +43,26 @@ export function OrderGroupCard({ group, currency, canMark }: { group: OrderGroup
                   Job {l.jobNumber}
                 </Link>{" "}
                 · {l.jobTitle}
-                {l.supplierPartNumber ? <> · their no. <span className="font-mono">{l.supplierPartNumber}</span></> : null}
+                {l.supplierPartNumber ? (
+                  <>
+                    {" "}
+                    · their no. <span className="font-mono">{l.supplierPartNumber}</span>
+                  </>
+                ) : null}
               </p>
             </div>
             <p className="flex items-baseline gap-3 sm:justify-end">
               <span className="font-mono">×{l.quantity}</span>
               {currency ? (
-                <span className="font-mono">{l.unitCostMinor == null ? <span className="text-caution">no price</span> : <>{money(l.unitCostMinor)} each · {money(l.lineMinor!)}</>}</span>
+                <span className="font-mono">
+                  {l.unitCostMinor == null ? (
+                    <span className="text-caution">no price</span>
+                  ) : (
+                    <>
+                      {money(l.unitCostMinor)} each · {money(l.lineMinor!)}
+                    </>
+                  )}
+                </span>
               ) : null}
             </p>
           </li>
@@ -60,7 +75,9 @@ export function OrderGroupCard({ group, currency, canMark }: { group: OrderGroup
           </a>
         ) : null}
         {canMark && group.supplier ? <MarkOrderedButton supplier={group.supplier} partIds={group.lines.map((l) => l.id)} /> : null}
-        {!group.supplier ? <p className="text-note text-muted">Choose a supplier for these on each job&rsquo;s Parts tab; then they join that supplier&rsquo;s order.</p> : null}
+        {!group.supplier ? (
+          <p className="text-note text-muted">Choose a supplier for these on each job&rsquo;s Parts tab; then they join that supplier&rsquo;s order.</p>
+        ) : null}
       </footer>
     </section>
   );

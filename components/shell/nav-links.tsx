@@ -22,9 +22,7 @@ export function NavLinks({ signedIn }: { signedIn: boolean }) {
             key={l.href}
             href={l.href}
             aria-current={active ? "page" : undefined}
-            className={`rounded-chip px-3 py-2 font-bold min-h-11 inline-flex items-center ${
-              active ? "bg-ink text-paper" : "text-ink hover:bg-sunk"
-            }`}
+            className={`rounded-chip px-3 py-2 font-bold min-h-11 inline-flex items-center ${active ? "bg-ink text-paper" : "text-ink hover:bg-sunk"}`}
           >
             {l.label}
           </Link>

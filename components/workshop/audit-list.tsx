@@ -8,13 +8,21 @@ function describe(e: AuditEventRow): string {
     case "workshop.created":
       return `${who} opened the workshop.`;
     case "workshop.updated":
-      return `${who} changed the workshop settings (${[d.changed ?? []].flat().map((k) => SETTING_NAMES[k] ?? k).join(", ")}).`;
+      return `${who} changed the workshop settings (${[d.changed ?? []]
+        .flat()
+        .map((k) => SETTING_NAMES[k] ?? k)
+        .join(", ")}).`;
     case "workshop.charges-updated":
-      return `${who} changed the workshop's charges (${[d.changed ?? []].flat().map((k) => SETTING_NAMES[k] ?? k).join(", ")}).`;
+      return `${who} changed the workshop's charges (${[d.changed ?? []]
+        .flat()
+        .map((k) => SETTING_NAMES[k] ?? k)
+        .join(", ")}).`;
     case "invitation.created":
       return `${who} invited ${d.email} as ${d.role}.`;
     case "invitation.revoked":
-      return d.reason === "undeliverable" ? `The invitation to ${d.email} could not be e-mailed and was withdrawn.` : `${who} withdrew the invitation to ${d.email}.`;
+      return d.reason === "undeliverable"
+        ? `The invitation to ${d.email} could not be e-mailed and was withdrawn.`
+        : `${who} withdrew the invitation to ${d.email}.`;
     case "member.joined":
       return `${d.name} (${d.email}) joined as ${d.role}.`;
     case "member.role-changed":

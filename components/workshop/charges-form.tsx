@@ -14,11 +14,21 @@ const NAMES = ["currency", "hourlyRate", "taxRate"] as const;
 export function ChargesForm({ initial, currencyLocked }: { initial: ChargesFormValues; currencyLocked: boolean }) {
   const [saved, setSaved] = useState<string | null>(null);
   const form = useForm<ChargesFormValues, unknown, ChargesInput>({ resolver: zodResolver(chargesSchema), defaultValues: initial });
-  const { register, reset, getValues, watch, formState: { errors, isDirty } } = form;
+  const {
+    register,
+    reset,
+    getValues,
+    watch,
+    formState: { errors, isDirty },
+  } = form;
   const currency = watch("currency");
 
   // The server parses the same schema, so it gets the typed text rather than the minor units.
-  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit(form, {
+  const {
+    submit: onSubmit,
+    formError,
+    pending: isSubmitting,
+  } = useSubmit(form, {
     url: "/api/workshop/charges",
     method: "PATCH",
     body: () => getValues(),
@@ -38,14 +48,43 @@ export function ChargesForm({ initial, currencyLocked }: { initial: ChargesFormV
           <p className="font-bold">Currency</p>
           <p className="font-mono">{currency}</p>
           <p className="text-note text-muted">Estimates or invoices already use this currency, so it stays as it is.</p>
-          {errors.currency?.message ? <p role="alert" className="text-note font-bold text-flag">{errors.currency.message}</p> : null}
+          {errors.currency?.message ? (
+            <p role="alert" className="text-note font-bold text-flag">
+              {errors.currency.message}
+            </p>
+          ) : null}
         </div>
       ) : (
-        <SelectField id="ch-currency" label="Currency" options={CHARGE_CURRENCIES} hint="Every estimate and invoice is in this currency." error={errors.currency?.message} {...register("currency")} />
+        <SelectField
+          id="ch-currency"
+          label="Currency"
+          options={CHARGE_CURRENCIES}
+          hint="Every estimate and invoice is in this currency."
+          error={errors.currency?.message}
+          {...register("currency")}
+        />
       )}
       <div className="grid gap-x-4 sm:grid-cols-2">
-        <Field id="ch-rate" label="Hourly rate" inputMode="decimal" autoComplete="off" suffix={currency} hint="Per hour of labour." error={errors.hourlyRate?.message} {...register("hourlyRate")} />
-        <Field id="ch-tax" label="Tax rate" inputMode="decimal" autoComplete="off" suffix="%" hint="On each total; 0 for none." error={errors.taxRate?.message} {...register("taxRate")} />
+        <Field
+          id="ch-rate"
+          label="Hourly rate"
+          inputMode="decimal"
+          autoComplete="off"
+          suffix={currency}
+          hint="Per hour of labour."
+          error={errors.hourlyRate?.message}
+          {...register("hourlyRate")}
+        />
+        <Field
+          id="ch-tax"
+          label="Tax rate"
+          inputMode="decimal"
+          autoComplete="off"
+          suffix="%"
+          hint="On each total; 0 for none."
+          error={errors.taxRate?.message}
+          {...register("taxRate")}
+        />
       </div>
       <div className="flex items-center gap-4">
         <Button type="submit" disabled={isSubmitting || !isDirty}>

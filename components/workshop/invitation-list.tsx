@@ -26,7 +26,11 @@ export function InvitationList({ invitations }: { invitations: InvitationRow[] }
               <p className="truncate font-bold">{i.email}</p>
               <p className="text-note text-muted">
                 {ROLE_LABELS[i.role]} ·{" "}
-                {i.state === "expired" ? <span className="font-bold text-caution">expired {day(i.expiresAt)}; invite again</span> : <>link works until {day(i.expiresAt)}</>}
+                {i.state === "expired" ? (
+                  <span className="font-bold text-caution">expired {day(i.expiresAt)}; invite again</span>
+                ) : (
+                  <>link works until {day(i.expiresAt)}</>
+                )}
                 {i.invitedBy ? ` · from ${i.invitedBy}` : ""}
               </p>
             </div>

@@ -13,8 +13,16 @@ import { ROLE_OPTIONS } from "./role-labels";
 export function InviteForm() {
   const [sent, setSent] = useState<string | null>(null);
   const form = useForm<InvitationForm>({ resolver: zodResolver(invitationSchema), defaultValues: { email: "", role: "technician" } });
-  const { register, reset, formState: { errors } } = form;
-  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit<InvitationForm, { invitation: { email: string } }>(form, {
+  const {
+    register,
+    reset,
+    formState: { errors },
+  } = form;
+  const {
+    submit: onSubmit,
+    formError,
+    pending: isSubmitting,
+  } = useSubmit<InvitationForm, { invitation: { email: string } }>(form, {
     url: "/api/workshop/invitations",
     fields: ["email", "role"],
     onStart: () => setSent(null),
@@ -26,7 +34,15 @@ export function InviteForm() {
 
   return (
     <form onSubmit={onSubmit} noValidate className="grid gap-x-3 sm:grid-cols-[1fr_12rem_auto] sm:items-start" aria-label="Invite someone">
-      <Field id="invite-email" label="E-mail" type="email" autoComplete="off" placeholder="name@example.com" error={errors.email?.message} {...register("email")} />
+      <Field
+        id="invite-email"
+        label="E-mail"
+        type="email"
+        autoComplete="off"
+        placeholder="name@example.com"
+        error={errors.email?.message}
+        {...register("email")}
+      />
       <SelectField id="invite-role" label="Role" options={ROLE_OPTIONS} error={errors.role?.message} {...register("role")} />
       <Button type="submit" disabled={isSubmitting} className="sm:mt-7">
         {isSubmitting ? "Sending…" : "Send invitation"}

@@ -15,10 +15,19 @@ const NAMES = ["name", "contactEmail", "contactPhone", "address", "readyMessageT
 export function SettingsForm({ initial }: { initial: WorkshopSettingsForm }) {
   const [saved, setSaved] = useState<string | null>(null);
   const form = useForm<WorkshopSettingsForm, unknown, WorkshopSettingsInput>({ resolver: zodResolver(workshopSettingsSchema), defaultValues: initial });
-  const { register, reset, getValues, formState: { errors, isDirty } } = form;
+  const {
+    register,
+    reset,
+    getValues,
+    formState: { errors, isDirty },
+  } = form;
 
   // The server parses the same schema, so it gets the typed text, not the parsed values (blank → null).
-  const { submit: onSubmit, formError, pending: isSubmitting } = useSubmit(form, {
+  const {
+    submit: onSubmit,
+    formError,
+    pending: isSubmitting,
+  } = useSubmit(form, {
     url: "/api/workshop",
     method: "PATCH",
     body: () => getValues(),
@@ -33,7 +42,14 @@ export function SettingsForm({ initial }: { initial: WorkshopSettingsForm }) {
   return (
     <form onSubmit={onSubmit} noValidate className="flex flex-col gap-1" aria-label="Workshop settings">
       <Field id="ws-name" label="Workshop name" error={errors.name?.message} {...register("name")} />
-      <Field id="ws-email" label="Contact e-mail" type="email" hint="Shown to customers on bench sheets and messages." error={errors.contactEmail?.message} {...register("contactEmail")} />
+      <Field
+        id="ws-email"
+        label="Contact e-mail"
+        type="email"
+        hint="Shown to customers on bench sheets and messages."
+        error={errors.contactEmail?.message}
+        {...register("contactEmail")}
+      />
       <Field id="ws-phone" label="Phone" type="tel" error={errors.contactPhone?.message} {...register("contactPhone")} />
       <Field id="ws-address" label="Address" error={errors.address?.message} {...register("address")} />
       <TextareaField

@@ -20,7 +20,8 @@ export function changePassword(userId: number, passwordHash: string): { sessionV
         .get();
       deleteUserSessions(userId, undefined, tx);
       const rows = tx.select({ workshopId: memberships.workshopId }).from(memberships).where(eq(memberships.userId, userId)).orderBy(asc(memberships.id)).all();
-      for (const r of rows) recordAudit(tx, { workshopId: r.workshopId, actorUserId: userId, action: "password.changed", detail: { name: user.name, email: user.email } });
+      for (const r of rows)
+        recordAudit(tx, { workshopId: r.workshopId, actorUserId: userId, action: "password.changed", detail: { name: user.name, email: user.email } });
       return { sessionVersion: user.sessionVersion };
     },
     { behavior: "immediate" },

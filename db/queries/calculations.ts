@@ -57,7 +57,15 @@ export function saveCalculation(member: Member, jobId: number, input: Calculatio
     const row = tx
       .insert(calculations)
       .values({ jobId, workshopId: member.workshopId, slug: calc.slug, inputs, outputs, note: input.note, authorId: member.userId })
-      .returning({ id: calculations.id, jobId: calculations.jobId, slug: calculations.slug, inputs: calculations.inputs, outputs: calculations.outputs, note: calculations.note, createdAt: calculations.createdAt })
+      .returning({
+        id: calculations.id,
+        jobId: calculations.jobId,
+        slug: calculations.slug,
+        inputs: calculations.inputs,
+        outputs: calculations.outputs,
+        note: calculations.note,
+        createdAt: calculations.createdAt,
+      })
       .get();
     touchJob(member, jobId, tx);
     return { ...row, author: { id: member.userId, name: member.name } };

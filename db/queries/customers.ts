@@ -61,7 +61,15 @@ export function getCustomer(member: Member, customerId: number) {
     .get();
   if (!customer) throw notFound("That customer");
   const theirJobs = getDb()
-    .select({ id: jobs.id, number: jobs.number, title: jobs.title, equipmentKind: jobs.equipmentKind, status: jobs.status, createdAt: jobs.createdAt, updatedAt: jobs.updatedAt })
+    .select({
+      id: jobs.id,
+      number: jobs.number,
+      title: jobs.title,
+      equipmentKind: jobs.equipmentKind,
+      status: jobs.status,
+      createdAt: jobs.createdAt,
+      updatedAt: jobs.updatedAt,
+    })
     .from(jobs)
     .where(and(eq(jobs.customerId, customerId), eq(jobs.workshopId, member.workshopId)))
     .orderBy(desc(jobs.number))
@@ -73,8 +81,13 @@ export type CustomerDetail = ReturnType<typeof getCustomer>;
 
 function assertEmailFree(db: DbOrTx, workshopId: number, email: string | null | undefined, except?: number) {
   if (!email) return;
-  const taken = db.select({ id: customers.id, name: customers.name }).from(customers).where(and(eq(customers.workshopId, workshopId), eq(customers.email, email))).get();
-  if (taken && taken.id !== except) throw new ConflictError(`${taken.name} already has this e-mail address.`, { email: `${taken.name} already has this address; open their record instead.` });
+  const taken = db
+    .select({ id: customers.id, name: customers.name })
+    .from(customers)
+    .where(and(eq(customers.workshopId, workshopId), eq(customers.email, email)))
+    .get();
+  if (taken && taken.id !== except)
+    throw new ConflictError(`${taken.name} already has this e-mail address.`, { email: `${taken.name} already has this address; open their record instead.` });
 }
 
 export function createCustomer(member: Member, input: CustomerValues) {
@@ -82,7 +95,11 @@ export function createCustomer(member: Member, input: CustomerValues) {
   return getDb().transaction((tx) => {
     const email = normalEmail(input.email);
     assertEmailFree(tx, member.workshopId, email);
-    return tx.insert(customers).values({ ...input, email, workshopId: member.workshopId }).returning(columns).get();
+    return tx
+      .insert(customers)
+      .values({ ...input, email, workshopId: member.workshopId })
+      .returning(columns)
+      .get();
   });
 }
 
@@ -111,9 +128,19 @@ export function updateCustomer(member: Member, customerId: number, input: Custom
 export function deleteCustomer(member: Member, customerId: number) {
   assertCan(member, "deleteJobs", "remove customers");
   getDb().transaction((tx) => {
-    const { id } = tx.select({ id: customers.id }).from(customers).where(and(eq(customers.id, customerId), eq(customers.workshopId, member.workshopId))).get() ?? {};
+    const { id } =
+      tx
+        .select({ id: customers.id })
+        .from(customers)
+        .where(and(eq(customers.id, customerId), eq(customers.workshopId, member.workshopId)))
+        .get() ?? {};
     if (!id) throw notFound("That customer");
-    const n = tx.select({ n: sql<number>`count(*)` }).from(jobs).where(eq(jobs.customerId, id)).get()?.n ?? 0;
+    const n =
+      tx
+        .select({ n: sql<number>`count(*)` })
+        .from(jobs)
+        .where(eq(jobs.customerId, id))
+        .get()?.n ?? 0;
     if (n > 0) throw new ConflictError(`This customer has ${n} job${n === 1 ? "" : "s"}; a customer with jobs stays on file.`);
     tx.delete(customers).where(eq(customers.id, id)).run();
   });
@@ -139,7 +166,11 @@ export function resolveJobCustomer(tx: DbOrTx, member: Member, input: JobCustome
   const pick = (c: { id: number; name: string; email: string | null }) => ({ customerId: c.id, customerName: c.name, customerEmail: c.email });
   const found = { id: customers.id, name: customers.name, email: customers.email };
   if (typeof input.customerId === "number") {
-    const chosen = tx.select(found).from(customers).where(and(eq(customers.id, input.customerId), eq(customers.workshopId, w))).get();
+    const chosen = tx
+      .select(found)
+      .from(customers)
+      .where(and(eq(customers.id, input.customerId), eq(customers.workshopId, w)))
+      .get();
     if (!chosen) throw new ValidationError("Some fields need attention.", { customerId: "That customer is not on your workshop's list." });
     return pick(chosen);
   }
@@ -150,9 +181,24 @@ export function resolveJobCustomer(tx: DbOrTx, member: Member, input: JobCustome
     return said ? { customerId: null, customerName: null, customerEmail: null } : undefined;
   }
   const existing = email
-    ? tx.select(found).from(customers).where(and(eq(customers.workshopId, w), eq(customers.email, email))).get()
-    : tx.select(found).from(customers).where(and(eq(customers.workshopId, w), sql`lower(${customers.name}) = lower(${name})`)).orderBy(asc(customers.id)).get();
+    ? tx
+        .select(found)
+        .from(customers)
+        .where(and(eq(customers.workshopId, w), eq(customers.email, email)))
+        .get()
+    : tx
+        .select(found)
+        .from(customers)
+        .where(and(eq(customers.workshopId, w), sql`lower(${customers.name}) = lower(${name})`))
+        .orderBy(asc(customers.id))
+        .get();
   if (existing) return pick(existing);
   const phone = input.customerPhone?.trim() || null;
-  return pick(tx.insert(customers).values({ workshopId: w, name: name ?? email!, email, phone }).returning(found).get());
+  return pick(
+    tx
+      .insert(customers)
+      .values({ workshopId: w, name: name ?? email!, email, phone })
+      .returning(found)
+      .get(),
+  );
 }

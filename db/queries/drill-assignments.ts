@@ -45,7 +45,15 @@ export function createAssignment(member: Member, input: DrillAssignmentInput) {
   const id = getDb().transaction((tx) => {
     const row = tx
       .insert(drillAssignments)
-      .values({ workshopId: member.workshopId, assignedBy: member.userId, apprenticeId: apprentice.userId, kinds, count: plan.length, dueDate: input.due, note: input.note || null })
+      .values({
+        workshopId: member.workshopId,
+        assignedBy: member.userId,
+        apprenticeId: apprentice.userId,
+        kinds,
+        count: plan.length,
+        dueDate: input.due,
+        note: input.note || null,
+      })
       .returning({ id: drillAssignments.id })
       .get();
     for (const p of plan) insertDrill(tx, member, apprentice.userId, p.drill, { assignmentId: row.id, sourceCalculationId: p.sourceCalculationId });
@@ -64,7 +72,8 @@ export function listAssignments(member: Member, filter: { apprentice?: number; i
   assertCan(member, "doDrills");
   const where: SQL[] = [eq(drillAssignments.workshopId, member.workshopId)];
   if (!can.followDrills(member)) {
-    if (filter.apprentice !== undefined && filter.apprentice !== member.userId) throw new ForbiddenError("Your role does not allow you to see another member's drills.");
+    if (filter.apprentice !== undefined && filter.apprentice !== member.userId)
+      throw new ForbiddenError("Your role does not allow you to see another member's drills.");
     where.push(eq(drillAssignments.apprenticeId, member.userId));
   } else if (filter.apprentice !== undefined) {
     where.push(eq(drillAssignments.apprenticeId, findApprentice(member, filter.apprentice).userId));
@@ -93,7 +102,15 @@ export function listAssignments(member: Member, filter: { apprentice?: number; i
     ? getDb()
         .select({ id: drills.id, assignmentId: drills.assignmentId, kind: drills.kind, correct: drills.correct, answeredAt: drills.answeredAt })
         .from(drills)
-        .where(and(eq(drills.workshopId, member.workshopId), inArray(drills.assignmentId, sets.map((s) => s.id))))
+        .where(
+          and(
+            eq(drills.workshopId, member.workshopId),
+            inArray(
+              drills.assignmentId,
+              sets.map((s) => s.id),
+            ),
+          ),
+        )
         .orderBy(asc(drills.id))
         .all()
     : [];

@@ -58,7 +58,13 @@ export function resultView(row: Pick<DrillRecord, "id" | "kind" | "slug">, answe
 }
 export type DrillResult = ReturnType<typeof resultView>;
 
-export function insertDrill(db: DbOrTx, member: Member, userId: number, drill: Drill, origin: { assignmentId?: number; sourceCalculationId?: number } = {}): DrillRecord {
+export function insertDrill(
+  db: DbOrTx,
+  member: Member,
+  userId: number,
+  drill: Drill,
+  origin: { assignmentId?: number; sourceCalculationId?: number } = {},
+): DrillRecord {
   return db
     .insert(drills)
     .values({
@@ -116,7 +122,8 @@ export function drillFromCalculation(member: Member, calculationId: number, seed
   if (!calc) throw notFound("That saved calculation");
   const title = getCalculator(calc.slug)?.title ?? calc.slug;
   const kinds = drillKindsFor(calc.slug);
-  if (kinds.length === 0) throw new ValidationError(`There is no drill for the ${title} calculator yet.`, { calculationId: `There is no drill for the ${title} calculator yet.` });
+  if (kinds.length === 0)
+    throw new ValidationError(`There is no drill for the ${title} calculator yet.`, { calculationId: `There is no drill for the ${title} calculator yet.` });
   const matching = kinds.filter((k) => k.direction === "forward" && typeof calc.outputs[k.asked.name] === "number");
   const pool = matching.length ? matching : kinds;
   const drill = generateDrill(pool[(seed >>> 0) % pool.length].id, seed);

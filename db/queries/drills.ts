@@ -1,6 +1,16 @@
 import { and, eq, isNull } from "drizzle-orm";
 import { assertCan, can, type Member } from "@/lib/auth/can";
-import { drillKindsFor, generateDrill, generateDrillFor, getDrillKind, judgeDrill, newSeed, UnknownDrillKindError, type Drill, type Judgement } from "@/lib/drills";
+import {
+  drillKindsFor,
+  generateDrill,
+  generateDrillFor,
+  getDrillKind,
+  judgeDrill,
+  newSeed,
+  UnknownDrillKindError,
+  type Drill,
+  type Judgement,
+} from "@/lib/drills";
 import type { DrillCreate } from "@/lib/drills/schemas";
 import { ConflictError, ForbiddenError, ValidationError, notFound } from "@/lib/errors";
 import { getDb } from "../client";
@@ -28,7 +38,8 @@ export function createDrill(member: Member, input: DrillCreate, seed = newSeed()
     drill = generateDrill(input.kind, seed);
   } else {
     const slug = input.slug ?? "";
-    if (drillKindsFor(slug).length === 0) throw new ValidationError("There is no drill for that calculator.", { slug: `There is no drill for a calculator called "${slug}".` });
+    if (drillKindsFor(slug).length === 0)
+      throw new ValidationError("There is no drill for that calculator.", { slug: `There is no drill for a calculator called "${slug}".` });
     drill = generateDrillFor(slug, seed);
   }
   const row = insertDrill(getDb(), member, member.userId, drill, input.calculationId !== undefined ? { sourceCalculationId: input.calculationId } : {});

@@ -32,7 +32,13 @@ function linesOf(tx: DbOrTx, estimateId: number) {
 
 function withTotals<E extends { taxRateBp: number }, L extends { quantityMilli: number; unitPriceMinor: number }>(estimate: E, lines: L[]) {
   const totals = computeTotals(lines, estimate.taxRateBp);
-  return { ...estimate, lines: lines.map((l, i) => ({ ...l, amountMinor: totals.lines[i] })), subtotalMinor: totals.subtotalMinor, taxMinor: totals.taxMinor, totalMinor: totals.totalMinor };
+  return {
+    ...estimate,
+    lines: lines.map((l, i) => ({ ...l, amountMinor: totals.lines[i] })),
+    subtotalMinor: totals.subtotalMinor,
+    taxMinor: totals.taxMinor,
+    totalMinor: totals.totalMinor,
+  };
 }
 
 /** The job's estimate (latest), its priced lines and totals, plus what the editor needs. */
@@ -61,11 +67,26 @@ export function saveEstimate(member: Member, jobId: number, input: LinesValues) 
     const priced = priceLines(tx, member.workshopId, jobId, input.lines);
     let current = latestEstimate(tx, member.workshopId, jobId);
     if (current?.status === "approved") throw new ConflictError("The customer approved this estimate; put further changes on the invoice.");
-    const values = { status: "draft" as const, currency: settings.currency, taxRateBp: settings.taxRateBp, approvalTokenHash: null, tokenExpiresAt: null, respondedAt: null };
+    const values = {
+      status: "draft" as const,
+      currency: settings.currency,
+      taxRateBp: settings.taxRateBp,
+      approvalTokenHash: null,
+      tokenExpiresAt: null,
+      respondedAt: null,
+    };
     if (current) tx.update(estimates).set(values).where(eq(estimates.id, current.id)).run();
-    else current = tx.insert(estimates).values({ ...values, jobId, workshopId: member.workshopId, createdBy: member.userId }).returning().get();
+    else
+      current = tx
+        .insert(estimates)
+        .values({ ...values, jobId, workshopId: member.workshopId, createdBy: member.userId })
+        .returning()
+        .get();
     tx.delete(estimateLines).where(eq(estimateLines.estimateId, current.id)).run();
-    if (priced.length) tx.insert(estimateLines).values(priced.map((p) => ({ ...p, estimateId: current!.id }))).run();
+    if (priced.length)
+      tx.insert(estimateLines)
+        .values(priced.map((p) => ({ ...p, estimateId: current!.id })))
+        .run();
   });
   return getEstimateForJob(member, jobId);
 }
@@ -87,10 +108,20 @@ export function issueApprovalLink(member: Member, jobId: number) {
     if (!lines.length) throw new ConflictError("Add at least one line before sending the estimate.");
     const { token, hash } = newToken();
     const expiresAt = new Date(Date.now() + APPROVAL_LINK_DAYS * 86_400_000);
-    tx.update(estimates).set({ status: "sent", approvalTokenHash: hash, tokenExpiresAt: expiresAt, respondedAt: null }).where(eq(estimates.id, current.id)).run();
+    tx.update(estimates)
+      .set({ status: "sent", approvalTokenHash: hash, tokenExpiresAt: expiresAt, respondedAt: null })
+      .where(eq(estimates.id, current.id))
+      .run();
     const total = formatMoney(withTotals(current, lines).totalMinor, current.currency);
     // Log entries carry no amounts: apprentices read the Log and never see prices.
-    insertLogEntry(tx, { jobId, workshopId: member.workshopId, authorId: member.userId, kind: "estimate", text: `Estimate sent to ${job.customerEmail} for approval.`, data: { estimateId: current.id, event: "sent" } });
+    insertLogEntry(tx, {
+      jobId,
+      workshopId: member.workshopId,
+      authorId: member.userId,
+      kind: "estimate",
+      text: `Estimate sent to ${job.customerEmail} for approval.`,
+      data: { estimateId: current.id, event: "sent" },
+    });
     return { token, expiresAt, job, total, workshopName: member.workshopName };
   });
 }
@@ -106,8 +137,10 @@ export function findEstimateByToken(token: string) {
     .get();
   if (!row) return { state: "unknown" as const };
   const { estimate } = row;
-  if (estimate.status !== "sent") return { state: "answered" as const, status: estimate.status, respondedAt: estimate.respondedAt, workshopName: row.workshopName };
-  if (!estimate.tokenExpiresAt || estimate.tokenExpiresAt.getTime() < Date.now()) return { state: "expired" as const, workshopName: row.workshopName, contactEmail: row.contactEmail };
+  if (estimate.status !== "sent")
+    return { state: "answered" as const, status: estimate.status, respondedAt: estimate.respondedAt, workshopName: row.workshopName };
+  if (!estimate.tokenExpiresAt || estimate.tokenExpiresAt.getTime() < Date.now())
+    return { state: "expired" as const, workshopName: row.workshopName, contactEmail: row.contactEmail };
   const job = jobInWorkshop(db, estimate.workshopId, estimate.jobId)!;
   const { approvalTokenHash: _h, ...safe } = estimate;
   return {
@@ -121,19 +154,35 @@ export function findEstimateByToken(token: string) {
 /** The customer's answer: once only, before expiry; logged on the job. Returns who to tell. */
 export function answerEstimate(token: string, decision: AnswerInput["decision"], note?: string) {
   return getDb().transaction((tx) => {
-    const estimate = tx.select().from(estimates).where(eq(estimates.approvalTokenHash, hashToken(token))).get();
+    const estimate = tx
+      .select()
+      .from(estimates)
+      .where(eq(estimates.approvalTokenHash, hashToken(token)))
+      .get();
     if (!estimate) throw new NotFoundError("This link is not valid. Ask the workshop to send the estimate again.");
     if (estimate.status !== "sent") throw new GoneError("This estimate has already been answered.");
-    if (!estimate.tokenExpiresAt || estimate.tokenExpiresAt.getTime() < Date.now()) throw new GoneError("This link has expired. Ask the workshop for a new one.");
+    if (!estimate.tokenExpiresAt || estimate.tokenExpiresAt.getTime() < Date.now())
+      throw new GoneError("This link has expired. Ask the workshop for a new one.");
     const status = decision === "approve" ? "approved" : "declined";
     const respondedAt = new Date();
     // The status guard makes a concurrent second answer update nothing.
-    const changed = tx.update(estimates).set({ status, respondedAt }).where(and(eq(estimates.id, estimate.id), eq(estimates.status, "sent"))).run();
+    const changed = tx
+      .update(estimates)
+      .set({ status, respondedAt })
+      .where(and(eq(estimates.id, estimate.id), eq(estimates.status, "sent")))
+      .run();
     if (changed.changes !== 1) throw new GoneError("This estimate has already been answered.");
     const job = jobInWorkshop(tx, estimate.workshopId, estimate.jobId)!;
     const who = job.customerName ?? "The customer";
     const text = `${who} ${status} the estimate.${note ? ` Their note: “${note}”` : ""}`;
-    insertLogEntry(tx, { jobId: estimate.jobId, workshopId: estimate.workshopId, authorId: null, kind: "estimate", text, data: { estimateId: estimate.id, event: status } });
+    insertLogEntry(tx, {
+      jobId: estimate.jobId,
+      workshopId: estimate.workshopId,
+      authorId: null,
+      kind: "estimate",
+      text,
+      data: { estimateId: estimate.id, event: status },
+    });
     const preparer = estimate.createdBy
       ? tx.select({ email: users.email, name: users.name }).from(users).where(eq(users.id, estimate.createdBy)).get()
       : undefined;

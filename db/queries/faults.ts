@@ -36,13 +36,23 @@ const candidateColumns = {
 function faultsOf(member: Member, jobId: number, db: Db | Tx, only?: number) {
   const where = [eq(faults.jobId, jobId), eq(faults.workshopId, member.workshopId)];
   if (only !== undefined) where.push(eq(faults.id, only));
-  const rows = db.select(faultColumns).from(faults).where(and(...where)).orderBy(asc(faults.id)).all();
+  const rows = db
+    .select(faultColumns)
+    .from(faults)
+    .where(and(...where))
+    .orderBy(asc(faults.id))
+    .all();
   const candidates = rows.length
     ? db
         .select(candidateColumns)
         .from(faultCandidates)
         .leftJoin(readings, and(eq(readings.id, faultCandidates.readingId), eq(readings.workshopId, member.workshopId)))
-        .where(inArray(faultCandidates.faultId, rows.map((r) => r.id)))
+        .where(
+          inArray(
+            faultCandidates.faultId,
+            rows.map((r) => r.id),
+          ),
+        )
         .orderBy(asc(faultCandidates.position), asc(faultCandidates.id))
         .all()
     : [];
@@ -76,7 +86,9 @@ const quoted = (text: string) => `“${text}”`;
 /** A line for the Log when the fault's state moved. */
 function stateWords(before: Fault, after: Fault): string {
   if (before.state === after.state) return "";
-  return after.state === "open" && before.state !== "open" ? " The fault is open again." : ` The fault is now: ${FAULT_STATE_LABELS[after.state].toLowerCase()}.`;
+  return after.state === "open" && before.state !== "open"
+    ? " The fault is open again."
+    : ` The fault is now: ${FAULT_STATE_LABELS[after.state].toLowerCase()}.`;
 }
 
 export function createFault(member: Member, jobId: number, input: FaultValues): Fault {
@@ -129,7 +141,10 @@ export function addCandidate(member: Member, jobId: number, faultId: number, inp
     const before = fault(member, jobId, faultId, tx);
     const position = 1 + Math.max(0, ...before.candidates.map((c) => c.position));
     const { id } = tx.insert(faultCandidates).values({ faultId, position, description: input.description }).returning({ id: faultCandidates.id }).get();
-    appendLog(tx, member, jobId, "fault", `Candidate for ${quoted(before.symptom)}: ${input.description} (${ordinal(position)} to test).`, { faultId, candidateId: id });
+    appendLog(tx, member, jobId, "fault", `Candidate for ${quoted(before.symptom)}: ${input.description} (${ordinal(position)} to test).`, {
+      faultId,
+      candidateId: id,
+    });
     return fault(member, jobId, faultId, tx).candidates.find((c) => c.id === id)!;
   });
 }
@@ -161,9 +176,17 @@ export function updateCandidate(member: Member, jobId: number, faultId: number, 
     if (input.status && input.status !== candidate.status) words.push(FAULT_CANDIDATE_STATUS_LABELS[input.status].toLowerCase());
     if (input.description && input.description !== candidate.description) words.push(`now reads ${quoted(input.description)}`);
     if (input.evidence) words.push(`evidence: ${input.evidence}`);
-    if (input.readingId && now.reading) words.push(`reading ${now.reading.designator}${now.reading.measured === null ? " (open)" : ` ${now.reading.measured} ${now.reading.unit}`}`);
+    if (input.readingId && now.reading)
+      words.push(`reading ${now.reading.designator}${now.reading.measured === null ? " (open)" : ` ${now.reading.measured} ${now.reading.unit}`}`);
     if (input.readingId === null && candidate.readingId !== null) words.push("reading unlinked");
-    appendLog(tx, member, jobId, "fault", `${quoted(before.symptom)} — ${candidate.description}: ${words.join("; ") || "no change"}.${stateWords(before, after)}`, { faultId, candidateId });
+    appendLog(
+      tx,
+      member,
+      jobId,
+      "fault",
+      `${quoted(before.symptom)} — ${candidate.description}: ${words.join("; ") || "no change"}.${stateWords(before, after)}`,
+      { faultId, candidateId },
+    );
     return after;
   });
 }

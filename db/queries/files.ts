@@ -20,7 +20,6 @@ const columns = {
   uploaderName: users.name,
 };
 
-
 export function listFiles(member: Member, jobId: number) {
   assertJobInWorkshop(member, jobId);
   return getDb()
@@ -90,7 +89,11 @@ export function deleteFileRecord(member: Member, jobId: number, fileId: number):
 export function knownStoredNames(names: string[]): Set<string> {
   const known = new Set<string>();
   for (let i = 0; i < names.length; i += 500) {
-    const rows = getDb().select({ storedName: files.storedName }).from(files).where(inArray(files.storedName, names.slice(i, i + 500))).all();
+    const rows = getDb()
+      .select({ storedName: files.storedName })
+      .from(files)
+      .where(inArray(files.storedName, names.slice(i, i + 500)))
+      .all();
     for (const r of rows) known.add(r.storedName);
   }
   return known;

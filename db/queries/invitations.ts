@@ -23,7 +23,16 @@ function stateOf(row: { expiresAt: Date; acceptedAt: Date | null; revokedAt: Dat
 export function listInvitations(member: Member) {
   assertCan(member, "manageMembers", "see invitations");
   return getDb()
-    .select({ id: invitations.id, email: invitations.email, role: invitations.role, expiresAt: invitations.expiresAt, createdAt: invitations.createdAt, acceptedAt: invitations.acceptedAt, revokedAt: invitations.revokedAt, invitedBy: users.name })
+    .select({
+      id: invitations.id,
+      email: invitations.email,
+      role: invitations.role,
+      expiresAt: invitations.expiresAt,
+      createdAt: invitations.createdAt,
+      acceptedAt: invitations.acceptedAt,
+      revokedAt: invitations.revokedAt,
+      invitedBy: users.name,
+    })
     .from(invitations)
     .leftJoin(users, eq(users.id, invitations.invitedBy))
     .where(and(eq(invitations.workshopId, member.workshopId), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
@@ -48,14 +57,21 @@ export function createInvitation(member: Member, input: { email: string; role: R
       const now = new Date();
       tx.update(invitations)
         .set({ revokedAt: now })
-        .where(and(eq(invitations.workshopId, member.workshopId), eq(invitations.email, input.email), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)))
+        .where(
+          and(eq(invitations.workshopId, member.workshopId), eq(invitations.email, input.email), isNull(invitations.acceptedAt), isNull(invitations.revokedAt)),
+        )
         .run();
       const row = tx
         .insert(invitations)
         .values({ workshopId: member.workshopId, email: input.email, role: input.role, tokenHash: hash, invitedBy: member.userId, expiresAt })
         .returning({ id: invitations.id, email: invitations.email, role: invitations.role, expiresAt: invitations.expiresAt })
         .get();
-      recordAudit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "invitation.created", detail: { email: input.email, role: input.role } });
+      recordAudit(tx, {
+        workshopId: member.workshopId,
+        actorUserId: member.userId,
+        action: "invitation.created",
+        detail: { email: input.email, role: input.role },
+      });
       return { ...row, token };
     },
     { behavior: "immediate" },
@@ -74,7 +90,12 @@ export function revokeInvitation(member: Member, invitationId: number, reason: "
     if (row.acceptedAt) throw new ConflictError("That invitation was already accepted; remove the member instead.");
     if (row.revokedAt) return { id: row.id, email: row.email };
     tx.update(invitations).set({ revokedAt: new Date() }).where(eq(invitations.id, row.id)).run();
-    recordAudit(tx, { workshopId: member.workshopId, actorUserId: member.userId, action: "invitation.revoked", detail: { email: row.email, role: row.role, reason } });
+    recordAudit(tx, {
+      workshopId: member.workshopId,
+      actorUserId: member.userId,
+      action: "invitation.revoked",
+      detail: { email: row.email, role: row.role, reason },
+    });
     return { id: row.id, email: row.email };
   });
 }
@@ -82,7 +103,17 @@ export function revokeInvitation(member: Member, invitationId: number, reason: "
 /** What the invite page shows. The token is the credential here: whoever holds the link may see it. */
 export function findInvitation(token: string) {
   const row = getDb()
-    .select({ id: invitations.id, workshopId: invitations.workshopId, workshopName: workshops.name, email: invitations.email, role: invitations.role, expiresAt: invitations.expiresAt, acceptedAt: invitations.acceptedAt, revokedAt: invitations.revokedAt, inviterName: users.name })
+    .select({
+      id: invitations.id,
+      workshopId: invitations.workshopId,
+      workshopName: workshops.name,
+      email: invitations.email,
+      role: invitations.role,
+      expiresAt: invitations.expiresAt,
+      acceptedAt: invitations.acceptedAt,
+      revokedAt: invitations.revokedAt,
+      inviterName: users.name,
+    })
     .from(invitations)
     .innerJoin(workshops, eq(workshops.id, invitations.workshopId))
     .leftJoin(users, eq(users.id, invitations.invitedBy))
@@ -90,7 +121,17 @@ export function findInvitation(token: string) {
     .get();
   if (!row) return null;
   const account = getDb().select({ id: users.id }).from(users).where(eq(users.email, row.email)).get();
-  return { id: row.id, workshopId: row.workshopId, workshopName: row.workshopName, email: row.email, role: row.role, expiresAt: row.expiresAt, inviterName: row.inviterName, state: stateOf(row), accountExists: !!account };
+  return {
+    id: row.id,
+    workshopId: row.workshopId,
+    workshopName: row.workshopName,
+    email: row.email,
+    role: row.role,
+    expiresAt: row.expiresAt,
+    inviterName: row.inviterName,
+    state: stateOf(row),
+    accountExists: !!account,
+  };
 }
 
 export const INVITATION_GONE: Record<Exclude<InvitationState, "pending">, string> = {
@@ -106,21 +147,33 @@ export const INVITATION_GONE: Record<Exclude<InvitationState, "pending">, string
 export function acceptInvitation(token: string, who: { userId: number } | { name: string; passwordHash: string }) {
   return getDb().transaction(
     (tx) => {
-      const inv = tx.select().from(invitations).where(eq(invitations.tokenHash, hashToken(token))).get();
+      const inv = tx
+        .select()
+        .from(invitations)
+        .where(eq(invitations.tokenHash, hashToken(token)))
+        .get();
       if (!inv) throw new NotFoundError("That invitation link is not valid. Check you opened the whole link from the e-mail.");
       const state = stateOf(inv);
       if (state !== "pending") throw new GoneError(INVITATION_GONE[state]);
 
       let user: { id: number; name: string; sessionVersion: number };
       if ("userId" in who) {
-        const found = tx.select({ id: users.id, name: users.name, email: users.email, sessionVersion: users.sessionVersion }).from(users).where(eq(users.id, who.userId)).get();
+        const found = tx
+          .select({ id: users.id, name: users.name, email: users.email, sessionVersion: users.sessionVersion })
+          .from(users)
+          .where(eq(users.id, who.userId))
+          .get();
         if (!found || found.email !== inv.email) throw new ForbiddenError(`This invitation is for ${inv.email}.`);
         user = found;
       } else {
         if (tx.select({ id: users.id }).from(users).where(eq(users.email, inv.email)).get()) {
           throw new ConflictError("That e-mail already has an account; join with its password instead.");
         }
-        user = tx.insert(users).values({ email: inv.email, name: who.name, passwordHash: who.passwordHash }).returning({ id: users.id, name: users.name, sessionVersion: users.sessionVersion }).get();
+        user = tx
+          .insert(users)
+          .values({ email: inv.email, name: who.name, passwordHash: who.passwordHash })
+          .returning({ id: users.id, name: users.name, sessionVersion: users.sessionVersion })
+          .get();
       }
       if (isMemberOf(tx, inv.workshopId, user.id)) throw new ConflictError("You already belong to this workshop. Sign in to reach it.");
 
@@ -131,7 +184,12 @@ export function acceptInvitation(token: string, who: { userId: number } | { name
         .run();
       if (used.changes !== 1) throw new GoneError(INVITATION_GONE.accepted);
       tx.insert(memberships).values({ workshopId: inv.workshopId, userId: user.id, role: inv.role }).run();
-      recordAudit(tx, { workshopId: inv.workshopId, actorUserId: user.id, action: "member.joined", detail: { name: user.name, email: inv.email, role: inv.role } });
+      recordAudit(tx, {
+        workshopId: inv.workshopId,
+        actorUserId: user.id,
+        action: "member.joined",
+        detail: { name: user.name, email: inv.email, role: inv.role },
+      });
       return { userId: user.id, sessionVersion: user.sessionVersion, workshopId: inv.workshopId, role: inv.role };
     },
     { behavior: "immediate" },

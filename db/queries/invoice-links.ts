@@ -20,7 +20,14 @@ const NOT_VALID = "This link is not valid. Ask the workshop to send the invoice 
 
 function ownInvoice(tx: DbOrTx, member: Member, invoiceId: number) {
   const row = tx
-    .select({ id: invoices.id, number: invoices.number, status: invoices.status, jobId: invoices.jobId, customerEmail: jobs.customerEmail, customerName: jobs.customerName })
+    .select({
+      id: invoices.id,
+      number: invoices.number,
+      status: invoices.status,
+      jobId: invoices.jobId,
+      customerEmail: jobs.customerEmail,
+      customerName: jobs.customerName,
+    })
     .from(invoices)
     .innerJoin(jobs, eq(jobs.id, invoices.jobId))
     .where(and(eq(invoices.id, invoiceId), eq(invoices.workshopId, member.workshopId)))
@@ -42,7 +49,10 @@ export function issuePayLink(member: Member, invoiceId: number) {
     if (!invoice.customerEmail) throw new ConflictError("Add the customer's e-mail to the job before sending the invoice.");
     const { token, hash } = newToken();
     const expiresAt = new Date(Date.now() + PAY_LINK_DAYS * 86_400_000);
-    tx.update(invoices).set({ payTokenHash: hash, payTokenExpiresAt: expiresAt, viewedAt: null }).where(and(eq(invoices.id, invoiceId), eq(invoices.status, "issued"))).run();
+    tx.update(invoices)
+      .set({ payTokenHash: hash, payTokenExpiresAt: expiresAt, viewedAt: null })
+      .where(and(eq(invoices.id, invoiceId), eq(invoices.status, "issued")))
+      .run();
     return { token, expiresAt, to: invoice.customerEmail, customerName: invoice.customerName, number: invoice.number, jobId: invoice.jobId };
   });
 }
@@ -54,7 +64,14 @@ export function recordInvoiceSent(member: Member, invoiceId: number, to: string)
   getDb().transaction((tx) => {
     const invoice = ownInvoice(tx, member, invoiceId);
     tx.update(invoices).set({ sentTo: to, sentAt }).where(eq(invoices.id, invoiceId)).run();
-    insertLogEntry(tx, { jobId: invoice.jobId, workshopId: member.workshopId, authorId: member.userId, kind: "invoice", text: `Invoice ${invoice.number} e-mailed to ${to} with a link to pay by card.`, data: { invoiceId, event: "sent" } });
+    insertLogEntry(tx, {
+      jobId: invoice.jobId,
+      workshopId: member.workshopId,
+      authorId: member.userId,
+      kind: "invoice",
+      text: `Invoice ${invoice.number} e-mailed to ${to} with a link to pay by card.`,
+      data: { invoiceId, event: "sent" },
+    });
   });
   return sentAt;
 }
@@ -88,9 +105,20 @@ export function openPayLink(token: string) {
     if (invoice.status === "void") return { state: "void" as const, workshop, number: invoice.number };
     if (expired(invoice.payTokenExpiresAt)) return { state: "expired" as const, workshop, number: invoice.number };
     // The null guard makes the first open the only one that writes, however many arrive at once.
-    const first = tx.update(invoices).set({ viewedAt: new Date() }).where(and(eq(invoices.id, invoice.id), isNull(invoices.viewedAt))).run();
+    const first = tx
+      .update(invoices)
+      .set({ viewedAt: new Date() })
+      .where(and(eq(invoices.id, invoice.id), isNull(invoices.viewedAt)))
+      .run();
     if (first.changes === 1) {
-      insertLogEntry(tx, { jobId: invoice.jobId, workshopId: invoice.workshopId, authorId: null, kind: "invoice", text: `Invoice ${invoice.number} opened by the customer.`, data: { invoiceId: invoice.id, event: "viewed" } });
+      insertLogEntry(tx, {
+        jobId: invoice.jobId,
+        workshopId: invoice.workshopId,
+        authorId: null,
+        kind: "invoice",
+        text: `Invoice ${invoice.number} opened by the customer.`,
+        data: { invoiceId: invoice.id, event: "viewed" },
+      });
     }
     const lines = tx.select().from(invoiceLines).where(eq(invoiceLines.invoiceId, invoice.id)).orderBy(asc(invoiceLines.position)).all();
     return {
@@ -106,7 +134,14 @@ export function openPayLink(token: string) {
         subtotalMinor: invoice.subtotalMinor,
         taxMinor: invoice.taxMinor,
         totalMinor: invoice.totalMinor,
-        lines: lines.map(({ id, kind, description, quantityMilli, unitPriceMinor, amountMinor }) => ({ id, kind, description, quantityMilli, unitPriceMinor, amountMinor })),
+        lines: lines.map(({ id, kind, description, quantityMilli, unitPriceMinor, amountMinor }) => ({
+          id,
+          kind,
+          description,
+          quantityMilli,
+          unitPriceMinor,
+          amountMinor,
+        })),
       },
     };
   });

@@ -21,7 +21,17 @@ export function listInvoicesForJob(member: Member, jobId: number) {
   assertCan(member, "seeMoney", "see invoices");
   if (!jobInWorkshop(getDb(), member.workshopId, jobId)) throw notFound("That job");
   return getDb()
-    .select({ id: invoices.id, number: invoices.number, status: invoices.status, currency: invoices.currency, totalMinor: invoices.totalMinor, issuedAt: invoices.issuedAt, paidAt: invoices.paidAt, sentAt: invoices.sentAt, viewedAt: invoices.viewedAt })
+    .select({
+      id: invoices.id,
+      number: invoices.number,
+      status: invoices.status,
+      currency: invoices.currency,
+      totalMinor: invoices.totalMinor,
+      issuedAt: invoices.issuedAt,
+      paidAt: invoices.paidAt,
+      sentAt: invoices.sentAt,
+      viewedAt: invoices.viewedAt,
+    })
     .from(invoices)
     .where(and(eq(invoices.workshopId, member.workshopId), eq(invoices.jobId, jobId)))
     .orderBy(desc(invoices.number))
@@ -59,7 +69,17 @@ function approvedEstimateLines(tx: Pick<ReturnType<typeof getDb>, "select">, wor
     .get();
   if (!approved) return null;
   const lines = tx.select().from(estimateLines).where(eq(estimateLines.estimateId, approved.id)).orderBy(asc(estimateLines.position)).all();
-  return { estimateId: approved.id, lines: lines.map(({ kind, description, quantityMilli, unitPriceMinor, partId, position }): PricedLineRow => ({ kind, description, quantityMilli, unitPriceMinor, partId, position })) };
+  return {
+    estimateId: approved.id,
+    lines: lines.map(({ kind, description, quantityMilli, unitPriceMinor, partId, position }): PricedLineRow => ({
+      kind,
+      description,
+      quantityMilli,
+      unitPriceMinor,
+      partId,
+      position,
+    })),
+  };
 }
 
 /** Issue the job's invoice: from the given lines (the estimate plus changes) or the approved estimate as it stands. */
@@ -68,7 +88,8 @@ export function issueInvoice(member: Member, jobId: number, input: { lines?: Lin
   const id = getDb().transaction((tx) => {
     const job = jobInWorkshop(tx, member.workshopId, jobId);
     if (!job) throw notFound("That job");
-    if (!(INVOICEABLE as readonly string[]).includes(job.status)) throw new ConflictError(`Invoice a job once it is “${JOB_STATUS_LABELS[COLLECTION_STATUS]}”: finished and ready for its owner.`);
+    if (!(INVOICEABLE as readonly string[]).includes(job.status))
+      throw new ConflictError(`Invoice a job once it is “${JOB_STATUS_LABELS[COLLECTION_STATUS]}”: finished and ready for its owner.`);
     const open = tx
       .select({ number: invoices.number })
       .from(invoices)
@@ -103,10 +124,27 @@ export function issueInvoice(member: Member, jobId: number, input: { lines?: Lin
       .returning({ id: invoices.id })
       .get();
     tx.insert(invoiceLines)
-      .values(lines.map((l, i) => ({ invoiceId: invoice.id, kind: l.kind, description: l.description, quantityMilli: l.quantityMilli, unitPriceMinor: l.unitPriceMinor, amountMinor: totals.lines[i], position: i })))
+      .values(
+        lines.map((l, i) => ({
+          invoiceId: invoice.id,
+          kind: l.kind,
+          description: l.description,
+          quantityMilli: l.quantityMilli,
+          unitPriceMinor: l.unitPriceMinor,
+          amountMinor: totals.lines[i],
+          position: i,
+        })),
+      )
       .run();
     // No amounts in the Log: apprentices read it.
-    insertLogEntry(tx, { jobId, workshopId: member.workshopId, authorId: member.userId, kind: "invoice", text: `Invoice ${counter.number} issued.`, data: { invoiceId: invoice.id, event: "issued" } });
+    insertLogEntry(tx, {
+      jobId,
+      workshopId: member.workshopId,
+      authorId: member.userId,
+      kind: "invoice",
+      text: `Invoice ${counter.number} issued.`,
+      data: { invoiceId: invoice.id, event: "issued" },
+    });
     touchJob(member, jobId, tx);
     return invoice.id;
   });
@@ -116,11 +154,22 @@ export function issueInvoice(member: Member, jobId: number, input: { lines?: Lin
 export function voidInvoice(member: Member, invoiceId: number) {
   assertCan(member, "seeMoney", "void invoices");
   getDb().transaction((tx) => {
-    const invoice = tx.select().from(invoices).where(and(eq(invoices.id, invoiceId), eq(invoices.workshopId, member.workshopId))).get();
+    const invoice = tx
+      .select()
+      .from(invoices)
+      .where(and(eq(invoices.id, invoiceId), eq(invoices.workshopId, member.workshopId)))
+      .get();
     if (!invoice) throw notFound("That invoice");
     if (invoice.status !== "issued") throw new ConflictError(invoice.status === "paid" ? "A paid invoice cannot be voided." : "This invoice is already void.");
     tx.update(invoices).set({ status: "void" }).where(eq(invoices.id, invoiceId)).run();
-    insertLogEntry(tx, { jobId: invoice.jobId, workshopId: member.workshopId, authorId: member.userId, kind: "invoice", text: `Invoice ${invoice.number} voided.`, data: { invoiceId, event: "void" } });
+    insertLogEntry(tx, {
+      jobId: invoice.jobId,
+      workshopId: member.workshopId,
+      authorId: member.userId,
+      kind: "invoice",
+      text: `Invoice ${invoice.number} voided.`,
+      data: { invoiceId, event: "void" },
+    });
   });
   return getInvoice(member, invoiceId);
 }
@@ -129,7 +178,17 @@ export function voidInvoice(member: Member, invoiceId: number) {
 export function invoiceForCheckout(member: Member, invoiceId: number) {
   assertCan(member, "seeMoney", "take payments");
   const invoice = getDb()
-    .select({ id: invoices.id, number: invoices.number, status: invoices.status, currency: invoices.currency, totalMinor: invoices.totalMinor, checkoutSessionId: invoices.checkoutSessionId, customerEmail: jobs.customerEmail, workshopId: invoices.workshopId, workshopName: workshops.name })
+    .select({
+      id: invoices.id,
+      number: invoices.number,
+      status: invoices.status,
+      currency: invoices.currency,
+      totalMinor: invoices.totalMinor,
+      checkoutSessionId: invoices.checkoutSessionId,
+      customerEmail: jobs.customerEmail,
+      workshopId: invoices.workshopId,
+      workshopName: workshops.name,
+    })
     .from(invoices)
     .innerJoin(jobs, eq(jobs.id, invoices.jobId))
     .innerJoin(workshops, eq(workshops.id, invoices.workshopId))

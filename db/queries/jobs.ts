@@ -55,7 +55,16 @@ export function searchJobs(member: Member, q: JobListQuery) {
     const like = (col: AnyColumn) => sql`${col} like ${p} escape '\\'`;
     // "12" or "Job 12" also finds job number 12.
     const number = /^(?:job\s*)?(\d{1,9})$/i.exec(q.q);
-    where.push(or(like(jobs.title), like(jobs.maker), like(jobs.model), like(jobs.customerName), like(jobs.customerEmail), ...(number ? [eq(jobs.number, Number(number[1]))] : []))!);
+    where.push(
+      or(
+        like(jobs.title),
+        like(jobs.maker),
+        like(jobs.model),
+        like(jobs.customerName),
+        like(jobs.customerEmail),
+        ...(number ? [eq(jobs.number, Number(number[1]))] : []),
+      )!,
+    );
   }
   const condition = and(...where);
   const order = q.dir === "asc" ? asc : desc;
@@ -67,7 +76,12 @@ export function searchJobs(member: Member, q: JobListQuery) {
     .limit(q.pageSize)
     .offset((q.page - 1) * q.pageSize)
     .all();
-  const total = db.select({ n: sql<number>`count(*)` }).from(jobs).where(condition).get()?.n ?? 0;
+  const total =
+    db
+      .select({ n: sql<number>`count(*)` })
+      .from(jobs)
+      .where(condition)
+      .get()?.n ?? 0;
   return { jobs: rows, total, page: q.page, pageSize: q.pageSize };
 }
 
@@ -89,13 +103,24 @@ export function createJob(member: Member, input: JobCreate) {
   assertCan(member, "editJobs", "book in jobs");
   return getDb().transaction((tx) => {
     const { customerId, customerName, customerEmail, customerPhone, ...fields } = input;
-    const customer = resolveJobCustomer(tx, member, { customerId, customerName, customerEmail, customerPhone }) ?? { customerId: null, customerName: null, customerEmail: null };
+    const customer = resolveJobCustomer(tx, member, { customerId, customerName, customerEmail, customerPhone }) ?? {
+      customerId: null,
+      customerName: null,
+      customerEmail: null,
+    };
     const job = tx
       .insert(jobs)
       .values({ ...fields, ...customer, number: nextJobNumber(tx, member.workshopId), workshopId: member.workshopId, status: FIRST_JOB_STATUS })
       .returning(detailColumns)
       .get();
-    insertLogEntry(tx, { jobId: job.id, workshopId: member.workshopId, authorId: member.userId, kind: "status", text: `${JOB_STATUS_LABELS[FIRST_JOB_STATUS]}: ${job.title}.`, data: { to: FIRST_JOB_STATUS } });
+    insertLogEntry(tx, {
+      jobId: job.id,
+      workshopId: member.workshopId,
+      authorId: member.userId,
+      kind: "status",
+      text: `${JOB_STATUS_LABELS[FIRST_JOB_STATUS]}: ${job.title}.`,
+      data: { to: FIRST_JOB_STATUS },
+    });
     return job;
   });
 }
@@ -156,7 +181,9 @@ export function deleteJob(member: Member, jobId: number): { storedNames: string[
       .from(files)
       .where(and(eq(files.jobId, jobId), eq(files.workshopId, member.workshopId)))
       .all();
-    tx.delete(jobs).where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId))).run();
+    tx.delete(jobs)
+      .where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId)))
+      .run();
     return { storedNames: stored.map((r) => r.storedName) };
   });
 }

@@ -7,7 +7,14 @@ import { assertJobInWorkshop, touchJob } from "./job-access";
 
 /** The dated bench log of a job. Every member may write notes and power-up entries; entries are never edited. */
 
-const entryColumns = { id: logEntries.id, jobId: logEntries.jobId, kind: logEntries.kind, text: logEntries.text, data: logEntries.data, createdAt: logEntries.createdAt };
+const entryColumns = {
+  id: logEntries.id,
+  jobId: logEntries.jobId,
+  kind: logEntries.kind,
+  text: logEntries.text,
+  data: logEntries.data,
+  createdAt: logEntries.createdAt,
+};
 
 /**
  * The one way a line enters a job's Log, called inside the transaction that made the change it tells of.
@@ -51,7 +58,9 @@ export function addLogEntry(member: Member, jobId: number, input: LogEntryValues
         .values({ jobId, workshopId: member.workshopId, authorId: member.userId, logEntryId: row.id, startedAt: row.createdAt })
         .returning({ id: powerUps.id })
         .get();
-      tx.insert(powerUpSteps).values({ powerUpId: session.id, supplyVoltage: input.supplyVoltage, currentDrawn: input.currentDrawn, note: input.text, createdAt: row.createdAt }).run();
+      tx.insert(powerUpSteps)
+        .values({ powerUpId: session.id, supplyVoltage: input.supplyVoltage, currentDrawn: input.currentDrawn, note: input.text, createdAt: row.createdAt })
+        .run();
     }
     touchJob(member, jobId, tx);
     return { ...row, author: { id: member.userId, name: member.name } };

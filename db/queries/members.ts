@@ -37,7 +37,13 @@ function findMembership(tx: Tx, member: Member, membershipId: number) {
 }
 
 function ownerCount(tx: Tx, workshopId: number): number {
-  return tx.select({ n: count() }).from(memberships).where(and(eq(memberships.workshopId, workshopId), eq(memberships.role, "owner"))).get()?.n ?? 0;
+  return (
+    tx
+      .select({ n: count() })
+      .from(memberships)
+      .where(and(eq(memberships.workshopId, workshopId), eq(memberships.role, "owner")))
+      .get()?.n ?? 0
+  );
 }
 
 export function changeMemberRole(member: Member, membershipId: number, role: Role) {
@@ -81,6 +87,9 @@ export function removeMember(member: Member, membershipId: number) {
 }
 
 export function isMemberOf(tx: DbOrTx, workshopId: number, userId: number): boolean {
-  return !!tx.select({ id: memberships.id }).from(memberships).where(and(eq(memberships.workshopId, workshopId), eq(memberships.userId, userId))).get();
+  return !!tx
+    .select({ id: memberships.id })
+    .from(memberships)
+    .where(and(eq(memberships.workshopId, workshopId), eq(memberships.userId, userId)))
+    .get();
 }
-

@@ -73,27 +73,51 @@ export function markGroupOrdered(member: Member, input: MarkOrdered) {
   const ids = [...new Set(input.partIds)];
   return getDb().transaction((tx) => {
     const rows = tx
-      .select({ id: parts.id, jobId: parts.jobId, jobNumber: jobs.number, designator: parts.designator, quantity: parts.quantity, state: parts.state, supplier: parts.supplier })
+      .select({
+        id: parts.id,
+        jobId: parts.jobId,
+        jobNumber: jobs.number,
+        designator: parts.designator,
+        quantity: parts.quantity,
+        state: parts.state,
+        supplier: parts.supplier,
+      })
       .from(parts)
       .innerJoin(jobs, eq(jobs.id, parts.jobId))
       .where(and(eq(parts.workshopId, member.workshopId), inArray(parts.id, ids)))
       .all();
-    if (rows.length !== ids.length) throw new NotFoundError("Some of these parts were not found in your workshop; reload the order list.", { partIds: "Reload the order list." });
+    if (rows.length !== ids.length)
+      throw new NotFoundError("Some of these parts were not found in your workshop; reload the order list.", { partIds: "Reload the order list." });
     const moved = rows.filter((r) => r.state !== "to-order");
     if (moved.length) {
       const which = moved.map((r) => `${r.designator} (Job ${r.jobNumber})`).join(", ");
-      throw new ConflictError(`${which} ${moved.length > 1 ? "are" : "is"} no longer to order; reload the order list and try again.`, { partIds: "Reload the order list." });
+      throw new ConflictError(`${which} ${moved.length > 1 ? "are" : "is"} no longer to order; reload the order list and try again.`, {
+        partIds: "Reload the order list.",
+      });
     }
     const key = supplierKey(input.supplier);
     const elsewhere = rows.filter((r) => supplierKey(r.supplier) !== key);
-    if (elsewhere.length) throw new ValidationError(`${elsewhere.map((r) => r.designator).join(", ")} ${elsewhere.length > 1 ? "are" : "is"} not from ${input.supplier}.`, { partIds: `Send only ${input.supplier}'s parts.` });
+    if (elsewhere.length)
+      throw new ValidationError(`${elsewhere.map((r) => r.designator).join(", ")} ${elsewhere.length > 1 ? "are" : "is"} not from ${input.supplier}.`, {
+        partIds: `Send only ${input.supplier}'s parts.`,
+      });
     const now = new Date();
-    tx.update(parts).set({ state: "ordered", orderedAt: now }).where(and(eq(parts.workshopId, member.workshopId), inArray(parts.id, ids))).run();
+    tx.update(parts)
+      .set({ state: "ordered", orderedAt: now })
+      .where(and(eq(parts.workshopId, member.workshopId), inArray(parts.id, ids)))
+      .run();
     const byJob = new Map<number, typeof rows>();
     for (const r of rows) byJob.set(r.jobId, [...(byJob.get(r.jobId) ?? []), r]);
     for (const [jobId, jobRows] of byJob) {
       const list = jobRows.map((r) => `${r.designator} ×${r.quantity}`).join(", ");
-      insertLogEntry(tx, { jobId, workshopId: member.workshopId, authorId: member.userId, kind: "part", text: `Ordered from ${rows[0].supplier?.trim()}: ${list}.`, data: { supplier: rows[0].supplier, partIds: jobRows.map((r) => r.id) } });
+      insertLogEntry(tx, {
+        jobId,
+        workshopId: member.workshopId,
+        authorId: member.userId,
+        kind: "part",
+        text: `Ordered from ${rows[0].supplier?.trim()}: ${list}.`,
+        data: { supplier: rows[0].supplier, partIds: jobRows.map((r) => r.id) },
+      });
       touchJob(member, jobId, tx);
     }
     return { ordered: rows.length, jobs: [...new Set(rows.map((r) => r.jobNumber))].sort((a, b) => a - b) };

@@ -24,7 +24,10 @@ function costMinor(tx: DbOrTx, workshopId: number, text: string | null, field: s
   if (text === null) return null;
   const currency = workshopCurrency(tx, workshopId);
   const minor = parseMoney(text, currency);
-  if (minor === null) throw new ValidationError("Some fields need attention.", { [field]: `${label}Enter a price like 1.20, with at most ${minorExponent(currency)} decimals for ${currency}.` });
+  if (minor === null)
+    throw new ValidationError("Some fields need attention.", {
+      [field]: `${label}Enter a price like 1.20, with at most ${minorExponent(currency)} decimals for ${currency}.`,
+    });
   return minor;
 }
 
@@ -37,7 +40,16 @@ export function newPartColumns(tx: DbOrTx, workshopId: number, input: PartValues
     unitCostMinor: unitCost === undefined ? null : costMinor(tx, workshopId, unitCost, field, field === "unitCost" ? "" : `${input.designator}: `),
     orderedAt: rest.state === "ordered" ? new Date() : null,
   };
-  return { ...row, ...readPartValues({ kind: row.kind, originalValue: row.originalValue ?? null, originalRating: row.originalRating ?? null, replacementValue: row.replacementValue ?? null, replacementRating: row.replacementRating ?? null }) };
+  return {
+    ...row,
+    ...readPartValues({
+      kind: row.kind,
+      originalValue: row.originalValue ?? null,
+      originalRating: row.originalRating ?? null,
+      replacementValue: row.replacementValue ?? null,
+      replacementRating: row.replacementRating ?? null,
+    }),
+  };
 }
 
 /**
@@ -50,13 +62,22 @@ export function partChangeColumns(tx: DbOrTx, member: Member, partId: number, fi
   if (unitCost !== undefined) changes.unitCostMinor = costMinor(tx, member.workshopId, unitCost, "unitCost");
   const texts = ["kind", "originalValue", "originalRating", "replacementValue", "replacementRating"] as const;
   const current = tx
-    .select({ kind: parts.kind, originalValue: parts.originalValue, originalRating: parts.originalRating, replacementValue: parts.replacementValue, replacementRating: parts.replacementRating, state: parts.state })
+    .select({
+      kind: parts.kind,
+      originalValue: parts.originalValue,
+      originalRating: parts.originalRating,
+      replacementValue: parts.replacementValue,
+      replacementRating: parts.replacementRating,
+      state: parts.state,
+    })
     .from(parts)
     .where(and(eq(parts.id, partId), eq(parts.workshopId, member.workshopId)))
     .get();
   if (!current) throw notFound("That part");
   if (texts.some((k) => fields[k] !== undefined)) {
-    const merged = Object.fromEntries(texts.map((k) => [k, fields[k] !== undefined ? fields[k] : current[k]])) as unknown as Parameters<typeof readPartValues>[0];
+    const merged = Object.fromEntries(texts.map((k) => [k, fields[k] !== undefined ? fields[k] : current[k]])) as unknown as Parameters<
+      typeof readPartValues
+    >[0];
     Object.assign(changes, readPartValues(merged));
   }
   // Ordered now when it leaves "to order" for "ordered"; back to "to order" forgets the order; fitting keeps the date.

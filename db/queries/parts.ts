@@ -69,7 +69,11 @@ export function createPart(member: Member, jobId: number, input: PartValues) {
   assertCanEdit(member);
   return getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
-    const part = tx.insert(parts).values({ ...newPartColumns(tx, member.workshopId, input), jobId, workshopId: member.workshopId }).returning(partColumns).get();
+    const part = tx
+      .insert(parts)
+      .values({ ...newPartColumns(tx, member.workshopId, input), jobId, workshopId: member.workshopId })
+      .returning(partColumns)
+      .get();
     touchJob(member, jobId, tx);
     return priced(member, part);
   });
@@ -81,7 +85,11 @@ export function createParts(member: Member, jobId: number, rows: PartValues[]) {
   return getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
     const created = rows.length
-      ? tx.insert(parts).values(rows.map((r) => ({ ...newPartColumns(tx, member.workshopId, r, "csv"), jobId, workshopId: member.workshopId }))).returning(partColumns).all()
+      ? tx
+          .insert(parts)
+          .values(rows.map((r) => ({ ...newPartColumns(tx, member.workshopId, r, "csv"), jobId, workshopId: member.workshopId })))
+          .returning(partColumns)
+          .all()
       : [];
     touchJob(member, jobId, tx);
     return created.map((p) => priced(member, p));
@@ -108,13 +116,17 @@ export function updatePart(member: Member, jobId: number, partId: number, input:
       .get();
     if (!before) throw notFound("That part");
     const state = fields.state ?? before.state;
-    if (checked && state !== "fitted") throw new ValidationError("Only a fitted part can be checked.", { checked: "Record the part as fitted before checking it." });
+    if (checked && state !== "fitted")
+      throw new ValidationError("Only a fitted part can be checked.", { checked: "Record the part as fitted before checking it." });
     const changes: Record<string, unknown> = partChangeColumns(tx, member, partId, fields);
     const fitting = fields.state === "fitted" && before.state !== "fitted";
     const check = checked ?? (fitting ? editor : state === "fitted" ? undefined : false);
     if (check === true) Object.assign(changes, { checkedBy: member.userId, checkedAt: new Date() });
     if (check === false) Object.assign(changes, { checkedBy: null, checkedAt: null });
-    tx.update(parts).set(changes).where(and(eq(parts.id, partId), eq(parts.jobId, jobId), eq(parts.workshopId, member.workshopId))).run();
+    tx.update(parts)
+      .set(changes)
+      .where(and(eq(parts.id, partId), eq(parts.jobId, jobId), eq(parts.workshopId, member.workshopId)))
+      .run();
     if (fitting) {
       const words = editor ? `recorded as fitted and checked by ${member.name}` : `recorded as fitted by ${member.name}, waiting for a technician's check`;
       appendLog(tx, member, jobId, "part", `Part ${before.designator} ${words}.`, { partId });

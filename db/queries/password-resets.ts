@@ -27,8 +27,13 @@ export function createPasswordReset(email: string) {
     if (!user) return null;
     const { token, hash } = newToken();
     const now = new Date();
-    tx.update(passwordResets).set({ usedAt: now }).where(and(eq(passwordResets.userId, user.id), isNull(passwordResets.usedAt))).run();
-    tx.insert(passwordResets).values({ userId: user.id, tokenHash: hash, expiresAt: new Date(now.getTime() + RESET_TTL_MS) }).run();
+    tx.update(passwordResets)
+      .set({ usedAt: now })
+      .where(and(eq(passwordResets.userId, user.id), isNull(passwordResets.usedAt)))
+      .run();
+    tx.insert(passwordResets)
+      .values({ userId: user.id, tokenHash: hash, expiresAt: new Date(now.getTime() + RESET_TTL_MS) })
+      .run();
     const workshopId = auditEveryWorkshop(tx, user.id, "password.reset-requested", { name: user.name, email: user.email });
     return { token, name: user.name, email: user.email, workshopId };
   });
@@ -37,7 +42,11 @@ export function createPasswordReset(email: string) {
 export const RESET_GONE = "This reset link has expired or was already used. Ask for a new one.";
 
 export function findPasswordReset(token: string): "valid" | "gone" | "unknown" {
-  const row = getDb().select({ usedAt: passwordResets.usedAt, expiresAt: passwordResets.expiresAt }).from(passwordResets).where(eq(passwordResets.tokenHash, hashToken(token))).get();
+  const row = getDb()
+    .select({ usedAt: passwordResets.usedAt, expiresAt: passwordResets.expiresAt })
+    .from(passwordResets)
+    .where(eq(passwordResets.tokenHash, hashToken(token)))
+    .get();
   if (!row) return "unknown";
   return row.usedAt || row.expiresAt.getTime() <= Date.now() ? "gone" : "valid";
 }
@@ -46,7 +55,11 @@ export function findPasswordReset(token: string): "valid" | "gone" | "unknown" {
 export function completePasswordReset(token: string, passwordHash: string) {
   return getDb().transaction(
     (tx) => {
-      const row = tx.select({ id: passwordResets.id, userId: passwordResets.userId }).from(passwordResets).where(eq(passwordResets.tokenHash, hashToken(token))).get();
+      const row = tx
+        .select({ id: passwordResets.id, userId: passwordResets.userId })
+        .from(passwordResets)
+        .where(eq(passwordResets.tokenHash, hashToken(token)))
+        .get();
       if (!row) throw new NotFoundError("That reset link is not valid. Check you opened the whole link from the e-mail.");
       const now = new Date();
       const used = tx

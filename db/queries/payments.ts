@@ -34,13 +34,22 @@ export function applyCheckoutCompleted(eventId: string, eventType: string, sessi
             .where(and(eq(invoices.id, invoiceId), eq(invoices.workshopId, workshopId), eq(invoices.checkoutSessionId, session.id)))
             .get()
         : undefined;
-    tx.insert(paymentEvents).values({ id: eventId, type: eventType, invoiceId: invoice?.id ?? null }).run();
+    tx.insert(paymentEvents)
+      .values({ id: eventId, type: eventType, invoiceId: invoice?.id ?? null })
+      .run();
     if (!invoice || invoice.status !== "issued") return "ignored";
-    if (session.payment_status !== "paid" || session.amount_total !== invoice.totalMinor || session.currency?.toLowerCase() !== invoice.currency.toLowerCase()) {
+    if (
+      session.payment_status !== "paid" ||
+      session.amount_total !== invoice.totalMinor ||
+      session.currency?.toLowerCase() !== invoice.currency.toLowerCase()
+    ) {
       return "ignored";
     }
     const paidAt = new Date();
-    tx.update(invoices).set({ status: "paid", paidAt }).where(and(eq(invoices.id, invoice.id), eq(invoices.status, "issued"))).run();
+    tx.update(invoices)
+      .set({ status: "paid", paidAt })
+      .where(and(eq(invoices.id, invoice.id), eq(invoices.status, "issued")))
+      .run();
     insertLogEntry(tx, {
       jobId: invoice.jobId,
       workshopId: invoice.workshopId,

@@ -65,7 +65,17 @@ function sessionsOf(member: Member, jobId: number, db: Db | Tx, only?: number) {
     .orderBy(asc(powerUps.startedAt), asc(powerUps.id))
     .all();
   const steps = rows.length
-    ? db.select(stepColumns).from(powerUpSteps).where(inArray(powerUpSteps.powerUpId, rows.map((r) => r.id))).orderBy(asc(powerUpSteps.id)).all()
+    ? db
+        .select(stepColumns)
+        .from(powerUpSteps)
+        .where(
+          inArray(
+            powerUpSteps.powerUpId,
+            rows.map((r) => r.id),
+          ),
+        )
+        .orderBy(asc(powerUpSteps.id))
+        .all()
     : [];
   return rows.map(({ authorId, authorName, logEntryId, ...s }) => {
     const own = steps.filter((st) => st.powerUpId === s.id).map((st) => presentStep(st, s.stopCurrent));
@@ -121,8 +131,12 @@ export function createPowerUp(member: Member, jobId: number, input: PowerUpValue
       .returning({ id: powerUps.id })
       .get();
     const undone = POWER_UP_CHECKLIST.filter((c) => !input.checklist[c.id]);
-    const checks = undone.length ? `${POWER_UP_CHECKLIST.length - undone.length} of ${POWER_UP_CHECKLIST.length} checks done (not done: ${undone.map((c) => lowerFirst(c.label)).join("; ")})` : "every check done";
-    appendLog(tx, member, jobId, "power-up", `Power-up session started ${limiterWords(input)}, stop current ${amps(input.stopCurrent)}; ${checks}.`, { powerUpId: id });
+    const checks = undone.length
+      ? `${POWER_UP_CHECKLIST.length - undone.length} of ${POWER_UP_CHECKLIST.length} checks done (not done: ${undone.map((c) => lowerFirst(c.label)).join("; ")})`
+      : "every check done";
+    appendLog(tx, member, jobId, "power-up", `Power-up session started ${limiterWords(input)}, stop current ${amps(input.stopCurrent)}; ${checks}.`, {
+      powerUpId: id,
+    });
     return session(member, jobId, id, tx);
   });
 }
@@ -135,7 +149,14 @@ export function addPowerUpStep(member: Member, jobId: number, powerUpId: number,
     if (s.outcome) throw new ConflictError(`This session is closed (${s.outcome}): start a new session for more steps.`);
     const row = tx
       .insert(powerUpSteps)
-      .values({ powerUpId, supplyVoltage: input.supplyVoltage, currentDrawn: input.currentDrawn, minutes: input.minutes, bPlus: input.bPlus ?? null, note: input.note ?? null })
+      .values({
+        powerUpId,
+        supplyVoltage: input.supplyVoltage,
+        currentDrawn: input.currentDrawn,
+        minutes: input.minutes,
+        bPlus: input.bPlus ?? null,
+        note: input.note ?? null,
+      })
       .returning()
       .get();
     const step = presentStep(row, s.stopCurrent);
@@ -159,7 +180,10 @@ export function updatePowerUp(member: Member, jobId: number, powerUpId: number, 
       .set({ outcome: input.outcome, reason: input.reason ?? null })
       .where(and(eq(powerUps.id, powerUpId), eq(powerUps.jobId, jobId), eq(powerUps.workshopId, member.workshopId)))
       .run();
-    appendLog(tx, member, jobId, "power-up", `Power-up session ${input.outcome}${input.reason ? `: ${input.reason}` : "."}`, { powerUpId, outcome: input.outcome });
+    appendLog(tx, member, jobId, "power-up", `Power-up session ${input.outcome}${input.reason ? `: ${input.reason}` : "."}`, {
+      powerUpId,
+      outcome: input.outcome,
+    });
     return session(member, jobId, powerUpId, tx);
   });
 }

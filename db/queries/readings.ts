@@ -57,7 +57,11 @@ export function createReading(member: Member, jobId: number, input: ReadingValue
   if (!can.addNotes(member)) throw forbidden("add readings");
   return getDb().transaction((tx) => {
     assertJobInWorkshop(member, jobId, tx);
-    const row = tx.insert(readings).values({ ...toRow(input), jobId, workshopId: member.workshopId }).returning(readingColumns).get();
+    const row = tx
+      .insert(readings)
+      .values({ ...toRow(input), jobId, workshopId: member.workshopId })
+      .returning(readingColumns)
+      .get();
     touchJob(member, jobId, tx);
     return withVerdict(row);
   });

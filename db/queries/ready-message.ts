@@ -43,11 +43,24 @@ export function readyMessageDraft(member: Member, jobId: number): ReadyDraft {
   const subject = readySubject(row.workshopName, row.title);
   const base = { to: row.customerEmail, subject, text };
   if (!can(member, "changeStatus")) return { canSend: false, blocked: "role", reason: "Technicians and owners send customers their messages.", ...base };
-  if (row.status !== COLLECTION_STATUS) return { canSend: false, blocked: "status", reason: `The job is at “${JOB_STATUS_LABELS[row.status]}”; the message can go when it reaches “${JOB_STATUS_LABELS[COLLECTION_STATUS]}”.`, ...base };
+  if (row.status !== COLLECTION_STATUS)
+    return {
+      canSend: false,
+      blocked: "status",
+      reason: `The job is at “${JOB_STATUS_LABELS[row.status]}”; the message can go when it reaches “${JOB_STATUS_LABELS[COLLECTION_STATUS]}”.`,
+      ...base,
+    };
   if (!row.customerEmail) return { canSend: false, blocked: "no-email", reason: "Add the customer's e-mail to the job first.", ...base };
   return { canSend: true, ...base, to: row.customerEmail };
 }
 
 export function recordReadyMessageSent(member: Member, jobId: number, sent: { to: string; subject: string; attachment: string }) {
-  insertLogEntry(getDb(), { jobId, workshopId: member.workshopId, authorId: member.userId, kind: "mail", text: `Collection message e-mailed to ${sent.to}, bench sheet attached.`, data: sent });
+  insertLogEntry(getDb(), {
+    jobId,
+    workshopId: member.workshopId,
+    authorId: member.userId,
+    kind: "mail",
+    text: `Collection message e-mailed to ${sent.to}, bench sheet attached.`,
+    data: sent,
+  });
 }

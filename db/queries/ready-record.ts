@@ -18,11 +18,23 @@ function readyRecord(member: Member, jobId: number, db: Db | Tx): ReadyRecord {
   const scope = (t: { jobId: SQLiteColumn; workshopId: SQLiteColumn }) => and(eq(t.jobId, jobId), eq(t.workshopId, member.workshopId));
   const faultRows = db.select({ id: faults.id, symptom: faults.symptom, resolution: faults.resolution }).from(faults).where(scope(faults)).all();
   const candidates = faultRows.length
-    ? db.select({ faultId: faultCandidates.faultId, status: faultCandidates.status }).from(faultCandidates).where(inArray(faultCandidates.faultId, faultRows.map((f) => f.id))).all()
+    ? db
+        .select({ faultId: faultCandidates.faultId, status: faultCandidates.status })
+        .from(faultCandidates)
+        .where(
+          inArray(
+            faultCandidates.faultId,
+            faultRows.map((f) => f.id),
+          ),
+        )
+        .all()
     : [];
   return {
     parts: db.select({ designator: parts.designator, state: parts.state }).from(parts).where(scope(parts)).all(),
-    faults: faultRows.map((f) => ({ symptom: f.symptom, state: faultState({ resolution: f.resolution, candidates: candidates.filter((c) => c.faultId === f.id) }) })),
+    faults: faultRows.map((f) => ({
+      symptom: f.symptom,
+      state: faultState({ resolution: f.resolution, candidates: candidates.filter((c) => c.faultId === f.id) }),
+    })),
     powerUps: db.select({ outcome: powerUps.outcome }).from(powerUps).where(scope(powerUps)).all(),
   };
 }
@@ -67,7 +79,11 @@ export function changeStatusWithChecks(member: Member, jobId: number, input: Sta
   if (input.status !== COLLECTION_STATUS) return changeJobStatus(member, jobId, input.status);
   assertCan(member, "changeStatus", "change a job's status");
   return getDb().transaction((tx) => {
-    const now = tx.select({ status: jobs.status }).from(jobs).where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId))).get();
+    const now = tx
+      .select({ status: jobs.status })
+      .from(jobs)
+      .where(and(eq(jobs.id, jobId), eq(jobs.workshopId, member.workshopId)))
+      .get();
     if (!now) throw notFound("That job");
     const issues = now.status === COLLECTION_STATUS ? [] : assertReadyOrOverride(member, jobId, input, tx);
     // changeJobStatus opens its own transaction: inside this one it runs as a savepoint.

@@ -18,8 +18,12 @@ export function createSession(userId: number, opts: { ttlMs: number; idleMs: num
   const { token, hash } = newToken();
   const db = getDb();
   db.transaction((tx) => {
-    tx.delete(sessions).where(or(lt(sessions.expiresAt, new Date(now)), lt(sessions.lastSeenAt, new Date(now - opts.idleMs)))).run();
-    tx.insert(sessions).values({ userId, tokenHash: hash, lastSeenAt: new Date(now), expiresAt: new Date(now + opts.ttlMs) }).run();
+    tx.delete(sessions)
+      .where(or(lt(sessions.expiresAt, new Date(now)), lt(sessions.lastSeenAt, new Date(now - opts.idleMs))))
+      .run();
+    tx.insert(sessions)
+      .values({ userId, tokenHash: hash, lastSeenAt: new Date(now), expiresAt: new Date(now + opts.ttlMs) })
+      .run();
   });
   return token;
 }
@@ -33,31 +37,47 @@ export type SessionCheck = "live" | "ended";
 export function checkSession(token: string, userId: number, opts: { idleMs: number; now?: number }): SessionCheck {
   const now = opts.now ?? Date.now();
   const db = getDb();
-  const row = db.select({ id: sessions.id, userId: sessions.userId, lastSeenAt: sessions.lastSeenAt, expiresAt: sessions.expiresAt }).from(sessions).where(eq(sessions.tokenHash, hashToken(token))).get();
+  const row = db
+    .select({ id: sessions.id, userId: sessions.userId, lastSeenAt: sessions.lastSeenAt, expiresAt: sessions.expiresAt })
+    .from(sessions)
+    .where(eq(sessions.tokenHash, hashToken(token)))
+    .get();
   if (!row || row.userId !== userId) return "ended";
   if (row.expiresAt.getTime() <= now || now - row.lastSeenAt.getTime() > opts.idleMs) {
     db.delete(sessions).where(eq(sessions.id, row.id)).run();
     return "ended";
   }
-  if (now - row.lastSeenAt.getTime() >= TOUCH_EVERY_MS) db.update(sessions).set({ lastSeenAt: new Date(now) }).where(eq(sessions.id, row.id)).run();
+  if (now - row.lastSeenAt.getTime() >= TOUCH_EVERY_MS)
+    db.update(sessions)
+      .set({ lastSeenAt: new Date(now) })
+      .where(eq(sessions.id, row.id))
+      .run();
   return "live";
 }
 
 export function deleteSession(token: string): void {
-  getDb().delete(sessions).where(eq(sessions.tokenHash, hashToken(token))).run();
+  getDb()
+    .delete(sessions)
+    .where(eq(sessions.tokenHash, hashToken(token)))
+    .run();
 }
 
 /** Ends every session of a user, or every one but `keepToken`'s. */
 export function deleteUserSessions(userId: number, keepToken?: string, tx: DbOrTx = getDb()): void {
   const mine = eq(sessions.userId, userId);
-  tx.delete(sessions).where(keepToken ? and(mine, ne(sessions.tokenHash, hashToken(keepToken))) : mine).run();
+  tx.delete(sessions)
+    .where(keepToken ? and(mine, ne(sessions.tokenHash, hashToken(keepToken))) : mine)
+    .run();
 }
 
 /** Sign out everywhere: every session row goes and the session version moves on, in one transaction. */
 export function endAllSessions(userId: number): void {
   getDb().transaction((tx) => {
     deleteUserSessions(userId, undefined, tx);
-    tx.update(users).set({ sessionVersion: sql`${users.sessionVersion} + 1` }).where(eq(users.id, userId)).run();
+    tx.update(users)
+      .set({ sessionVersion: sql`${users.sessionVersion} + 1` })
+      .where(eq(users.id, userId))
+      .run();
   });
 }
 

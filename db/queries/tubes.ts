@@ -78,8 +78,7 @@ function testWords(v: Partial<Pick<TubeValues, "test" | "verdict" | "substitute"
   return words;
 }
 
-const testColumns = (test: TubeValues["test"]) =>
-  test === undefined ? {} : { testReading: test?.reading ?? null, testMinimum: test?.minimum ?? null };
+const testColumns = (test: TubeValues["test"]) => (test === undefined ? {} : { testReading: test?.reading ?? null, testMinimum: test?.minimum ?? null });
 
 export function createTube(member: Member, jobId: number, input: TubeValues) {
   assertCan(member, "addNotes", "add tubes");
@@ -88,7 +87,14 @@ export function createTube(member: Member, jobId: number, input: TubeValues) {
     const { test, ...values } = input;
     const { id } = tx
       .insert(tubes)
-      .values({ ...values, function: values.function ?? null, substitute: values.substitute ?? null, ...testColumns(test), jobId, workshopId: member.workshopId })
+      .values({
+        ...values,
+        function: values.function ?? null,
+        substitute: values.substitute ?? null,
+        ...testColumns(test),
+        jobId,
+        workshopId: member.workshopId,
+      })
       .returning({ id: tubes.id })
       .get();
     const extra = testWords(input);
@@ -116,7 +122,14 @@ export function createTubeLineup(member: Member, jobId: number, types: readonly 
       jobId,
       workshopId: member.workshopId,
     }));
-    const ids = new Set(tx.insert(tubes).values(values).returning({ id: tubes.id }).all().map((r) => r.id));
+    const ids = new Set(
+      tx
+        .insert(tubes)
+        .values(values)
+        .returning({ id: tubes.id })
+        .all()
+        .map((r) => r.id),
+    );
     appendLog(tx, member, jobId, "tube", `Tube line-up added: ${types.join(", ")} (${types.length} ${types.length === 1 ? "tube" : "tubes"}).`);
     const rows = rowsOf(member, jobId, tx);
     const seriesString = seriesOf(rows);

@@ -29,9 +29,7 @@ export function scryptParams(env: NodeJS.ProcessEnv = process.env): { N: number;
 function scrypt(password: string, salt: Buffer, N: number, r: number, p: number): Promise<Buffer> {
   // scrypt needs about 128·N·r bytes; Node's default maxmem (32 MiB) is too small for N = 2^17.
   const options: ScryptOptions = { N, r, p, maxmem: 256 * N * r + 1024 * 1024 };
-  return new Promise((resolve, reject) =>
-    scryptCb(password.normalize("NFKC"), salt, KEY_LENGTH, options, (err, key) => (err ? reject(err) : resolve(key))),
-  );
+  return new Promise((resolve, reject) => scryptCb(password.normalize("NFKC"), salt, KEY_LENGTH, options, (err, key) => (err ? reject(err) : resolve(key))));
 }
 
 export async function hashPassword(password: string): Promise<string> {

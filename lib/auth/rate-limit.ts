@@ -135,7 +135,10 @@ export interface ClientId {
  */
 export function clientId(request: Request, env: { GLOWBENCH_TRUST_PROXY?: string }): ClientId {
   if (env.GLOWBENCH_TRUST_PROXY === "1") {
-    const hops = (request.headers.get("x-forwarded-for") ?? "").split(",").map((s) => s.trim()).filter(Boolean);
+    const hops = (request.headers.get("x-forwarded-for") ?? "")
+      .split(",")
+      .map((s) => s.trim())
+      .filter(Boolean);
     const last = hops.at(-1);
     if (last) return { key: `ip:${last.replace(/^::ffff:/, "")}`, shared: false };
   }

@@ -26,7 +26,11 @@ export const signInSchema = z.object({
 export type SignInInput = z.input<typeof signInSchema>;
 
 export const signUpSchema = z.object({
-  workshopName: z.string({ error: "Name your workshop." }).trim().min(2, "Name your workshop (2 characters or more).").max(80, "Keep the workshop name under 80 characters."),
+  workshopName: z
+    .string({ error: "Name your workshop." })
+    .trim()
+    .min(2, "Name your workshop (2 characters or more).")
+    .max(80, "Keep the workshop name under 80 characters."),
   name: z.string({ error: "Enter your name." }).trim().min(1, "Enter your name.").max(80, "Keep your name under 80 characters."),
   email: emailField,
   password: newPasswordField,

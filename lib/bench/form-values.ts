@@ -51,7 +51,14 @@ function listValue(name: string, v: unknown): unknown[] {
       const o = (s ?? {}) as Record<string, unknown>;
       const lc = o.kind === "lc";
       // An LC stage's resistance is its choke's winding, kept in its own form field so switching kind never carries a resistor's value over.
-      return { kind: lc ? "lc" : "rc", resistance: lc ? "" : text(o.resistance), chokeResistance: lc ? text(o.resistance) : "", inductance: text(o.inductance), capacitance: text(o.capacitance), current: text(o.current) };
+      return {
+        kind: lc ? "lc" : "rc",
+        resistance: lc ? "" : text(o.resistance),
+        chokeResistance: lc ? text(o.resistance) : "",
+        inductance: text(o.inductance),
+        capacitance: text(o.capacitance),
+        current: text(o.current),
+      };
     });
   }
   if (name === "heaters") {
@@ -92,14 +99,19 @@ function cleanList(name: string, arr: unknown[]): unknown[] {
       const current = o.current?.trim() ?? "";
       const choke = o.chokeResistance?.trim() ?? "";
       // Blank current or choke resistance is left out: the calculator then uses its stated default.
-      const stage: Record<string, string> = o.kind === "lc"
-        ? { kind: "lc", inductance: o.inductance?.trim() ?? "", capacitance: o.capacitance?.trim() ?? "", ...(choke ? { resistance: choke } : {}) }
-        : { kind: "rc", resistance: o.resistance?.trim() ?? "", capacitance: o.capacitance?.trim() ?? "" };
+      const stage: Record<string, string> =
+        o.kind === "lc"
+          ? { kind: "lc", inductance: o.inductance?.trim() ?? "", capacitance: o.capacitance?.trim() ?? "", ...(choke ? { resistance: choke } : {}) }
+          : { kind: "rc", resistance: o.resistance?.trim() ?? "", capacitance: o.capacitance?.trim() ?? "" };
       if (current) stage.current = current;
       return stage;
     });
   }
-  if (name === "heaters") return arr.map((h) => ({ voltage: String((h as Record<string, string>).voltage ?? "").trim(), current: String((h as Record<string, string>).current ?? "").trim() }));
+  if (name === "heaters")
+    return arr.map((h) => ({
+      voltage: String((h as Record<string, string>).voltage ?? "").trim(),
+      current: String((h as Record<string, string>).current ?? "").trim(),
+    }));
   return arr.map((x) => String(x ?? "").trim()).filter(Boolean);
 }
 

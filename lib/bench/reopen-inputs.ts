@@ -11,7 +11,8 @@ export function reopenInputs(inputs: readonly InputMeta[], saved: Record<string,
   for (const meta of inputs) {
     const v = saved[meta.name];
     if (meta.quantity === "capacitance") out[meta.name] = farads(v);
-    else if (Array.isArray(v)) out[meta.name] = v.map((item) => (item && typeof item === "object" && !Array.isArray(item) ? withFarads(item as Record<string, unknown>) : item));
+    else if (Array.isArray(v))
+      out[meta.name] = v.map((item) => (item && typeof item === "object" && !Array.isArray(item) ? withFarads(item as Record<string, unknown>) : item));
   }
   return out;
 }

@@ -59,8 +59,7 @@ export const GAP_BELOW_STANDARD: Warning = {
 
 export const GAP_BELOW_FACTOR: Warning = {
   level: "caution",
-  message:
-    "The gap is smaller than the recommended clearance, which here is the safety factor times the uniform-field minimum gap.",
+  message: "The gap is smaller than the recommended clearance, which here is the safety factor times the uniform-field minimum gap.",
 };
 
 export const GAP_AT_LEAST_RECOMMENDED: Warning = {

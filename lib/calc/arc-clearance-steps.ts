@@ -1,6 +1,14 @@
 import { tex, texQuantity } from "./format";
 import type { ArcClearanceInput } from "./arc-clearance";
-import { altitudeFactor, standardFigures, tableClearance, TABLE_MAX_VOLTS, TABLE_TOP_METRES, type FieldCase, type TableClearance } from "./tables/iec60664-clearance";
+import {
+  altitudeFactor,
+  standardFigures,
+  tableClearance,
+  TABLE_MAX_VOLTS,
+  TABLE_TOP_METRES,
+  type FieldCase,
+  type TableClearance,
+} from "./tables/iec60664-clearance";
 import type { Step } from "./types";
 
 /**
@@ -67,9 +75,10 @@ export function explainArcClearance(input: ArcClearanceInput, o: ArcClearanceOut
   if (s.field === "B" || s.standardClearance === null) {
     const a = caseA.metres ?? TABLE_TOP_METRES.A;
     steps.push({
-      label: caseA.metres === null
-        ? "Lower bound: Table F.8's top figure for a non-uniform field (100 mm at 50 kV); a higher voltage needs more, the table does not say how much"
-        : "Floor: the non-uniform (case A) figure, since a lead or solder joint makes any real gap non-uniform",
+      label:
+        caseA.metres === null
+          ? "Lower bound: Table F.8's top figure for a non-uniform field (100 mm at 50 kV); a higher voltage needs more, the table does not say how much"
+          : "Floor: the non-uniform (case A) figure, since a lead or solder joint makes any real gap non-uniform",
       latex: tex`d_{A}\,k_{alt} = ${mm(a)} \times ${f} = ${mm(a * f)}`,
     });
   }

@@ -51,13 +51,29 @@ export const ELECTRODES = ["non-uniform", "uniform"] as const;
 export type Electrode = (typeof ELECTRODES)[number];
 /** Words a person may use for the shape, read as the two cases of IEC 60664-1. */
 const ELECTRODE_WORDS: Record<string, Electrode> = {
-  uniform: "uniform", homogeneous: "uniform", flat: "uniform", rounded: "uniform", plate: "uniform", sphere: "uniform",
-  "non-uniform": "non-uniform", nonuniform: "non-uniform", "non uniform": "non-uniform", inhomogeneous: "non-uniform",
-  point: "non-uniform", edge: "non-uniform", lead: "non-uniform", wire: "non-uniform",
+  uniform: "uniform",
+  homogeneous: "uniform",
+  flat: "uniform",
+  rounded: "uniform",
+  plate: "uniform",
+  sphere: "uniform",
+  "non-uniform": "non-uniform",
+  nonuniform: "non-uniform",
+  "non uniform": "non-uniform",
+  inhomogeneous: "non-uniform",
+  point: "non-uniform",
+  edge: "non-uniform",
+  lead: "non-uniform",
+  wire: "non-uniform",
 };
 
 const electrodeInput = z.preprocess(
-  (v) => (v === undefined || v === null || (typeof v === "string" && v.trim() === "") ? undefined : typeof v === "string" ? (ELECTRODE_WORDS[v.trim().toLowerCase()] ?? v) : v),
+  (v) =>
+    v === undefined || v === null || (typeof v === "string" && v.trim() === "")
+      ? undefined
+      : typeof v === "string"
+        ? (ELECTRODE_WORDS[v.trim().toLowerCase()] ?? v)
+        : v,
   z.enum(ELECTRODES, { error: 'Electrode must be "non-uniform" (points, edges, leads) or "uniform" (flat or rounded)' }).default("non-uniform"),
 );
 
@@ -131,13 +147,66 @@ export const calculator = defineCalculator({
     tones: [{ output: "willArc", when: true, tone: "hazard" }],
   },
   inputs: [
-    { name: "peakVoltage", label: "Peak voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The highest instantaneous voltage across the gap; for sine-wave AC that is 1.414 × the rms value." },
-    { name: "gap", label: "Gap", unit: "m", required: false, control: "quantity", quantity: "length", help: "Optional: the air gap to check, e.g. \"3 mm\"." },
-    { name: "pressure", label: "Air pressure", unit: "Pa", required: false, default: P0, control: "quantity", quantity: "pressure", help: "101.325 kPa at sea level; lower at altitude, where air breaks down more easily." },
-    { name: "temperature", label: "Air temperature", unit: "K", required: false, default: T0, control: "quantity", quantity: "temperature", help: "In kelvin, or in degrees Celsius such as \"20 °C\"." },
-    { name: "safetyFactor", label: "Safety factor", unit: "", required: false, default: 2, control: "quantity", quantity: "ratio", help: "Multiplies the uniform-field minimum gap; at least 1. The standard's clearance applies whatever it is." },
-    { name: "electrode", label: "Electrode shape", unit: "", required: false, default: "non-uniform", control: "select", options: ELECTRODES, help: "Non-uniform: a wire end, lead, solder joint, point or edge — nearly every gap in a set. Uniform: only large flat or well-rounded electrodes facing each other." },
-    { name: "altitude", label: "Altitude", unit: "m", required: false, default: 0, control: "quantity", quantity: "length", help: "Height of the workshop or the set's home above sea level; above 2000 m the standard's clearance grows (IEC 60664-1 Table A.2). Enter the local air pressure too." },
+    {
+      name: "peakVoltage",
+      label: "Peak voltage",
+      unit: "V",
+      required: true,
+      control: "quantity",
+      quantity: "voltage",
+      help: "The highest instantaneous voltage across the gap; for sine-wave AC that is 1.414 × the rms value.",
+    },
+    { name: "gap", label: "Gap", unit: "m", required: false, control: "quantity", quantity: "length", help: 'Optional: the air gap to check, e.g. "3 mm".' },
+    {
+      name: "pressure",
+      label: "Air pressure",
+      unit: "Pa",
+      required: false,
+      default: P0,
+      control: "quantity",
+      quantity: "pressure",
+      help: "101.325 kPa at sea level; lower at altitude, where air breaks down more easily.",
+    },
+    {
+      name: "temperature",
+      label: "Air temperature",
+      unit: "K",
+      required: false,
+      default: T0,
+      control: "quantity",
+      quantity: "temperature",
+      help: 'In kelvin, or in degrees Celsius such as "20 °C".',
+    },
+    {
+      name: "safetyFactor",
+      label: "Safety factor",
+      unit: "",
+      required: false,
+      default: 2,
+      control: "quantity",
+      quantity: "ratio",
+      help: "Multiplies the uniform-field minimum gap; at least 1. The standard's clearance applies whatever it is.",
+    },
+    {
+      name: "electrode",
+      label: "Electrode shape",
+      unit: "",
+      required: false,
+      default: "non-uniform",
+      control: "select",
+      options: ELECTRODES,
+      help: "Non-uniform: a wire end, lead, solder joint, point or edge — nearly every gap in a set. Uniform: only large flat or well-rounded electrodes facing each other.",
+    },
+    {
+      name: "altitude",
+      label: "Altitude",
+      unit: "m",
+      required: false,
+      default: 0,
+      control: "quantity",
+      quantity: "length",
+      help: "Height of the workshop or the set's home above sea level; above 2000 m the standard's clearance grows (IEC 60664-1 Table A.2). Enter the local air pressure too.",
+    },
   ],
   outputs: [
     { name: "relativeAirDensity", label: "Relative air density δ", unit: "" },
@@ -152,18 +221,23 @@ export const calculator = defineCalculator({
   formulas: [
     { label: "Relative air density", latex: tex`\delta = \frac{p}{101.325\,\mathrm{kPa}} \cdot \frac{293.15\,\mathrm{K}}{T}` },
     { label: "Uniform-field breakdown (d in cm; for δd from about 0.01 to 10 cm)", latex: tex`V_b = 24.22\,\delta d + 6.08\sqrt{\delta d}\;\mathrm{kV}` },
-    { label: "Minimum gap", latex: tex`\sqrt{\delta d} = \frac{-6.08 + \sqrt{6.08^2 + 4 \cdot 24.22\,V}}{2 \cdot 24.22}, \quad d = \frac{(\sqrt{\delta d})^2}{\delta}` },
+    {
+      label: "Minimum gap",
+      latex: tex`\sqrt{\delta d} = \frac{-6.08 + \sqrt{6.08^2 + 4 \cdot 24.22\,V}}{2 \cdot 24.22}, \quad d = \frac{(\sqrt{\delta d})^2}{\delta}`,
+    },
     { label: "Standard's clearance", latex: tex`d_{std} = d_{\text{Table F.8}}(V) \times k_{alt}` },
     { label: "Recommended clearance", latex: tex`d_{rec} = \max\left(k\,d_{min},\; d_{std},\; d_{\text{case A}}\,k_{alt}\right)` },
   ],
   references: [
     {
       title: "Kuffel, Zaengl & Kuffel, High Voltage Engineering Fundamentals, 2nd ed.",
-      detail: "Ch. 5, electrical breakdown in gases: Paschen's law, breakdown of uniform-field gaps in air, V_b = 24.22·δd + 6.08·√(δd) kV with d in cm, relative air density δ (constants, chapter and the fit's range recalled from memory)",
+      detail:
+        "Ch. 5, electrical breakdown in gases: Paschen's law, breakdown of uniform-field gaps in air, V_b = 24.22·δd + 6.08·√(δd) kV with d in cm, relative air density δ (constants, chapter and the fit's range recalled from memory)",
     },
     {
       title: "IEC 60664-1:2020, Insulation coordination for equipment within low-voltage supply systems — Part 1",
-      detail: "Table F.8, clearances to withstand steady-state voltages, temporary overvoltages or recurring peak voltages (case A inhomogeneous, case B homogeneous field; Table F.7 in the 2007 edition); Table A.2, altitude correction factors; Table F.2, minimum clearance for pollution degree 2. Creepage (Table F.5) is not covered",
+      detail:
+        "Table F.8, clearances to withstand steady-state voltages, temporary overvoltages or recurring peak voltages (case A inhomogeneous, case B homogeneous field; Table F.7 in the 2007 edition); Table A.2, altitude correction factors; Table F.2, minimum clearance for pollution degree 2. Creepage (Table F.5) is not covered",
     },
   ],
   whyItMatters:

@@ -56,9 +56,17 @@ export const bPlusSchema = z
     }
     const circuit = TUBES.get(v.rectifierTube)!.circuit;
     if (v.rectifier === "bridge") {
-      ctx.addIssue({ code: "custom", path: ["rectifierTube"], message: `Rectifier tube: one ${v.rectifierTube} cannot make a bridge; give the drop of each rectifier under rectifierDrop instead` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["rectifierTube"],
+        message: `Rectifier tube: one ${v.rectifierTube} cannot make a bridge; give the drop of each rectifier under rectifierDrop instead`,
+      });
     } else if (circuit === "half-wave" && v.rectifier !== "half-wave") {
-      ctx.addIssue({ code: "custom", path: ["rectifierTube"], message: `Rectifier tube: the ${v.rectifierTube} is a half-wave rectifier; choose the half-wave circuit, or give a drop instead` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["rectifierTube"],
+        message: `Rectifier tube: the ${v.rectifierTube} is a half-wave rectifier; choose the half-wave circuit, or give a drop instead`,
+      });
     }
   });
 
@@ -95,14 +103,72 @@ export const calculator = defineCalculator({
     chart: null,
   },
   inputs: [
-    { name: "secondaryVoltage", label: "Secondary voltage (rms)", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "For a centre-tapped full-wave circuit, each half (centre tap to one end, the 350 of 350-0-350)." },
-    { name: "rectifier", label: "Rectifier circuit", unit: "", required: true, control: "select", options: B_PLUS_RECTIFIERS, help: "Full-wave here means a centre-tapped winding with two rectifiers (or one two-plate tube)." },
-    { name: "rectifierTube", label: "Rectifier tube", unit: "", required: false, control: "select", options: RECTIFIER_TYPES, blankLabel: "None: enter the drop below", help: "From the built-in table: its drop, rated current and largest reservoir capacitor are used." },
-    { name: "rectifierDrop", label: "Rectifier drop", unit: "V", required: false, control: "quantity", quantity: "voltage", help: "Or the drop of one rectifier at this current (a bridge counts two)." },
-    { name: "loadCurrent", label: "Load current", unit: "A", required: true, control: "quantity", quantity: "current", help: "Total DC current: every plate, screen and bleeder." },
-    { name: "capacitance", label: "Reservoir capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance", help: "The first capacitor after the rectifier." },
+    {
+      name: "secondaryVoltage",
+      label: "Secondary voltage (rms)",
+      unit: "V",
+      required: true,
+      control: "quantity",
+      quantity: "voltage",
+      help: "For a centre-tapped full-wave circuit, each half (centre tap to one end, the 350 of 350-0-350).",
+    },
+    {
+      name: "rectifier",
+      label: "Rectifier circuit",
+      unit: "",
+      required: true,
+      control: "select",
+      options: B_PLUS_RECTIFIERS,
+      help: "Full-wave here means a centre-tapped winding with two rectifiers (or one two-plate tube).",
+    },
+    {
+      name: "rectifierTube",
+      label: "Rectifier tube",
+      unit: "",
+      required: false,
+      control: "select",
+      options: RECTIFIER_TYPES,
+      blankLabel: "None: enter the drop below",
+      help: "From the built-in table: its drop, rated current and largest reservoir capacitor are used.",
+    },
+    {
+      name: "rectifierDrop",
+      label: "Rectifier drop",
+      unit: "V",
+      required: false,
+      control: "quantity",
+      quantity: "voltage",
+      help: "Or the drop of one rectifier at this current (a bridge counts two).",
+    },
+    {
+      name: "loadCurrent",
+      label: "Load current",
+      unit: "A",
+      required: true,
+      control: "quantity",
+      quantity: "current",
+      help: "Total DC current: every plate, screen and bleeder.",
+    },
+    {
+      name: "capacitance",
+      label: "Reservoir capacitance",
+      unit: "F",
+      required: true,
+      control: "quantity",
+      quantity: "capacitance",
+      help: "The first capacitor after the rectifier.",
+    },
     { name: "lineFrequency", label: "Mains frequency", unit: "Hz", required: false, default: 60, control: "quantity", quantity: "frequency" },
-    { name: "windingResistance", label: "Winding resistance", unit: "Ω", required: false, default: 0, control: "quantity", quantity: "resistance", help: "DC resistance of the winding in the current's path (one half for centre-tapped)." },
+    {
+      name: "windingResistance",
+      label: "Winding resistance",
+      unit: "Ω",
+      required: false,
+      default: 0,
+      control: "quantity",
+      quantity: "resistance",
+      help: "DC resistance of the winding in the current's path (one half for centre-tapped).",
+    },
   ],
   outputs: [
     { name: "peakVoltage", label: "Peak of the secondary", unit: "V" },
@@ -120,7 +186,10 @@ export const calculator = defineCalculator({
     { label: "B+ under load", latex: tex`V_{dc} \approx V_{pk} - n\,V_t - I\,R_w - \frac{V_{pp}}{2}, \quad n = 2\ \text{for a bridge}` },
   ],
   references: [
-    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Rectification chapter: capacitor-input filters, regulation and the rectifier's peak-current limits (chapter cited from memory)" },
+    {
+      title: "Radiotron Designer's Handbook, 4th ed.",
+      detail: "Rectification chapter: capacitor-input filters, regulation and the rectifier's peak-current limits (chapter cited from memory)",
+    },
     { title: "Floyd, Electronic Devices", detail: "Power supplies chapter: the capacitor-input filter, V_r(pp) and V_DC ≈ V_p − V_r(pp)/2 (from memory)" },
     { title: "Built-in rectifier table", detail: RECTIFIER_SOURCE },
   ],
@@ -196,7 +265,10 @@ export const calculator = defineCalculator({
       { label: "Peak of the secondary", latex: tex`V_{pk} = \sqrt{2} \times ${texQuantity(vs, "V", 4)} = ${texQuantity(o.peakVoltage, "V", 4)}` },
       {
         label: "Ripple frequency",
-        latex: rectifier === "half-wave" ? tex`f_r = f = ${texQuantity(f, "Hz")}` : tex`f_r = 2f = 2 \times ${texQuantity(f, "Hz")} = ${texQuantity(o.rippleFrequency, "Hz")}`,
+        latex:
+          rectifier === "half-wave"
+            ? tex`f_r = f = ${texQuantity(f, "Hz")}`
+            : tex`f_r = 2f = 2 \times ${texQuantity(f, "Hz")} = ${texQuantity(o.rippleFrequency, "Hz")}`,
       },
       {
         label: "Ripple on the reservoir, peak to peak",

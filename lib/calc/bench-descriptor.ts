@@ -26,8 +26,7 @@ export type OutputFormat = "percent" | "signed-percent" | "bare-prefix";
 
 /** A result figure shown in the hazard colour (danger alone) or the caution colour when its value says so. */
 export type ToneRule<Out extends string> = { output: Out; tone: "hazard" | "caution" } & (
-  | { when: string | number | boolean }
-  | { unless: string | number | boolean }
+  { when: string | number | boolean } | { unless: string | number | boolean }
 );
 
 export interface InputMode<In extends string> {

@@ -94,7 +94,8 @@ export function bleederNotes(warnings: Warning[], input: Limits, chain: Chain, s
   if (chain.rating === null) {
     warnings.push({
       level: "caution",
-      message: "No listed standard rating carries each resistor's power at twice its dissipation and its voltage; use power resistors rated by their data sheet for both, and check the design.",
+      message:
+        "No listed standard rating carries each resistor's power at twice its dissipation and its voltage; use power resistors rated by their data sheet for both, and check the design.",
     });
   }
 }

@@ -35,10 +35,18 @@ export const bleederSchema = z
   })
   .superRefine((v, ctx) => {
     if (v.safeVoltage !== undefined && v.residualVoltage !== undefined && v.safeVoltage !== v.residualVoltage) {
-      ctx.addIssue({ code: "custom", path: ["residualVoltage"], message: "Residual-voltage limit given twice (safeVoltage and residualVoltage) with different values; give one" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["residualVoltage"],
+        message: "Residual-voltage limit given twice (safeVoltage and residualVoltage) with different values; give one",
+      });
     }
     if (v.tolerance !== undefined && v.resistorTolerance !== undefined && v.tolerance !== v.resistorTolerance) {
-      ctx.addIssue({ code: "custom", path: ["tolerance"], message: "Tolerance is the older name of the resistor tolerance; give one of tolerance and resistorTolerance" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["tolerance"],
+        message: "Tolerance is the older name of the resistor tolerance; give one of tolerance and resistorTolerance",
+      });
     }
     const limit = v.safeVoltage ?? v.residualVoltage ?? 60;
     if (!(v.workingVoltage >= limit * MIN_RATIO)) {
@@ -80,12 +88,64 @@ export const calculator = defineCalculator({
     chart: "bleeder-discharge",
   },
   inputs: [
-    { name: "capacitance", label: "Filter capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance", help: "Total nominal capacitance the bleeder drains (add up capacitors in parallel)." },
-    { name: "workingVoltage", label: "Working voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The highest voltage the capacitor reaches, e.g. B+ with no load." },
-    { name: "safeVoltage", label: "Residual-voltage limit", unit: "V", required: false, default: 60, control: "quantity", quantity: "voltage", help: "The voltage to fall below; 60 V is the residual-voltage limit of IEC 60204-1 §6.2.4. Also accepted as residualVoltage." },
-    { name: "maxTime", label: "Time allowed", unit: "s", required: false, default: 5, control: "quantity", quantity: "time", help: "How long the discharge may take; 5 s follows IEC 60204-1 §6.2.4." },
-    { name: "capacitorTolerance", label: "Capacitor tolerance (upper)", unit: "", required: false, default: 0.5, control: "quantity", quantity: "ratio", help: "As a fraction: 0.5 means the capacitor may be 50% above nominal. Electrolytics are commonly −10%/+50% or wider." },
-    { name: "resistorTolerance", label: "Resistor tolerance", unit: "", required: false, default: 0.05, control: "quantity", quantity: "ratio", help: "As a fraction: 0.05 means the resistor may be 5% high. Also accepted as tolerance." },
+    {
+      name: "capacitance",
+      label: "Filter capacitance",
+      unit: "F",
+      required: true,
+      control: "quantity",
+      quantity: "capacitance",
+      help: "Total nominal capacitance the bleeder drains (add up capacitors in parallel).",
+    },
+    {
+      name: "workingVoltage",
+      label: "Working voltage",
+      unit: "V",
+      required: true,
+      control: "quantity",
+      quantity: "voltage",
+      help: "The highest voltage the capacitor reaches, e.g. B+ with no load.",
+    },
+    {
+      name: "safeVoltage",
+      label: "Residual-voltage limit",
+      unit: "V",
+      required: false,
+      default: 60,
+      control: "quantity",
+      quantity: "voltage",
+      help: "The voltage to fall below; 60 V is the residual-voltage limit of IEC 60204-1 §6.2.4. Also accepted as residualVoltage.",
+    },
+    {
+      name: "maxTime",
+      label: "Time allowed",
+      unit: "s",
+      required: false,
+      default: 5,
+      control: "quantity",
+      quantity: "time",
+      help: "How long the discharge may take; 5 s follows IEC 60204-1 §6.2.4.",
+    },
+    {
+      name: "capacitorTolerance",
+      label: "Capacitor tolerance (upper)",
+      unit: "",
+      required: false,
+      default: 0.5,
+      control: "quantity",
+      quantity: "ratio",
+      help: "As a fraction: 0.5 means the capacitor may be 50% above nominal. Electrolytics are commonly −10%/+50% or wider.",
+    },
+    {
+      name: "resistorTolerance",
+      label: "Resistor tolerance",
+      unit: "",
+      required: false,
+      default: 0.05,
+      control: "quantity",
+      quantity: "ratio",
+      help: "As a fraction: 0.05 means the resistor may be 5% high. Also accepted as tolerance.",
+    },
   ],
   outputs: [
     { name: "maxResistance", label: "Largest resistance that meets the time (nominal parts)", unit: "Ω" },
@@ -102,17 +162,24 @@ export const calculator = defineCalculator({
   formulas: [
     { label: "Discharge to the residual-voltage limit", latex: tex`t = R\,C\,\ln\frac{V_w}{V_{res}}` },
     { label: "Largest bleeder, nominal parts", latex: tex`R_{max} = \frac{t_{max}}{C\,\ln(V_w/V_{res})}` },
-    { label: "Worst corner: both parts at their upper tolerance", latex: tex`R\,(1 + \text{tol}_R)\;C\,(1 + \text{tol}_C)\,\ln\frac{V_w}{V_{res}} \le t_{max}` },
+    {
+      label: "Worst corner: both parts at their upper tolerance",
+      latex: tex`R\,(1 + \text{tol}_R)\;C\,(1 + \text{tol}_C)\,\ln\frac{V_w}{V_{res}} \le t_{max}`,
+    },
     { label: "Series chain", latex: tex`n = \left\lceil \frac{V_w}{U_{max}} \right\rceil, \quad V_{each} = \frac{V_w}{n}` },
     { label: "Current and dissipation", latex: tex`I = \frac{V_w}{R}, \quad P = \frac{V_w^2}{R}` },
   ],
   references: [
     {
       title: "IEC 60204-1, Safety of machinery — Electrical equipment of machines",
-      detail: "§6.2.4, protection against residual voltages: live parts above 60 V discharged to 60 V or less within 5 s of disconnection (clause cited from memory; used here as a bench benchmark)",
+      detail:
+        "§6.2.4, protection against residual voltages: live parts above 60 V discharged to 60 V or less within 5 s of disconnection (clause cited from memory; used here as a bench benchmark)",
     },
     { title: "IEC 60115-1, Fixed resistors — Generic specification", detail: `Limiting element voltage. Figures used: ${LIMITING_VOLTAGE_SOURCE}` },
-    { title: "Aluminium electrolytic capacitor data sheets", detail: "Capacitance tolerance commonly −10 %/+50 % for high-voltage parts, wider on older ones (common practice)" },
+    {
+      title: "Aluminium electrolytic capacitor data sheets",
+      detail: "Capacitance tolerance commonly −10 %/+50 % for high-voltage parts, wider on older ones (common practice)",
+    },
     {
       title: "Radiotron Designer's Handbook, 4th ed.",
       detail: "Power supply chapters: bleeder resistors across the filter; exponential discharge of CR (chapter cited from memory)",
@@ -140,7 +207,8 @@ export const calculator = defineCalculator({
     bleederNotes(warnings, input, chain, rating.rating);
     warnings.push({
       level: "info",
-      message: `The bleeder draws ${formatQuantity(bleederCurrent, "A")} from the supply all the time it is on; check the rectifier and transformer can spare it. ` +
+      message:
+        `The bleeder draws ${formatQuantity(bleederCurrent, "A")} from the supply all the time it is on; check the rectifier and transformer can spare it. ` +
         "Wire it directly across the capacitor's terminals so no switch or fuse can disconnect it.",
     });
 
@@ -181,13 +249,17 @@ export const calculator = defineCalculator({
         label: "Check: discharge time at the worst corner",
         latex: tex`t = R\,(1 + ${rt})\;C\,(1 + ${ct})\,\ln\frac{V_w}{V_{res}} = ${texQuantity(r * (1 + rt), "Ω")} \times ${texQuantity(c * (1 + ct), "F")} \times ${logRatio.toPrecision(4)} = ${texQuantity(worstTime, "s")} \le ${texQuantity(t, "s")}`,
       },
-      { label: "Bleeder current", latex: tex`I = \frac{V_w}{R} = \frac{${texQuantity(vw, "V")}}{${texQuantity(r, "Ω")}} = ${texQuantity(bleederCurrent, "A")}` },
+      {
+        label: "Bleeder current",
+        latex: tex`I = \frac{V_w}{R} = \frac{${texQuantity(vw, "V")}}{${texQuantity(r, "Ω")}} = ${texQuantity(bleederCurrent, "A")}`,
+      },
       { label: "Dissipation", latex: tex`P = \frac{V_w^2}{R} = \frac{(${texQuantity(vw, "V")})^2}{${texQuantity(r, "Ω")}} = ${texQuantity(dissipation, "W")}` },
       {
         label: "Suggested rating (at least twice the dissipation)",
-        latex: o.suggestedRating === null
-          ? tex`2P = ${texQuantity(2 * dissipation, "W")} \text{ — above the largest standard rating}`
-          : tex`2P = ${texQuantity(2 * dissipation, "W")} \;\Rightarrow\; ${texQuantity(o.suggestedRating, "W")}`,
+        latex:
+          o.suggestedRating === null
+            ? tex`2P = ${texQuantity(2 * dissipation, "W")} \text{ — above the largest standard rating}`
+            : tex`2P = ${texQuantity(2 * dissipation, "W")} \;\Rightarrow\; ${texQuantity(o.suggestedRating, "W")}`,
       },
       {
         label: `Resistors in series (typical limiting element voltage ${MAX_LIMITING_VOLTAGE} V at most, IEC 60115-1)`,
@@ -197,7 +269,10 @@ export const calculator = defineCalculator({
         label: "Each resistor: E12, meeting the time at the worst corner, rated for its power and its voltage",
         latex: tex`R_{each} \le \frac{${texQuantity(maxResistance / corner, "Ω")}}{${n}} \;\Rightarrow\; ${texQuantity(o.resistorValue, "Ω")}, \quad ${o.resistorRating === null ? tex`\text{no single listed rating}` : texQuantity(o.resistorRating, "W")}`,
       },
-      { label: "Energy stored at the working voltage", latex: tex`E = \tfrac{1}{2}\,C\,V_w^2 = \tfrac{1}{2} \times ${texQuantity(c, "F")} \times (${texQuantity(vw, "V")})^2 = ${texQuantity(energy, "J")}` },
+      {
+        label: "Energy stored at the working voltage",
+        latex: tex`E = \tfrac{1}{2}\,C\,V_w^2 = \tfrac{1}{2} \times ${texQuantity(c, "F")} \times (${texQuantity(vw, "V")})^2 = ${texQuantity(energy, "J")}`,
+      },
     ] satisfies Step[];
   },
 });

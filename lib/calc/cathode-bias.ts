@@ -147,14 +147,21 @@ export const calculator = defineCalculator({
     { label: "Cathode current", latex: tex`I_k = I_p + I_{g2}` },
     { label: "Cathode resistance", latex: tex`R_k = \frac{V_k}{I_k}` },
     { label: "Dissipation", latex: tex`P = I_k^2 R_k` },
-    { label: "Bypass corner", latex: tex`f = \frac{1}{2\pi R C_k},\quad R = R_k \parallel \frac{r_p + R_a}{\mu + 1}\ \text{(triode)},\ R_k \parallel \frac{1}{g_m}\ \text{(pentode)}` },
+    {
+      label: "Bypass corner",
+      latex: tex`f = \frac{1}{2\pi R C_k},\quad R = R_k \parallel \frac{r_p + R_a}{\mu + 1}\ \text{(triode)},\ R_k \parallel \frac{1}{g_m}\ \text{(pentode)}`,
+    },
   ],
   references: [
     {
       title: "Radiotron Designer's Handbook, 4th ed.",
-      detail: "Chapter on resistance-capacitance coupled amplifiers: cathode bias and cathode by-pass capacitors, the resistance looking into the cathode (chapter cited from memory)",
+      detail:
+        "Chapter on resistance-capacitance coupled amplifiers: cathode bias and cathode by-pass capacitors, the resistance looking into the cathode (chapter cited from memory)",
     },
-    { title: "Tube manufacturers' data sheets", detail: "Typical operation tables: plate and screen currents and cathode-bias resistor for each operating point" },
+    {
+      title: "Tube manufacturers' data sheets",
+      detail: "Typical operation tables: plate and screen currents and cathode-bias resistor for each operating point",
+    },
     { title: "IEC 60063, Preferred number series for resistors and capacitors", detail: "E12 series" },
   ],
   whyItMatters:

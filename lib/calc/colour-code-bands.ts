@@ -79,7 +79,9 @@ export function decodeBands(names: readonly string[]): Decoded | Failure {
   return { ok: true, digits, exponent, resistance: tidy(significand * 10 ** exponent), tolerance, temperatureCoefficient, colours };
 }
 
-const TC_LIST = Object.values(TEMPERATURE_COEFFICIENT).sort((a, b) => (b as number) - (a as number)).join(", ");
+const TC_LIST = Object.values(TEMPERATURE_COEFFICIENT)
+  .sort((a, b) => (b as number) - (a as number))
+  .join(", ");
 
 /**
  * Code a resistance: four bands for two significant figures, five for three, six (always three
@@ -88,7 +90,9 @@ const TC_LIST = Object.values(TEMPERATURE_COEFFICIENT).sort((a, b) => (b as numb
 export function encodeResistance(resistance: number, tolerance: number, temperatureCoefficient?: number): Decoded | Failure {
   const tolColour = toleranceColour(tolerance);
   if (!tolColour) {
-    const list = Object.values(TOLERANCE).map((t) => `${tidy((t as number) * 100)} %`).join(", ");
+    const list = Object.values(TOLERANCE)
+      .map((t) => `${tidy((t as number) * 100)} %`)
+      .join(", ");
     return { ok: false, field: "tolerance", message: `Tolerance ±${tidy(tolerance * 100)} % has no colour; the code has ${list}` };
   }
   const withTc = temperatureCoefficient !== undefined;

@@ -14,25 +14,31 @@ export { decodeBands, encodeResistance } from "./colour-code-bands";
  * temperature coefficient adds a sixth; no band means ±20 %.
  */
 
-const bandsField = z.unknown().transform((raw, ctx): string[] | undefined => {
-  if (raw === undefined || raw === null || (typeof raw === "string" && raw.trim() === "")) return undefined;
-  if (Array.isArray(raw) && raw.length === 0) return undefined;
-  if (typeof raw === "string") return raw.split(/[\s,;\-–]+/).filter(Boolean);
-  if (Array.isArray(raw) && raw.every((b) => typeof b === "string")) return raw as string[];
-  ctx.addIssue({ code: "custom", message: "Bands must be a list of colour names, such as yellow, violet, red, gold" });
-  return z.NEVER;
-}).optional(); // zod 4 treats an absent key as an error for a bare transform
+const bandsField = z
+  .unknown()
+  .transform((raw, ctx): string[] | undefined => {
+    if (raw === undefined || raw === null || (typeof raw === "string" && raw.trim() === "")) return undefined;
+    if (Array.isArray(raw) && raw.length === 0) return undefined;
+    if (typeof raw === "string") return raw.split(/[\s,;\-–]+/).filter(Boolean);
+    if (Array.isArray(raw) && raw.every((b) => typeof b === "string")) return raw as string[];
+    ctx.addIssue({ code: "custom", message: "Bands must be a list of colour names, such as yellow, violet, red, gold" });
+    return z.NEVER;
+  })
+  .optional(); // zod 4 treats an absent key as an error for a bare transform
 
 // "50", 50, "50 ppm", "50 ppm/K", "50ppm/°C": a temperature coefficient in ppm/K (1 ppm/K = 1 ppm/°C).
 const TC_TEXT = /^\s*(\d+(?:\.\d+)?)\s*(?:ppm(?:\s*\/\s*(?:K|°C|C))?)?\s*$/i;
-const tcField = z.unknown().transform((raw, ctx): number | undefined => {
-  if (raw === undefined || raw === null || (typeof raw === "string" && raw.trim() === "")) return undefined;
-  const m = typeof raw === "string" ? TC_TEXT.exec(raw) : null;
-  const value = typeof raw === "number" ? raw : m ? Number(m[1]) : Number.NaN;
-  if (Number.isFinite(value) && value > 0) return value;
-  ctx.addIssue({ code: "custom", message: "Temperature coefficient: expected a positive number of ppm/K, such as 50" });
-  return z.NEVER;
-}).optional();
+const tcField = z
+  .unknown()
+  .transform((raw, ctx): number | undefined => {
+    if (raw === undefined || raw === null || (typeof raw === "string" && raw.trim() === "")) return undefined;
+    const m = typeof raw === "string" ? TC_TEXT.exec(raw) : null;
+    const value = typeof raw === "number" ? raw : m ? Number(m[1]) : Number.NaN;
+    if (Number.isFinite(value) && value > 0) return value;
+    ctx.addIssue({ code: "custom", message: "Temperature coefficient: expected a positive number of ppm/K, such as 50" });
+    return z.NEVER;
+  })
+  .optional();
 
 export const colourCodeSchema = z
   .object({
@@ -213,7 +219,13 @@ const OLDER_NOTES: Partial<Record<Colour, Warning>> = Object.fromEntries(
     const colour = c as Colour;
     const now = `±${tidy((TOLERANCE[colour] as number) * 100)} % (${TOLERANCE_LETTER[colour]})`;
     const article = /^[aeiou]/.test(colour) ? "an" : "a";
-    return [colour, { level: "info", message: `In IEC 60062:2016 ${article} ${colour} tolerance band means ${now}; charts older than that edition give ${colour} ${older}. Check the part's age and maker's chart if it matters.` }];
+    return [
+      colour,
+      {
+        level: "info",
+        message: `In IEC 60062:2016 ${article} ${colour} tolerance band means ${now}; charts older than that edition give ${colour} ${older}. Check the part's age and maker's chart if it matters.`,
+      },
+    ];
   }),
 );
 

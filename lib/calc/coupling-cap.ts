@@ -57,7 +57,15 @@ export const calculator = defineCalculator({
   },
   inputs: [
     { name: "capacitance", label: "Coupling capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance" },
-    { name: "gridResistance", label: "Grid resistor", unit: "Ω", required: true, control: "quantity", quantity: "resistance", help: "The resistor from the next tube's grid to ground (or to the bias supply)." },
+    {
+      name: "gridResistance",
+      label: "Grid resistor",
+      unit: "Ω",
+      required: true,
+      control: "quantity",
+      quantity: "resistance",
+      help: "The resistor from the next tube's grid to ground (or to the bias supply).",
+    },
     {
       name: "sourceResistance",
       label: "Driving stage's output resistance",
@@ -68,9 +76,33 @@ export const calculator = defineCalculator({
       quantity: "resistance",
       help: "The plate resistor in parallel with the driving tube's plate resistance; 0 leaves it out.",
     },
-    { name: "leakageCurrent", label: "Capacitor leakage current", unit: "A", required: false, control: "quantity", quantity: "current", help: "Measured on a capacitor tester at working voltage, or worked back from the grid voltage." },
-    { name: "maxGridResistance", label: "Data sheet's maximum grid resistance", unit: "Ω", required: false, control: "quantity", quantity: "resistance", help: "From the next tube's data sheet (lower with fixed bias than with cathode bias)." },
-    { name: "biasVoltage", label: "The next stage's bias (magnitude)", unit: "V", required: false, control: "quantity", quantity: "voltage", help: `What the grid shift is compared with; without it, the ${TYPICAL_BIAS} V of a typical output stage.` },
+    {
+      name: "leakageCurrent",
+      label: "Capacitor leakage current",
+      unit: "A",
+      required: false,
+      control: "quantity",
+      quantity: "current",
+      help: "Measured on a capacitor tester at working voltage, or worked back from the grid voltage.",
+    },
+    {
+      name: "maxGridResistance",
+      label: "Data sheet's maximum grid resistance",
+      unit: "Ω",
+      required: false,
+      control: "quantity",
+      quantity: "resistance",
+      help: "From the next tube's data sheet (lower with fixed bias than with cathode bias).",
+    },
+    {
+      name: "biasVoltage",
+      label: "The next stage's bias (magnitude)",
+      unit: "V",
+      required: false,
+      control: "quantity",
+      quantity: "voltage",
+      help: `What the grid shift is compared with; without it, the ${TYPICAL_BIAS} V of a typical output stage.`,
+    },
   ],
   outputs: [
     { name: "cornerFrequency", label: "Low-frequency corner (−3 dB)", unit: "Hz" },
@@ -83,8 +115,14 @@ export const calculator = defineCalculator({
     { label: "Grid shift from leakage", latex: tex`\Delta V_g = I_\text{leak}\,R_g` },
   ],
   references: [
-    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Chapter 12, resistance-capacitance coupled amplifiers: low-frequency response and the grid-circuit resistance (chapter cited from memory)" },
-    { title: "F. E. Terman, Radio Engineers' Handbook", detail: "Resistance-coupled amplifiers: low-frequency response, 3 dB down where the coupling reactance equals the series resistance (from memory)" },
+    {
+      title: "Radiotron Designer's Handbook, 4th ed.",
+      detail: "Chapter 12, resistance-capacitance coupled amplifiers: low-frequency response and the grid-circuit resistance (chapter cited from memory)",
+    },
+    {
+      title: "F. E. Terman, Radio Engineers' Handbook",
+      detail: "Resistance-coupled amplifiers: low-frequency response, 3 dB down where the coupling reactance equals the series resistance (from memory)",
+    },
     { title: "Tube data sheets (RCA receiving tube manual, RC-series)", detail: "Maximum grid-circuit resistance, fixed and cathode bias (from memory)" },
   ],
   whyItMatters:
@@ -99,7 +137,8 @@ export const calculator = defineCalculator({
     const warnings: Warning[] = [ALWAYS_DANGER];
     if (gridShift !== null && gridShift > 0) {
       const bias = biasVoltage ?? TYPICAL_BIAS;
-      const against = biasVoltage === undefined ? `the ${TYPICAL_BIAS} V bias of a typical output stage (6V6GT, class A)` : `the ${formatQuantity(bias, "V")} bias you gave`;
+      const against =
+        biasVoltage === undefined ? `the ${TYPICAL_BIAS} V bias of a typical output stage (6V6GT, class A)` : `the ${formatQuantity(bias, "V")} bias you gave`;
       if (gridShift > SHIFT_FRACTION * bias) {
         warnings.push({
           level: "caution",

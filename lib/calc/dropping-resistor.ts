@@ -51,7 +51,15 @@ export const calculator = defineCalculator({
     chart: null,
   },
   inputs: [
-    { name: "supplyVoltage", label: "Supply voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The B+ point the resistor is fed from." },
+    {
+      name: "supplyVoltage",
+      label: "Supply voltage",
+      unit: "V",
+      required: true,
+      control: "quantity",
+      quantity: "voltage",
+      help: "The B+ point the resistor is fed from.",
+    },
     { name: "loadVoltage", label: "Voltage wanted at the stage", unit: "V", required: true, control: "quantity", quantity: "voltage" },
     {
       name: "loadCurrent",
@@ -112,7 +120,8 @@ export const calculator = defineCalculator({
     }
     warnings.push({
       level: "info",
-      message: "The stage voltage follows the current it draws: a dropping resistor suits a steady load, not one whose current swings widely (use a divider or regulator for that).",
+      message:
+        "The stage voltage follows the current it draws: a dropping resistor suits a steady load, not one whose current swings widely (use a divider or regulator for that).",
     });
     return {
       outputs: { resistance, dissipation, suggestedRating: rating.rating, nearestPreferred: pref, loadVoltageWithPreferred },

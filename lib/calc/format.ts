@@ -60,7 +60,7 @@ export function formatQuantity(value: number, unit: string, sig = 3): string {
   return unit || e.prefix ? `${e.mantissa} ${e.prefix}${unit}` : e.mantissa;
 }
 
-const TEX_UNIT: Record<string, string> = { "Ω": "\\Omega", "µ": "\\mu ", "%": "\\%", "×": "\\times" };
+const TEX_UNIT: Record<string, string> = { Ω: "\\Omega", µ: "\\mu ", "%": "\\%", "×": "\\times" };
 
 const texUnits = new Map<string, string>(); // a handful of unit symbols, so this stays tiny
 

@@ -53,7 +53,8 @@ const QUICK_SURGE: Warning = {
 };
 const ABOVE_TABLE: Warning = {
   level: "caution",
-  message: "The margin asks for more than 10 A, the largest miniature-fuse rating listed. Check the load, and fuse it as local codes and licensed practice require.",
+  message:
+    "The margin asks for more than 10 A, the largest miniature-fuse rating listed. Check the load, and fuse it as local codes and licensed practice require.",
 };
 const BELOW_TABLE: Warning = {
   level: "info",
@@ -76,11 +77,44 @@ export const calculator = defineCalculator({
     chart: null,
   },
   inputs: [
-    { name: "loadPower", label: "Set's power", unit: "W", required: false, control: "quantity", quantity: "power", help: "From the label or service data. Or give the load current instead." },
-    { name: "loadCurrent", label: "Set's current", unit: "A", required: false, control: "quantity", quantity: "current", help: "Measured or from the service data (rms). Or give the power instead." },
+    {
+      name: "loadPower",
+      label: "Set's power",
+      unit: "W",
+      required: false,
+      control: "quantity",
+      quantity: "power",
+      help: "From the label or service data. Or give the load current instead.",
+    },
+    {
+      name: "loadCurrent",
+      label: "Set's current",
+      unit: "A",
+      required: false,
+      control: "quantity",
+      quantity: "current",
+      help: "Measured or from the service data (rms). Or give the power instead.",
+    },
     { name: "lineVoltage", label: "Line voltage", unit: "V", required: false, default: 120, control: "quantity", quantity: "voltage" },
-    { name: "powerFactor", label: "Power factor", unit: "", required: false, default: 1, control: "quantity", quantity: "ratio", help: "Between 0 and 1; below 1 a transformer set draws more current than P/V." },
-    { name: "kind", label: "Fuse kind", unit: "", required: true, control: "select", options: FUSE_KINDS, help: "Time-lag (T, slow-blow) or quick-acting (F)." },
+    {
+      name: "powerFactor",
+      label: "Power factor",
+      unit: "",
+      required: false,
+      default: 1,
+      control: "quantity",
+      quantity: "ratio",
+      help: "Between 0 and 1; below 1 a transformer set draws more current than P/V.",
+    },
+    {
+      name: "kind",
+      label: "Fuse kind",
+      unit: "",
+      required: true,
+      control: "select",
+      options: FUSE_KINDS,
+      help: "Time-lag (T, slow-blow) or quick-acting (F).",
+    },
   ],
   outputs: [
     { name: "runningCurrent", label: "Running current", unit: "A" },
@@ -97,7 +131,11 @@ export const calculator = defineCalculator({
   references: [
     { title: "IEC 60127-1 and IEC 60127-2, Miniature fuses", detail: `${FUSE_SERIES_SOURCE}; the 32 mA to 10 A span of the 5 × 20 mm sheets from memory` },
     { title: "The ARRL Handbook for Radio Communications", detail: "AC power chapter: apparent power and power factor, I = P/(V·cos φ)" },
-    { title: "Fuse application practice", detail: "Run a fuse at no more than about 80 % of its rating; allow for switch-on surge with a time-lag fuse or a larger quick-acting one (common practice)" },
+    {
+      title: "Fuse application practice",
+      detail:
+        "Run a fuse at no more than about 80 % of its rating; allow for switch-on surge with a time-lag fuse or a larger quick-acting one (common practice)",
+    },
   ],
   whyItMatters:
     "Many old sets arrive with no fuse, or with whatever would fit the holder. A fuse near the set's real running current " +

@@ -27,11 +27,17 @@ export function explainHeaterString(input: HeaterStringInput, o: HeaterStringOut
   const heaters = heaterList(input);
   const { stringVoltage: vs, stringCurrent: i, droppingResistance, dissipation } = o;
   const steps: Step[] = [
-    { label: "String voltage: in series the heaters' voltages add up", latex: tex`V_{string} = ${heaters.map((h) => V(h.voltage)).join(" + ")} = ${texQuantity(vs, "V", 4)}` },
+    {
+      label: "String voltage: in series the heaters' voltages add up",
+      latex: tex`V_{string} = ${heaters.map((h) => V(h.voltage)).join(" + ")} = ${texQuantity(vs, "V", 4)}`,
+    },
   ];
   const distinct = [...new Set(heaters.map((h) => h.current))].sort((a, b) => b - a);
   if (distinct.length === 1) {
-    steps.push({ label: "String current: every heater is rated for the same current, and in series that one current flows through them all", latex: tex`I = ${A(i)}` });
+    steps.push({
+      label: "String current: every heater is rated for the same current, and in series that one current flows through them all",
+      latex: tex`I = ${A(i)}`,
+    });
   } else {
     steps.push({
       label:
@@ -54,8 +60,14 @@ export function explainHeaterString(input: HeaterStringInput, o: HeaterStringOut
         latex: tex`R_{sh} = \frac{V_h}{I_{sh}} = \frac{${V(h.voltage)}}{${A(rest)}} = ${OHM(s.resistance)}`,
       },
       { label: `Shunt dissipation (${who})`, latex: tex`P_{sh} = V_h\,I_{sh} = ${V(h.voltage)} \times ${A(rest)} = ${W(s.dissipation)}` },
-      { label: "Shunt rating (at least twice its dissipation) and the nearest E12 value", latex: tex`${ratingTex(s.dissipation, s.suggestedRating)}, \quad R_\text{E12} = ${OHM(s.nearestPreferred)}` },
-      { label: "Check (Kirchhoff's current law): heater plus shunt make the string current", latex: tex`I_h + \frac{V_h}{R_{sh}} = ${A(h.current)} + ${A(h.voltage / s.resistance)} = ${A(i)}` },
+      {
+        label: "Shunt rating (at least twice its dissipation) and the nearest E12 value",
+        latex: tex`${ratingTex(s.dissipation, s.suggestedRating)}, \quad R_\text{E12} = ${OHM(s.nearestPreferred)}`,
+      },
+      {
+        label: "Check (Kirchhoff's current law): heater plus shunt make the string current",
+        latex: tex`I_h + \frac{V_h}{R_{sh}} = ${A(h.current)} + ${A(h.voltage / s.resistance)} = ${A(i)}`,
+      },
     );
   }
   if (vLine - vs > 0) {
@@ -100,7 +112,10 @@ export function explainHeaterString(input: HeaterStringInput, o: HeaterStringOut
         latex: tex`I' = \frac{V_{line}}{R'_{string}} = \frac{${V(vLine)}}{${OHM(m.stringResistanceWithLamp)}} = ${A(m.currentWith)}`,
       },
       {
-        label: lamp.rectifierCurrent > 0 ? "Lamp voltage: heater current plus the rectifier's DC through the pair" : "Lamp voltage: the heater current through the pair",
+        label:
+          lamp.rectifierCurrent > 0
+            ? "Lamp voltage: heater current plus the rectifier's DC through the pair"
+            : "Lamp voltage: the heater current through the pair",
         latex:
           lamp.rectifierCurrent > 0
             ? tex`V_{lamp} = (I_h + I_{dc})\,(R_{sec} \parallel R_{lamp}) = (${A(m.heaterCurrent)} + ${A(lamp.rectifierCurrent)}) \times ${OHM(m.parallelResistance)} = ${V(m.lampVoltage)}`

@@ -114,14 +114,19 @@ export function lampWarnings(m: LampModel, lamp: LampInput, warnings: Warning[])
       level: "caution",
       message:
         `The pilot lamp would be under-run: ${at}, a dull glow at best.` +
-        (noDc ? " No rectifier current was entered: where the plate is fed from the tap, its DC also flows through the lamp and brightens it." : " A lamp of lower current rating suits this tap better."),
+        (noDc
+          ? " No rectifier current was entered: where the plate is fed from the tap, its DC also flows through the lamp and brightens it."
+          : " A lamp of lower current rating suits this tap better."),
     });
   }
   warnings.push({
     level: "info",
     message:
       `Pilot lamp across the ${formatQuantity(h.tapVoltage, "V")} section of the ${h.type}'s heater (tap ${h.tapFrom}): it carries ${at}; the section's own current falls to ${formatQuantity(m.sectionCurrent, "A")}, so that part of the heater runs cooler. ` +
-      "Estimate: lamp and heaters at their hot resistances" + (noDc ? "." : ", and the rectifier's DC added to the heater current in the section (it flows in pulses, so it heats somewhat more than its average suggests)."),
+      "Estimate: lamp and heaters at their hot resistances" +
+      (noDc
+        ? "."
+        : ", and the rectifier's DC added to the heater current in the section (it flows in pulses, so it heats somewhat more than its average suggests)."),
   });
   // Parallel resistance only lowers the string's total, so the current can only rise.
   const change = m.currentWith / m.currentWithout - 1;

@@ -38,33 +38,34 @@ const pilotLamp = z
   .nullish();
 
 /** A list of type numbers, or one text like "12BE6, 12BA6 12AV6"; names are checked against the table. */
-const tubeList = z
-  .union([z.array(z.string()), z.string()], { error: "Tubes must be a list of type numbers" })
-  .transform((raw, ctx) => {
-    const names = (typeof raw === "string" ? raw.split(/[,;\s]+/) : raw).map((s) => s.trim());
-    const list = typeof raw === "string" ? names.filter(Boolean) : names;
-    if (list.length > MAX_HEATERS) {
-      ctx.addIssue({ code: "custom", message: `At most ${MAX_HEATERS} tubes` });
-      return z.NEVER;
+const tubeList = z.union([z.array(z.string()), z.string()], { error: "Tubes must be a list of type numbers" }).transform((raw, ctx) => {
+  const names = (typeof raw === "string" ? raw.split(/[,;\s]+/) : raw).map((s) => s.trim());
+  const list = typeof raw === "string" ? names.filter(Boolean) : names;
+  if (list.length > MAX_HEATERS) {
+    ctx.addIssue({ code: "custom", message: `At most ${MAX_HEATERS} tubes` });
+    return z.NEVER;
+  }
+  return list.map((name, i) => {
+    const entry = findHeater(name);
+    if (!entry) {
+      ctx.addIssue({
+        code: "custom",
+        path: [i],
+        message: `tubes.${i}: unknown tube type "${name}" — it is not in the built-in heater table; enter its heater voltage and current under heaters instead`,
+      });
+      return name;
     }
-    return list.map((name, i) => {
-      const entry = findHeater(name);
-      if (!entry) {
-        ctx.addIssue({
-          code: "custom",
-          path: [i],
-          message: `tubes.${i}: unknown tube type "${name}" — it is not in the built-in heater table; enter its heater voltage and current under heaters instead`,
-        });
-        return name;
-      }
-      return entry.names[0];
-    });
+    return entry.names[0];
   });
+});
 
 export const heaterStringSchema = z
   .object({
     lineVoltage: quantity("voltage", { positive: true, max: 1000, label: "Line voltage" }),
-    heaters: z.array(heater).max(MAX_HEATERS, { error: `At most ${MAX_HEATERS} heaters` }).optional(),
+    heaters: z
+      .array(heater)
+      .max(MAX_HEATERS, { error: `At most ${MAX_HEATERS} heaters` })
+      .optional(),
     tubes: tubeList.optional(),
     pilotLamp,
   })
@@ -121,9 +122,32 @@ export const calculator = defineCalculator({
     tones: [{ output: "currentsMatch", when: false, tone: "caution" }],
   },
   inputs: [
-    { name: "lineVoltage", label: "Line voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The mains voltage (rms) across the whole string." },
-    { name: "heaters", label: "Heaters", unit: "", required: false, control: "list", help: "Each heater's rated voltage and current, e.g. { voltage: 12.6, current: 0.15 }. Or name the tubes instead." },
-    { name: "tubes", label: "Tubes", unit: "", required: false, control: "list", options: TUBE_NAMES, help: "Type numbers from the built-in table, e.g. 12BE6, 12BA6, 12AV6, 50C5, 35W4." },
+    {
+      name: "lineVoltage",
+      label: "Line voltage",
+      unit: "V",
+      required: true,
+      control: "quantity",
+      quantity: "voltage",
+      help: "The mains voltage (rms) across the whole string.",
+    },
+    {
+      name: "heaters",
+      label: "Heaters",
+      unit: "",
+      required: false,
+      control: "list",
+      help: "Each heater's rated voltage and current, e.g. { voltage: 12.6, current: 0.15 }. Or name the tubes instead.",
+    },
+    {
+      name: "tubes",
+      label: "Tubes",
+      unit: "",
+      required: false,
+      control: "list",
+      options: TUBE_NAMES,
+      help: "Type numbers from the built-in table, e.g. 12BE6, 12BA6, 12AV6, 50C5, 35W4.",
+    },
     {
       name: "pilotLamp",
       label: "Pilot lamp on the rectifier's heater tap",
@@ -157,12 +181,24 @@ export const calculator = defineCalculator({
     { label: "Pilot lamp across a heater section", latex: tex`V_{lamp} = (I_h + I_{dc})\,\frac{R_{sec} R_{lamp}}{R_{sec} + R_{lamp}}` },
   ],
   references: [
-    { title: "RCA Receiving Tube Manual (RC-series)", detail: "Heater ratings on each type's data page; application notes on series heater strings and shunting a lower-current heater (from memory)" },
-    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Chapter on heaters and filaments: series operation in AC/DC receivers (from memory; chapter not checked)" },
+    {
+      title: "RCA Receiving Tube Manual (RC-series)",
+      detail: "Heater ratings on each type's data page; application notes on series heater strings and shunting a lower-current heater (from memory)",
+    },
+    {
+      title: "Radiotron Designer's Handbook, 4th ed.",
+      detail: "Chapter on heaters and filaments: series operation in AC/DC receivers (from memory; chapter not checked)",
+    },
     { title: "Built-in heater table", detail: HEATER_SOURCE },
     { title: "Pilot-lamp tap and warm-up figures", detail: TAP_SOURCE },
-    { title: "\"Longer Life for Dial Lamps\", period magazine note on the 35Z5GT", detail: "Lamp across the 7.5 V heater section with the plate fed through it: about 110 mA in the lamp, 90 mA in the section (read in a web reprint)" },
-    { title: "Nuts and Volts, Q&A \"Not Just For Looks\"", detail: "35W4 pilot-lamp tap: the plate current flows through lamp and section, and an open lamp overloads the section (read)" },
+    {
+      title: '"Longer Life for Dial Lamps", period magazine note on the 35Z5GT',
+      detail: "Lamp across the 7.5 V heater section with the plate fed through it: about 110 mA in the lamp, 90 mA in the section (read in a web reprint)",
+    },
+    {
+      title: 'Nuts and Volts, Q&A "Not Just For Looks"',
+      detail: "35W4 pilot-lamp tap: the plate current flows through lamp and section, and an open lamp overloads the section (read)",
+    },
     { title: "IEC 60063, Preferred number series for resistors and capacitors", detail: "E12 series" },
   ],
   whyItMatters:
@@ -215,7 +251,13 @@ export const calculator = defineCalculator({
         const p = h.voltage * rest;
         const r = suggestedRating(p);
         if (r.warning) warnings.push(r.warning);
-        const shunt: Shunt = { index: k, resistance, dissipation: p, suggestedRating: r.rating, nearestPreferred: resistance > 0 ? nearestPreferred(resistance, "E12") : 0 };
+        const shunt: Shunt = {
+          index: k,
+          resistance,
+          dissipation: p,
+          suggestedRating: r.rating,
+          nearestPreferred: resistance > 0 ? nearestPreferred(resistance, "E12") : 0,
+        };
         if (tubes) shunt.type = tubes[k];
         shunts.push(shunt);
         if (h.current >= iMax / (1 + MATCH)) nearlyAlike.push(tubes ? tubes[k] : `Heater ${k + 1}`);

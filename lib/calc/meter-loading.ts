@@ -37,11 +37,16 @@ export const meterLoadingSchema = z
     inputResistance: optionalQuantity("resistance", { positive: true, min: 1, max: 1e15, label: "Input resistance" }),
   })
   .superRefine((v, ctx) => {
-    if (v.trueVoltage === 0) ctx.addIssue({ code: "custom", path: ["trueVoltage"], message: "True voltage must not be zero: a meter reads 0 V across 0 V whatever its resistance" });
+    if (v.trueVoltage === 0)
+      ctx.addIssue({ code: "custom", path: ["trueVoltage"], message: "True voltage must not be zero: a meter reads 0 V across 0 V whatever its resistance" });
     const bySensitivity = v.ohmsPerVolt !== undefined || v.range !== undefined;
     if (v.inputResistance !== undefined) {
       if (bySensitivity) {
-        ctx.addIssue({ code: "custom", path: ["inputResistance"], message: "Input resistance: give either the input resistance or ohms per volt with a range, not both" });
+        ctx.addIssue({
+          code: "custom",
+          path: ["inputResistance"],
+          message: "Input resistance: give either the input resistance or ohms per volt with a range, not both",
+        });
       }
       return;
     }
@@ -80,7 +85,15 @@ export const calculator = defineCalculator({
     format: { error: "signed-percent" },
   },
   inputs: [
-    { name: "trueVoltage", label: "True voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The voltage with no meter connected (negative for bias or AVC)." },
+    {
+      name: "trueVoltage",
+      label: "True voltage",
+      unit: "V",
+      required: true,
+      control: "quantity",
+      quantity: "voltage",
+      help: "The voltage with no meter connected (negative for bias or AVC).",
+    },
     {
       name: "sourceResistance",
       label: "Source resistance",
@@ -90,9 +103,33 @@ export const calculator = defineCalculator({
       quantity: "resistance",
       help: "The resistance looking into the point: a plate's load resistor in parallel with the tube's plate resistance, a screen's dropping resistor, a grid or AVC resistor.",
     },
-    { name: "ohmsPerVolt", label: "Meter sensitivity", unit: "Ω/V", required: false, control: "quantity", quantity: "ratio", help: "Ohms per volt, from the dial (1000, 20 000 …). With the range below." },
-    { name: "range", label: "Range in use", unit: "V", required: false, control: "quantity", quantity: "voltage", help: "Full-scale voltage of the range the meter is set to." },
-    { name: "inputResistance", label: "Or the meter's input resistance", unit: "Ω", required: false, control: "quantity", quantity: "resistance", help: "For a VTVM or digital meter, which has the same resistance on every range (often 11 MΩ or 10 MΩ)." },
+    {
+      name: "ohmsPerVolt",
+      label: "Meter sensitivity",
+      unit: "Ω/V",
+      required: false,
+      control: "quantity",
+      quantity: "ratio",
+      help: "Ohms per volt, from the dial (1000, 20 000 …). With the range below.",
+    },
+    {
+      name: "range",
+      label: "Range in use",
+      unit: "V",
+      required: false,
+      control: "quantity",
+      quantity: "voltage",
+      help: "Full-scale voltage of the range the meter is set to.",
+    },
+    {
+      name: "inputResistance",
+      label: "Or the meter's input resistance",
+      unit: "Ω",
+      required: false,
+      control: "quantity",
+      quantity: "resistance",
+      help: "For a VTVM or digital meter, which has the same resistance on every range (often 11 MΩ or 10 MΩ).",
+    },
   ],
   outputs: [
     { name: "meterResistance", label: "Meter resistance", unit: "Ω" },
@@ -106,8 +143,14 @@ export const calculator = defineCalculator({
     { label: "Error", latex: tex`\varepsilon = \frac{V_\text{ind} - V}{V} = -\frac{R_s}{R_m + R_s}` },
   ],
   references: [
-    { title: "The ARRL Handbook for Radio Communications", detail: "Test equipment chapter: voltmeter sensitivity in ohms per volt and circuit loading (from memory)" },
-    { title: "F. E. Terman, Radio Engineers' Handbook", detail: "Measurements section: voltmeter resistance and the error it causes in high-resistance circuits (from memory)" },
+    {
+      title: "The ARRL Handbook for Radio Communications",
+      detail: "Test equipment chapter: voltmeter sensitivity in ohms per volt and circuit loading (from memory)",
+    },
+    {
+      title: "F. E. Terman, Radio Engineers' Handbook",
+      detail: "Measurements section: voltmeter resistance and the error it causes in high-resistance circuits (from memory)",
+    },
   ],
   whyItMatters:
     "A meter draws current from the point it measures. Across a stiff B+ line that costs nothing, but across a plate fed " +
@@ -137,7 +180,8 @@ export const calculator = defineCalculator({
       } else if (reading < 0.1 * range) {
         warnings.push({
           level: "info",
-          message: "The reading falls in the bottom tenth of the scale, where a moving-coil meter's accuracy (a percentage of full scale) is poorest; a lower range reads better, at a lower meter resistance.",
+          message:
+            "The reading falls in the bottom tenth of the scale, where a moving-coil meter's accuracy (a percentage of full scale) is poorest; a lower range reads better, at a lower meter resistance.",
         });
       }
       warnings.push(DC_ONLY);
@@ -151,7 +195,10 @@ export const calculator = defineCalculator({
     const steps: Step[] = [
       inputResistance !== undefined
         ? { label: "Meter resistance (as given)", latex: tex`R_m = ${rm}` }
-        : { label: "Meter resistance", latex: tex`R_m = S \times V_\text{range} = ${texQuantity(ohmsPerVolt!, "Ω/V", 4)} \times ${texQuantity(range!, "V", 4)} = ${rm}` },
+        : {
+            label: "Meter resistance",
+            latex: tex`R_m = S \times V_\text{range} = ${texQuantity(ohmsPerVolt!, "Ω/V", 4)} \times ${texQuantity(range!, "V", 4)} = ${rm}`,
+          },
       {
         label: "Reading: the meter and the source resistance form a voltage divider",
         latex: tex`V_\text{ind} = ${texQuantity(v, "V", 4)} \times \frac{${rm}}{${rm} + ${texQuantity(rs, "Ω", 4)}} = ${texQuantity(o.indicatedVoltage, "V", 4)}`,

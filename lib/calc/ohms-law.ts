@@ -142,7 +142,15 @@ export const calculator = defineCalculator({
     chart: null,
   },
   inputs: [
-    { name: "voltage", label: "Voltage across", unit: "V", required: false, control: "quantity", quantity: "voltage", help: "Enter exactly two of the four fields." },
+    {
+      name: "voltage",
+      label: "Voltage across",
+      unit: "V",
+      required: false,
+      control: "quantity",
+      quantity: "voltage",
+      help: "Enter exactly two of the four fields.",
+    },
     { name: "current", label: "Current through", unit: "A", required: false, control: "quantity", quantity: "current" },
     { name: "resistance", label: "Resistance", unit: "Ω", required: false, control: "quantity", quantity: "resistance" },
     { name: "power", label: "Power", unit: "W", required: false, control: "quantity", quantity: "power" },

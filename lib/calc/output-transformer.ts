@@ -25,7 +25,8 @@ export const outputTransformerSchema = z
       ctx.addIssue({
         code: "custom",
         path: ["secondaryImpedance"],
-        message: "Secondary impedance must be below the primary's: an output transformer steps a plate load of thousands of ohms down to the speaker. Check the two are not swapped.",
+        message:
+          "Secondary impedance must be below the primary's: an output transformer steps a plate load of thousands of ohms down to the speaker. Check the two are not swapped.",
       });
     }
   });
@@ -79,9 +80,33 @@ export const calculator = defineCalculator({
     chart: null,
   },
   inputs: [
-    { name: "primaryImpedance", label: "Primary impedance (plate load)", unit: "Ω", required: true, control: "quantity", quantity: "resistance", help: "The load the output tube wants, from its data sheet or the transformer's marking; plate to plate for push-pull." },
-    { name: "secondaryImpedance", label: "Secondary impedance (tap)", unit: "Ω", required: true, control: "quantity", quantity: "resistance", help: "The speaker impedance the winding or tap is made for." },
-    { name: "newLoad", label: "Speaker actually connected", unit: "Ω", required: false, control: "quantity", quantity: "resistance", help: "Optional: the speaker you mean to use on that tap." },
+    {
+      name: "primaryImpedance",
+      label: "Primary impedance (plate load)",
+      unit: "Ω",
+      required: true,
+      control: "quantity",
+      quantity: "resistance",
+      help: "The load the output tube wants, from its data sheet or the transformer's marking; plate to plate for push-pull.",
+    },
+    {
+      name: "secondaryImpedance",
+      label: "Secondary impedance (tap)",
+      unit: "Ω",
+      required: true,
+      control: "quantity",
+      quantity: "resistance",
+      help: "The speaker impedance the winding or tap is made for.",
+    },
+    {
+      name: "newLoad",
+      label: "Speaker actually connected",
+      unit: "Ω",
+      required: false,
+      control: "quantity",
+      quantity: "resistance",
+      help: "Optional: the speaker you mean to use on that tap.",
+    },
   ],
   outputs: [
     { name: "turnsRatio", label: "Turns ratio (primary : secondary)", unit: "" },
@@ -93,9 +118,15 @@ export const calculator = defineCalculator({
     { label: "Reflected impedance", latex: tex`Z_p' = n^2 Z_L = Z_p\,\frac{Z_L}{Z_s}` },
   ],
   references: [
-    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Chapter 5, transformers: the impedance ratio is the square of the turns ratio; output transformers (chapter cited from memory)" },
+    {
+      title: "Radiotron Designer's Handbook, 4th ed.",
+      detail: "Chapter 5, transformers: the impedance ratio is the square of the turns ratio; output transformers (chapter cited from memory)",
+    },
     { title: "The ARRL Handbook for Radio Communications", detail: "Impedance matching with transformers: Zp = n²·Zs (from memory)" },
-    { title: "Output-stage practice", detail: "Never run an output stage without a load; a speaker within a factor of two of the tap's impedance is usually tolerated (common practice)" },
+    {
+      title: "Output-stage practice",
+      detail: "Never run an output stage without a load; a speaker within a factor of two of the tap's impedance is usually tolerated (common practice)",
+    },
   ],
   whyItMatters:
     "The output tube delivers its power only into the plate load its data sheet names, and the transformer makes the speaker look like that " +

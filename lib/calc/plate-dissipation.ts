@@ -22,7 +22,11 @@ const TUBES = new Map<string, ReceivingTube>(RECEIVING_TUBES.map((t) => [t.type,
 /** Each tube's fixed notes, made once: compute only picks them up. */
 function tubeNotes(tube: ReceivingTube): { always: Warning[]; fromTable: Warning } {
   const always: Warning[] = [];
-  if (tube.sections === 2) always.push({ level: "info", message: `The ${tube.type}'s rating is per section: work out each section on its own. The data sheet also limits both together.` });
+  if (tube.sections === 2)
+    always.push({
+      level: "info",
+      message: `The ${tube.type}'s rating is per section: work out each section on its own. The data sheet also limits both together.`,
+    });
   if (tube.maxPeakPulseVoltage !== undefined) {
     always.push({
       level: "info",
@@ -65,7 +69,13 @@ const stageClassField = z
   .transform((raw, ctx): StageClass | undefined => {
     if (isBlank(raw)) return undefined;
     if (raw === "A" || raw === "AB") return raw;
-    const typed = typeof raw === "string" ? raw.trim().toUpperCase().replace(/^CLASS\s*/, "") : "";
+    const typed =
+      typeof raw === "string"
+        ? raw
+            .trim()
+            .toUpperCase()
+            .replace(/^CLASS\s*/, "")
+        : "";
     if (typed === "A" || typed === "AB") return typed;
     ctx.addIssue({ code: "custom", message: 'Stage class must be "A" or "AB"' });
     return z.NEVER;
@@ -139,14 +149,63 @@ export const calculator = defineCalculator({
   },
   inputs: [
     { name: "plateVoltage", label: "Plate voltage (to chassis)", unit: "V", required: true, control: "quantity", quantity: "voltage" },
-    { name: "cathodeVoltage", label: "Cathode voltage (to chassis)", unit: "V", required: false, default: 0, control: "quantity", quantity: "voltage", help: "Across the cathode resistor; 0 with fixed bias." },
+    {
+      name: "cathodeVoltage",
+      label: "Cathode voltage (to chassis)",
+      unit: "V",
+      required: false,
+      default: 0,
+      control: "quantity",
+      quantity: "voltage",
+      help: "Across the cathode resistor; 0 with fixed bias.",
+    },
     { name: "plateCurrent", label: "Plate current", unit: "A", required: true, control: "quantity", quantity: "current", help: "At idle, no signal." },
-    { name: "tube", label: "Tube type", unit: "", required: false, control: "select", options: TUBE_TYPES, help: "Its data-sheet maximum is used; or leave it blank and enter the maximum below." },
-    { name: "maxDissipation", label: "Maximum plate dissipation", unit: "W", required: false, control: "quantity", quantity: "power", help: "From the data sheet; replaces the table's figure when given." },
-    { name: "screenVoltage", label: "Screen voltage (to chassis)", unit: "V", required: false, control: "quantity", quantity: "voltage", help: "Pentodes and beam tubes, optional." },
+    {
+      name: "tube",
+      label: "Tube type",
+      unit: "",
+      required: false,
+      control: "select",
+      options: TUBE_TYPES,
+      help: "Its data-sheet maximum is used; or leave it blank and enter the maximum below.",
+    },
+    {
+      name: "maxDissipation",
+      label: "Maximum plate dissipation",
+      unit: "W",
+      required: false,
+      control: "quantity",
+      quantity: "power",
+      help: "From the data sheet; replaces the table's figure when given.",
+    },
+    {
+      name: "screenVoltage",
+      label: "Screen voltage (to chassis)",
+      unit: "V",
+      required: false,
+      control: "quantity",
+      quantity: "voltage",
+      help: "Pentodes and beam tubes, optional.",
+    },
     { name: "screenCurrent", label: "Screen current", unit: "A", required: false, control: "quantity", quantity: "current" },
-    { name: "maxScreenDissipation", label: "Maximum screen dissipation", unit: "W", required: false, control: "quantity", quantity: "power", help: "Replaces the table's figure when given." },
-    { name: "stageClass", label: "Stage class", unit: "", required: false, control: "select", options: STAGE_CLASSES, help: "Single-ended class A stages are designed near the maximum; push-pull class AB idles lower." },
+    {
+      name: "maxScreenDissipation",
+      label: "Maximum screen dissipation",
+      unit: "W",
+      required: false,
+      control: "quantity",
+      quantity: "power",
+      help: "Replaces the table's figure when given.",
+    },
+    {
+      name: "stageClass",
+      label: "Stage class",
+      unit: "",
+      required: false,
+      control: "select",
+      options: STAGE_CLASSES,
+      help: "Single-ended class A stages are designed near the maximum; push-pull class AB idles lower.",
+    },
   ],
   outputs: [
     { name: "dissipation", label: "Plate dissipation", unit: "W" },
@@ -162,16 +221,34 @@ export const calculator = defineCalculator({
     { label: "Screen dissipation", latex: tex`P_{g2} = (V_{g2} - V_k)\,I_{g2}` },
   ],
   references: [
-    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Chapter 13, audio power output stages: plate dissipation at the operating point (chapter cited from memory)" },
-    { title: "RCA receiving tube manual (RC-series) and tube data sheets", detail: "Maximum plate and screen dissipation of each type (the built-in table, from memory)" },
-    { title: "Output-stage biasing practice", detail: `Class AB push-pull idles at no more than about ${AB_IDLE_MARGIN * 100} % of the maximum plate dissipation (common practice)` },
+    {
+      title: "Radiotron Designer's Handbook, 4th ed.",
+      detail: "Chapter 13, audio power output stages: plate dissipation at the operating point (chapter cited from memory)",
+    },
+    {
+      title: "RCA receiving tube manual (RC-series) and tube data sheets",
+      detail: "Maximum plate and screen dissipation of each type (the built-in table, from memory)",
+    },
+    {
+      title: "Output-stage biasing practice",
+      detail: `Class AB push-pull idles at no more than about ${AB_IDLE_MARGIN * 100} % of the maximum plate dissipation (common practice)`,
+    },
   ],
   whyItMatters:
     "Every watt the plate does not pass on as signal is heat. Above the data sheet's maximum the plate glows red, the tube gasses and " +
     "its life shortens to hours, and a tube that runs away can take the output transformer or the rectifier with it. Worked out from the " +
     "plate and cathode voltages and the plate current, the dissipation tells you whether a set's bias is where the designer put it before you change anything.",
   compute(input: PlateDissipationInput) {
-    const { plateVoltage: vp, cathodeVoltage: vk, plateCurrent: ip, maxDissipation, screenVoltage: vs, screenCurrent: is, maxScreenDissipation, stageClass } = input;
+    const {
+      plateVoltage: vp,
+      cathodeVoltage: vk,
+      plateCurrent: ip,
+      maxDissipation,
+      screenVoltage: vs,
+      screenCurrent: is,
+      maxScreenDissipation,
+      stageClass,
+    } = input;
     const tube = input.tube === undefined ? undefined : TUBES.get(input.tube);
     const ratedDissipation = maxDissipation ?? tube!.maxPlateDissipation;
     const vpk = vp - vk;
@@ -196,10 +273,16 @@ export const calculator = defineCalculator({
       warnings.push(CLASS_A_NEAR_MAX);
     }
     if (tube?.maxPlateVoltage !== undefined && vpk > tube.maxPlateVoltage) {
-      warnings.push({ level: "caution", message: `${formatQuantity(vpk, "V")} plate to cathode is above the ${tube.type}'s ${formatQuantity(tube.maxPlateVoltage, "V")} maximum plate voltage (table, from memory of the data sheet).` });
+      warnings.push({
+        level: "caution",
+        message: `${formatQuantity(vpk, "V")} plate to cathode is above the ${tube.type}'s ${formatQuantity(tube.maxPlateVoltage, "V")} maximum plate voltage (table, from memory of the data sheet).`,
+      });
     }
     if (screenFractionOfMax !== null && screenFractionOfMax > 1) {
-      warnings.push({ level: "danger", message: `The screen dissipates ${formatQuantity(screenDissipation!, "W")}, ${percent(screenFractionOfMax)} of its maximum: beyond its rating; a screen grid this hot warps and glows.` });
+      warnings.push({
+        level: "danger",
+        message: `The screen dissipates ${formatQuantity(screenDissipation!, "W")}, ${percent(screenFractionOfMax)} of its maximum: beyond its rating; a screen grid this hot warps and glows.`,
+      });
     }
     if (tube) {
       const notes = NOTES.get(tube.type)!;

@@ -32,9 +32,10 @@ const partValue = z.unknown().transform((raw, ctx): number => {
   }
   if (!hit || !hit.ok) {
     first = first as ParseResult;
-    const message = !first.ok && /expected a resistance, got/.test(first.message)
-      ? "Value must be a resistance, capacitance or inductance (or a plain number)"
-      : `Value ${first.ok ? "" : first.message}`;
+    const message =
+      !first.ok && /expected a resistance, got/.test(first.message)
+        ? "Value must be a resistance, capacitance or inductance (or a plain number)"
+        : `Value ${first.ok ? "" : first.message}`;
     ctx.addIssue({ code: "custom", message });
     return z.NEVER;
   }

@@ -90,8 +90,16 @@ const FAST: Partial<Record<QuantityKind, RegExp>> = Object.fromEntries(
  * that is picofarads; lower-case pf and nf. Keys are lower case with µ written u.
  */
 const VINTAGE_CAPACITANCE: Record<string, number> = {
-  mfd: 1e-6, mf: 1e-6, uf: 1e-6, ufd: 1e-6,
-  mmf: 1e-12, mmfd: 1e-12, uuf: 1e-12, uufd: 1e-12, pf: 1e-12, pfd: 1e-12,
+  mfd: 1e-6,
+  mf: 1e-6,
+  uf: 1e-6,
+  ufd: 1e-6,
+  mmf: 1e-12,
+  mmfd: 1e-12,
+  uuf: 1e-12,
+  uufd: 1e-12,
+  pf: 1e-12,
+  pfd: 1e-12,
   nf: 1e-9,
 };
 
@@ -155,7 +163,8 @@ export function readQuantityText(raw: unknown, kind: QuantityKind): QuickResult 
   }
   const rkm = RKM.exec(text);
   if (rkm && kind !== "ratio") {
-    if (kind === "capacitance" && (rkm[2] === "R" || rkm[2] === "m")) return rkm[2] === "R" ? bareCapacitance(`${rkm[1]}.${rkm[3]}`) : ambiguousMilli(`${rkm[1]}.${rkm[3]}`);
+    if (kind === "capacitance" && (rkm[2] === "R" || rkm[2] === "m"))
+      return rkm[2] === "R" ? bareCapacitance(`${rkm[1]}.${rkm[3]}`) : ambiguousMilli(`${rkm[1]}.${rkm[3]}`);
     const scale = rkm[2] === "R" ? 1 : PREFIXES[rkm[2]];
     return finite(tidy(Number(`${rkm[1]}.${rkm[3]}`) * scale));
   }

@@ -89,11 +89,54 @@ export const calculator = defineCalculator({
   },
   inputs: [
     { name: "capacitance", label: "Capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance" },
-    { name: "ratedVoltage", label: "Rated voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The working voltage printed on the capacitor." },
-    { name: "seriesResistance", label: "Series resistor", unit: "Ω", required: false, control: "quantity", quantity: "resistance", help: "Optional: the current-limiting resistor between the supply and the capacitor." },
-    { name: "leakageFactor", label: "Leakage factor k", unit: "", required: false, default: 0.01, control: "quantity", quantity: "ratio", help: "From the data sheet's I ≤ k·C·V (µA, µF, V); 0.01 for general-purpose parts." },
-    { name: "leakageOffset", label: "Leakage offset", unit: "A", required: false, default: 0, control: "quantity", quantity: "current", help: "Added to k·C·V when the data sheet writes it so (e.g. + 4 µA)." },
-    { name: "leakageFloor", label: "Leakage floor", unit: "A", required: false, default: 3e-6, control: "quantity", quantity: "current", help: "The \"or … whichever is greater\" figure; 3 µA for general-purpose parts." },
+    {
+      name: "ratedVoltage",
+      label: "Rated voltage",
+      unit: "V",
+      required: true,
+      control: "quantity",
+      quantity: "voltage",
+      help: "The working voltage printed on the capacitor.",
+    },
+    {
+      name: "seriesResistance",
+      label: "Series resistor",
+      unit: "Ω",
+      required: false,
+      control: "quantity",
+      quantity: "resistance",
+      help: "Optional: the current-limiting resistor between the supply and the capacitor.",
+    },
+    {
+      name: "leakageFactor",
+      label: "Leakage factor k",
+      unit: "",
+      required: false,
+      default: 0.01,
+      control: "quantity",
+      quantity: "ratio",
+      help: "From the data sheet's I ≤ k·C·V (µA, µF, V); 0.01 for general-purpose parts.",
+    },
+    {
+      name: "leakageOffset",
+      label: "Leakage offset",
+      unit: "A",
+      required: false,
+      default: 0,
+      control: "quantity",
+      quantity: "current",
+      help: "Added to k·C·V when the data sheet writes it so (e.g. + 4 µA).",
+    },
+    {
+      name: "leakageFloor",
+      label: "Leakage floor",
+      unit: "A",
+      required: false,
+      default: 3e-6,
+      control: "quantity",
+      quantity: "current",
+      help: 'The "or … whichever is greater" figure; 3 µA for general-purpose parts.',
+    },
   ],
   outputs: [
     { name: "leakageLimit", label: "Leakage limit at rated voltage", unit: "A" },
@@ -104,7 +147,10 @@ export const calculator = defineCalculator({
   ],
   schema: reformingSchema,
   formulas: [
-    { label: "Leakage limit (data-sheet form)", latex: tex`I_{max} = \max\left(k\,C\,V + I_0,\; I_{floor}\right) \quad (C\text{ in }\mu\mathrm{F},\ V\text{ in V},\ I\text{ in }\mu\mathrm{A})` },
+    {
+      label: "Leakage limit (data-sheet form)",
+      latex: tex`I_{max} = \max\left(k\,C\,V + I_0,\; I_{floor}\right) \quad (C\text{ in }\mu\mathrm{F},\ V\text{ in V},\ I\text{ in }\mu\mathrm{A})`,
+    },
     { label: "Current into the discharged capacitor", latex: tex`I_{0} = \frac{V}{R}, \quad P_R = \frac{V^2}{R}` },
     { label: "Charging time constant", latex: tex`\tau = R\,C` },
     { label: "Schedule", latex: tex`V_n = n \times 0.1\,V_{rated}, \; n = 1 \ldots 10; \quad t_n \ge \max(10\,\mathrm{min},\ 5\tau)` },
@@ -112,10 +158,18 @@ export const calculator = defineCalculator({
   references: [
     {
       title: "Aluminium electrolytic capacitor data sheets, general-purpose radial series",
-      detail: "Leakage current I ≤ 0.01·C·V (µA) or 3 µA, whichever is greater, after 2 minutes at rated voltage, 20 °C; other series print other k, offsets and floors",
+      detail:
+        "Leakage current I ≤ 0.01·C·V (µA) or 3 µA, whichever is greater, after 2 minutes at rated voltage, 20 °C; other series print other k, offsets and floors",
     },
-    { title: "IEC 60384-4, Fixed capacitors: aluminium electrolytic capacitors", detail: "Sectional specification: leakage current measured at rated voltage after a stated time (clause not checked)" },
-    { title: "Restorers' bench practice", detail: "Reforming through a series resistor, raising the voltage in steps of about a tenth of rating and holding each until the leakage falls (common practice)" },
+    {
+      title: "IEC 60384-4, Fixed capacitors: aluminium electrolytic capacitors",
+      detail: "Sectional specification: leakage current measured at rated voltage after a stated time (clause not checked)",
+    },
+    {
+      title: "Restorers' bench practice",
+      detail:
+        "Reforming through a series resistor, raising the voltage in steps of about a tenth of rating and holding each until the leakage falls (common practice)",
+    },
   ],
   whyItMatters:
     "An electrolytic that has stood for years loses part of its oxide layer. Put straight onto full B+, it passes a large " +
@@ -171,15 +225,27 @@ export const calculator = defineCalculator({
     ];
     if (r !== undefined && o.initialCurrent !== null && o.resistorPower !== null && o.timeConstant !== null) {
       out.push(
-        { label: "Current if rated voltage meets the discharged capacitor", latex: tex`I_0 = \frac{V}{R} = \frac{${texQuantity(v, "V")}}{${texQuantity(r, "Ω")}} = ${texQuantity(o.initialCurrent, "A")}` },
-        { label: "Resistor dissipation with a shorted capacitor", latex: tex`P_R = \frac{V^2}{R} = \frac{(${texQuantity(v, "V")})^2}{${texQuantity(r, "Ω")}} = ${texQuantity(o.resistorPower, "W")}` },
-        { label: "Charging time constant (each step settles in about 5τ)", latex: tex`\tau = R\,C = ${texQuantity(r, "Ω")} \times ${texQuantity(c, "F")} = ${texQuantity(o.timeConstant, "s")}, \quad 5\tau = ${texQuantity(5 * o.timeConstant, "s")}` },
+        {
+          label: "Current if rated voltage meets the discharged capacitor",
+          latex: tex`I_0 = \frac{V}{R} = \frac{${texQuantity(v, "V")}}{${texQuantity(r, "Ω")}} = ${texQuantity(o.initialCurrent, "A")}`,
+        },
+        {
+          label: "Resistor dissipation with a shorted capacitor",
+          latex: tex`P_R = \frac{V^2}{R} = \frac{(${texQuantity(v, "V")})^2}{${texQuantity(r, "Ω")}} = ${texQuantity(o.resistorPower, "W")}`,
+        },
+        {
+          label: "Charging time constant (each step settles in about 5τ)",
+          latex: tex`\tau = R\,C = ${texQuantity(r, "Ω")} \times ${texQuantity(c, "F")} = ${texQuantity(o.timeConstant, "s")}, \quad 5\tau = ${texQuantity(5 * o.timeConstant, "s")}`,
+        },
       );
     }
     const steps = o.steps as { voltage: number; minutes: number; leakageLimit: number }[];
-    const rows = steps.map((s, n) => tex`${n + 1} & ${texQuantity(s.voltage, "V")} & ${s.minutes}\,\mathrm{min} & ${texQuantity(s.leakageLimit, "A")}`).join(" \\\\ ");
+    const rows = steps
+      .map((s, n) => tex`${n + 1} & ${texQuantity(s.voltage, "V")} & ${s.minutes}\,\mathrm{min} & ${texQuantity(s.leakageLimit, "A")}`)
+      .join(" \\\\ ");
     out.push({
-      label: "Schedule: raise to each voltage, hold at least the time shown and until the leakage falls below the figure (the same form at that voltage); stop if it rises",
+      label:
+        "Schedule: raise to each voltage, hold at least the time shown and until the leakage falls below the figure (the same form at that voltage); stop if it rises",
       latex: tex`\begin{array}{rrrr} n & V_n & t_n & I_{max}(V_n) \\ \hline ${rows} \end{array}`,
     });
     return out;

@@ -72,7 +72,13 @@ export function lcAttenuation(omega: number, l: number, c: number, r: number): n
 /** One stage's figures, before the ripple reaching it is known (rippleRms is filled by the caller). */
 export function stageFigures(s: StageInput, omega: number, stageCurrent: number): StageResult | LcStageResult {
   if (s.kind === "rc") {
-    return { attenuation: rcAttenuation(omega, s.resistance, s.capacitance), rippleRms: 0, dcDrop: stageCurrent * s.resistance, current: stageCurrent, resistance: s.resistance };
+    return {
+      attenuation: rcAttenuation(omega, s.resistance, s.capacitance),
+      rippleRms: 0,
+      dcDrop: stageCurrent * s.resistance,
+      current: stageCurrent,
+      resistance: s.resistance,
+    };
   }
   const r = s.resistance ?? DEFAULT_CHOKE_RESISTANCE;
   return {

@@ -47,9 +47,34 @@ export const calculator = defineCalculator({
     chart: "lamp-current",
   },
   inputs: [
-    { name: "lineVoltage", label: "Line voltage", unit: "V", required: false, default: 120, control: "quantity", quantity: "voltage", help: "The mains voltage (rms); the lamp is taken as rated for it." },
-    { name: "lampPower", label: "Lamp wattage", unit: "W", required: true, control: "quantity", quantity: "power", help: "The wattage printed on the lamp, at the line voltage." },
-    { name: "setPower", label: "Set's rated power", unit: "W", required: false, control: "quantity", quantity: "power", help: "Optional: the set's consumption from its label or service data, for an estimate of what it sees." },
+    {
+      name: "lineVoltage",
+      label: "Line voltage",
+      unit: "V",
+      required: false,
+      default: 120,
+      control: "quantity",
+      quantity: "voltage",
+      help: "The mains voltage (rms); the lamp is taken as rated for it.",
+    },
+    {
+      name: "lampPower",
+      label: "Lamp wattage",
+      unit: "W",
+      required: true,
+      control: "quantity",
+      quantity: "power",
+      help: "The wattage printed on the lamp, at the line voltage.",
+    },
+    {
+      name: "setPower",
+      label: "Set's rated power",
+      unit: "W",
+      required: false,
+      control: "quantity",
+      quantity: "power",
+      help: "Optional: the set's consumption from its label or service data, for an estimate of what it sees.",
+    },
   ],
   outputs: [
     { name: "lampHotResistance", label: "Lamp resistance, hot", unit: "Ω" },
@@ -64,13 +89,17 @@ export const calculator = defineCalculator({
     { label: "Lamp resistance, cold (tungsten)", latex: tex`R_{cold} \approx \frac{R_{hot}}{10}` },
     { label: "Most current (lamp alone across the line)", latex: tex`I_{max} = \frac{V}{R_{hot}} = \frac{P_{lamp}}{V}` },
     { label: "Set as a fixed resistance", latex: tex`R_{set} = \frac{V^2}{P_{set}}` },
-    { label: "Lamp between cold and hot", latex: tex`R_{lamp}(I) = \max\!\left(R_{cold},\; R_{hot}\,\frac{I}{I_{max}}\right), \quad I\,(R_{lamp}(I) + R_{set}) = V` },
+    {
+      label: "Lamp between cold and hot",
+      latex: tex`R_{lamp}(I) = \max\!\left(R_{cold},\; R_{hot}\,\frac{I}{I_{max}}\right), \quad I\,(R_{lamp}(I) + R_{set}) = V`,
+    },
   ],
   references: [
     { title: "The ARRL Handbook for Radio Communications", detail: "Electrical fundamentals chapter: Ohm's law and power, P = V²/R" },
     {
       title: "Tungsten filament lamps: resistance and characteristic equations",
-      detail: "Cold resistance about a tenth of hot (common practice); current ∝ V^0.54–0.58 from the lamp makers' characteristic equations (from memory), taken here as √V",
+      detail:
+        "Cold resistance about a tenth of hot (common practice); current ∝ V^0.54–0.58 from the lamp makers' characteristic equations (from memory), taken here as √V",
     },
     { title: "Restorers' bench practice", detail: "The series lamp (dim-bulb tester) for first power-up of an old set (common practice)" },
   ],
@@ -108,7 +137,8 @@ export const calculator = defineCalculator({
       if (p > 4 * ps) {
         warnings.push({
           level: "info",
-          message: "The lamp is far larger than the set: a fault would draw close to the lamp's full current before it glowed, so it limits little. A smaller lamp limits more.",
+          message:
+            "The lamp is far larger than the set: a fault would draw close to the lamp's full current before it glowed, so it limits little. A smaller lamp limits more.",
         });
       }
     }
@@ -126,23 +156,35 @@ export const calculator = defineCalculator({
         label: "Lamp resistance, hot",
         latex: tex`R_{hot} = \frac{V^2}{P_{lamp}} = \frac{(${texQuantity(v, "V")})^2}{${texQuantity(p, "W")}} = ${texQuantity(rHot, "Ω")}`,
       },
-      { label: "Lamp resistance, cold (tungsten, about a tenth)", latex: tex`R_{cold} \approx \frac{${texQuantity(rHot, "Ω")}}{10} = ${texQuantity(rCold, "Ω")}` },
+      {
+        label: "Lamp resistance, cold (tungsten, about a tenth)",
+        latex: tex`R_{cold} \approx \frac{${texQuantity(rHot, "Ω")}}{10} = ${texQuantity(rCold, "Ω")}`,
+      },
       {
         label: "Most current: a dead short in the set, lamp hot",
         latex: tex`I_{max} = \frac{P_{lamp}}{V} = \frac{${texQuantity(p, "W")}}{${texQuantity(v, "V")}} = ${texQuantity(maxCurrent, "A")}`,
       },
-      { label: "Surge while the lamp is cold", latex: tex`\frac{V}{R_{cold}} = \frac{${texQuantity(v, "V")}}{${texQuantity(rCold, "Ω")}} = ${texQuantity(v / rCold, "A")}` },
+      {
+        label: "Surge while the lamp is cold",
+        latex: tex`\frac{V}{R_{cold}} = \frac{${texQuantity(v, "V")}}{${texQuantity(rCold, "Ω")}} = ${texQuantity(v / rCold, "A")}`,
+      },
     ];
     if (ps !== undefined && setCurrent !== null && setVoltage !== null) {
       const rSet = (v * v) / ps;
       const rLamp = (v - setVoltage) / setCurrent;
       steps.push(
-        { label: "Set as a fixed resistance", latex: tex`R_{set} = \frac{V^2}{P_{set}} = \frac{(${texQuantity(v, "V")})^2}{${texQuantity(ps, "W")}} = ${texQuantity(rSet, "Ω")}` },
+        {
+          label: "Set as a fixed resistance",
+          latex: tex`R_{set} = \frac{V^2}{P_{set}} = \frac{(${texQuantity(v, "V")})^2}{${texQuantity(ps, "W")}} = ${texQuantity(rSet, "Ω")}`,
+        },
         {
           label: "Current through lamp and set (estimate)",
           latex: tex`I = \frac{V}{R_{lamp} + R_{set}} = \frac{${texQuantity(v, "V")}}{${texQuantity(rLamp, "Ω")} + ${texQuantity(rSet, "Ω")}} = ${texQuantity(setCurrent, "A")}`,
         },
-        { label: "Voltage the set sees (estimate)", latex: tex`V_{set} = I\,R_{set} = ${texQuantity(setCurrent, "A")} \times ${texQuantity(rSet, "Ω")} = ${texQuantity(setVoltage, "V")}` },
+        {
+          label: "Voltage the set sees (estimate)",
+          latex: tex`V_{set} = I\,R_{set} = ${texQuantity(setCurrent, "A")} \times ${texQuantity(rSet, "Ω")} = ${texQuantity(setVoltage, "V")}`,
+        },
       );
     }
     return steps;

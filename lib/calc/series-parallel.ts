@@ -26,10 +26,7 @@ export const seriesParallelSchema = z.object({
     (v) => (typeof v === "string" ? blankToUndefined(v.trim().toUpperCase()) : blankToUndefined(v)),
     z.enum(SERIES_NAMES, { error: `Series must be one of ${SERIES_NAMES.join(", ")}` }).default("E12"),
   ),
-  mode: z.preprocess(
-    (v) => (typeof v === "string" ? v.trim().toLowerCase() : v),
-    z.enum(MODES, { error: 'Mode must be "series", "parallel" or "either"' }),
-  ),
+  mode: z.preprocess((v) => (typeof v === "string" ? v.trim().toLowerCase() : v), z.enum(MODES, { error: 'Mode must be "series", "parallel" or "either"' })),
 });
 
 export type SeriesParallelInput = z.output<typeof seriesParallelSchema>;
@@ -72,9 +69,34 @@ export const calculator = defineCalculator({
     format: { error: "signed-percent" },
   },
   inputs: [
-    { name: "target", label: "Value wanted", unit: "Ω", required: true, control: "quantity", quantity: "resistance", help: "2 Ω to 10 MΩ, e.g. 3.3k, 5k13, 27.5k." },
-    { name: "series", label: "Series", unit: "", required: false, default: "E12", control: "select", options: SERIES_NAMES, help: "The values in the drawer: E6 ±20 %, E12 ±10 %, E24 ±5 %, E48 ±2 %, E96 ±1 %." },
-    { name: "mode", label: "Connection", unit: "", required: true, control: "select", options: MODES, help: "Series, parallel, or either (whichever comes closer)." },
+    {
+      name: "target",
+      label: "Value wanted",
+      unit: "Ω",
+      required: true,
+      control: "quantity",
+      quantity: "resistance",
+      help: "2 Ω to 10 MΩ, e.g. 3.3k, 5k13, 27.5k.",
+    },
+    {
+      name: "series",
+      label: "Series",
+      unit: "",
+      required: false,
+      default: "E12",
+      control: "select",
+      options: SERIES_NAMES,
+      help: "The values in the drawer: E6 ±20 %, E12 ±10 %, E24 ±5 %, E48 ±2 %, E96 ±1 %.",
+    },
+    {
+      name: "mode",
+      label: "Connection",
+      unit: "",
+      required: true,
+      control: "select",
+      options: MODES,
+      help: "Series, parallel, or either (whichever comes closer).",
+    },
   ],
   outputs: [
     { name: "first", label: "First part (the smaller)", unit: "Ω" },
@@ -103,7 +125,10 @@ export const calculator = defineCalculator({
     const { first, second, combined, error } = found.pair;
     const warnings: Warning[] = [];
     if (preferredBelow(x, series) === x) {
-      warnings.push({ level: "info", message: `${formatQuantity(x, "Ω", 4)} is itself an ${series} value: one part does it. The pair is for when that part is not to hand.` });
+      warnings.push({
+        level: "info",
+        message: `${formatQuantity(x, "Ω", 4)} is itself an ${series} value: one part does it. The pair is for when that part is not to hand.`,
+      });
     }
     warnings.push(NOMINAL[series]);
     return { outputs: { first, second, mode: found.mode, combined, error }, warnings };

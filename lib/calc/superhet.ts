@@ -82,10 +82,43 @@ export const calculator = defineCalculator({
     chart: "superhet-dial",
   },
   inputs: [
-    { name: "signalFrequency", label: "Signal frequency", unit: "Hz", required: true, control: "quantity", quantity: "frequency", help: "The station the set is tuned to, e.g. 1000 kHz." },
-    { name: "intermediateFrequency", label: "Intermediate frequency", unit: "Hz", required: false, default: 455e3, control: "quantity", quantity: "frequency", help: "455 kHz for most AM sets (some older ones 175, 262 or 465 kHz); 10.7 MHz for FM." },
-    { name: "oscillatorAbove", label: "Oscillator above the signal", unit: "", required: false, default: true, control: "boolean", help: "Usual for broadcast sets; clear it for an oscillator below the signal." },
-    { name: "loadedQ", label: "Loaded Q of the front end (optional)", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Of the one tuned circuit ahead of the mixer, for the image rejection; typically 50–100 for a broadcast aerial coil." },
+    {
+      name: "signalFrequency",
+      label: "Signal frequency",
+      unit: "Hz",
+      required: true,
+      control: "quantity",
+      quantity: "frequency",
+      help: "The station the set is tuned to, e.g. 1000 kHz.",
+    },
+    {
+      name: "intermediateFrequency",
+      label: "Intermediate frequency",
+      unit: "Hz",
+      required: false,
+      default: 455e3,
+      control: "quantity",
+      quantity: "frequency",
+      help: "455 kHz for most AM sets (some older ones 175, 262 or 465 kHz); 10.7 MHz for FM.",
+    },
+    {
+      name: "oscillatorAbove",
+      label: "Oscillator above the signal",
+      unit: "",
+      required: false,
+      default: true,
+      control: "boolean",
+      help: "Usual for broadcast sets; clear it for an oscillator below the signal.",
+    },
+    {
+      name: "loadedQ",
+      label: "Loaded Q of the front end (optional)",
+      unit: "",
+      required: false,
+      control: "quantity",
+      quantity: "ratio",
+      help: "Of the one tuned circuit ahead of the mixer, for the image rejection; typically 50–100 for a broadcast aerial coil.",
+    },
   ],
   outputs: [
     { name: "oscillatorFrequency", label: "Oscillator frequency", unit: "Hz" },
@@ -97,12 +130,24 @@ export const calculator = defineCalculator({
   schema: superhetSchema,
   formulas: [
     { label: "Oscillator", latex: tex`f_o = f_s \pm f_\text{IF}\quad(+\ \text{above},\ -\ \text{below})` },
-    { label: "Image", latex: tex`f_\text{im} = \left|f_s \pm 2 f_\text{IF}\right|, \qquad \left|f_\text{im} - f_o\right| = f_\text{IF}\ \text{or}\ f_\text{im} + f_o = f_\text{IF}` },
-    { label: "Image rejection of one tuned circuit", latex: tex`\alpha = \sqrt{1 + Q^2 \rho^2}, \qquad \rho = \frac{f_\text{im}}{f_s} - \frac{f_s}{f_\text{im}}` },
+    {
+      label: "Image",
+      latex: tex`f_\text{im} = \left|f_s \pm 2 f_\text{IF}\right|, \qquad \left|f_\text{im} - f_o\right| = f_\text{IF}\ \text{or}\ f_\text{im} + f_o = f_\text{IF}`,
+    },
+    {
+      label: "Image rejection of one tuned circuit",
+      latex: tex`\alpha = \sqrt{1 + Q^2 \rho^2}, \qquad \rho = \frac{f_\text{im}}{f_s} - \frac{f_s}{f_\text{im}}`,
+    },
   ],
   references: [
-    { title: "Kennedy & Davis, Electronic Communication Systems", detail: "Receivers chapter: the superheterodyne, image frequency and its rejection, the worked example at 1000 kHz and 25 MHz (from memory)" },
-    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Chapter on frequency changers and the superheterodyne: oscillator tracking and second-channel (image) interference (chapter cited from memory)" },
+    {
+      title: "Kennedy & Davis, Electronic Communication Systems",
+      detail: "Receivers chapter: the superheterodyne, image frequency and its rejection, the worked example at 1000 kHz and 25 MHz (from memory)",
+    },
+    {
+      title: "Radiotron Designer's Handbook, 4th ed.",
+      detail: "Chapter on frequency changers and the superheterodyne: oscillator tracking and second-channel (image) interference (chapter cited from memory)",
+    },
     { title: "The ARRL Handbook for Radio Communications", detail: "Receivers chapter: mixing, IF choice and image response" },
   ],
   whyItMatters:
@@ -157,7 +202,10 @@ export const calculator = defineCalculator({
     if (q !== undefined && o.imageRejection !== null && o.imageRejectionDb !== null) {
       const rho = o.imageFrequency / fs - fs / o.imageFrequency;
       steps.push(
-        { label: "Image ratio ρ", latex: tex`\rho = \frac{${hz(o.imageFrequency)}}{${hz(fs)}} - \frac{${hz(fs)}}{${hz(o.imageFrequency)}} = ${rho.toFixed(4)}` },
+        {
+          label: "Image ratio ρ",
+          latex: tex`\rho = \frac{${hz(o.imageFrequency)}}{${hz(fs)}} - \frac{${hz(fs)}}{${hz(o.imageFrequency)}} = ${rho.toFixed(4)}`,
+        },
         {
           label: "Image rejection of one tuned circuit",
           latex: tex`\alpha = \sqrt{1 + ${q}^2 \times ${rho.toFixed(4)}^2} = ${o.imageRejection.toPrecision(4)} \;(${o.imageRejectionDb.toFixed(1)}\,\mathrm{dB})`,

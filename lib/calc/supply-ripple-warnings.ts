@@ -45,9 +45,10 @@ export function rippleWarnings(input: SupplyRippleInput, fr: number, stages: rea
     // Common practice: keep the LC resonance at a third of the ripple frequency or lower.
     if (f0 > fr / 3) {
       const where = f0 >= fr ? "above" : "near";
-      const effect = lc.attenuation >= 1
-        ? `multiplies the ripple by ${lc.attenuation.toPrecision(3)} instead of reducing it`
-        : `passes ${lc.attenuation.toPrecision(2)} of the ripple, far less smoothing than a choke should give`;
+      const effect =
+        lc.attenuation >= 1
+          ? `multiplies the ripple by ${lc.attenuation.toPrecision(3)} instead of reducing it`
+          : `passes ${lc.attenuation.toPrecision(2)} of the ripple, far less smoothing than a choke should give`;
       warnings.push({
         level: "caution",
         message:

@@ -76,13 +76,50 @@ export const calculator = defineCalculator({
     chart: "ripple",
   },
   inputs: [
-    { name: "loadCurrent", label: "Load current", unit: "A", required: true, control: "quantity", quantity: "current", help: "Total DC current the supply delivers." },
-    { name: "capacitance", label: "Reservoir capacitance", unit: "F", required: true, control: "quantity", quantity: "capacitance", help: "The first capacitor after the rectifier." },
-    { name: "lineFrequency", label: "Mains frequency", unit: "Hz", required: false, default: 60, control: "quantity", quantity: "frequency" },
-    { name: "rectifier", label: "Rectifier", unit: "", required: true, control: "select", options: RECTIFIERS, help: "Full-wave (two diodes or a bridge, or a 5Y3-type tube) ripples at twice the mains frequency." },
-    { name: "rectifierTube", label: "Rectifier tube (optional)", unit: "", required: false, control: "select", options: RECTIFIER_TYPES, blankLabel: "Not given", help: "Checks the reservoir and load current against the tube's data-sheet limits." },
     {
-      name: "stages", label: "Filter stages", unit: "", required: false, control: "list",
+      name: "loadCurrent",
+      label: "Load current",
+      unit: "A",
+      required: true,
+      control: "quantity",
+      quantity: "current",
+      help: "Total DC current the supply delivers.",
+    },
+    {
+      name: "capacitance",
+      label: "Reservoir capacitance",
+      unit: "F",
+      required: true,
+      control: "quantity",
+      quantity: "capacitance",
+      help: "The first capacitor after the rectifier.",
+    },
+    { name: "lineFrequency", label: "Mains frequency", unit: "Hz", required: false, default: 60, control: "quantity", quantity: "frequency" },
+    {
+      name: "rectifier",
+      label: "Rectifier",
+      unit: "",
+      required: true,
+      control: "select",
+      options: RECTIFIERS,
+      help: "Full-wave (two diodes or a bridge, or a 5Y3-type tube) ripples at twice the mains frequency.",
+    },
+    {
+      name: "rectifierTube",
+      label: "Rectifier tube (optional)",
+      unit: "",
+      required: false,
+      control: "select",
+      options: RECTIFIER_TYPES,
+      blankLabel: "Not given",
+      help: "Checks the reservoir and load current against the tube's data-sheet limits.",
+    },
+    {
+      name: "stages",
+      label: "Filter stages",
+      unit: "",
+      required: false,
+      control: "list",
       help: 'Each stage: { kind: "rc", resistance, capacitance } or { kind: "lc", inductance, capacitance, resistance (the choke\'s DC resistance, 100 Ω if blank) }, in order after the reservoir; each may give current (its own DC load, the whole load current if blank).',
     },
   ],
@@ -98,19 +135,26 @@ export const calculator = defineCalculator({
     { label: "Ripple frequency", latex: tex`f_r = 2f \;(\text{full-wave}), \quad f_r = f \;(\text{half-wave})` },
     { label: "Reservoir ripple", latex: tex`V_{pp} = \frac{I}{f_r\,C}, \quad V_{rms} = \frac{V_{pp}}{2\sqrt{3}}` },
     { label: "RC stage", latex: tex`\frac{V_{out}}{V_{in}} = \frac{X_C}{\sqrt{R^2 + X_C^2}}, \quad X_C = \frac{1}{2\pi f_r C}, \quad \Delta V_{dc} = I_n R` },
-    { label: "LC stage (choke of resistance R)", latex: tex`\frac{V_{out}}{V_{in}} = \frac{1}{\sqrt{(1 - \omega^2 LC)^2 + (\omega R C)^2}}, \quad \omega = 2\pi f_r, \quad \Delta V_{dc} = I_n R` },
+    {
+      label: "LC stage (choke of resistance R)",
+      latex: tex`\frac{V_{out}}{V_{in}} = \frac{1}{\sqrt{(1 - \omega^2 LC)^2 + (\omega R C)^2}}, \quad \omega = 2\pi f_r, \quad \Delta V_{dc} = I_n R`,
+    },
     { label: "LC resonance and its peak", latex: tex`f_0 = \frac{1}{2\pi\sqrt{LC}}, \quad Q = \frac{1}{R}\sqrt{\frac{L}{C}}` },
   ],
   references: [
     {
       title: "Radiotron Designer's Handbook, 4th ed.",
-      detail: "Ch. 30, rectification: capacitor-input filter and reservoir ripple; ch. 34, smoothing filters: RC and LC sections, resonance of the LC section (chapter numbers from memory)",
+      detail:
+        "Ch. 30, rectification: capacitor-input filter and reservoir ripple; ch. 34, smoothing filters: RC and LC sections, resonance of the LC section (chapter numbers from memory)",
     },
     {
       title: "The ARRL Handbook for Radio Communications",
       detail: "Power supplies chapter: capacitor-input filters, ripple, choke resistance, choke-input filters and critical inductance",
     },
-    { title: "Rectifier tube data sheets (RCA receiving tube manual and makers' sheets)", detail: "Maximum filter-input capacitor and DC output current of each type (from memory)" },
+    {
+      title: "Rectifier tube data sheets (RCA receiving tube manual and makers' sheets)",
+      detail: "Maximum filter-input capacitor and DC output current of each type (from memory)",
+    },
   ],
   whyItMatters:
     "Hum in a restored set usually means too much ripple on B+: a dried-out reservoir or filter capacitor, or a " +
@@ -147,9 +191,8 @@ export const calculator = defineCalculator({
     const steps: Step[] = [
       {
         label: "Ripple frequency",
-        latex: rectifier === "full-wave"
-          ? tex`f_r = 2f = 2 \times ${texQuantity(f, "Hz")} = ${texQuantity(fr, "Hz")}`
-          : tex`f_r = f = ${texQuantity(fr, "Hz")}`,
+        latex:
+          rectifier === "full-wave" ? tex`f_r = 2f = 2 \times ${texQuantity(f, "Hz")} = ${texQuantity(fr, "Hz")}` : tex`f_r = f = ${texQuantity(fr, "Hz")}`,
       },
       {
         label: "Ripple on the reservoir, peak to peak: the whole load current drains it between charging peaks",
@@ -164,7 +207,10 @@ export const calculator = defineCalculator({
     (input.stages ?? []).forEach((s, n) => {
       const out = o.stages[n] as unknown as StageResult;
       steps.push(...stageSteps(s, out, n + 1, 2 * Math.PI * fr, i));
-      steps.push({ label: `Stage ${n + 1}: ripple after it, the ripple reaching it times the fraction passed`, latex: tex`V_{rms} = ${texQuantity(before, "V")} \times ${out.attenuation.toPrecision(3)} = ${texQuantity(out.rippleRms, "V")}` });
+      steps.push({
+        label: `Stage ${n + 1}: ripple after it, the ripple reaching it times the fraction passed`,
+        latex: tex`V_{rms} = ${texQuantity(before, "V")} \times ${out.attenuation.toPrecision(3)} = ${texQuantity(out.rippleRms, "V")}`,
+      });
       before = out.rippleRms;
     });
     return steps;
@@ -175,7 +221,10 @@ export const calculator = defineCalculator({
 function stageSteps(s: StageInput, out: StageResult, n: number, omega: number, load: number): Step[] {
   const att = out.attenuation.toPrecision(3);
   const tI = texQuantity(out.current, "A");
-  const whose = s.current === undefined ? `the whole ${formatQuantity(load, "A")} load current, since no current was given for this stage` : "the current this stage carries";
+  const whose =
+    s.current === undefined
+      ? `the whole ${formatQuantity(load, "A")} load current, since no current was given for this stage`
+      : "the current this stage carries";
   const xc = 1 / (omega * s.capacitance);
   if (s.kind === "rc") {
     return [
@@ -183,7 +232,10 @@ function stageSteps(s: StageInput, out: StageResult, n: number, omega: number, l
         label: `Stage ${n} (RC): the capacitor's reactance at the ripple frequency, and the share of ripple the resistor–capacitor divider lets through`,
         latex: tex`X_C = \frac{1}{2\pi f_r C} = ${texQuantity(xc, "Ω")}, \quad \frac{X_C}{\sqrt{R^2 + X_C^2}} = \frac{${texQuantity(xc, "Ω")}}{\sqrt{(${texQuantity(s.resistance, "Ω")})^2 + (${texQuantity(xc, "Ω")})^2}} = ${att}`,
       },
-      { label: `Stage ${n} (RC): DC drop across the resistor, Ohm's law with ${whose}`, latex: tex`\Delta V = I_{${n}} R = ${tI} \times ${texQuantity(s.resistance, "Ω")} = ${texQuantity(out.dcDrop, "V")}` },
+      {
+        label: `Stage ${n} (RC): DC drop across the resistor, Ohm's law with ${whose}`,
+        latex: tex`\Delta V = I_{${n}} R = ${tI} \times ${texQuantity(s.resistance, "Ω")} = ${texQuantity(out.dcDrop, "V")}`,
+      },
     ];
   }
   const lc = out as LcStageResult;
@@ -204,6 +256,9 @@ function stageSteps(s: StageInput, out: StageResult, n: number, omega: number, l
       label: `Stage ${n} (LC): the share of ripple that gets through, the choke's resistance included. With the ripple frequency well above f₀ this is close to 1/(ω²LC − 1)`,
       latex: tex`\frac{1}{\sqrt{(1 - \omega^2 LC)^2 + (\omega R C)^2}} = \frac{1}{\sqrt{(1 - ${texQuantity(x, "")})^2 + (${texQuantity(y, "")})^2}} = ${att}`,
     },
-    { label: `Stage ${n} (LC): DC drop across the choke's winding resistance, Ohm's law with ${whose}`, latex: tex`\Delta V = I_{${n}} R = ${tI} \times ${texQuantity(r, "Ω")} = ${texQuantity(out.dcDrop, "V")}` },
+    {
+      label: `Stage ${n} (LC): DC drop across the choke's winding resistance, Ohm's law with ${whose}`,
+      latex: tex`\Delta V = I_{${n}} R = ${tI} \times ${texQuantity(r, "Ω")} = ${texQuantity(out.dcDrop, "V")}`,
+    },
   ];
 }

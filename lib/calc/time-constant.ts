@@ -116,8 +116,7 @@ export const calculator = defineCalculator({
     }
     warnings.push({
       level: "info",
-      message:
-        "Electrolytic capacitors can recover some charge after being discharged (dielectric absorption); measure again before touching.",
+      message: "Electrolytic capacitors can recover some charge after being discharged (dielectric absorption); measure again before touching.",
     });
 
     return { outputs: { timeConstant: tau, fiveTau: 5 * tau, timeToTarget, voltageAtElapsed }, warnings };

@@ -12,13 +12,20 @@ import type { Warning } from "./types";
 export function regionWarnings(bPlus: number, ra: number, rk: number, ip: number, ep: number): Warning[] {
   const resistorLimit = bPlus / (ra + rk);
   if (ip < 1e-6 && ip < 0.5 * resistorLimit) {
-    return [{ level: "caution", message: `The tube is close to cut-off: it passes only ${formatQuantity(ip, "A")}, and most of the supply is still on its plate. Gain and linearity will be poor; use a smaller cathode resistor.` }];
+    return [
+      {
+        level: "caution",
+        message: `The tube is close to cut-off: it passes only ${formatQuantity(ip, "A")}, and most of the supply is still on its plate. Gain and linearity will be poor; use a smaller cathode resistor.`,
+      },
+    ];
   }
   if (ip >= 0.9 * resistorLimit) {
-    return [{
-      level: "caution",
-      message: `The tube is bottomed (saturated): only ${formatQuantity(ep, "V")} is left from plate to cathode, ${Math.round((100 * ep) / bPlus)}% of the supply, because the plate resistor limits the current. The plate cannot swing lower, so signal peaks clip; use a smaller plate resistor or a larger cathode resistor.`,
-    }];
+    return [
+      {
+        level: "caution",
+        message: `The tube is bottomed (saturated): only ${formatQuantity(ep, "V")} is left from plate to cathode, ${Math.round((100 * ep) / bPlus)}% of the supply, because the plate resistor limits the current. The plate cannot swing lower, so signal peaks clip; use a smaller plate resistor or a larger cathode resistor.`,
+      },
+    ];
   }
   return [];
 }

@@ -54,8 +54,7 @@ const bypassField = z
   .optional();
 
 // Ranges are wide enough for any receiving triode and keep every figure finite.
-const param = (label: string, min: number, max: number) =>
-  optionalQuantity("ratio", { positive: true, min, max, label }).optional();
+const param = (label: string, min: number, max: number) => optionalQuantity("ratio", { positive: true, min, max, label }).optional();
 
 export const triodeStageSchema = z
   .object({
@@ -75,7 +74,11 @@ export const triodeStageSchema = z
     if (v.tube !== undefined) return;
     const missing = MODEL_KEYS.filter((k) => v[k] === undefined);
     if (missing.length === MODEL_KEYS.length) {
-      ctx.addIssue({ code: "custom", path: ["tube"], message: "Choose a tube type, or enter all five parameters of Koren's triode model (µ, x and the grid, plate and knee constants)" });
+      ctx.addIssue({
+        code: "custom",
+        path: ["tube"],
+        message: "Choose a tube type, or enter all five parameters of Koren's triode model (µ, x and the grid, plate and knee constants)",
+      });
       return;
     }
     for (const k of missing) {
@@ -131,19 +134,97 @@ export const calculator = defineCalculator({
     advanced: { title: "Koren's triode model: override the table, or model another tube", fields: ["mu", "ex", "kg1", "kp", "kvb"] },
   },
   inputs: [
-    { name: "tube", label: "Tube type", unit: "", required: false, control: "select", options: TRIODE_NAMES, blankLabel: "None (enter the figures below)", help: "Pick a type from the built-in table, or leave it blank and enter the five parameters of Koren's model below." },
+    {
+      name: "tube",
+      label: "Tube type",
+      unit: "",
+      required: false,
+      control: "select",
+      options: TRIODE_NAMES,
+      blankLabel: "None (enter the figures below)",
+      help: "Pick a type from the built-in table, or leave it blank and enter the five parameters of Koren's model below.",
+    },
     // The five parameters of Koren's improved triode model, named and written as his article sets them;
     // SPICE listings spell them MU, EX, KG1, KP, KVB, and the API keeps mu, ex, kg1, kp, kvb.
-    { name: "mu", label: "Amplification factor", symbol: "\\mu", unit: "", required: false, control: "quantity", quantity: "ratio", help: `As ${KOREN_CITE} uses it. With a tube chosen, any parameter you enter replaces the table's.` },
-    { name: "ex", label: "Exponent", symbol: "x", unit: "", required: false, control: "quantity", quantity: "ratio", help: "The power the plate current follows (EX in SPICE listings): between 1 and 3, usually 1.2–1.4." },
-    { name: "kg1", label: "Grid constant", symbol: "K_{G1}", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Divides the current: a larger value, less current (KG1 in SPICE listings)." },
-    { name: "kp", label: "Plate constant", symbol: "K_P", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Sets how the curves bend near cut-off (KP in SPICE listings)." },
-    { name: "kvb", label: "Knee constant", symbol: "K_{VB}", unit: "", required: false, control: "quantity", quantity: "ratio", help: "Sets the knee at low plate voltage, in V² (KVB in SPICE listings)." },
-    { name: "supplyVoltage", label: "Supply voltage (B+)", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "At the top of the plate resistor." },
+    {
+      name: "mu",
+      label: "Amplification factor",
+      symbol: "\\mu",
+      unit: "",
+      required: false,
+      control: "quantity",
+      quantity: "ratio",
+      help: `As ${KOREN_CITE} uses it. With a tube chosen, any parameter you enter replaces the table's.`,
+    },
+    {
+      name: "ex",
+      label: "Exponent",
+      symbol: "x",
+      unit: "",
+      required: false,
+      control: "quantity",
+      quantity: "ratio",
+      help: "The power the plate current follows (EX in SPICE listings): between 1 and 3, usually 1.2–1.4.",
+    },
+    {
+      name: "kg1",
+      label: "Grid constant",
+      symbol: "K_{G1}",
+      unit: "",
+      required: false,
+      control: "quantity",
+      quantity: "ratio",
+      help: "Divides the current: a larger value, less current (KG1 in SPICE listings).",
+    },
+    {
+      name: "kp",
+      label: "Plate constant",
+      symbol: "K_P",
+      unit: "",
+      required: false,
+      control: "quantity",
+      quantity: "ratio",
+      help: "Sets how the curves bend near cut-off (KP in SPICE listings).",
+    },
+    {
+      name: "kvb",
+      label: "Knee constant",
+      symbol: "K_{VB}",
+      unit: "",
+      required: false,
+      control: "quantity",
+      quantity: "ratio",
+      help: "Sets the knee at low plate voltage, in V² (KVB in SPICE listings).",
+    },
+    {
+      name: "supplyVoltage",
+      label: "Supply voltage (B+)",
+      unit: "V",
+      required: true,
+      control: "quantity",
+      quantity: "voltage",
+      help: "At the top of the plate resistor.",
+    },
     { name: "plateResistor", label: "Plate resistor Ra", unit: "Ω", required: true, control: "quantity", quantity: "resistance" },
-    { name: "cathodeResistor", label: "Cathode resistor Rk", unit: "Ω", required: true, control: "quantity", quantity: "resistance", help: "0 is allowed: the grid then sits at 0 V bias." },
+    {
+      name: "cathodeResistor",
+      label: "Cathode resistor Rk",
+      unit: "Ω",
+      required: true,
+      control: "quantity",
+      quantity: "resistance",
+      help: "0 is allowed: the grid then sits at 0 V bias.",
+    },
     { name: "cathodeBypassed", label: "Cathode resistor bypassed", unit: "", required: false, default: true, control: "boolean" },
-    { name: "loadResistance", label: "Next stage's load (grid resistor)", unit: "Ω", required: false, control: "quantity", quantity: "resistance", help: "Optional: it sits in parallel with Ra for the signal." },
+    {
+      name: "loadResistance",
+      label: "Next stage's load (grid resistor)",
+      unit: "Ω",
+      required: false,
+      control: "quantity",
+      quantity: "resistance",
+      help: "Optional: it sits in parallel with Ra for the signal.",
+    },
   ],
   outputs: [
     { name: "plateVoltage", label: "Plate voltage, plate to cathode (what the tube sees)", unit: "V" },
@@ -164,9 +245,21 @@ export const calculator = defineCalculator({
     { label: "Gain, cathode not bypassed", latex: tex`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k}` },
   ],
   references: [
-    { title: "N. L. Koren, Improved vacuum tube models for SPICE simulations, Glass Audio 8(5), 1996, p. 18; revised online edition, Part 1: Models and example, 20 March 2003", detail: "The improved triode equations for E1 and Ip and the parameter table: amplification factor µ, exponent x (EX), grid constant K_G1, plate constant K_P, knee constant K_VB; parameters recalled from memory" },
-    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Chapter 12, resistance-capacitance coupled triode amplifiers: stage gain µRL/(rp + RL) and the effect of an unbypassed cathode resistor (cited from memory)" },
-    { title: "Tube data sheets (12AX7, 12AT7, 12AU7, 6SN7, 6SL7 and others)", detail: "Typical operating characteristics and maximum plate dissipation per section (from memory)" },
+    {
+      title:
+        "N. L. Koren, Improved vacuum tube models for SPICE simulations, Glass Audio 8(5), 1996, p. 18; revised online edition, Part 1: Models and example, 20 March 2003",
+      detail:
+        "The improved triode equations for E1 and Ip and the parameter table: amplification factor µ, exponent x (EX), grid constant K_G1, plate constant K_P, knee constant K_VB; parameters recalled from memory",
+    },
+    {
+      title: "Radiotron Designer's Handbook, 4th ed.",
+      detail:
+        "Chapter 12, resistance-capacitance coupled triode amplifiers: stage gain µRL/(rp + RL) and the effect of an unbypassed cathode resistor (cited from memory)",
+    },
+    {
+      title: "Tube data sheets (12AX7, 12AT7, 12AU7, 6SN7, 6SL7 and others)",
+      detail: "Typical operating characteristics and maximum plate dissipation per section (from memory)",
+    },
   ],
   whyItMatters:
     "Whether a preamp or driver stage sounds right depends on where the tube sits on its curves: too little " +
@@ -184,7 +277,17 @@ export const calculator = defineCalculator({
     }
     if (!solved.ok) {
       warnings.push({ level: "caution", message: solved.message });
-      const outputs: TriodeStageOutputs = { plateVoltage: null, plateCurrent: null, cathodeVoltage: null, plateDissipation: null, amplificationFactor: null, plateResistance: null, transconductance: null, gain: null, plateToChassisVoltage: null };
+      const outputs: TriodeStageOutputs = {
+        plateVoltage: null,
+        plateCurrent: null,
+        cathodeVoltage: null,
+        plateDissipation: null,
+        amplificationFactor: null,
+        plateResistance: null,
+        transconductance: null,
+        gain: null,
+        plateToChassisVoltage: null,
+      };
       return { outputs, warnings };
     }
 
@@ -199,18 +302,37 @@ export const calculator = defineCalculator({
     const gain = (gm * rLoad) / (1 + point.gp * (rLoad + degeneration));
 
     if (rating !== undefined && dissipation > rating) {
-      warnings.push({ level: "caution", message: `Plate dissipation ${formatQuantity(dissipation, "W")} is above the ${name}'s rated ${formatQuantity(rating, "W")} per section; raise Ra or Rk, or lower B+.` });
+      warnings.push({
+        level: "caution",
+        message: `Plate dissipation ${formatQuantity(dissipation, "W")} is above the ${name}'s rated ${formatQuantity(rating, "W")} per section; raise Ra or Rk, or lower B+.`,
+      });
     }
     if (rating === undefined) {
       warnings.push({ level: "info", message: "No rated plate dissipation is known for custom model parameters; check the data sheet yourself." });
     }
     if (rk === 0) {
-      warnings.push({ level: "info", message: "With no cathode resistor the grid sits at 0 V; a real tube then draws grid current on signal peaks, which the model ignores." });
+      warnings.push({
+        level: "info",
+        message: "With no cathode resistor the grid sits at 0 V; a real tube then draws grid current on signal peaks, which the model ignores.",
+      });
     }
     warnings.push(...regionWarnings(bPlus, ra, rk, ip, ep));
-    warnings.push({ level: "info", message: "The model is a fit to typical curves; real tubes of one type differ by 20% or more, so expect your measured voltages to differ too." });
+    warnings.push({
+      level: "info",
+      message: "The model is a fit to typical curves; real tubes of one type differ by 20% or more, so expect your measured voltages to differ too.",
+    });
 
-    const outputs = { plateVoltage: ep, plateCurrent: ip, cathodeVoltage: vk, plateDissipation: dissipation, amplificationFactor: mu, plateResistance: rp, transconductance: gm, gain, plateToChassisVoltage: ep + vk };
+    const outputs = {
+      plateVoltage: ep,
+      plateCurrent: ip,
+      cathodeVoltage: vk,
+      plateDissipation: dissipation,
+      amplificationFactor: mu,
+      plateResistance: rp,
+      transconductance: gm,
+      gain,
+      plateToChassisVoltage: ep + vk,
+    };
     return { outputs, warnings };
   },
   explain(input: TriodeStageInput, o: TriodeStageOutputs) {
@@ -223,11 +345,23 @@ export const calculator = defineCalculator({
     const tRk = texQuantity(rk, "Ω");
     const steps: Step[] = [
       { label: "Koren's improved triode model", latex: MODEL_TEX },
-      { label: `Model parameters (${name})`, latex: tex`\mu = ${sig6(p.mu)},\; x = ${sig6(p.ex)},\; K_{G1} = ${sig6(p.kg1)},\; K_P = ${sig6(p.kp)},\; K_{VB} = ${sig6(p.kvb)}\,\mathrm{V^2}` },
+      {
+        label: `Model parameters (${name})`,
+        latex: tex`\mu = ${sig6(p.mu)},\; x = ${sig6(p.ex)},\; K_{G1} = ${sig6(p.kg1)},\; K_P = ${sig6(p.kp)},\; K_{VB} = ${sig6(p.kvb)}\,\mathrm{V^2}`,
+      },
       { label: "Load line and cathode bias", latex: LOAD_LINE_TEX },
       { label: "Load line with your values", latex: tex`E_p = ${tB} - I_p\,(${tRa} + ${tRk}),\quad E_g = -I_p \times ${tRk}` },
     ];
-    const { plateCurrent: ip, plateVoltage: ep, cathodeVoltage: vk, plateDissipation: dissipation, amplificationFactor: mu, transconductance: gm, plateResistance: rp, gain } = o;
+    const {
+      plateCurrent: ip,
+      plateVoltage: ep,
+      cathodeVoltage: vk,
+      plateDissipation: dissipation,
+      amplificationFactor: mu,
+      transconductance: gm,
+      plateResistance: rp,
+      gain,
+    } = o;
     if (ip === null || ep === null || vk === null || dissipation === null || mu === null || gm === null || gain === null) return steps;
 
     const eg = -ip * rk;
@@ -239,20 +373,35 @@ export const calculator = defineCalculator({
     const tGain = texQuantity(gain, "");
     const rpTex = rp === null ? tex`\infty` : texQuantity(rp, "Ω");
     steps.push(
-      { label: "Operating point (model current equals load-line current); E_p is plate to cathode, the voltage the tube itself sees", latex: tex`I_p = ${tIp4},\quad E_p = ${tB} - ${tIp4} \times ${texQuantity(ra + rk, "Ω", 4)} = ${texQuantity(ep, "V", 4)},\quad E_g = ${texQuantity(eg, "V", 4)}` },
+      {
+        label: "Operating point (model current equals load-line current); E_p is plate to cathode, the voltage the tube itself sees",
+        latex: tex`I_p = ${tIp4},\quad E_p = ${tB} - ${tIp4} \times ${texQuantity(ra + rk, "Ω", 4)} = ${texQuantity(ep, "V", 4)},\quad E_g = ${texQuantity(eg, "V", 4)}`,
+      },
       { label: "Cathode voltage", latex: tex`V_k = I_p R_k = ${tIp} \times ${tRk} = ${texQuantity(vk, "V")}` },
-      { label: "Plate to chassis, as a meter from chassis reads it: the plate-to-cathode voltage above plus the cathode's own voltage", latex: tex`V_a = E_p + V_k = ${texQuantity(ep, "V", 4)} + ${texQuantity(vk, "V", 4)} = B^{+} - I_p R_a = ${texQuantity(ep + vk, "V", 4)}` },
+      {
+        label: "Plate to chassis, as a meter from chassis reads it: the plate-to-cathode voltage above plus the cathode's own voltage",
+        latex: tex`V_a = E_p + V_k = ${texQuantity(ep, "V", 4)} + ${texQuantity(vk, "V", 4)} = B^{+} - I_p R_a = ${texQuantity(ep + vk, "V", 4)}`,
+      },
       { label: "Plate dissipation", latex: tex`P_a = E_p I_p = ${texQuantity(ep, "V")} \times ${tIp} = ${texQuantity(dissipation, "W")}` },
-      { label: "Small-signal parameters at the operating point", latex: tex`g_m = \frac{\partial I_p}{\partial E_g} = ${texQuantity(gm, "S")},\quad r_p = \left(\frac{\partial I_p}{\partial E_p}\right)^{-1} = ${rpTex},\quad \mu = g_m r_p = ${tMu}` },
+      {
+        label: "Small-signal parameters at the operating point",
+        latex: tex`g_m = \frac{\partial I_p}{\partial E_g} = ${texQuantity(gm, "S")},\quad r_p = \left(\frac{\partial I_p}{\partial E_p}\right)^{-1} = ${rpTex},\quad \mu = g_m r_p = ${tMu}`,
+      },
     );
     if (rl !== undefined) {
-      steps.push({ label: "Signal load: plate resistor in parallel with the next stage", latex: tex`R_L' = \frac{R_a R_L}{R_a + R_L} = \frac{${tRa} \times ${texQuantity(rl, "Ω")}}{${tRa} + ${texQuantity(rl, "Ω")}} = ${tRl}` });
+      steps.push({
+        label: "Signal load: plate resistor in parallel with the next stage",
+        latex: tex`R_L' = \frac{R_a R_L}{R_a + R_L} = \frac{${tRa} \times ${texQuantity(rl, "Ω")}}{${tRa} + ${texQuantity(rl, "Ω")}} = ${tRl}`,
+      });
     }
     const gainLabel = "Voltage gain (inverting: the plate swings opposite to the grid)";
     steps.push(
       bypassed
         ? { label: `${gainLabel}, cathode bypassed`, latex: tex`A = \frac{\mu R_L'}{r_p + R_L'} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl}} = ${tGain}` }
-        : { label: `${gainLabel}, cathode not bypassed`, latex: tex`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl} + ${texQuantity(mu + 1, "")} \times ${tRk}} = ${tGain}` },
+        : {
+            label: `${gainLabel}, cathode not bypassed`,
+            latex: tex`A = \frac{\mu R_L'}{r_p + R_L' + (\mu + 1) R_k} = \frac{${tMu} \times ${tRl}}{${rpTex} + ${tRl} + ${texQuantity(mu + 1, "")} \times ${tRk}} = ${tGain}`,
+          },
     );
     return steps;
   },

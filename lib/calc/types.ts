@@ -68,11 +68,7 @@ export interface CalcResult<O extends Record<string, OutputValue>> extends Compu
 /** A schema's input names; any string when the schema's input is not an object type (the general Calculator). */
 export type InputName<S extends z.ZodType> = [keyof z.input<S>] extends [never] ? string : keyof z.input<S> & string;
 
-export interface Calculator<
-  S extends z.ZodType = z.ZodType,
-  O extends Record<string, OutputValue> = Record<string, OutputValue>,
-  L extends string = string,
-> {
+export interface Calculator<S extends z.ZodType = z.ZodType, O extends Record<string, OutputValue> = Record<string, OutputValue>, L extends string = string> {
   /** The URL name, a literal type so the registry's `Slug` union can be derived from the calculators. */
   slug: L;
   title: string;

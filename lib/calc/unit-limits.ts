@@ -51,9 +51,19 @@ export const LIMITS: Record<QuantityKind, Limit> = {
 };
 
 const NOUNS: Record<QuantityKind, string> = {
-  voltage: "voltage", current: "current", resistance: "resistance", capacitance: "capacitance", inductance: "inductance",
-  frequency: "frequency", time: "time", length: "length", pressure: "pressure", temperature: "temperature", power: "power",
-  conductance: "conductance", ratio: "number",
+  voltage: "voltage",
+  current: "current",
+  resistance: "resistance",
+  capacitance: "capacitance",
+  inductance: "inductance",
+  frequency: "frequency",
+  time: "time",
+  length: "length",
+  pressure: "pressure",
+  temperature: "temperature",
+  power: "power",
+  conductance: "conductance",
+  ratio: "number",
 };
 
 /**

@@ -56,7 +56,7 @@ export const vintageMarkingsSchema = z
     dot: colourField("Dot", DOT_COLOURS, (c) => `${c} is not a multiplier in this code (black ×1 … white ×10⁹, gold ×0.1, silver ×0.01)`),
     toleranceEnd: z.preprocess(
       (v) => (blank(v) ? undefined : typeof v === "string" ? v.trim().toLowerCase() : v),
-      z.enum(TOLERANCE_END_COLOURS, { error: 'Tolerance end must be gold, silver or none' }).default("none"),
+      z.enum(TOLERANCE_END_COLOURS, { error: "Tolerance end must be gold, silver or none" }).default("none"),
     ),
   })
   .superRefine((v, ctx) => {
@@ -107,11 +107,53 @@ export const calculator = defineCalculator({
     format: { tolerance: "percent" },
   },
   inputs: [
-    { name: "scheme", label: "Marking scheme", unit: "", required: false, default: "body-end-dot", control: "select", options: VINTAGE_SCHEMES, help: "Body-end-dot: the 1920s–40s RMA colour code." },
-    { name: "body", label: "Body colour", unit: "", required: true, control: "select", options: FIGURE_COLOURS.filter((c) => c !== "black"), help: "The colour of the whole body: the first figure." },
-    { name: "end", label: "End (tip) colour", unit: "", required: false, control: "select", options: FIGURE_COLOURS, help: "The painted tip: the second figure. None shown means the body colour." },
-    { name: "dot", label: "Dot colour", unit: "", required: false, control: "select", options: DOT_COLOURS, help: "The spot or short band on the body: the multiplier. None shown means the body colour." },
-    { name: "toleranceEnd", label: "Other end", unit: "", required: false, default: "none", control: "select", options: TOLERANCE_END_COLOURS, help: "Gold ±5 %, silver ±10 %, unpainted ±20 %." },
+    {
+      name: "scheme",
+      label: "Marking scheme",
+      unit: "",
+      required: false,
+      default: "body-end-dot",
+      control: "select",
+      options: VINTAGE_SCHEMES,
+      help: "Body-end-dot: the 1920s–40s RMA colour code.",
+    },
+    {
+      name: "body",
+      label: "Body colour",
+      unit: "",
+      required: true,
+      control: "select",
+      options: FIGURE_COLOURS.filter((c) => c !== "black"),
+      help: "The colour of the whole body: the first figure.",
+    },
+    {
+      name: "end",
+      label: "End (tip) colour",
+      unit: "",
+      required: false,
+      control: "select",
+      options: FIGURE_COLOURS,
+      help: "The painted tip: the second figure. None shown means the body colour.",
+    },
+    {
+      name: "dot",
+      label: "Dot colour",
+      unit: "",
+      required: false,
+      control: "select",
+      options: DOT_COLOURS,
+      help: "The spot or short band on the body: the multiplier. None shown means the body colour.",
+    },
+    {
+      name: "toleranceEnd",
+      label: "Other end",
+      unit: "",
+      required: false,
+      default: "none",
+      control: "select",
+      options: TOLERANCE_END_COLOURS,
+      help: "Gold ±5 %, silver ±10 %, unpainted ±20 %.",
+    },
   ],
   outputs: [
     { name: "resistance", label: "Resistance", unit: "Ω" },
@@ -122,8 +164,14 @@ export const calculator = defineCalculator({
   formulas: [{ label: "Body, end, dot", latex: tex`R = (10\,d_\text{body} + d_\text{end}) \times 10^{m_\text{dot}},\quad \pm t_\text{other end}` }],
   references: [
     { title: "RMA standard colour code for fixed composition resistors", detail: BODY_END_DOT_SOURCE },
-    { title: "IEC 60062:2016, Marking codes for resistors and capacitors", detail: "§3.2 code colours: the same figures and multipliers, now as bands (from memory)" },
-    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Chapter on resistors: colour code, including the body-end-dot marking (chapter cited from memory)" },
+    {
+      title: "IEC 60062:2016, Marking codes for resistors and capacitors",
+      detail: "§3.2 code colours: the same figures and multipliers, now as bands (from memory)",
+    },
+    {
+      title: "Radiotron Designer's Handbook, 4th ed.",
+      detail: "Chapter on resistors: colour code, including the body-end-dot marking (chapter cited from memory)",
+    },
   ],
   whyItMatters:
     "Sets of the 1920s to the 1940s carry resistors painted in the RMA body-end-dot code rather than bands: the body colour " +
@@ -156,4 +204,3 @@ export const calculator = defineCalculator({
     return steps;
   },
 });
-

@@ -21,7 +21,14 @@ const TUBES = new Map<string, VrTube>(VR_TUBES.map((t) => [t.type, t]));
 const FIGURES = new Map<string, TubeFigures>(
   VR_TUBES.map((t) => [
     t.type,
-    { name: t.type, vvr: t.regulatedVoltage, iMin: t.minCurrent, iMax: t.maxCurrent, vStrike: t.strikingVoltage, notes: tubeNotes(t.type, t.minCurrent, t.maxCurrent, t.strikingVoltage) },
+    {
+      name: t.type,
+      vvr: t.regulatedVoltage,
+      iMin: t.minCurrent,
+      iMax: t.maxCurrent,
+      vStrike: t.strikingVoltage,
+      notes: tubeNotes(t.type, t.minCurrent, t.maxCurrent, t.strikingVoltage),
+    },
   ]),
 );
 
@@ -61,7 +68,8 @@ export const vrTubeSchema = z
   .superRefine((v, ctx) => {
     if (v.tube !== undefined) {
       for (const name of [...CUSTOM, "strikingVoltage"] as const) {
-        if (v[name] !== undefined) ctx.addIssue({ code: "custom", path: [name], message: `${LABEL[name]}: give either a tube from the list or its figures, not both` });
+        if (v[name] !== undefined)
+          ctx.addIssue({ code: "custom", path: [name], message: `${LABEL[name]}: give either a tube from the list or its figures, not both` });
       }
     } else {
       for (const name of CUSTOM) {
@@ -103,15 +111,88 @@ export const calculator = defineCalculator({
     chart: null,
   },
   inputs: [
-    { name: "supplyVoltage", label: "Supply voltage", unit: "V", required: true, control: "quantity", quantity: "voltage", help: "The unregulated B+ the series resistor is fed from." },
-    { name: "tube", label: "Regulator tube", unit: "", required: false, control: "select", options: VR_TYPES, help: "From the built-in table; or leave empty and give the figures below." },
-    { name: "regulatedVoltage", label: "Regulated voltage", unit: "V", required: false, control: "quantity", quantity: "voltage", help: "Only without a tube from the list." },
-    { name: "minCurrent", label: "Tube's minimum current", unit: "A", required: false, control: "quantity", quantity: "current", help: "Only without a tube from the list: the data sheet's lower limit." },
-    { name: "maxCurrent", label: "Tube's maximum current", unit: "A", required: false, control: "quantity", quantity: "current", help: "Only without a tube from the list: the data sheet's upper limit." },
-    { name: "strikingVoltage", label: "Striking voltage", unit: "V", required: false, control: "quantity", quantity: "voltage", help: "Optional, only without a tube from the list: the supply needed to start the glow." },
-    { name: "loadCurrentMin", label: "Least load current", unit: "A", required: false, default: 0, control: "quantity", quantity: "current", help: "What the regulated stages draw at their lightest (0 when they can be unplugged or cold)." },
-    { name: "loadCurrentMax", label: "Greatest load current", unit: "A", required: true, control: "quantity", quantity: "current", help: "What the regulated stages draw at most." },
-    { name: "fittedResistance", label: "Resistor fitted (optional)", unit: "Ω", required: false, control: "quantity", quantity: "resistance", help: "The resistor in the set or the one you mean to fit: the tube currents are then worked out with it." },
+    {
+      name: "supplyVoltage",
+      label: "Supply voltage",
+      unit: "V",
+      required: true,
+      control: "quantity",
+      quantity: "voltage",
+      help: "The unregulated B+ the series resistor is fed from.",
+    },
+    {
+      name: "tube",
+      label: "Regulator tube",
+      unit: "",
+      required: false,
+      control: "select",
+      options: VR_TYPES,
+      help: "From the built-in table; or leave empty and give the figures below.",
+    },
+    {
+      name: "regulatedVoltage",
+      label: "Regulated voltage",
+      unit: "V",
+      required: false,
+      control: "quantity",
+      quantity: "voltage",
+      help: "Only without a tube from the list.",
+    },
+    {
+      name: "minCurrent",
+      label: "Tube's minimum current",
+      unit: "A",
+      required: false,
+      control: "quantity",
+      quantity: "current",
+      help: "Only without a tube from the list: the data sheet's lower limit.",
+    },
+    {
+      name: "maxCurrent",
+      label: "Tube's maximum current",
+      unit: "A",
+      required: false,
+      control: "quantity",
+      quantity: "current",
+      help: "Only without a tube from the list: the data sheet's upper limit.",
+    },
+    {
+      name: "strikingVoltage",
+      label: "Striking voltage",
+      unit: "V",
+      required: false,
+      control: "quantity",
+      quantity: "voltage",
+      help: "Optional, only without a tube from the list: the supply needed to start the glow.",
+    },
+    {
+      name: "loadCurrentMin",
+      label: "Least load current",
+      unit: "A",
+      required: false,
+      default: 0,
+      control: "quantity",
+      quantity: "current",
+      help: "What the regulated stages draw at their lightest (0 when they can be unplugged or cold).",
+    },
+    {
+      name: "loadCurrentMax",
+      label: "Greatest load current",
+      unit: "A",
+      required: true,
+      control: "quantity",
+      quantity: "current",
+      help: "What the regulated stages draw at most.",
+    },
+    {
+      name: "fittedResistance",
+      label: "Resistor fitted (optional)",
+      unit: "Ω",
+      required: false,
+      control: "quantity",
+      quantity: "resistance",
+      help: "The resistor in the set or the one you mean to fit: the tube currents are then worked out with it.",
+    },
   ],
   outputs: [
     { name: "seriesResistance", label: "Series resistance", unit: "Ω" },
@@ -131,8 +212,14 @@ export const calculator = defineCalculator({
     { label: "Before the tube strikes", latex: tex`V_\text{tube} = V_s\,\frac{R_L}{R + R_L},\quad R_L = \frac{V_{VR}}{I_{L,\max}}` },
   ],
   references: [
-    { title: "RCA receiving tube manual (RC-series)", detail: "Voltage-regulator tube data (0A2, 0B2, 0C3/VR105, 0D3/VR150) and the application notes on series resistor and starting supply (from memory)" },
-    { title: "Radiotron Designer's Handbook, 4th ed.", detail: "Chapter on voltage regulators: gaseous (glow-discharge) regulator tubes (chapter cited from memory)" },
+    {
+      title: "RCA receiving tube manual (RC-series)",
+      detail: "Voltage-regulator tube data (0A2, 0B2, 0C3/VR105, 0D3/VR150) and the application notes on series resistor and starting supply (from memory)",
+    },
+    {
+      title: "Radiotron Designer's Handbook, 4th ed.",
+      detail: "Chapter on voltage regulators: gaseous (glow-discharge) regulator tubes (chapter cited from memory)",
+    },
     { title: "Built-in VR tube table", detail: VR_SOURCE },
   ],
   whyItMatters:
@@ -184,10 +271,16 @@ export const calculator = defineCalculator({
         label: `Series resistance (${t.name}: ${formatQuantity(t.vvr, "V")}, ${formatQuantity(t.iMin, "A")} to ${formatQuantity(t.iMax, "A")})`,
         latex: tex`R = \frac{${v(vs)} - ${v(t.vvr)}}{${a(ilMax)} + ${a(t.iMin)}} = ${texQuantity(o.seriesResistance, "Ω", 4)}`,
       },
-      { label: `Tube current at the greatest load${which}`, latex: tex`I_t = \frac{${v(vs - t.vvr)}}{${rTex}} - ${a(ilMax)} = ${it((vs - t.vvr) / r - ilMax)}` },
+      {
+        label: `Tube current at the greatest load${which}`,
+        latex: tex`I_t = \frac{${v(vs - t.vvr)}}{${rTex}} - ${a(ilMax)} = ${it((vs - t.vvr) / r - ilMax)}`,
+      },
       { label: `Tube current at the least load${which}`, latex: tex`I_t = \frac{${v(vs - t.vvr)}}{${rTex}} - ${a(ilMin)} = ${it((vs - t.vvr) / r - ilMin)}` },
       { label: `Resistor dissipation${which}`, latex: tex`P = \frac{(${v(vs - t.vvr)})^2}{${rTex}} = ${texQuantity(o.resistorPower, "W")}` },
-      { label: "E12 value at or below (keeps full-load current at or above the minimum)", latex: tex`R_\text{E12} = ${texQuantity(o.preferredResistance, "Ω")}` },
+      {
+        label: "E12 value at or below (keeps full-load current at or above the minimum)",
+        latex: tex`R_\text{E12} = ${texQuantity(o.preferredResistance, "Ω")}`,
+      },
       {
         label: "Voltage on the tube before it strikes, full load taken as a resistance",
         latex:

@@ -10,6 +10,5 @@ export const KEEP_THE_BACK_ON = {
   waiting:
     "The inside of a valve set can keep a harmful charge for a long while after it is unplugged. Please leave the back on and don't try the set yourself until we have been through it.",
   /** Once the set is home again. */
-  home:
-    "The inside of a valve set can keep a harmful charge for a long while after it is unplugged, so please leave the back on. If it smells hot, smokes or crackles, switch it off at the wall and give us a call.",
+  home: "The inside of a valve set can keep a harmful charge for a long while after it is unplugged, so please leave the back on. If it smells hot, smokes or crackles, switch it off at the wall and give us a call.",
 } as const;

@@ -11,7 +11,10 @@ export const customerEmailField = optionalText(254, "E-mail").refine(
 export const customerFields = {
   name: requiredText(120, "The name", "Give the customer's name."),
   email: customerEmailField,
-  phone: optionalText(40, "Phone").refine((v) => v == null || /^[+\d][\d\s().-]{3,}$/.test(v), "Enter a phone number of digits, spaces and + ( ) - only, or leave it blank."),
+  phone: optionalText(40, "Phone").refine(
+    (v) => v == null || /^[+\d][\d\s().-]{3,}$/.test(v),
+    "Enter a phone number of digits, spaces and + ( ) - only, or leave it blank.",
+  ),
   address: optionalText(400, "Address"),
   notes: optionalText(4000, "Notes"),
 };

@@ -12,8 +12,16 @@ import type { Asked, AskedUnit } from "./types";
  */
 
 export const UNIT_KIND: Partial<Record<AskedUnit, QuantityKind>> = {
-  V: "voltage", A: "current", "Ω": "resistance", W: "power", F: "capacitance", H: "inductance",
-  Hz: "frequency", s: "time", m: "length", S: "conductance",
+  V: "voltage",
+  A: "current",
+  Ω: "resistance",
+  W: "power",
+  F: "capacitance",
+  H: "inductance",
+  Hz: "frequency",
+  s: "time",
+  m: "length",
+  S: "conductance",
 };
 
 export type AnswerReading =
@@ -57,7 +65,11 @@ const FRACTIONS: Record<string, string> = { "½": "1/2", "¼": "1/4", "¾": "3/4
 
 /** Spellings the shared parser leaves out: a unicode minus, "1/4 W", "4k7 Ω" (the RKM code with a unit). */
 function tidyText(raw: string): string {
-  let t = raw.trim().replace(/^(?:≈|~|about\s+)/i, "").replace(/[−–]/g, "-").trim();
+  let t = raw
+    .trim()
+    .replace(/^(?:≈|~|about\s+)/i, "")
+    .replace(/[−–]/g, "-")
+    .trim();
   t = t.replace(/[½¼¾⅛]/g, (c) => FRACTIONS[c]);
   const frac = /^(\d+)\s*\/\s*(\d+)\s*(.*)$/.exec(t);
   if (frac && Number(frac[2]) !== 0) t = `${Number(frac[1]) / Number(frac[2])} ${frac[3]}`.trim();
@@ -91,7 +103,13 @@ function wrongUnit(text: string, asked: Asked, askedKind: QuantityKind | null): 
   const other = otherKind(text, askedKind);
   if (!other) return null;
   const wanted = askedKind ? `${QUANTITY_KINDS[askedKind].noun} in ${asked.unit}` : asked.unit === "%" ? "a percentage" : "a plain number";
-  return { ok: false, verdict: "wrong-unit", value: other.value, kind: other.kind, message: `That is ${QUANTITY_KINDS[other.kind].noun}; the question asks for ${wanted}.` };
+  return {
+    ok: false,
+    verdict: "wrong-unit",
+    value: other.value,
+    kind: other.kind,
+    message: `That is ${QUANTITY_KINDS[other.kind].noun}; the question asks for ${wanted}.`,
+  };
 }
 
 /** Read one answer for the asked unit. Never throws. */

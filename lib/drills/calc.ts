@@ -55,15 +55,7 @@ function trial(calc: Calculator, inputs: Record<string, unknown>, input: string,
  * scale between lo and hi (bench figures are positive and span decades). The output must change
  * monotonically over the bracket; the result is checked by running the calculator in full.
  */
-export function invert(
-  slug: string,
-  inputs: Record<string, unknown>,
-  input: string,
-  output: string,
-  target: number,
-  lo: number,
-  hi: number,
-): number {
+export function invert(slug: string, inputs: Record<string, unknown>, input: string, output: string, target: number, lo: number, hi: number): number {
   const calc = calculatorFor(slug);
   let a = Math.log(lo);
   let b = Math.log(hi);

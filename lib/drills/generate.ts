@@ -34,8 +34,16 @@ function stepIndex(steps: readonly Step[], prefix: string, kind: DrillKind): num
 function prefixSlips(kind: DrillKind, expected: number): MistakeSpec[] {
   if (!UNIT_KIND[kind.asked.unit] || expected === 0) return [];
   return [
-    { value: expected * 1000, step: kind.answerStep, hint: "That is a thousand times too large: check the prefixes (k, m, µ) as you carry values through the working." },
-    { value: expected / 1000, step: kind.answerStep, hint: "That is a thousand times too small: check the prefixes (k, m, µ) as you carry values through the working." },
+    {
+      value: expected * 1000,
+      step: kind.answerStep,
+      hint: "That is a thousand times too large: check the prefixes (k, m, µ) as you carry values through the working.",
+    },
+    {
+      value: expected / 1000,
+      step: kind.answerStep,
+      hint: "That is a thousand times too small: check the prefixes (k, m, µ) as you carry values through the working.",
+    },
   ];
 }
 

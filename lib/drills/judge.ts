@@ -41,8 +41,7 @@ export function judgeAnswer(kind: DrillKind, drill: Drill, raw: unknown): Judgem
     return { ...base, correct: false, verdict: "wrong-unit", received: reading.value, message };
   }
   const value = reading.value;
-  const right =
-    typeof value === "string" && typeof expected === "string" ? textMatches(value, expected, kind) : matches(value, expected, tolerance);
+  const right = typeof value === "string" && typeof expected === "string" ? textMatches(value, expected, kind) : matches(value, expected, tolerance);
   if (right) {
     return { ...base, correct: true, verdict: "correct", received: value, message: `Right: ${solution.expectedText} (${solution.toleranceText}).` };
   }

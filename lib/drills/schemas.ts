@@ -7,11 +7,25 @@ import { z } from "zod";
  */
 
 const idField = (what: string) =>
-  z.union([z.number(), z.string().trim().regex(/^\d{1,15}$/, `Choose ${what}.`).transform(Number)], { error: `Choose ${what}.` }).pipe(
-    z.number().int(`Choose ${what}.`).positive(`Choose ${what}.`).max(Number.MAX_SAFE_INTEGER, `Choose ${what}.`),
-  );
+  z
+    .union(
+      [
+        z.number(),
+        z
+          .string()
+          .trim()
+          .regex(/^\d{1,15}$/, `Choose ${what}.`)
+          .transform(Number),
+      ],
+      { error: `Choose ${what}.` },
+    )
+    .pipe(z.number().int(`Choose ${what}.`).positive(`Choose ${what}.`).max(Number.MAX_SAFE_INTEGER, `Choose ${what}.`));
 
-const slugField = z.string({ error: "Name the calculator, e.g. cathode-bias." }).trim().min(1, "Name the calculator, e.g. cathode-bias.").max(60, "That calculator name is too long.");
+const slugField = z
+  .string({ error: "Name the calculator, e.g. cathode-bias." })
+  .trim()
+  .min(1, "Name the calculator, e.g. cathode-bias.")
+  .max(60, "That calculator name is too long.");
 
 const kindField = z
   .string({ error: "Name the drill kind, e.g. cathode-bias/resistor." })
@@ -28,7 +42,11 @@ export const drillCreateSchema = z
   .superRefine((v, ctx) => {
     const given = [v.slug, v.kind, v.calculationId].filter((x) => x !== undefined).length;
     if (given !== 1) {
-      ctx.addIssue({ code: "custom", path: ["slug"], message: "Choose one calculator (slug), one drill kind (kind) or one saved calculation (calculationId)." });
+      ctx.addIssue({
+        code: "custom",
+        path: ["slug"],
+        message: "Choose one calculator (slug), one drill kind (kind) or one saved calculation (calculationId).",
+      });
     }
   });
 export type DrillCreate = z.output<typeof drillCreateSchema>;
@@ -62,21 +80,33 @@ const dueField = z
   .refine((s) => s <= "2100-01-01", "Choose a due date this century.");
 
 /** Kinds and calculator slugs may be mixed: a slug gives one of its kinds per drill. */
-const kindOrSlug = z.string({ error: "Choose kinds of drill by name." }).trim().min(1, "Choose kinds of drill by name.").max(80, "That drill kind is too long.");
+const kindOrSlug = z
+  .string({ error: "Choose kinds of drill by name." })
+  .trim()
+  .min(1, "Choose kinds of drill by name.")
+  .max(80, "That drill kind is too long.");
 
 /**
  * `POST /api/drills/assignments`: a set of drills for one apprentice, due on a date. Either kinds (drill kinds or
  * calculator slugs, taken in turn) and a count, or one saved calculation ("do this one yourself").
  */
 export const drillAssignmentSchema = z
-  .object({
-    apprentice: idField("the apprentice"),
-    kinds: z.array(kindOrSlug, { error: "Choose at least one kind of drill." }).max(40, "Choose 40 kinds or fewer.").optional(),
-    calculationId: idField("a saved calculation").optional(),
-    count: z.coerce.number({ error: "Say how many drills (1 to 20)." }).int("Say how many drills (1 to 20).").min(1, "Set at least one drill.").max(20, "Set 20 drills or fewer at a time.").optional(),
-    due: dueField,
-    note: z.string().trim().max(200, "Keep the note under 200 characters.").optional(),
-  }, { error: "Send a JSON object with apprentice, kinds (or calculationId) and due." })
+  .object(
+    {
+      apprentice: idField("the apprentice"),
+      kinds: z.array(kindOrSlug, { error: "Choose at least one kind of drill." }).max(40, "Choose 40 kinds or fewer.").optional(),
+      calculationId: idField("a saved calculation").optional(),
+      count: z.coerce
+        .number({ error: "Say how many drills (1 to 20)." })
+        .int("Say how many drills (1 to 20).")
+        .min(1, "Set at least one drill.")
+        .max(20, "Set 20 drills or fewer at a time.")
+        .optional(),
+      due: dueField,
+      note: z.string().trim().max(200, "Keep the note under 200 characters.").optional(),
+    },
+    { error: "Send a JSON object with apprentice, kinds (or calculationId) and due." },
+  )
   .superRefine((v, ctx) => {
     const fromKinds = v.kinds !== undefined && v.kinds.length > 0;
     if (fromKinds === (v.calculationId !== undefined)) {

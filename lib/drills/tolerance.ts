@@ -36,9 +36,7 @@ export function toleranceText(rule: ToleranceRule, unit: AskedUnit): string {
     case "relative":
       return `within ${Number((rule.fraction * 100).toPrecision(3))} % of the answer`;
     case "absolute":
-      return unit === "%"
-        ? `within ±${Number((rule.amount * 100).toPrecision(3))} percentage points`
-        : `within ±${formatAnswer(rule.amount, unit)}`;
+      return unit === "%" ? `within ±${Number((rule.amount * 100).toPrecision(3))} percentage points` : `within ±${formatAnswer(rule.amount, unit)}`;
     case "exact":
       return unit === "text" ? "the same words (case and spacing do not matter)" : "exactly: a standard value or a table figure";
   }

@@ -14,11 +14,7 @@ export function optionalText(max: number, label: string) {
 }
 
 export function requiredText(max: number, label: string, missing: string) {
-  return z
-    .string({ error: missing })
-    .trim()
-    .min(1, missing)
-    .max(max, `Keep ${label.toLowerCase()} under ${max} characters.`);
+  return z.string({ error: missing }).trim().min(1, missing).max(max, `Keep ${label.toLowerCase()} under ${max} characters.`);
 }
 
 /** URLSearchParams give "" for an empty parameter; treat it as absent. */

@@ -51,7 +51,12 @@ export const jobFields = {
   customerName: optionalText(120, "Customer name"),
   customerEmail: customerEmailField,
   /** A customer already on file; without it the name and e-mail find or make the record (db/queries/customers.ts). */
-  customerId: z.number({ error: "Choose a customer from the list." }).int("Choose a customer from the list.").positive("Choose a customer from the list.").nullable().optional(),
+  customerId: z
+    .number({ error: "Choose a customer from the list." })
+    .int("Choose a customer from the list.")
+    .positive("Choose a customer from the list.")
+    .nullable()
+    .optional(),
   /** Only for a customer made at booking-in. */
   customerPhone: optionalText(40, "Customer phone").optional(),
   notes: optionalText(4000, "Notes"),
@@ -79,25 +84,34 @@ export const JOB_LIST_PAGE_SIZE = 25;
 export const JOB_SORTS = ["updatedAt", "createdAt", "title", "status", "equipmentKind", "customerName", "year"] as const;
 export type JobSort = (typeof JOB_SORTS)[number];
 
-const statusList = z
-  .string()
-  .transform((s, ctx) => {
-    const list = s.split(",").map((x) => x.trim()).filter(Boolean);
-    for (const x of list) {
-      if (!(JOB_STATUSES as readonly string[]).includes(x)) {
-        ctx.addIssue({ code: "custom", message: `“${x}” is not a job status; use one of ${JOB_STATUSES.join(", ")}.` });
-        return z.NEVER;
-      }
+const statusList = z.string().transform((s, ctx) => {
+  const list = s
+    .split(",")
+    .map((x) => x.trim())
+    .filter(Boolean);
+  for (const x of list) {
+    if (!(JOB_STATUSES as readonly string[]).includes(x)) {
+      ctx.addIssue({ code: "custom", message: `“${x}” is not a job status; use one of ${JOB_STATUSES.join(", ")}.` });
+      return z.NEVER;
     }
-    return list as (typeof JOB_STATUSES)[number][];
-  });
+  }
+  return list as (typeof JOB_STATUSES)[number][];
+});
 
 /** GET /api/jobs query: paging, sorting, filters and text search; every parameter optional. */
 export const jobListQuerySchema = z.object({
-  page: z.preprocess(blankToUndefined, z.coerce.number({ error: "page must be a whole number" }).int("page must be a whole number").min(1, "page starts at 1").max(100_000).default(1)),
+  page: z.preprocess(
+    blankToUndefined,
+    z.coerce.number({ error: "page must be a whole number" }).int("page must be a whole number").min(1, "page starts at 1").max(100_000).default(1),
+  ),
   pageSize: z.preprocess(
     blankToUndefined,
-    z.coerce.number({ error: "pageSize must be a whole number" }).int("pageSize must be a whole number").min(1, "pageSize must be 1 to 100").max(100, "pageSize must be 1 to 100").default(50),
+    z.coerce
+      .number({ error: "pageSize must be a whole number" })
+      .int("pageSize must be a whole number")
+      .min(1, "pageSize must be 1 to 100")
+      .max(100, "pageSize must be 1 to 100")
+      .default(50),
   ),
   sort: z.preprocess(blankToUndefined, z.enum(JOB_SORTS, { error: `sort must be one of ${JOB_SORTS.join(", ")}` }).default("updatedAt")),
   dir: z.preprocess(blankToUndefined, z.enum(["asc", "desc"], { error: "dir must be asc or desc" }).default("desc")),

@@ -31,7 +31,8 @@ function rowsOf(group: OrderGroup): CsvRow[] {
     if (row) {
       row.quantity += l.quantity;
       row.refs.push(ref);
-    } else rows.set(key, { supplier: group.supplier ?? "", number, description: l.description, quantity: l.quantity, unitCostMinor: l.unitCostMinor, refs: [ref] });
+    } else
+      rows.set(key, { supplier: group.supplier ?? "", number, description: l.description, quantity: l.quantity, unitCostMinor: l.unitCostMinor, refs: [ref] });
   });
   return [...rows.values()];
 }

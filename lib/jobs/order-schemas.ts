@@ -5,7 +5,9 @@ import { requiredText } from "./fields";
 export const markOrderedSchema = z.object({
   supplier: requiredText(80, "The supplier", "Name the supplier whose parts were ordered."),
   partIds: z
-    .array(z.number({ error: "Each part id must be a number." }).int("Each part id must be a whole number.").positive("Each part id must be positive."), { error: "Send the ids of the parts ordered." })
+    .array(z.number({ error: "Each part id must be a number." }).int("Each part id must be a whole number.").positive("Each part id must be positive."), {
+      error: "Send the ids of the parts ordered.",
+    })
     .min(1, "Send the ids of the parts ordered.")
     .max(500, "Mark at most 500 parts at a time."),
 });

@@ -47,7 +47,10 @@ const same = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLow
  */
 export function readingsAt(designator: string, readings: VoltageReading[]): VoltageReading[] {
   return readings.filter(
-    (r) => r.kind === "voltage" && r.measured !== null && (same(r.designator, designator) || splitDesignators(r.partDesignators ?? "").some((d) => same(d, designator))),
+    (r) =>
+      r.kind === "voltage" &&
+      r.measured !== null &&
+      (same(r.designator, designator) || splitDesignators(r.partDesignators ?? "").some((d) => same(d, designator))),
   );
 }
 
@@ -71,7 +74,10 @@ export function capacitorChecks(parts: CapacitorPart[], readings: VoltageReading
       found.push(`the replacement is rated ${volts(replacement)}, below the original ${volts(original)}. Fit one rated at least as high as the original.`);
     }
     // The highest magnitude among the readings taken at this capacitor.
-    const at = readingsAt(p.designator, readings).reduce<VoltageReading | null>((hi, r) => (hi && Math.abs(hi.measured!) >= Math.abs(r.measured!) ? hi : r), null);
+    const at = readingsAt(p.designator, readings).reduce<VoltageReading | null>(
+      (hi, r) => (hi && Math.abs(hi.measured!) >= Math.abs(r.measured!) ? hi : r),
+      null,
+    );
     if (!at) {
       notes.set(p.id, "no reading at this capacitor");
     } else {

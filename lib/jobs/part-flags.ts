@@ -26,7 +26,8 @@ function unreadable(label: string, text: string | null, si: number | null, what:
 export function partFlags(p: FlaggedPart): PartFlag[] {
   const valueKind = valueKindOf(p.kind);
   const ratingKind = ratingKindOf(p.kind);
-  const valueWhat = valueKind === "capacitance" ? "a capacitance (e.g. 0.047 µF, 0.047 mfd, 100 pF)" : valueKind === "resistance" ? "a resistance (e.g. 2.2 MΩ, 4k7)" : null;
+  const valueWhat =
+    valueKind === "capacitance" ? "a capacitance (e.g. 0.047 µF, 0.047 mfd, 100 pF)" : valueKind === "resistance" ? "a resistance (e.g. 2.2 MΩ, 4k7)" : null;
   const ratingWhat = ratingKind === "voltage" ? "a voltage (e.g. 450 V)" : ratingKind === "power" ? "a power (e.g. 0.5 W, 1/2 W)" : null;
   // A rating written in the value field ("47 uF 450 V") counts as read when the rating field is blank.
   const flags = [
@@ -38,13 +39,19 @@ export function partFlags(p: FlaggedPart): PartFlag[] {
 
   if (p.kind === "resistor" && p.originalRatingSi !== null && p.replacementRatingSi !== null && p.replacementRatingSi < p.originalRatingSi) {
     const w = (v: number) => formatPartQuantity(v, "power");
-    flags.push({ level: "caution", message: `The replacement is rated ${w(p.replacementRatingSi)}, below the original ${w(p.originalRatingSi)}: it runs hotter than the part it replaces.` });
+    flags.push({
+      level: "caution",
+      message: `The replacement is rated ${w(p.replacementRatingSi)}, below the original ${w(p.originalRatingSi)}: it runs hotter than the part it replaces.`,
+    });
   }
   if (valueKind && p.originalValueSi !== null && p.replacementValueSi !== null) {
     const ratio = p.replacementValueSi / p.originalValueSi;
     if (ratio >= FAR_RATIO || ratio <= 1 / FAR_RATIO) {
       const v = (x: number) => formatPartQuantity(x, valueKind as "capacitance" | "resistance");
-      flags.push({ level: "info", message: `The replacement value ${v(p.replacementValueSi)} is far from the original ${v(p.originalValueSi)}; check it was meant (a slipped decimal point reads this way).` });
+      flags.push({
+        level: "info",
+        message: `The replacement value ${v(p.replacementValueSi)} is far from the original ${v(p.originalValueSi)}; check it was meant (a slipped decimal point reads this way).`,
+      });
     }
   }
   return flags;

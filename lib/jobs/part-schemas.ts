@@ -14,16 +14,14 @@ export const PART_KIND_LABELS: Record<(typeof PART_KINDS)[number], string> = {
 };
 
 /** How many to order: whole pieces. */
-const quantityField = z
-  .union([z.number(), z.string()], { error: "Enter how many, as a whole number." })
-  .transform((v, ctx) => {
-    const n = typeof v === "number" ? v : v.trim() === "" ? Number.NaN : Number(v.trim());
-    if (!Number.isInteger(n) || n < 1 || n > 9999) {
-      ctx.addIssue({ code: "custom", message: "Enter how many as a whole number from 1 to 9999." });
-      return z.NEVER;
-    }
-    return n;
-  });
+const quantityField = z.union([z.number(), z.string()], { error: "Enter how many, as a whole number." }).transform((v, ctx) => {
+  const n = typeof v === "number" ? v : v.trim() === "" ? Number.NaN : Number(v.trim());
+  if (!Number.isInteger(n) || n < 1 || n > 9999) {
+    ctx.addIssue({ code: "custom", message: "Enter how many as a whole number from 1 to 9999." });
+    return z.NEVER;
+  }
+  return n;
+});
 
 /**
  * A unit cost as typed ("1.20", "1,250.00"); blank clears it. The server turns it into minor units of the

@@ -62,7 +62,11 @@ function readRating(text: string | null, kind: PartKind): number | null {
 }
 
 /** One side (original or replacement) of a part: its value and rating in SI, or null for each it cannot read. */
-export function readPartSide(kind: PartKind, valueText: string | null | undefined, ratingText: string | null | undefined): { value: number | null; rating: number | null } {
+export function readPartSide(
+  kind: PartKind,
+  valueText: string | null | undefined,
+  ratingText: string | null | undefined,
+): { value: number | null; rating: number | null } {
   const { value, rating: inValue } = splitValueAndRating(valueText ?? "", kind);
   const ratingSource = ratingText?.trim() ? ratingText : inValue;
   return { value: readValue(value, kind), rating: readRating(ratingSource, kind) };

@@ -61,7 +61,11 @@ export function partsToCsv(parts: ExportedPart[], currency: string | null = null
   return Papa.unparse({ fields: [...columns], data: rows }, { newline: "\r\n" });
 }
 
-const normaliseHeader = (h: string) => h.trim().toLowerCase().replace(/[\s-]+/g, "_");
+const normaliseHeader = (h: string) =>
+  h
+    .trim()
+    .toLowerCase()
+    .replace(/[\s-]+/g, "_");
 const unescapeCell = (v: string) => (/^'[=+\-@\t\r]/.test(v) ? v.slice(1) : v);
 
 export type CsvImport = { ok: true; rows: PartValues[] } | { ok: false; message: string; fields: Record<string, string> };
@@ -75,11 +79,19 @@ export function parsePartsCsv(text: string): CsvImport {
   const headers = parsed.meta.fields ?? [];
   const missing = ["designator", "kind"].filter((h) => !headers.includes(h));
   if (missing.length) {
-    return { ok: false, message: `The header row needs the columns ${missing.join(" and ")} (columns: ${CSV_COLUMNS.join(", ")}).`, fields: { header: `Missing column: ${missing.join(", ")}` } };
+    return {
+      ok: false,
+      message: `The header row needs the columns ${missing.join(" and ")} (columns: ${CSV_COLUMNS.join(", ")}).`,
+      fields: { header: `Missing column: ${missing.join(", ")}` },
+    };
   }
   const unknown = headers.filter((h) => h && !(CSV_COLUMNS as readonly string[]).includes(h));
   if (unknown.length) {
-    return { ok: false, message: `Unknown column${unknown.length > 1 ? "s" : ""}: ${unknown.join(", ")}. Use ${CSV_COLUMNS.join(", ")}.`, fields: { header: `Unknown column: ${unknown.join(", ")}` } };
+    return {
+      ok: false,
+      message: `Unknown column${unknown.length > 1 ? "s" : ""}: ${unknown.join(", ")}. Use ${CSV_COLUMNS.join(", ")}.`,
+      fields: { header: `Unknown column: ${unknown.join(", ")}` },
+    };
   }
   const fields: Record<string, string> = {};
   const rows: PartValues[] = [];
@@ -110,6 +122,7 @@ export function parsePartsCsv(text: string): CsvImport {
     return { ok: false, message: `${badRows.size} row${badRows.size > 1 ? "s need" : " needs"} attention; nothing was imported.`, fields };
   }
   if (rows.length === 0) return { ok: false, message: "The CSV has a header but no parts.", fields: { csv: "Add at least one part under the header row." } };
-  if (rows.length > MAX_IMPORT_ROWS) return { ok: false, message: `Import up to ${MAX_IMPORT_ROWS} parts at a time.`, fields: { csv: `This file has ${rows.length} parts.` } };
+  if (rows.length > MAX_IMPORT_ROWS)
+    return { ok: false, message: `Import up to ${MAX_IMPORT_ROWS} parts at a time.`, fields: { csv: `This file has ${rows.length} parts.` } };
   return { ok: true, rows };
 }

@@ -42,7 +42,12 @@ export function stepWarnings(step: StepFigures, stopCurrent: number | null): Pow
     ];
   }
   if (step.currentDrawn >= NEAR_STOP * stopCurrent) {
-    return [{ level: "caution", message: `Drew ${amps(step.currentDrawn)}, within 10 % of the ${amps(stopCurrent)} stop current: go up in small steps and watch it.` }];
+    return [
+      {
+        level: "caution",
+        message: `Drew ${amps(step.currentDrawn)}, within 10 % of the ${amps(stopCurrent)} stop current: go up in small steps and watch it.`,
+      },
+    ];
   }
   return [];
 }
@@ -53,7 +58,11 @@ export const lowerFirst = (text: string) => text.charAt(0).toLowerCase() + text.
 /** The checklist is advice, not a gate: every unticked item is shown as not done. Null: a session moved from the Log, with no checklist. */
 export function checklistWarnings(checklist: Partial<Record<PowerUpChecklistId, boolean>> | null): ChecklistWarning[] {
   if (checklist === null) return [];
-  return POWER_UP_CHECKLIST.filter((c) => checklist[c.id] !== true).map((c) => ({ id: c.id, level: "caution", message: `Not done before first power: ${lowerFirst(c.label)}.` }));
+  return POWER_UP_CHECKLIST.filter((c) => checklist[c.id] !== true).map((c) => ({
+    id: c.id,
+    level: "caution",
+    message: `Not done before first power: ${lowerFirst(c.label)}.`,
+  }));
 }
 
 export interface PlotPoint {
@@ -87,7 +96,12 @@ export function plotData(steps: readonly StepFigures[], stopCurrent: number | nu
  * Why a session may not be marked passed, or null: a step over the stop current needs a reason
  * (docs/PRODUCT.md "Power-ups"). Stopping needs none.
  */
-export function outcomeRefusal(outcome: "passed" | "stopped", reason: string | null | undefined, steps: readonly StepFigures[], stopCurrent: number | null): string | null {
+export function outcomeRefusal(
+  outcome: "passed" | "stopped",
+  reason: string | null | undefined,
+  steps: readonly StepFigures[],
+  stopCurrent: number | null,
+): string | null {
   if (outcome !== "passed" || (reason ?? "").trim()) return null;
   const over = steps.filter((s) => isOverStop(s.currentDrawn, stopCurrent)).length;
   if (!over) return null;

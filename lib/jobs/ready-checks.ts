@@ -37,7 +37,10 @@ export function readyChecks(record: ReadyRecord): ReadyIssue[] {
   const issues: ReadyIssue[] = [];
   const unfitted = record.parts.filter((p) => p.state !== "fitted").map((p) => p.designator);
   if (unfitted.length) {
-    issues.push({ id: "parts-not-fitted", message: `${plural(unfitted.length, "part on the list is", "parts on the list are")} not fitted yet: ${listed(unfitted)}.` });
+    issues.push({
+      id: "parts-not-fitted",
+      message: `${plural(unfitted.length, "part on the list is", "parts on the list are")} not fitted yet: ${listed(unfitted)}.`,
+    });
   }
   // "found" is still open work: the cause is known but the repair is not written.
   const unfixed = record.faults.filter((f) => f.state !== "fixed").map((f) => `“${f.symptom}”`);

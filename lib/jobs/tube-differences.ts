@@ -101,7 +101,9 @@ function ratingRow(what: string, unit: string, o: number | undefined, s: number 
 
 function receivingRows(o: ReceivingTube, s: ReceivingTube): TubeDifference[] {
   return [
-    ...(o.kind !== s.kind ? [{ what: "Kind", original: o.kind, substitute: s.kind, level: "caution" as const, note: "A different kind of tube: check the circuit suits it." }] : []),
+    ...(o.kind !== s.kind
+      ? [{ what: "Kind", original: o.kind, substitute: s.kind, level: "caution" as const, note: "A different kind of tube: check the circuit suits it." }]
+      : []),
     ...ratingRow("Max plate voltage", "V", o.maxPlateVoltage, s.maxPlateVoltage),
     ...ratingRow("Max peak pulse voltage", "V", o.maxPeakPulseVoltage, s.maxPeakPulseVoltage),
     ...ratingRow("Max peak inverse voltage", "V", o.maxPeakInverseVoltage, s.maxPeakInverseVoltage),
@@ -125,12 +127,29 @@ function pictureRows(o: PictureTube, s: PictureTube): TubeDifference[] {
       original: `${o.deflectionAngle}°`,
       substitute: `${s.deflectionAngle}°`,
       level: o.deflectionAngle === s.deflectionAngle ? "info" : "caution",
-      ...(o.deflectionAngle === s.deflectionAngle ? {} : { note: "The yoke is wound for one angle: the picture will not fill the screen, or will be cut off, without another yoke." }),
+      ...(o.deflectionAngle === s.deflectionAngle
+        ? {}
+        : { note: "The yoke is wound for one angle: the picture will not fill the screen, or will be cut off, without another yoke." }),
     },
   ];
-  if (o.focus !== s.focus) rows.push({ what: "Focus", original: o.focus, substitute: s.focus, level: "caution", note: "Magnetic and electrostatic focus are wired differently: check the focus coil or focus-electrode connection." });
-  if (o.ionTrap !== s.ionTrap) rows.push({ what: "Ion trap", original: o.ionTrap ? "needed" : "none", substitute: s.ionTrap ? "needed" : "none", level: "caution", note: "Fit or remove the ion-trap magnet to suit the substitute." });
-  if (o.face !== s.face) rows.push({ what: "Face", original: o.face, substitute: s.face, level: "caution", note: "A different face shape needs another mask and mounting." });
+  if (o.focus !== s.focus)
+    rows.push({
+      what: "Focus",
+      original: o.focus,
+      substitute: s.focus,
+      level: "caution",
+      note: "Magnetic and electrostatic focus are wired differently: check the focus coil or focus-electrode connection.",
+    });
+  if (o.ionTrap !== s.ionTrap)
+    rows.push({
+      what: "Ion trap",
+      original: o.ionTrap ? "needed" : "none",
+      substitute: s.ionTrap ? "needed" : "none",
+      level: "caution",
+      note: "Fit or remove the ion-trap magnet to suit the substitute.",
+    });
+  if (o.face !== s.face)
+    rows.push({ what: "Face", original: o.face, substitute: s.face, level: "caution", note: "A different face shape needs another mask and mounting." });
   return rows;
 }
 

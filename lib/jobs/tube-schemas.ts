@@ -55,15 +55,13 @@ export const MAX_LINEUP = 40;
 
 /** A set's whole line-up pasted at once ("6BE6 6BA6 6AV6 6AQ5 6X4"), or picked from the table as a list. */
 export const tubeLineupSchema = z.object({
-  types: z
-    .union([z.string(), z.array(z.string())], { error: "List the tube types, like “6BE6 6BA6 6AV6 6AQ5 6X4”." })
-    .transform((v, ctx) => {
-      const list = (Array.isArray(v) ? v : v.split(/[\s,;]+/)).map((t) => normaliseTubeName(t)).filter(Boolean);
-      const bad = list.find((t) => t.length > 20 || !/^[0-9A-Z/]+$/.test(t));
-      if (bad) ctx.addIssue({ code: "custom", message: `“${bad.slice(0, 24)}” is not a tube type: list them like “6BE6 6BA6 6AV6”.` });
-      else if (!list.length) ctx.addIssue({ code: "custom", message: "List the tube types, like “6BE6 6BA6 6AV6 6AQ5 6X4”." });
-      else if (list.length > MAX_LINEUP) ctx.addIssue({ code: "custom", message: `Add at most ${MAX_LINEUP} tubes at a time.` });
-      return list;
-    }),
+  types: z.union([z.string(), z.array(z.string())], { error: "List the tube types, like “6BE6 6BA6 6AV6 6AQ5 6X4”." }).transform((v, ctx) => {
+    const list = (Array.isArray(v) ? v : v.split(/[\s,;]+/)).map((t) => normaliseTubeName(t)).filter(Boolean);
+    const bad = list.find((t) => t.length > 20 || !/^[0-9A-Z/]+$/.test(t));
+    if (bad) ctx.addIssue({ code: "custom", message: `“${bad.slice(0, 24)}” is not a tube type: list them like “6BE6 6BA6 6AV6”.` });
+    else if (!list.length) ctx.addIssue({ code: "custom", message: "List the tube types, like “6BE6 6BA6 6AV6 6AQ5 6X4”." });
+    else if (list.length > MAX_LINEUP) ctx.addIssue({ code: "custom", message: `Add at most ${MAX_LINEUP} tubes at a time.` });
+    return list;
+  }),
 });
 export type TubeLineupInput = z.input<typeof tubeLineupSchema>;

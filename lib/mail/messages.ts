@@ -24,7 +24,9 @@ export function invitationMail(input: { workshopName: string; inviterName: strin
   return {
     subject: `Join ${input.workshopName} on Glowbench`,
     text: [lead, how, input.link, ignore].join("\n\n"),
-    html: html([lead, how], { href: input.link, label: `Join ${input.workshopName}` }) + `<p style="font-family:system-ui,sans-serif;color:${LIGHT.muted};font-size:14px">${escape(ignore)}</p>`,
+    html:
+      html([lead, how], { href: input.link, label: `Join ${input.workshopName}` }) +
+      `<p style="font-family:system-ui,sans-serif;color:${LIGHT.muted};font-size:14px">${escape(ignore)}</p>`,
   };
 }
 
@@ -35,6 +37,8 @@ export function passwordResetMail(input: { name: string; link: string }) {
   return {
     subject: "Set a new Glowbench password",
     text: [lead, how, input.link, ignore].join("\n\n"),
-    html: html([lead, how], { href: input.link, label: "Choose a new password" }) + `<p style="font-family:system-ui,sans-serif;color:${LIGHT.muted};font-size:14px">${escape(ignore)}</p>`,
+    html:
+      html([lead, how], { href: input.link, label: "Choose a new password" }) +
+      `<p style="font-family:system-ui,sans-serif;color:${LIGHT.muted};font-size:14px">${escape(ignore)}</p>`,
   };
 }

@@ -25,7 +25,11 @@ export interface ParsedMail {
 /** Each header as sent (unfolded, not decoded), by its lower-case name; a repeated header keeps its last value. */
 function rawHeaders(lines: HeaderLines): Record<string, string> {
   const headers: Record<string, string> = {};
-  for (const { key, line } of lines) headers[key] = line.slice(line.indexOf(":") + 1).replace(/\r?\n[ \t]+/g, " ").trim();
+  for (const { key, line } of lines)
+    headers[key] = line
+      .slice(line.indexOf(":") + 1)
+      .replace(/\r?\n[ \t]+/g, " ")
+      .trim();
   return headers;
 }
 

@@ -43,7 +43,12 @@ export async function storeMessage(dir: string, raw: Buffer, envelope: StoredMai
     text: parsed.text,
     html: parsed.html,
     workshopId: Number.isInteger(workshop) && workshop > 0 ? workshop : null,
-    attachments: parsed.attachments.map((a) => ({ filename: a.filename, contentType: a.contentType, size: a.content.length, contentBase64: a.content.toString("base64") })),
+    attachments: parsed.attachments.map((a) => ({
+      filename: a.filename,
+      contentType: a.contentType,
+      size: a.content.length,
+      contentBase64: a.content.toString("base64"),
+    })),
   };
   fs.mkdirSync(dir, { recursive: true });
   fs.writeFileSync(path.join(dir, `${id}.eml`), raw);

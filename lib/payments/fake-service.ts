@@ -136,7 +136,11 @@ async function deliver(url: string, event: unknown, secret: string): Promise<boo
     try {
       const res = await fetch(url, {
         method: "POST",
-        headers: { "content-type": "application/json; charset=utf-8", "stripe-signature": signatureHeader(payload, secret), "user-agent": "glowbench-fake-payments" },
+        headers: {
+          "content-type": "application/json; charset=utf-8",
+          "stripe-signature": signatureHeader(payload, secret),
+          "user-agent": "glowbench-fake-payments",
+        },
         body: payload,
       });
       if (res.ok) return true;

@@ -17,9 +17,25 @@
  */
 
 export const TOKENS = [
-  "paper", "panel", "sunk", "ink", "muted", "rule", "edge",
-  "glow", "glow-ink", "glow-bg", "signal",
-  "hazard", "hazard-bg", "caution", "caution-bg", "ok", "ok-bg", "flag", "flag-bg",
+  "paper",
+  "panel",
+  "sunk",
+  "ink",
+  "muted",
+  "rule",
+  "edge",
+  "glow",
+  "glow-ink",
+  "glow-bg",
+  "signal",
+  "hazard",
+  "hazard-bg",
+  "caution",
+  "caution-bg",
+  "ok",
+  "ok-bg",
+  "flag",
+  "flag-bg",
 ] as const;
 
 export type Token = (typeof TOKENS)[number];

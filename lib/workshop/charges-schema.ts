@@ -67,9 +67,19 @@ export const chargesSchema = z
     const minor = parseMoney(v.hourlyRate, v.currency);
     if (minor === null) {
       const places = minorExponent(v.currency);
-      ctx.addIssue({ code: "custom", path: ["hourlyRate"], message: places ? `Use at most ${places} decimals for ${v.currency}, like 45.${"0".repeat(places)}.` : `${v.currency} has no decimals; enter a whole amount, like 6000.` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["hourlyRate"],
+        message: places
+          ? `Use at most ${places} decimals for ${v.currency}, like 45.${"0".repeat(places)}.`
+          : `${v.currency} has no decimals; enter a whole amount, like 6000.`,
+      });
     } else if (minor > maxHourlyRateMinor(v.currency)) {
-      ctx.addIssue({ code: "custom", path: ["hourlyRate"], message: `Keep the hourly rate at or under ${formatMoney(maxHourlyRateMinor(v.currency), v.currency)}.` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["hourlyRate"],
+        message: `Keep the hourly rate at or under ${formatMoney(maxHourlyRateMinor(v.currency), v.currency)}.`,
+      });
     }
   })
   .transform((v) => ({ currency: v.currency, hourlyRateMinor: parseMoney(v.hourlyRate, v.currency)!, taxRateBp: parsePercentBp(v.taxRate)! }));

@@ -13,7 +13,11 @@ const optionalText = (max: number, message: string) =>
     .transform((s) => (s === "" ? null : s));
 
 export const workshopSettingsSchema = z.object({
-  name: z.string({ error: "Name your workshop." }).trim().min(2, "Name your workshop (2 characters or more).").max(80, "Keep the workshop name under 80 characters."),
+  name: z
+    .string({ error: "Name your workshop." })
+    .trim()
+    .min(2, "Name your workshop (2 characters or more).")
+    .max(80, "Keep the workshop name under 80 characters."),
   contactEmail: z
     .string()
     .trim()
@@ -37,20 +41,24 @@ export type InvitationForm = z.input<typeof invitationSchema>;
 const tokenField = z.string({ error: "The link is incomplete." }).regex(/^[A-Za-z0-9_-]{32,64}$/, "The link is incomplete; open it again from the e-mail.");
 
 /** Joining: a new account (name + password), an existing one (its password), or the session already signed in as the invitee. */
-export const acceptInvitationSchema = z.discriminatedUnion("mode", [
-  z.object({
-    mode: z.literal("sign-up"),
-    token: tokenField,
-    name: z.string({ error: "Enter your name." }).trim().min(1, "Enter your name.").max(80, "Keep your name under 80 characters."),
-    password: newPasswordField,
-  }),
-  z.object({
-    mode: z.literal("sign-in"),
-    token: tokenField,
-    password: z.string({ error: "Enter your password." }).min(1, "Enter your password.").max(PASSWORD_MAX, "That password is too long."),
-  }),
-  z.object({ mode: z.literal("session"), token: tokenField }),
-], { error: "Say how you are joining: sign-up, sign-in or session." });
+export const acceptInvitationSchema = z.discriminatedUnion(
+  "mode",
+  [
+    z.object({
+      mode: z.literal("sign-up"),
+      token: tokenField,
+      name: z.string({ error: "Enter your name." }).trim().min(1, "Enter your name.").max(80, "Keep your name under 80 characters."),
+      password: newPasswordField,
+    }),
+    z.object({
+      mode: z.literal("sign-in"),
+      token: tokenField,
+      password: z.string({ error: "Enter your password." }).min(1, "Enter your password.").max(PASSWORD_MAX, "That password is too long."),
+    }),
+    z.object({ mode: z.literal("session"), token: tokenField }),
+  ],
+  { error: "Say how you are joining: sign-up, sign-in or session." },
+);
 
 export const joinNewSchema = z.object({ name: acceptInvitationSchema.options[0].shape.name, password: newPasswordField });
 export type JoinNewForm = z.input<typeof joinNewSchema>;

@@ -33,7 +33,9 @@ export function benchSheetData(member: Member, jobId: number) {
     const calc = getCalculator(c.slug);
     const run = calc ? runCalculator(calc, c.inputs) : null;
     const results = calc
-      ? calc.outputs.filter((o) => c.outputs[o.name] !== undefined).map((o) => ({ label: t(o.label), value: t(outputText(c.outputs[o.name] as OutputValue, o.unit)) }))
+      ? calc.outputs
+          .filter((o) => c.outputs[o.name] !== undefined)
+          .map((o) => ({ label: t(o.label), value: t(outputText(c.outputs[o.name] as OutputValue, o.unit)) }))
       : Object.entries(c.outputs).map(([k, v]) => ({ label: k, value: t(outputText(v as OutputValue, "")) }));
     return {
       title: t(calc?.title ?? c.slug),

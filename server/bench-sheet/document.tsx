@@ -16,7 +16,9 @@ export function BenchSheetDocument({ data }: { data: BenchSheetData }) {
       <Page size="A4" style={s.page}>
         <View style={s.top} fixed>
           <Text style={s.brand}>{data.workshop} · Bench sheet</Text>
-          <Text style={s.brand}>Job {job.number} · printed {data.printedOn}</Text>
+          <Text style={s.brand}>
+            Job {job.number} · printed {data.printedOn}
+          </Text>
         </View>
         <Text style={s.title}>{job.title}</Text>
         <View style={s.facts}>
@@ -35,7 +37,13 @@ export function BenchSheetDocument({ data }: { data: BenchSheetData }) {
         <Heading>Parts fitted</Heading>
         {data.partsFitted.length ? (
           <Table
-            cols={[{ label: "Ref.", width: "10%" }, { label: "Kind", width: "18%" }, { label: "Original", width: "27%" }, { label: "Fitted", width: "27%" }, { label: "Checked", width: "18%" }]}
+            cols={[
+              { label: "Ref.", width: "10%" },
+              { label: "Kind", width: "18%" },
+              { label: "Original", width: "27%" },
+              { label: "Fitted", width: "27%" },
+              { label: "Checked", width: "18%" },
+            ]}
             rows={data.partsFitted.map((p) => [p.designator, p.kind, p.original, p.replacement, p.checked])}
           />
         ) : (
@@ -55,7 +63,14 @@ export function BenchSheetDocument({ data }: { data: BenchSheetData }) {
         <Heading>Resistor survey</Heading>
         {data.resistors.length ? (
           <Table
-            cols={[{ label: "Ref.", width: "14%" }, { label: "Marked", width: "16%" }, { label: "Tolerance", width: "14%" }, { label: "Measured", width: "16%" }, { label: "Deviation", width: "16%" }, { label: "Verdict", width: "24%" }]}
+            cols={[
+              { label: "Ref.", width: "14%" },
+              { label: "Marked", width: "16%" },
+              { label: "Tolerance", width: "14%" },
+              { label: "Measured", width: "16%" },
+              { label: "Deviation", width: "16%" },
+              { label: "Verdict", width: "24%" },
+            ]}
             rows={data.resistors.map((r) => [r.designator, r.nominal, r.tolerance, r.measured, r.deviation, r.verdict])}
           />
         ) : (
@@ -65,7 +80,13 @@ export function BenchSheetDocument({ data }: { data: BenchSheetData }) {
         <Heading>Voltages</Heading>
         {data.voltages.length ? (
           <Table
-            cols={[{ label: "Test point", width: "32%" }, { label: "Expected", width: "16%" }, { label: "Measured", width: "16%" }, { label: "Difference", width: "14%" }, { label: "Verdict", width: "22%" }]}
+            cols={[
+              { label: "Test point", width: "32%" },
+              { label: "Expected", width: "16%" },
+              { label: "Measured", width: "16%" },
+              { label: "Difference", width: "14%" },
+              { label: "Verdict", width: "22%" },
+            ]}
             rows={data.voltages.map((r) => [r.designator, r.expected, r.measured, r.deviation, r.verdict])}
           />
         ) : (

@@ -5,13 +5,7 @@ import { listPowerUps } from "@/db/queries/power-ups";
 import { listTubes } from "@/db/queries/tubes";
 import { formatQuantity } from "@/lib/calc/format";
 import { pdfText as t } from "@/lib/jobs/latex-text";
-import {
-  FAULT_CANDIDATE_STATUS_LABELS,
-  FAULT_STATE_LABELS,
-  POWER_UP_LIMITER_LABELS,
-  POWER_UP_OUTCOME_LABELS,
-  TUBE_VERDICT_LABELS,
-} from "@/lib/vocabulary";
+import { FAULT_CANDIDATE_STATUS_LABELS, FAULT_STATE_LABELS, POWER_UP_LIMITER_LABELS, POWER_UP_OUTCOME_LABELS, TUBE_VERDICT_LABELS } from "@/lib/vocabulary";
 
 /** The bench record's part of the bench sheet: tubes and their verdicts, each power-up's steps, faults with their causes. */
 
@@ -75,7 +69,10 @@ function faultsData(member: Member, jobId: number) {
     candidates: f.candidates.map((c) => ({
       text: t(`${c.position}. ${c.description} — ${FAULT_CANDIDATE_STATUS_LABELS[c.status].toLowerCase()}`),
       cause: c.status === "cause",
-      evidence: [c.evidence, c.reading ? `reading ${c.reading.designator}: ${c.reading.measured === null ? "open" : formatQuantity(c.reading.measured, c.reading.unit)}` : null]
+      evidence: [
+        c.evidence,
+        c.reading ? `reading ${c.reading.designator}: ${c.reading.measured === null ? "open" : formatQuantity(c.reading.measured, c.reading.unit)}` : null,
+      ]
         .filter(Boolean)
         .map((e) => t(e!))
         .join("; "),

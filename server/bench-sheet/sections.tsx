@@ -50,7 +50,14 @@ export function TubesSection({ tubes }: { tubes: BenchSheetData["tubes"] }) {
   return (
     <View>
       <Table
-        cols={[{ label: "Socket", width: "10%" }, { label: "Type", width: "13%" }, { label: "Function", width: "30%" }, { label: "Test", width: "15%" }, { label: "Verdict", width: "15%" }, { label: "Substitute", width: "17%" }]}
+        cols={[
+          { label: "Socket", width: "10%" },
+          { label: "Type", width: "13%" },
+          { label: "Function", width: "30%" },
+          { label: "Test", width: "15%" },
+          { label: "Verdict", width: "15%" },
+          { label: "Substitute", width: "17%" },
+        ]}
         rows={tubes.rows.map((r) => [r.position, r.type, r.function, r.test, r.verdict, r.substitute])}
       />
       {tubes.seriesString ? <Text style={[s.muted, { marginTop: 3 }]}>Heaters in a series string: every heater carries the same current.</Text> : null}
@@ -83,7 +90,13 @@ export function PowerUpsSection({ sessions }: { sessions: BenchSheetData["powerU
           </View>
           {p.steps.length ? (
             <Table
-              cols={[{ label: "Supply", width: "13%" }, { label: "Current", width: "13%" }, { label: "Held", width: "11%" }, { label: "B+", width: "12%" }, { label: "Seen, heard or smelt", width: "51%" }]}
+              cols={[
+                { label: "Supply", width: "13%" },
+                { label: "Current", width: "13%" },
+                { label: "Held", width: "11%" },
+                { label: "B+", width: "12%" },
+                { label: "Seen, heard or smelt", width: "51%" },
+              ]}
               rows={p.steps.map((st) => [st.supply, st.current, st.minutes, st.bPlus, st.note])}
               marked={p.steps.map((st) => st.overStop)}
             />

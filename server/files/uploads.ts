@@ -36,7 +36,6 @@ export function uploadsDir(): string {
 /** A browser sends only a base name; anything with folders, "..", or control characters is refused. */
 export function checkOriginalName(name: string): string {
   const trimmed = name.trim();
-  // eslint-disable-next-line no-control-regex
   if (!trimmed || /[\/\\\u0000-\u001f\u007f]/.test(trimmed) || trimmed.includes("..") || trimmed.length > 200) {
     throw new ValidationError("That file name is not accepted: use a plain name without folders or “..”, up to 200 characters.", {
       file: "Rename the file to a plain name (letters, numbers, dashes) and try again.",
@@ -67,7 +66,9 @@ export async function prepareUpload(file: File): Promise<PreparedUpload> {
   let thumbnail: Buffer | null = null;
   if (type.startsWith("image/")) {
     const tooBig = () =>
-      new TooLargeError(`Images may be up to ${MAX_IMAGE_PIXELS / 1e6} megapixels.`, { file: "This image has too many pixels; export a smaller copy (for example 4000 × 3000)." });
+      new TooLargeError(`Images may be up to ${MAX_IMAGE_PIXELS / 1e6} megapixels.`, {
+        file: "This image has too many pixels; export a smaller copy (for example 4000 × 3000).",
+      });
     let pixels = 0;
     try {
       const { width = 0, height = 0 } = await sharp(bytes, { limitInputPixels: false }).metadata(); // reads the header only
@@ -77,7 +78,11 @@ export async function prepareUpload(file: File): Promise<PreparedUpload> {
     }
     if (pixels > MAX_IMAGE_PIXELS) throw tooBig();
     try {
-      thumbnail = await sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS }).rotate().resize(480, 480, { fit: "inside", withoutEnlargement: true }).webp({ quality: 78 }).toBuffer();
+      thumbnail = await sharp(bytes, { limitInputPixels: MAX_IMAGE_PIXELS })
+        .rotate()
+        .resize(480, 480, { fit: "inside", withoutEnlargement: true })
+        .webp({ quality: 78 })
+        .toBuffer();
     } catch (err) {
       if (/pixel limit/i.test(String(err))) throw tooBig();
       throw new UnsupportedTypeError("That image could not be read; it may be damaged.", { file: "The image could not be opened; save it again and retry." });

@@ -12,7 +12,11 @@ export const HSTS_VALUE = "max-age=31536000; includeSubDomains";
 export function servedOverHttps(headers: Headers, env: EnvFor<"GLOWBENCH_PUBLIC_URL" | "GLOWBENCH_TRUST_PROXY"> = serverEnv()): boolean {
   if (env.GLOWBENCH_PUBLIC_URL?.startsWith("https://")) return true;
   if (env.GLOWBENCH_TRUST_PROXY !== "1") return false;
-  const proto = (headers.get("x-forwarded-proto") ?? "").split(",").map((s) => s.trim().toLowerCase()).filter(Boolean).at(-1);
+  const proto = (headers.get("x-forwarded-proto") ?? "")
+    .split(",")
+    .map((s) => s.trim().toLowerCase())
+    .filter(Boolean)
+    .at(-1);
   return proto === "https";
 }
 

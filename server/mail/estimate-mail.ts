@@ -3,7 +3,16 @@ import { sendMail } from "./send";
 
 /** The e-mails of the estimate round trip: the approval link to the customer, the answer to whoever prepared it. */
 
-export async function sendApprovalLink(input: { workshopId: number; to: string; customerName: string | null; workshopName: string; jobTitle: string; total: string; link: string; expiresAt: Date }) {
+export async function sendApprovalLink(input: {
+  workshopId: number;
+  to: string;
+  customerName: string | null;
+  workshopName: string;
+  jobTitle: string;
+  total: string;
+  link: string;
+  expiresAt: Date;
+}) {
   const until = input.expiresAt.toLocaleDateString("en-GB", { day: "numeric", month: "long", year: "numeric" });
   const text = [
     `${input.customerName ? `Dear ${input.customerName}` : "Hello"},`,
@@ -20,7 +29,13 @@ export async function sendApprovalLink(input: { workshopId: number; to: string; 
   await sendMail({ to: input.to, subject: `Your estimate from ${input.workshopName}: ${input.total}`, text, workshopId: input.workshopId });
 }
 
-export async function notifyPreparer(answer: { workshopId: number; text: string; status: string; job: { id: number; title: string }; preparer?: { email: string; name: string } }) {
+export async function notifyPreparer(answer: {
+  workshopId: number;
+  text: string;
+  status: string;
+  job: { id: number; title: string };
+  preparer?: { email: string; name: string };
+}) {
   if (!answer.preparer) return;
   try {
     await sendMail({

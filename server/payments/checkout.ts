@@ -56,7 +56,11 @@ async function sessionUrl(load: () => Payable, origin: string, record: (sessionI
         line_items: [
           {
             quantity: 1,
-            price_data: { currency: invoice.currency.toLowerCase(), unit_amount: invoice.totalMinor, product_data: { name: `${invoice.workshopName} — invoice ${invoice.number}` } },
+            price_data: {
+              currency: invoice.currency.toLowerCase(),
+              unit_amount: invoice.totalMinor,
+              product_data: { name: `${invoice.workshopName} — invoice ${invoice.number}` },
+            },
           },
         ],
         ...returnUrls(origin, invoice.id),

@@ -25,7 +25,12 @@ export function getStripe(): Stripe {
     let options: Stripe.StripeConfig = { maxNetworkRetries: 1, timeout: 15_000, telemetry: false };
     if (base) {
       const url = new URL(base);
-      options = { ...options, host: url.hostname, port: url.port || (url.protocol === "https:" ? 443 : 80), protocol: url.protocol === "https:" ? "https" : "http" };
+      options = {
+        ...options,
+        host: url.hostname,
+        port: url.port || (url.protocol === "https:" ? 443 : 80),
+        protocol: url.protocol === "https:" ? "https" : "http",
+      };
     }
     return new Stripe(key, options);
   });

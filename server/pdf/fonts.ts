@@ -27,10 +27,7 @@ Font.register({
 });
 Font.register({
   family: PDF_FIGURES,
-  fonts: [
-    { src: fontFile("jetbrains-mono-latin-400-normal.woff") },
-    { src: fontFile("jetbrains-mono-latin-600-normal.woff"), fontWeight: 600 },
-  ],
+  fonts: [{ src: fontFile("jetbrains-mono-latin-400-normal.woff") }, { src: fontFile("jetbrains-mono-latin-600-normal.woff"), fontWeight: 600 }],
 });
 Font.register({
   family: PDF_GREEK,

@@ -100,7 +100,15 @@ async function loadCalculators(): Promise<{ bySlug: Map<string, Calculator>; err
 
 function benchCalculator(calc: Calculator, roundMs: number): CalcFigure {
   const kind = ITERATIVE_SLUGS.includes(calc.slug) ? "iterative" : "closed-form";
-  const skip = (why: string): CalcFigure => ({ slug: calc.slug, kind, computePerSecond: null, validatedPerSecond: null, runPerSecond: null, meetsTargets: null, skipped: why });
+  const skip = (why: string): CalcFigure => ({
+    slug: calc.slug,
+    kind,
+    computePerSecond: null,
+    validatedPerSecond: null,
+    runPerSecond: null,
+    meetsTargets: null,
+    skipped: why,
+  });
   const sample = samples[calc.slug];
   if (!sample) return skip("no sample input");
   const parsed = calc.schema.safeParse(sample);
@@ -119,8 +127,7 @@ function benchCalculator(calc: Calculator, roundMs: number): CalcFigure {
     return p.success ? calc.compute(p.data) : p;
   }, roundMs);
   const runPerSecond = perSecond(() => runCalculator(calc, sample), roundMs);
-  const meetsTargets =
-    kind === "closed-form" ? computePerSecond >= TARGETS.computePerSecond && validatedPerSecond >= TARGETS.validatedPerSecond : null;
+  const meetsTargets = kind === "closed-form" ? computePerSecond >= TARGETS.computePerSecond && validatedPerSecond >= TARGETS.validatedPerSecond : null;
   return { slug: calc.slug, kind, computePerSecond, validatedPerSecond, runPerSecond, meetsTargets };
 }
 
@@ -157,7 +164,15 @@ export async function runCalcBench(options: { roundMs?: number; solveBatches?: n
     const calc = bySlug.get(slug);
     if (!calc) {
       const kind = ITERATIVE_SLUGS.includes(slug) ? "iterative" : "closed-form";
-      calculators.push({ slug, kind, computePerSecond: null, validatedPerSecond: null, runPerSecond: null, meetsTargets: null, skipped: errors.get(slug) ?? "not in the registry" });
+      calculators.push({
+        slug,
+        kind,
+        computePerSecond: null,
+        validatedPerSecond: null,
+        runPerSecond: null,
+        meetsTargets: null,
+        skipped: errors.get(slug) ?? "not in the registry",
+      });
       continue;
     }
     calculators.push(benchCalculator(calc, roundMs));
@@ -178,7 +193,11 @@ export function formatReport(r: BenchReport): string {
     rows.push([c.slug, c.kind, fmtRate(c.computePerSecond), fmtRate(c.validatedPerSecond), fmtRate(c.runPerSecond), verdict, c.skipped ?? ""]);
   }
   const widths = rows[0].map((_, i) => Math.max(...rows.map((row) => row[i].length)));
-  const line = (row: string[]) => row.map((cell, i) => (i >= 2 && i <= 4 ? cell.padStart(widths[i]) : cell.padEnd(widths[i]))).join("  ").trimEnd();
+  const line = (row: string[]) =>
+    row
+      .map((cell, i) => (i >= 2 && i <= 4 ? cell.padStart(widths[i]) : cell.padEnd(widths[i])))
+      .join("  ")
+      .trimEnd();
   const t = r.triodeSolve;
   return [
     `Glowbench calculator bench (Node ${r.node})`,

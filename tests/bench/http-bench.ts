@@ -74,9 +74,14 @@ function cpuTicks(root: number): number | null {
       })
       .filter((x): x is { pid: number; ppid: number; ticks: number } => x !== null);
     const tree = new Set([root]);
-    for (let grew = true; grew; ) {
+    for (let grew = true; grew;) {
       grew = false;
-      for (const p of stats) if (!tree.has(p.pid) && tree.has(p.ppid)) (tree.add(p.pid), (grew = true));
+      for (const p of stats) {
+        if (!tree.has(p.pid) && tree.has(p.ppid)) {
+          tree.add(p.pid);
+          grew = true;
+        }
+      }
     }
     return stats.filter((p) => tree.has(p.pid)).reduce((n, p) => n + p.ticks, 0);
   } catch {
@@ -156,7 +161,10 @@ export async function runHttpBench(o: { rounds?: number; seconds?: number; conne
     if (check.status !== 200) throw new Error(`cathode-bias answered ${check.status}: ${(await check.text()).slice(0, 200)}`);
     await fire(server.base, server.pid, HEALTH, 2, connections); // warm-up: JIT and route loading
     await fire(server.base, server.pid, CALC, 2, connections);
-    const runs = new Map<Load, Awaited<ReturnType<typeof fire>>[]>([[HEALTH, []], [CALC, []]]);
+    const runs = new Map<Load, Awaited<ReturnType<typeof fire>>[]>([
+      [HEALTH, []],
+      [CALC, []],
+    ]);
     for (let r = 0; r < rounds; r++) {
       for (const load of r % 2 === 0 ? [HEALTH, CALC] : [CALC, HEALTH]) runs.get(load)!.push(await fire(server.base, server.pid, load, seconds, connections));
     }

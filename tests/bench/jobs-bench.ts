@@ -44,7 +44,9 @@ async function seed(file: string): Promise<{ jobIds: number[] }> {
   const insertJob = sqlite.prepare(
     "insert into jobs (workshop_id, title, equipment_kind, maker, year, customer_name, customer_email, status, created_at, updated_at) values (?, ?, ?, ?, ?, ?, ?, ?, ?, ?) returning id",
   );
-  const insertReading = sqlite.prepare("insert into readings (job_id, workshop_id, kind, designator, nominal, measured, tolerance) values (?, ?, ?, ?, ?, ?, ?)");
+  const insertReading = sqlite.prepare(
+    "insert into readings (job_id, workshop_id, kind, designator, nominal, measured, tolerance) values (?, ?, ?, ?, ?, ?, ?)",
+  );
   const jobIds: number[] = [];
   let r = 42; // fixed pseudo-random sequence, so runs are comparable
   const rnd = () => (r = (r * 16807) % 2147483647) / 2147483647;
@@ -109,8 +111,18 @@ export async function run(): Promise<Record<string, unknown>> {
   const seedMs = Math.round(performance.now() - seedStart);
 
   const port = await freePort();
-  const env = { ...process.env, NODE_ENV: "production" as const, GLOWBENCH_DB: file, GLOWBENCH_UPLOADS: path.join(dir, "uploads"), SESSION_SECRET: "bench-secret-bench-secret-bench-secret-0123", PORT: String(port) };
-  const server = spawn(process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-p", String(port), "-H", "127.0.0.1"], { env, stdio: "ignore" });
+  const env = {
+    ...process.env,
+    NODE_ENV: "production" as const,
+    GLOWBENCH_DB: file,
+    GLOWBENCH_UPLOADS: path.join(dir, "uploads"),
+    SESSION_SECRET: "bench-secret-bench-secret-bench-secret-0123",
+    PORT: String(port),
+  };
+  const server = spawn(process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-p", String(port), "-H", "127.0.0.1"], {
+    env,
+    stdio: "ignore",
+  });
   const base = `http://127.0.0.1:${port}`;
   try {
     for (let i = 0; ; i++) {
@@ -122,10 +134,18 @@ export async function run(): Promise<Record<string, unknown>> {
       }
       await new Promise((r) => setTimeout(r, 250));
     }
-    const signIn = await fetch(`${base}/api/auth/sign-in`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify({ email: "owner@demo.test", password: "glowbench-demo" }) });
+    const signIn = await fetch(`${base}/api/auth/sign-in`, {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: JSON.stringify({ email: "owner@demo.test", password: "glowbench-demo" }),
+    });
     if (signIn.status !== 200) throw new Error(`sign-in failed: ${signIn.status}`);
-    const cookie = signIn.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
-    const listPath = (i: number) => `/api/jobs?pageSize=50&status=${JOB_STATUSES[i % JOB_STATUSES.length]}&q=${encodeURIComponent(SEARCHES[i % SEARCHES.length])}`;
+    const cookie = signIn.headers
+      .getSetCookie()
+      .map((c) => c.split(";")[0])
+      .join("; ");
+    const listPath = (i: number) =>
+      `/api/jobs?pageSize=50&status=${JOB_STATUSES[i % JOB_STATUSES.length]}&q=${encodeURIComponent(SEARCHES[i % SEARCHES.length])}`;
     const detailPath = (i: number) => `/api/jobs/${jobIds[(i * 7919) % jobIds.length]}`;
     // Warm-up: compile paths, fill SQLite's page cache.
     await time(base, cookie, 40, listPath);

@@ -33,12 +33,30 @@ function calcRows(r: BenchReport): Row[] {
       continue;
     }
     const v = (n: number | null, t: number) => (!closed || n === null ? "—" : n >= t ? "met" : "MISSED");
-    rows.push({ part: "calc", figure: `${c.slug}: compute/s`, value: rate(c.computePerSecond), target: closed ? `≥ ${rate(TARGETS.computePerSecond)}` : "", verdict: v(c.computePerSecond, TARGETS.computePerSecond) });
-    rows.push({ part: "calc", figure: `${c.slug}: validate+compute/s`, value: rate(c.validatedPerSecond), target: closed ? `≥ ${rate(TARGETS.validatedPerSecond)}` : "", verdict: v(c.validatedPerSecond, TARGETS.validatedPerSecond) });
+    rows.push({
+      part: "calc",
+      figure: `${c.slug}: compute/s`,
+      value: rate(c.computePerSecond),
+      target: closed ? `≥ ${rate(TARGETS.computePerSecond)}` : "",
+      verdict: v(c.computePerSecond, TARGETS.computePerSecond),
+    });
+    rows.push({
+      part: "calc",
+      figure: `${c.slug}: validate+compute/s`,
+      value: rate(c.validatedPerSecond),
+      target: closed ? `≥ ${rate(TARGETS.validatedPerSecond)}` : "",
+      verdict: v(c.validatedPerSecond, TARGETS.validatedPerSecond),
+    });
     rows.push({ part: "calc", figure: `${c.slug}: runCalculator/s (with LaTeX steps)`, value: rate(c.runPerSecond), target: "", verdict: "—" });
   }
   const t = r.triodeSolve;
-  rows.push({ part: "calc", figure: "triode solve, median (p90)", value: `${t.medianMicros.toFixed(2)} µs (${t.p90Micros.toFixed(2)} µs)`, target: `≤ ${TARGETS.triodeSolveMicros} µs`, verdict: t.meetsTarget ? "met" : "MISSED" });
+  rows.push({
+    part: "calc",
+    figure: "triode solve, median (p90)",
+    value: `${t.medianMicros.toFixed(2)} µs (${t.p90Micros.toFixed(2)} µs)`,
+    target: `≤ ${TARGETS.triodeSolveMicros} µs`,
+    verdict: t.meetsTarget ? "met" : "MISSED",
+  });
   return rows;
 }
 
@@ -50,11 +68,24 @@ function httpRows(h: HttpReport): Row[] {
     if (f.cpuMicrosPerRequest !== null) {
       rows.push({ part: "http", figure: `${f.route}: server CPU per request`, value: `${Math.round(f.cpuMicrosPerRequest)} µs`, target: "", verdict: "—" });
     }
-    if (f.non2xx || f.errors) rows.push({ part: "http", figure: `${f.route}: non-2xx / errors`, value: `${f.non2xx} / ${f.errors}`, target: "0", verdict: "MISSED" });
+    if (f.non2xx || f.errors)
+      rows.push({ part: "http", figure: `${f.route}: non-2xx / errors`, value: `${f.non2xx} / ${f.errors}`, target: "0", verdict: "MISSED" });
   }
-  rows.push({ part: "http", figure: "calculator ÷ health throughput", value: h.ratio.toFixed(2), target: `≥ ${HTTP_TARGET_RATIO}`, verdict: h.meetsTarget ? "met" : "MISSED" });
+  rows.push({
+    part: "http",
+    figure: "calculator ÷ health throughput",
+    value: h.ratio.toFixed(2),
+    target: `≥ ${HTTP_TARGET_RATIO}`,
+    verdict: h.meetsTarget ? "met" : "MISSED",
+  });
   if (h.cpuRatio !== null) {
-    rows.push({ part: "http", figure: "health ÷ calculator CPU per request (the ratio a quiet machine shows)", value: h.cpuRatio.toFixed(2), target: `≥ ${HTTP_TARGET_RATIO}`, verdict: "—" });
+    rows.push({
+      part: "http",
+      figure: "health ÷ calculator CPU per request (the ratio a quiet machine shows)",
+      value: h.cpuRatio.toFixed(2),
+      target: `≥ ${HTTP_TARGET_RATIO}`,
+      verdict: "—",
+    });
   }
   return rows;
 }
@@ -81,7 +112,11 @@ function table(rows: Row[]): string {
   const cols = (r: Row) => [r.part, r.figure, r.value, r.target, r === head ? "result" : r.verdict];
   const all = [head, ...rows].map(cols);
   const w = all[0].map((_, i) => Math.max(...all.map((c) => c[i].length)));
-  const line = (c: string[]) => c.map((cell, i) => (i === 2 ? cell.padStart(w[i]) : cell.padEnd(w[i]))).join("  ").trimEnd();
+  const line = (c: string[]) =>
+    c
+      .map((cell, i) => (i === 2 ? cell.padStart(w[i]) : cell.padEnd(w[i])))
+      .join("  ")
+      .trimEnd();
   return [line(all[0]), line(w.map((n) => "-".repeat(n))), ...all.slice(1).map(line)].join("\n");
 }
 
@@ -126,7 +161,10 @@ async function main() {
     console.log(JSON.stringify({ ...raw, notes }, null, 2));
     return;
   }
-  const load = os.loadavg().map((l) => l.toFixed(1)).join(" ");
+  const load = os
+    .loadavg()
+    .map((l) => l.toFixed(1))
+    .join(" ");
   console.log(`Glowbench benchmarks — Node ${process.version}, ${os.cpus().length} cores (${os.cpus()[0]?.model ?? "cpu"}), load average ${load}`);
   console.log("");
   console.log(table(rows));

@@ -21,13 +21,21 @@ async function startServer(): Promise<{ baseUrl: string; stop: () => void }> {
   if (process.env.BENCH_BASE_URL) return { baseUrl: process.env.BENCH_BASE_URL.replace(/\/$/, ""), stop: () => {} };
   if (!fs.existsSync(path.join(ROOT, ".next", "BUILD_ID"))) throw new Error("Build first (`npx next build`), or set BENCH_BASE_URL.");
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-ui-bench-"));
-  const env = { ...process.env, NODE_ENV: "production" as const, GLOWBENCH_DB: path.join(dir, "glowbench.db"), SESSION_SECRET: "bench-secret-bench-secret-bench-secret-0123" };
+  const env = {
+    ...process.env,
+    NODE_ENV: "production" as const,
+    GLOWBENCH_DB: path.join(dir, "glowbench.db"),
+    SESSION_SECRET: "bench-secret-bench-secret-bench-secret-0123",
+  };
   await new Promise<void>((resolve, reject) => {
     const seed = spawn(process.execPath, [path.join(ROOT, "node_modules/tsx/dist/cli.mjs"), "db/seed.ts"], { env, stdio: "ignore" });
     seed.on("exit", (code) => (code === 0 ? resolve() : reject(new Error(`seed exited ${code}`))));
   });
   const port = 20_000 + Math.floor(Math.random() * 20_000);
-  const child: ChildProcess = spawn(process.execPath, [path.join(ROOT, "node_modules/next/dist/bin/next"), "start", "-p", String(port), "-H", "127.0.0.1"], { env, stdio: "ignore" });
+  const child: ChildProcess = spawn(process.execPath, [path.join(ROOT, "node_modules/next/dist/bin/next"), "start", "-p", String(port), "-H", "127.0.0.1"], {
+    env,
+    stdio: "ignore",
+  });
   const baseUrl = `http://127.0.0.1:${port}`;
   for (let i = 0; i < 240; i++) {
     try {
@@ -50,7 +58,8 @@ async function firstLoadJs(baseUrl: string) {
     const src = /\ssrc="([^"]+\.js)"/.exec(m[1])?.[1];
     if (src && !/\snoModule/i.test(m[1])) srcs.add(src);
   }
-  for (const m of html.matchAll(/<link[^>]+rel="preload"[^>]+as="script"[^>]*href="([^"]+)"|<link[^>]+href="([^"]+\.js)"[^>]+as="script"/g)) srcs.add(m[1] ?? m[2]);
+  for (const m of html.matchAll(/<link[^>]+rel="preload"[^>]+as="script"[^>]*href="([^"]+)"|<link[^>]+href="([^"]+\.js)"[^>]+as="script"/g))
+    srcs.add(m[1] ?? m[2]);
   let raw = 0;
   let gzip = 0;
   const files: { file: string; raw: number; gzip: number }[] = [];
@@ -99,10 +108,14 @@ async function keystrokes(baseUrl: string, n = 120) {
     const w = window as unknown as { __gbTimes: number[] };
     w.__gbTimes = [];
     let pending = false;
-    window.addEventListener("input", () => {
-      performance.mark("gb-input");
-      pending = true;
-    }, { capture: true });
+    window.addEventListener(
+      "input",
+      () => {
+        performance.mark("gb-input");
+        pending = true;
+      },
+      { capture: true },
+    );
     const target = document.querySelector('[data-testid="result"]')!.parentElement!;
     new MutationObserver(() => {
       if (!pending) return;

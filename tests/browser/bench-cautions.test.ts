@@ -66,7 +66,10 @@ test("a heater's voltage inside the list counts too, with the line voltage blank
 });
 
 test("cathode bias and supply ripple always carry the banner, like bleeder and arc clearance", async () => {
-  for (const [slug, field] of [["cathode-bias", "#in-biasVoltage"], ["supply-ripple", "#in-loadCurrent"]] as const) {
+  for (const [slug, field] of [
+    ["cathode-bias", "#in-biasVoltage"],
+    ["supply-ripple", "#in-loadCurrent"],
+  ] as const) {
     const page = await open(`/bench/${slug}`);
     expect(await banner(page).count(), slug).toBe(1);
     await page.fill(field, "");

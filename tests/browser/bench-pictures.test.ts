@@ -27,21 +27,24 @@ const PICTURES: { slug: string; labels: string[] }[] = [
   { slug: "superhet", labels: ["Signal", "Oscillator", "Image", "One tuned circuit, Q 100"] },
 ];
 
-test.each(PICTURES.flatMap((p) => [1280, 390].map((w) => [p.slug, w, p.labels] as const)))("%s at %i px: the picture names every line", async (slug, width, labels) => {
-  const page = await browser.newPage({ viewport: { width, height: 900 } });
-  await page.goto(`${baseUrl()}/bench/${slug}`);
-  const chart = page.getByTestId("chart").first();
-  await chart.locator("svg.recharts-surface").first().waitFor({ timeout: 15_000 });
-  await expect.poll(async () => (await chart.locator("svg text").allTextContents()).join(" | "), { timeout: 10_000 }).toContain(labels[labels.length - 1]);
-  const texts = (await chart.locator("svg text").allTextContents()).join(" | ");
-  for (const label of labels) expect(texts, `${slug}: "${label}"`).toContain(label);
-  expect(await chart.textContent()).not.toMatch(/\bsafe(ly|ty)?\b/i);
-  expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
-  if (shots) {
-    fs.mkdirSync(shots, { recursive: true });
-    await chart.scrollIntoViewIfNeeded();
-    await chart.screenshot({ path: path.join(shots, `${slug}-chart-${width}.png`) });
-    await page.screenshot({ path: path.join(shots, `${slug}-${width}.png`), fullPage: true });
-  }
-  await page.close();
-});
+test.each(PICTURES.flatMap((p) => [1280, 390].map((w) => [p.slug, w, p.labels] as const)))(
+  "%s at %i px: the picture names every line",
+  async (slug, width, labels) => {
+    const page = await browser.newPage({ viewport: { width, height: 900 } });
+    await page.goto(`${baseUrl()}/bench/${slug}`);
+    const chart = page.getByTestId("chart").first();
+    await chart.locator("svg.recharts-surface").first().waitFor({ timeout: 15_000 });
+    await expect.poll(async () => (await chart.locator("svg text").allTextContents()).join(" | "), { timeout: 10_000 }).toContain(labels[labels.length - 1]);
+    const texts = (await chart.locator("svg text").allTextContents()).join(" | ");
+    for (const label of labels) expect(texts, `${slug}: "${label}"`).toContain(label);
+    expect(await chart.textContent()).not.toMatch(/\bsafe(ly|ty)?\b/i);
+    expect(await page.evaluate(() => document.documentElement.scrollWidth <= window.innerWidth)).toBe(true);
+    if (shots) {
+      fs.mkdirSync(shots, { recursive: true });
+      await chart.scrollIntoViewIfNeeded();
+      await chart.screenshot({ path: path.join(shots, `${slug}-chart-${width}.png`) });
+      await page.screenshot({ path: path.join(shots, `${slug}-${width}.png`), fullPage: true });
+    }
+    await page.close();
+  },
+);

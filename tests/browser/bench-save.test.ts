@@ -84,7 +84,9 @@ test("an apprentice saves to an existing job but cannot book in a new one; a bad
 test("a signed-out visitor is invited to sign in instead", async () => {
   const page = await browser.newPage();
   await page.goto(`${baseUrl()}/bench/bleeder`);
-  expect(await page.getByTestId("sign-in-invitation").getByRole("link", { name: "Sign in to save it to a job" }).getAttribute("href")).toBe("/sign-in?next=/bench/bleeder");
+  expect(await page.getByTestId("sign-in-invitation").getByRole("link", { name: "Sign in to save it to a job" }).getAttribute("href")).toBe(
+    "/sign-in?next=/bench/bleeder",
+  );
   expect(await page.getByRole("form", { name: "Save to a job" }).count()).toBe(0);
   await page.close();
 });

@@ -41,7 +41,8 @@ test("dropping resistor: engineering notation in, engineering notation out", asy
   const raw = { supplyVoltage: "350 V", loadVoltage: "275", loadCurrent: "4.5 mA" };
   for (const [k, v] of Object.entries(raw)) await page.fill(`#in-${k}`, v);
   const result = expected("dropping-resistor", raw);
-  for (const name of ["resistance", "suggestedRating", "nearestPreferred", "loadVoltageWithPreferred"]) await expectOutput(page, "dropping-resistor", result, name);
+  for (const name of ["resistance", "suggestedRating", "nearestPreferred", "loadVoltageWithPreferred"])
+    await expectOutput(page, "dropping-resistor", result, name);
   await expectSteps(page, result);
   await page.close();
 });
@@ -55,10 +56,7 @@ test("supply ripple: adding an LC stage shows the ripple after it, in the table 
   const raw = {
     ...example,
     lineFrequency: "60",
-    stages: [
-      ...(example.stages as unknown[]),
-      { kind: "lc", inductance: "8 H", capacitance: "20 uF" },
-    ],
+    stages: [...(example.stages as unknown[]), { kind: "lc", inductance: "8 H", capacitance: "20 uF" }],
   };
   const result = expected("supply-ripple", raw);
   await expectOutput(page, "supply-ripple", result, "finalRippleRms");
@@ -76,7 +74,13 @@ test("heater string: by heater rating, then a tube not in the table gets a field
   await page.getByRole("button", { name: "Add heater" }).click();
   await page.fill("#in-heaters-1-voltage", "35");
   await page.fill("#in-lineVoltage", "117");
-  const result = expected("heater-string", { lineVoltage: "117", heaters: [{ voltage: "12.6", current: "150m" }, { voltage: "35", current: "150m" }] });
+  const result = expected("heater-string", {
+    lineVoltage: "117",
+    heaters: [
+      { voltage: "12.6", current: "150m" },
+      { voltage: "35", current: "150m" },
+    ],
+  });
   await expectOutput(page, "heater-string", result, "droppingResistance");
   await expectOutput(page, "heater-string", result, "stringVoltage");
   await page.getByText("By tube type").click();

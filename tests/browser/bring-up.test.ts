@@ -41,7 +41,12 @@ const until = <T>(fn: () => Promise<T> | T) => expect.poll(fn, { timeout: 15_000
 const HAZARD_RED = "rgb(179, 18, 31)"; // --gb-hazard in the day theme (app/globals.css)
 
 test("a television's bring-up and fault hunt", async () => {
-  const created = await team.technician.post("/api/jobs", { title: "17-inch console television, 1953", equipmentKind: "television", year: 1953, customerName: "Ansel Quarrie" });
+  const created = await team.technician.post("/api/jobs", {
+    title: "17-inch console television, 1953",
+    equipmentKind: "television",
+    year: 1953,
+    customerName: "Ansel Quarrie",
+  });
   expect(created.status).toBe(201);
   const { job } = await created.json();
   const context = await contextFor(team.technician);
@@ -123,7 +128,12 @@ test("a television's bring-up and fault hunt", async () => {
   expect(new URLSearchParams(lampHref!.split("?")[1]).get("lineVoltage")).toBe("117");
   // The link opens the Bench with the lamp filled in.
   await page.goto(`${baseUrl()}${lampHref}`);
-  expect(await page.getByLabel(/Lamp wattage/).first().inputValue()).toBe("150");
+  expect(
+    await page
+      .getByLabel(/Lamp wattage/)
+      .first()
+      .inputValue(),
+  ).toBe("150");
   await page.goto(`${baseUrl()}/jobs/${job.id}/power-ups`);
 
   // Passing needs a reason once a step went over.

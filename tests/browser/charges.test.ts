@@ -33,7 +33,12 @@ test("the owner sets the hourly rate on /workshop; technicians see it, apprentic
   const ownerCtx = await browser.newContext({ viewport: { width: 1280, height: 900 } });
   ownerCtx.setDefaultTimeout(10_000);
   const signUp = await ownerCtx.request.post(`${baseUrl()}/api/auth/sign-up`, {
-    data: { workshopName: `Anode Street Repairs ${Date.now() % 100000}`, name: "Tamsin Brook", email: address("charges-owner"), password: "owner passphrase here" },
+    data: {
+      workshopName: `Anode Street Repairs ${Date.now() % 100000}`,
+      name: "Tamsin Brook",
+      email: address("charges-owner"),
+      password: "owner passphrase here",
+    },
   });
   expect(signUp.status()).toBe(201);
   const workshopId = (await signUp.json()).workshop.id as number;

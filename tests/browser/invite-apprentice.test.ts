@@ -93,7 +93,9 @@ test("forgot password: the request page gives one answer and the e-mailed link s
   const page = await ctx.newPage();
   const email = address("browser-reset");
   // An account of the test's own.
-  const res = await page.request.post(`${baseUrl()}/api/auth/sign-up`, { data: { workshopName: "Reset Row Radios", name: "Cai Pellow", email, password: "old passphrase here" } });
+  const res = await page.request.post(`${baseUrl()}/api/auth/sign-up`, {
+    data: { workshopName: "Reset Row Radios", name: "Cai Pellow", email, password: "old passphrase here" },
+  });
   expect(res.status()).toBe(201);
   await ctx.clearCookies();
 

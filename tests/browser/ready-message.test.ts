@@ -18,7 +18,12 @@ afterAll(async () => {
 
 test("the collection message panel appears only at the counter and sends the bench sheet", async () => {
   const customer = `customer-${Date.now()}@example.test`;
-  const created = await team.technician.post("/api/jobs", { title: "Console radio, 1950s", equipmentKind: "console-radio", customerName: "Wren Halloway", customerEmail: customer });
+  const created = await team.technician.post("/api/jobs", {
+    title: "Console radio, 1950s",
+    equipmentKind: "console-radio",
+    customerName: "Wren Halloway",
+    customerEmail: customer,
+  });
   expect(created.status).toBe(201);
   const { job } = await created.json();
   // A finished record, so the checks before "ready" have nothing to say: one power-up session, passed.

@@ -60,7 +60,13 @@ describe("arc-clearance: published checks", () => {
 describe("arc-clearance: IEC 60664-1:2020 Table F.8 and Table A.2", () => {
   it("case A (inhomogeneous field) rows: 1 kV 0.26 mm, 2 kV 1.27 mm, 8 kV 11.0 mm, 15 kV 25 mm, 50 kV 100 mm", () => {
     // IEC 60664-1:2020 Table F.8, case A, the rows named (transcriptions above)
-    const rows: [string, number][] = [["1 kV", 0.26], ["2 kV", 1.27], ["8 kV", 11.0], ["15 kV", 25], ["50 kV", 100]];
+    const rows: [string, number][] = [
+      ["1 kV", 0.26],
+      ["2 kV", 1.27],
+      ["8 kV", 11.0],
+      ["15 kV", 25],
+      ["50 kV", 100],
+    ];
     for (const [v, want] of rows) expect(out({ peakVoltage: v }).standardClearance! / mm, v).toBeCloseTo(want, 9);
     // a voltage between rows takes the next row up, never an interpolation (the cautious reading)
     expect(out({ peakVoltage: "8.01 kV" }).standardClearance! / mm).toBeCloseTo(15.2, 9);
@@ -70,7 +76,7 @@ describe("arc-clearance: IEC 60664-1:2020 Table F.8 and Table A.2", () => {
   it("the 7 kV case of the issue: no longer 3.64 mm but at least the table's 11 mm", () => {
     // The old rule gave 2 × the uniform-field gap, 3.64 mm; IEC 60664-1:2020 Table F.8 case A gives 11.0 mm up to 8 kV.
     const o = out({ peakVoltage: "7 kV" });
-    expect(2 * o.minimumGap / mm).toBeCloseTo(3.64, 2);
+    expect((2 * o.minimumGap) / mm).toBeCloseTo(3.64, 2);
     expect(o.recommendedClearance).toBeGreaterThanOrEqual(11 * mm);
     expect(o.recommendedClearance).toBeGreaterThanOrEqual(o.standardClearance!);
     const steps = run({ peakVoltage: "7 kV" }).steps;
@@ -79,7 +85,11 @@ describe("arc-clearance: IEC 60664-1:2020 Table F.8 and Table A.2", () => {
 
   it("a uniform field reads the homogeneous column (case B) but the recommendation keeps the case A floor", () => {
     // IEC 60664-1:2020 Table F.8, case B: 8 kV 3 mm, 15 kV 5.5 mm, 100 kV 45 mm. docs/PRODUCT.md: no clearance below case A.
-    const rows: [string, number][] = [["7 kV", 3], ["15 kV", 5.5], ["100 kV", 45]];
+    const rows: [string, number][] = [
+      ["7 kV", 3],
+      ["15 kV", 5.5],
+      ["100 kV", 45],
+    ];
     for (const [v, want] of rows) expect(out({ peakVoltage: v, electrode: "uniform" }).standardClearance! / mm, v).toBeCloseTo(want, 9);
     const u = run({ peakVoltage: "7 kV", electrode: "uniform" });
     expect(u.outputs.standardTable).toMatch(/case B \(homogeneous field\)/);
@@ -107,7 +117,15 @@ describe("arc-clearance: IEC 60664-1:2020 Table F.8 and Table A.2", () => {
 
   it("altitude factors of Table A.2: 1 up to 2000 m, 1.14 to 3000 m, 1.48 to 5000 m, 3.02 to 10 000 m, 14.5 to 20 000 m", () => {
     // IEC 60664-1:2020 Table A.2 (transcriptions above)
-    const rows: [number, number][] = [[0, 1], [2000, 1], [2001, 1.14], [3000, 1.14], [5000, 1.48], [10_000, 3.02], [20_000, 14.5]];
+    const rows: [number, number][] = [
+      [0, 1],
+      [2000, 1],
+      [2001, 1.14],
+      [3000, 1.14],
+      [5000, 1.48],
+      [10_000, 3.02],
+      [20_000, 14.5],
+    ];
     for (const [h, f] of rows) expect(altitudeFactor(h).factor, `${h} m`).toBe(f);
     const o = out({ peakVoltage: "7 kV", altitude: "3000 m", pressure: "70 kPa" });
     expect(o.standardClearance! / mm).toBeCloseTo(11 * 1.14, 9);
@@ -170,7 +188,12 @@ describe("arc-clearance: identities", () => {
   });
 
   it("never says a gap holds or is safe; a gap is compared with named figures", () => {
-    for (const raw of [{ peakVoltage: "25 kV", gap: "1 cm" }, { peakVoltage: "15 kV", gap: "30 mm" }, { peakVoltage: "300 V", gap: "1 mm" }, { peakVoltage: "60 kV" }]) {
+    for (const raw of [
+      { peakVoltage: "25 kV", gap: "1 cm" },
+      { peakVoltage: "15 kV", gap: "30 mm" },
+      { peakVoltage: "300 V", gap: "1 mm" },
+      { peakVoltage: "60 kV" },
+    ]) {
       for (const t of texts(run(raw))) {
         expect(t, t).not.toMatch(/\bholds?\b/i);
         expect(t, t).not.toMatch(/\bsafe\b|\bsafely\b/i);
@@ -288,15 +311,23 @@ describe("arc-clearance: properties", () => {
 
   it("valid input never yields NaN or Infinity, and the recommendation never goes below the non-uniform table figure", () => {
     fc.assert(
-      fc.property(logUniform(1e-3, 1e6), logUniform(10e-6, 10), air, fc.double({ min: 1, max: 100, noNaN: true }), electrode, altitude, (peakVoltage, gap, a, safetyFactor, e, h) => {
-        const o = out({ peakVoltage, gap, ...a, safetyFactor, electrode: e, altitude: h });
-        for (const x of [o.relativeAirDensity, o.breakdownVoltage, o.minimumGap, o.recommendedClearance]) expect(Number.isFinite(x)).toBe(true);
-        expect(o.standardClearance === null || Number.isFinite(o.standardClearance)).toBe(true);
-        expect(o.recommendedClearance).toBeGreaterThanOrEqual(o.minimumGap);
-        expect(o.recommendedClearance).toBeGreaterThanOrEqual(o.standardClearance ?? 0);
-        expect(o.recommendedClearance).toBeGreaterThanOrEqual(caseAFloor(peakVoltage, h) * (1 - 1e-12));
-        expect(typeof o.standardTable).toBe("string");
-      }),
+      fc.property(
+        logUniform(1e-3, 1e6),
+        logUniform(10e-6, 10),
+        air,
+        fc.double({ min: 1, max: 100, noNaN: true }),
+        electrode,
+        altitude,
+        (peakVoltage, gap, a, safetyFactor, e, h) => {
+          const o = out({ peakVoltage, gap, ...a, safetyFactor, electrode: e, altitude: h });
+          for (const x of [o.relativeAirDensity, o.breakdownVoltage, o.minimumGap, o.recommendedClearance]) expect(Number.isFinite(x)).toBe(true);
+          expect(o.standardClearance === null || Number.isFinite(o.standardClearance)).toBe(true);
+          expect(o.recommendedClearance).toBeGreaterThanOrEqual(o.minimumGap);
+          expect(o.recommendedClearance).toBeGreaterThanOrEqual(o.standardClearance ?? 0);
+          expect(o.recommendedClearance).toBeGreaterThanOrEqual(caseAFloor(peakVoltage, h) * (1 - 1e-12));
+          expect(typeof o.standardTable).toBe("string");
+        },
+      ),
     );
   });
 

@@ -15,7 +15,10 @@ type Out = {
 };
 
 const { run, out, fields } = calcRunner<Out>(calculator);
-const cautions = (raw: Record<string, unknown>) => run(raw).warnings.filter((w) => w.level === "caution").map((w) => w.message);
+const cautions = (raw: Record<string, unknown>) =>
+  run(raw)
+    .warnings.filter((w) => w.level === "caution")
+    .map((w) => w.message);
 
 describe("b-plus: checks against published worked examples", () => {
   it("filtered bridge, 12 V rms, 0.7 V diodes, 220 Ω and 1000 µF: ripple 0.59 V, DC 15.3 V", () => {
@@ -55,10 +58,20 @@ describe("b-plus: a listed rectifier tube", () => {
     const o = out({ secondaryVoltage: "350 V", rectifier: "full-wave", rectifierTube: "5y3", loadCurrent: row.maxCurrent, capacitance: "20 uF" });
     expect(o.rectifierVoltageDrop).toBeCloseTo(row.tubeDrop, 9);
     expect(o.maxReservoirCapacitance).toBe(row.maxInputCapacitance);
-    expect(run({ secondaryVoltage: 350, rectifier: "full-wave", rectifierTube: "5Y3", loadCurrent: 0.1, capacitance: "20 uF" }).inputs.rectifierTube).toBe("5Y3GT");
+    expect(run({ secondaryVoltage: 350, rectifier: "full-wave", rectifierTube: "5Y3", loadCurrent: 0.1, capacitance: "20 uF" }).inputs.rectifierTube).toBe(
+      "5Y3GT",
+    );
     expect(cautions({ secondaryVoltage: 350, rectifier: "full-wave", rectifierTube: "5Y3GT", loadCurrent: 0.1, capacitance: "20 uF" })).toEqual([]);
-    expect(cautions({ secondaryVoltage: 350, rectifier: "full-wave", rectifierTube: "5Y3GT", loadCurrent: 0.1, capacitance: "40 uF" }).some((m) => /more than the 20 µF/.test(m))).toBe(true);
-    expect(cautions({ secondaryVoltage: 350, rectifier: "full-wave", rectifierTube: "5Y3GT", loadCurrent: "150 mA", capacitance: "20 uF" }).some((m) => /rated 125 mA/.test(m))).toBe(true);
+    expect(
+      cautions({ secondaryVoltage: 350, rectifier: "full-wave", rectifierTube: "5Y3GT", loadCurrent: 0.1, capacitance: "40 uF" }).some((m) =>
+        /more than the 20 µF/.test(m),
+      ),
+    ).toBe(true);
+    expect(
+      cautions({ secondaryVoltage: 350, rectifier: "full-wave", rectifierTube: "5Y3GT", loadCurrent: "150 mA", capacitance: "20 uF" }).some((m) =>
+        /rated 125 mA/.test(m),
+      ),
+    ).toBe(true);
   });
 
   it("the tube drop follows Child's law: an eighth of the current gives a quarter of the drop", () => {
@@ -73,8 +86,16 @@ describe("b-plus: a listed rectifier tube", () => {
     // on a 117 V line at 50 mA that stays under its rated figure, as the type was made for (RCA tube manual, from memory)
     const row = findRectifier("35W4")!;
     const vs = row.peakInverseVoltage! / (2 * Math.SQRT2) + 10;
-    expect(cautions({ secondaryVoltage: vs, rectifier: "half-wave", rectifierTube: "35W4", loadCurrent: 0.05, capacitance: "40 uF" }).some((m) => /peak inverse/.test(m))).toBe(true);
-    expect(cautions({ secondaryVoltage: 117, rectifier: "half-wave", rectifierTube: "35W4", loadCurrent: 0.05, capacitance: "40 uF" }).some((m) => /peak inverse/.test(m))).toBe(false);
+    expect(
+      cautions({ secondaryVoltage: vs, rectifier: "half-wave", rectifierTube: "35W4", loadCurrent: 0.05, capacitance: "40 uF" }).some((m) =>
+        /peak inverse/.test(m),
+      ),
+    ).toBe(true);
+    expect(
+      cautions({ secondaryVoltage: 117, rectifier: "half-wave", rectifierTube: "35W4", loadCurrent: 0.05, capacitance: "40 uF" }).some((m) =>
+        /peak inverse/.test(m),
+      ),
+    ).toBe(false);
   });
 });
 
@@ -128,8 +149,12 @@ describe("b-plus: warnings and refusals", () => {
     expect(r.warnings.some((w) => w.level === "danger")).toBe(true);
     expect(r.warnings.some((w) => /estimate/.test(w.message) && /10–15 %/.test(w.message))).toBe(true);
     for (const w of r.warnings) expect(w.message).not.toMatch(/\bsafe\b/i);
-    expect(run({ secondaryVoltage: 30, rectifier: "bridge", rectifierDrop: 1, loadCurrent: 1, capacitance: "4700 uF" }).warnings.some((w) => w.level === "danger")).toBe(false);
-    expect(run({ secondaryVoltage: 40, rectifier: "bridge", rectifierDrop: 1, loadCurrent: 1, capacitance: "4700 uF" }).warnings.some((w) => w.level === "danger")).toBe(true); // 56.6 V peak
+    expect(
+      run({ secondaryVoltage: 30, rectifier: "bridge", rectifierDrop: 1, loadCurrent: 1, capacitance: "4700 uF" }).warnings.some((w) => w.level === "danger"),
+    ).toBe(false);
+    expect(
+      run({ secondaryVoltage: 40, rectifier: "bridge", rectifierDrop: 1, loadCurrent: 1, capacitance: "4700 uF" }).warnings.some((w) => w.level === "danger"),
+    ).toBe(true); // 56.6 V peak
   });
 
   it("ripple too large for the estimate is pointed out, and B+ never goes negative", () => {

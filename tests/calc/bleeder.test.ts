@@ -146,7 +146,9 @@ describe("bleeder: inputs, aliases and validation", () => {
   it("residualVoltage is the same input as safeVoltage; tolerance is the resistor's", () => {
     expect(out({ capacitance: "40uF", workingVoltage: 450, residualVoltage: 50 })).toEqual(out({ capacitance: "40uF", workingVoltage: 450, safeVoltage: 50 }));
     expect(run({ capacitance: "40uF", workingVoltage: 450, residualVoltage: 50 }).inputs).toMatchObject({ safeVoltage: 50, residualVoltage: 50 });
-    expect(out({ capacitance: "40uF", workingVoltage: 450, tolerance: 0.1 })).toEqual(out({ capacitance: "40uF", workingVoltage: 450, resistorTolerance: 0.1 }));
+    expect(out({ capacitance: "40uF", workingVoltage: 450, tolerance: 0.1 })).toEqual(
+      out({ capacitance: "40uF", workingVoltage: 450, resistorTolerance: 0.1 }),
+    );
     expect(out({ capacitance: "40uF", workingVoltage: 450, tolerance: 0.1, resistorTolerance: 0.1 }).suggestedResistance).toBeGreaterThan(0);
   });
 
@@ -185,7 +187,8 @@ describe("bleeder: properties", () => {
         fc.pre(workingVoltage >= v.safeVoltage * 1.001);
         const { ratio: _, ...rest } = v;
         const o = out({ ...rest, workingVoltage });
-        for (const x of [o.maxResistance, o.suggestedResistance, o.bleederCurrent, o.dissipation, o.voltagePerResistor, o.resistorValue]) expect(Number.isFinite(x)).toBe(true);
+        for (const x of [o.maxResistance, o.suggestedResistance, o.bleederCurrent, o.dissipation, o.voltagePerResistor, o.resistorValue])
+          expect(Number.isFinite(x)).toBe(true);
         const time = (r: number) => r * (1 + v.resistorTolerance) * v.capacitance * (1 + v.capacitorTolerance) * Math.log(workingVoltage / v.safeVoltage);
         expect(isE12(o.suggestedResistance)).toBe(true);
         expect(time(o.suggestedResistance)).toBeLessThanOrEqual(v.maxTime);
@@ -208,7 +211,8 @@ describe("bleeder: properties", () => {
         if (n > 1) expect(workingVoltage / (n - 1)).toBeGreaterThan(MAX_LIMITING_VOLTAGE);
         expect(o.voltagePerResistor * n).toBeCloseTo(workingVoltage, 6);
         expect(isE12(o.resistorValue)).toBe(true);
-        const chainTime = n * o.resistorValue * (1 + v.resistorTolerance) * v.capacitance * (1 + v.capacitorTolerance) * Math.log(workingVoltage / v.safeVoltage);
+        const chainTime =
+          n * o.resistorValue * (1 + v.resistorTolerance) * v.capacitance * (1 + v.capacitorTolerance) * Math.log(workingVoltage / v.safeVoltage);
         expect(chainTime).toBeLessThanOrEqual(v.maxTime);
         if (n === 1) expect(o.resistorValue).toBe(o.suggestedResistance);
         if (o.resistorRating !== null) {

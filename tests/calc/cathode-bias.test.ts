@@ -102,9 +102,17 @@ describe("cathode-bias: identities and properties", () => {
           expect(E12.some((m) => Math.abs(m - mantissa) < 1e-9)).toBe(true);
           const fRk = o.bypassCornerFrequency as number;
           expect(fRk * 2 * Math.PI * o.cathodeResistance * ck).toBeCloseTo(1, 9);
-          const t = out({ biasVoltage: vk, plateCurrent: ip, screenCurrent: ig2, bypassCapacitance: ck, amplificationFactor: mu, plateResistance: rp, plateLoad: ra });
+          const t = out({
+            biasVoltage: vk,
+            plateCurrent: ip,
+            screenCurrent: ig2,
+            bypassCapacitance: ck,
+            amplificationFactor: mu,
+            plateResistance: rp,
+            plateLoad: ra,
+          });
           expect(t.bypassCornerFrequency as number).toBeGreaterThan(fRk);
-          expect(((t.bypassCornerFrequency as number) * 2 * Math.PI * parallel(o.cathodeResistance, (rp + ra) / (mu + 1)) * ck)).toBeCloseTo(1, 9);
+          expect((t.bypassCornerFrequency as number) * 2 * Math.PI * parallel(o.cathodeResistance, (rp + ra) / (mu + 1)) * ck).toBeCloseTo(1, 9);
         },
       ),
     );
@@ -139,7 +147,12 @@ describe("cathode-bias: refusals", () => {
 
   it("triode figures or transconductance, not both", () => {
     const f = fields({
-      biasVoltage: 2, plateCurrent: "1.2m", amplificationFactor: 100, plateResistance: "62.5k", plateLoad: "100k", transconductance: "1.6m",
+      biasVoltage: 2,
+      plateCurrent: "1.2m",
+      amplificationFactor: 100,
+      plateResistance: "62.5k",
+      plateLoad: "100k",
+      transconductance: "1.6m",
     });
     expect(f.transconductance).toMatch(/not both/);
   });

@@ -101,7 +101,9 @@ describe("colour-code: IEC 60062:2016 tolerance rows and six bands", () => {
 
   it("property: six bands encode and decode back, value, tolerance and TC", () => {
     const tcs = Object.values(TEMPERATURE_COEFFICIENT) as number[];
-    const tols = Object.entries(TOLERANCE).filter(([c]) => c !== "none").map(([, t]) => t as number);
+    const tols = Object.entries(TOLERANCE)
+      .filter(([c]) => c !== "none")
+      .map(([, t]) => t as number);
     fc.assert(
       // three figures always: a two-figure value is padded (10 × 10⁻² = 100 × 10⁻³), so ×10⁻² is its lowest decade here
       fc.property(fc.integer({ min: 10, max: 999 }), fc.integer({ min: -2, max: 8 }), fc.constantFrom(...tols), fc.constantFrom(...tcs), (sig, e, t, tc) => {
@@ -131,7 +133,9 @@ describe("colour-code: spelling and input forms", () => {
 });
 
 describe("colour-code: round trips and refusals", () => {
-  const tolerances = Object.entries(TOLERANCE).filter(([c]) => c !== "none").map(([, t]) => t as number);
+  const tolerances = Object.entries(TOLERANCE)
+    .filter(([c]) => c !== "none")
+    .map(([, t]) => t as number);
 
   it("property: two figures encode to four bands and decode back", () => {
     fc.assert(
@@ -148,13 +152,18 @@ describe("colour-code: round trips and refusals", () => {
 
   it("property: three figures encode to five bands and decode back", () => {
     fc.assert(
-      fc.property(fc.integer({ min: 100, max: 999 }).filter((n) => n % 10 !== 0), fc.integer({ min: -3, max: 9 }), fc.constantFrom(...tolerances), (sig, e, t) => {
-        const r = Number((sig * 10 ** e).toPrecision(12));
-        const o = out({ resistance: r, tolerance: t });
-        expect(o.bands.length).toBe(5);
-        const back = decodeBands(o.bands);
-        expect(back.ok && back.resistance / r).toBeCloseTo(1, 12);
-      }),
+      fc.property(
+        fc.integer({ min: 100, max: 999 }).filter((n) => n % 10 !== 0),
+        fc.integer({ min: -3, max: 9 }),
+        fc.constantFrom(...tolerances),
+        (sig, e, t) => {
+          const r = Number((sig * 10 ** e).toPrecision(12));
+          const o = out({ resistance: r, tolerance: t });
+          expect(o.bands.length).toBe(5);
+          const back = decodeBands(o.bands);
+          expect(back.ok && back.resistance / r).toBeCloseTo(1, 12);
+        },
+      ),
     );
   });
 

@@ -107,10 +107,7 @@ describe("dropping-resistor: refusals", () => {
   });
 
   it("property: non-positive, wrong-unit or missing values are refused under their field", () => {
-    const bad = fc.oneof(
-      fc.double({ max: 0, noNaN: true }),
-      fc.constantFrom("", "5 F", "abc", null, undefined, Number.NaN, Number.NEGATIVE_INFINITY),
-    );
+    const bad = fc.oneof(fc.double({ max: 0, noNaN: true }), fc.constantFrom("", "5 F", "abc", null, undefined, Number.NaN, Number.NEGATIVE_INFINITY));
     const good = { supplyVoltage: 300, loadVoltage: 250, loadCurrent: 0.01 };
     for (const name of Object.keys(good)) {
       fc.assert(

@@ -22,7 +22,8 @@ type Out = {
 };
 
 const { run, out, fields } = calcRunner<Out>(calculator);
-const has = (r: { warnings: { level: string; message: string }[] }, level: string, re: RegExp) => r.warnings.some((w) => w.level === level && re.test(w.message));
+const has = (r: { warnings: { level: string; message: string }[] }, level: string, re: RegExp) =>
+  r.warnings.some((w) => w.level === level && re.test(w.message));
 
 describe("heater-string: published checks", () => {
   it("the issue's mixed string: 6SN7GT + 6V6GT + 6SL7GT on 117 V runs at 0.6 A with 42 Ω and 21 Ω shunts", () => {
@@ -120,7 +121,13 @@ describe("heater-string: published checks", () => {
 
 describe("heater-string: identities and rules", () => {
   it("P = I²R = ΔV·I for the dropping resistor", () => {
-    const o = out({ lineVoltage: 230, heaters: [{ voltage: 6.3, current: 0.3 }, { voltage: "12.6 V", current: "300 mA" }] });
+    const o = out({
+      lineVoltage: 230,
+      heaters: [
+        { voltage: 6.3, current: 0.3 },
+        { voltage: "12.6 V", current: "300 mA" },
+      ],
+    });
     expect(o.dissipation).toBeCloseTo(o.stringCurrent ** 2 * o.droppingResistance, 9);
     expect(o.dissipation).toBeCloseTo((230 - 18.9) * 0.3, 9);
   });
@@ -137,8 +144,20 @@ describe("heater-string: identities and rules", () => {
   });
 
   it("currents within 2% match, beyond 2% do not; the near-match shunt is offered as optional", () => {
-    const within = run({ lineVoltage: 30, heaters: [{ voltage: 12.6, current: 0.15 }, { voltage: 12.6, current: 0.1529 }] });
-    const beyond = run({ lineVoltage: 30, heaters: [{ voltage: 12.6, current: 0.15 }, { voltage: 12.6, current: 0.1531 }] });
+    const within = run({
+      lineVoltage: 30,
+      heaters: [
+        { voltage: 12.6, current: 0.15 },
+        { voltage: 12.6, current: 0.1529 },
+      ],
+    });
+    const beyond = run({
+      lineVoltage: 30,
+      heaters: [
+        { voltage: 12.6, current: 0.15 },
+        { voltage: 12.6, current: 0.1531 },
+      ],
+    });
     expect((within.outputs as unknown as Out).currentsMatch).toBe(true);
     expect((beyond.outputs as unknown as Out).currentsMatch).toBe(false);
     expect(has(within, "info", /optional/)).toBe(true);
@@ -246,7 +265,15 @@ describe("heater-string: validation", () => {
   });
 
   it("a heater with a current in volts is reported by path", () => {
-    expect(fields({ lineVoltage: 120, heaters: [{ voltage: 6.3, current: 0.3 }, { voltage: 6.3, current: "0.3 V" }] })["heaters.1.current"]).toMatch(/current/);
+    expect(
+      fields({
+        lineVoltage: 120,
+        heaters: [
+          { voltage: 6.3, current: 0.3 },
+          { voltage: 6.3, current: "0.3 V" },
+        ],
+      })["heaters.1.current"],
+    ).toMatch(/current/);
   });
 
   it("a bad pilot lamp is reported by path", () => {
@@ -339,7 +366,10 @@ describe("heater-string: properties", () => {
       fc.property(bad, fc.constantFrom("lineVoltage", "heaters.0.voltage", "heaters.1.current", "pilotLamp.voltage", "pilotLamp.current"), (value, key) => {
         const raw: Record<string, unknown> = {
           lineVoltage: 120,
-          heaters: [{ voltage: 6.3, current: 0.3 }, { voltage: 6.3, current: 0.3 }],
+          heaters: [
+            { voltage: 6.3, current: 0.3 },
+            { voltage: 6.3, current: 0.3 },
+          ],
           pilotLamp: { voltage: 6.3, current: 0.15 },
         };
         const path = key.split(".");

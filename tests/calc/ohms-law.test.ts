@@ -48,34 +48,28 @@ describe("ohms-law: checks against published tube data", () => {
 describe("ohms-law: identities", () => {
   it("property: from any pair, V = IR and P = VI = I²R = V²/R, and every other pair gives the same four", () => {
     fc.assert(
-      fc.property(
-        logUniform(1e-3, 1e4),
-        logUniform(1, 1e8),
-        fc.boolean(),
-        fc.constantFrom(...[0, 1, 2, 3, 4, 5]),
-        (vAbs, r, negative, pairIndex) => {
-          const v = negative ? -vAbs : vAbs;
-          const truth = { voltage: v, current: v / r, resistance: r, power: (v * v) / r };
-          const pairs = [
-            ["voltage", "current"],
-            ["voltage", "resistance"],
-            ["voltage", "power"],
-            ["current", "resistance"],
-            ["current", "power"],
-            ["resistance", "power"],
-          ] as const;
-          const [a, b] = pairs[pairIndex];
-          const o = out({ [a]: truth[a], [b]: truth[b] });
-          for (const n of NAMES) expect(Number.isFinite(o[n])).toBe(true);
-          expect(o.voltage / (o.current * o.resistance)).toBeCloseTo(1, 9);
-          expect(o.power / (o.voltage * o.current)).toBeCloseTo(1, 9);
-          expect(o.power / (o.current * o.current * o.resistance)).toBeCloseTo(1, 9);
-          expect(o.power / ((o.voltage * o.voltage) / o.resistance)).toBeCloseTo(1, 9);
-          expect(o.resistance / r).toBeCloseTo(1, 9);
-          // R and P alone cannot know the direction; every other pair keeps the sign
-          if (a !== "resistance") expect(Math.sign(o.voltage)).toBe(Math.sign(v));
-        },
-      ),
+      fc.property(logUniform(1e-3, 1e4), logUniform(1, 1e8), fc.boolean(), fc.constantFrom(...[0, 1, 2, 3, 4, 5]), (vAbs, r, negative, pairIndex) => {
+        const v = negative ? -vAbs : vAbs;
+        const truth = { voltage: v, current: v / r, resistance: r, power: (v * v) / r };
+        const pairs = [
+          ["voltage", "current"],
+          ["voltage", "resistance"],
+          ["voltage", "power"],
+          ["current", "resistance"],
+          ["current", "power"],
+          ["resistance", "power"],
+        ] as const;
+        const [a, b] = pairs[pairIndex];
+        const o = out({ [a]: truth[a], [b]: truth[b] });
+        for (const n of NAMES) expect(Number.isFinite(o[n])).toBe(true);
+        expect(o.voltage / (o.current * o.resistance)).toBeCloseTo(1, 9);
+        expect(o.power / (o.voltage * o.current)).toBeCloseTo(1, 9);
+        expect(o.power / (o.current * o.current * o.resistance)).toBeCloseTo(1, 9);
+        expect(o.power / ((o.voltage * o.voltage) / o.resistance)).toBeCloseTo(1, 9);
+        expect(o.resistance / r).toBeCloseTo(1, 9);
+        // R and P alone cannot know the direction; every other pair keeps the sign
+        if (a !== "resistance") expect(Math.sign(o.voltage)).toBe(Math.sign(v));
+      }),
     );
   });
 });
@@ -120,10 +114,7 @@ describe("ohms-law: signs, zeros and refusals", () => {
   });
 
   it("property: any input either gives four finite numbers or is refused with a field message", () => {
-    const anyValue = fc.oneof(
-      fc.double({ noNaN: false }),
-      fc.constantFrom(undefined, "", "1e308", "-0", "5 V", "2 A", "3 Ω", "4 W", 0),
-    );
+    const anyValue = fc.oneof(fc.double({ noNaN: false }), fc.constantFrom(undefined, "", "1e308", "-0", "5 V", "2 A", "3 Ω", "4 W", 0));
     fc.assert(
       fc.property(anyValue, anyValue, anyValue, anyValue, (voltage, current, resistance, power) => {
         const r = runCalculator(calculator, { voltage, current, resistance, power });

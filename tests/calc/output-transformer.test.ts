@@ -83,7 +83,9 @@ describe("output-transformer: identities and properties", () => {
       fc.property(valid, ({ zp, zs, zl }) => {
         const r = run({ primaryImpedance: zp, secondaryImpedance: zs, newLoad: zl });
         const ratio = zl / zs;
-        expect(r.warnings.some((w) => w.level === "caution" && /more than a factor of 2/.test(w.message))).toBe(ratio > MISMATCH_FACTOR || ratio < 1 / MISMATCH_FACTOR);
+        expect(r.warnings.some((w) => w.level === "caution" && /more than a factor of 2/.test(w.message))).toBe(
+          ratio > MISMATCH_FACTOR || ratio < 1 / MISMATCH_FACTOR,
+        );
       }),
     );
   });

@@ -95,9 +95,21 @@ describe("reactance: refusals", () => {
 
   it("property: non-positive or wrong-unit values are refused under their field", () => {
     const bad = fc.oneof(fc.double({ max: 0, noNaN: true }), fc.constantFrom("5 V", "abc", Number.NaN, Number.POSITIVE_INFINITY));
-    fc.assert(fc.property(bad, (v) => { expect(fields({ frequency: v, capacitance: "1u" })).toHaveProperty("frequency"); }));
-    fc.assert(fc.property(bad, (v) => { expect(fields({ frequency: 60, capacitance: v })).toHaveProperty("capacitance"); }));
-    fc.assert(fc.property(bad, (v) => { expect(fields({ frequency: 60, inductance: v })).toHaveProperty("inductance"); }));
+    fc.assert(
+      fc.property(bad, (v) => {
+        expect(fields({ frequency: v, capacitance: "1u" })).toHaveProperty("frequency");
+      }),
+    );
+    fc.assert(
+      fc.property(bad, (v) => {
+        expect(fields({ frequency: 60, capacitance: v })).toHaveProperty("capacitance");
+      }),
+    );
+    fc.assert(
+      fc.property(bad, (v) => {
+        expect(fields({ frequency: 60, inductance: v })).toHaveProperty("inductance");
+      }),
+    );
     expect(fields({ frequency: 60, capacitance: "5 V" }).capacitance).toBe("Capacitance expected a capacitance, got volts");
   });
 });

@@ -85,9 +85,12 @@ describe("resistor-drift: identities and properties", () => {
       }),
     );
     fc.assert(
-      fc.property(fc.oneof(fc.double({ max: 0, noNaN: true }), fc.double({ min: 1.0001, max: 1e6, noNaN: true }), fc.constantFrom("5%", "x", Number.NaN)), (bad) => {
-        expect(fields({ nominal: 100, measured: 100, tolerance: bad })).toHaveProperty("tolerance");
-      }),
+      fc.property(
+        fc.oneof(fc.double({ max: 0, noNaN: true }), fc.double({ min: 1.0001, max: 1e6, noNaN: true }), fc.constantFrom("5%", "x", Number.NaN)),
+        (bad) => {
+          expect(fields({ nominal: 100, measured: 100, tolerance: bad })).toHaveProperty("tolerance");
+        },
+      ),
     );
     expect(fields({ nominal: 100 }).measured).toMatch(/open/);
     expect(fields({ nominal: 100, measured: "5 V" }).measured).toMatch(/expected a resistance, got volts/);

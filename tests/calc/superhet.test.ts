@@ -84,7 +84,7 @@ describe("superhet: identities and properties", () => {
         if (!r.ok) {
           expect(above).toBe(false);
           expect(r.error.fields).toHaveProperty("intermediateFrequency");
-          expect(fif).toBeGreaterThanOrEqual(fs * (1 - 1e-6) / 2);
+          expect(fif).toBeGreaterThanOrEqual((fs * (1 - 1e-6)) / 2);
           return;
         }
         const o = r.result.outputs as unknown as Out;
@@ -101,7 +101,7 @@ describe("superhet: identities and properties", () => {
         expect(o.imageRejection!).toBeGreaterThanOrEqual(1);
         expect(Number.isFinite(o.imageRejectionDb!)).toBe(true);
         const more = runCalculator(calculator, { signalFrequency: fs, intermediateFrequency: fif, oscillatorAbove: above, loadedQ: q * 2 });
-        if (more.ok) expect((more.result.outputs.imageRejection as number)).toBeGreaterThanOrEqual(o.imageRejection!);
+        if (more.ok) expect(more.result.outputs.imageRejection as number).toBeGreaterThanOrEqual(o.imageRejection!);
         for (const s of r.result.steps) expect(s.latex).not.toMatch(/NaN|Infinity/);
       }),
     );

@@ -107,9 +107,21 @@ describe("supply-ripple: per-stage current and DC drop (Ohm's law)", () => {
   });
 
   it("cautions only when a later stage is given more current than the stage before it", () => {
-    const wrong = run({ ...base, stages: [{ kind: "rc", resistance: "1k", capacitance: "20uF", current: "20mA" }, { kind: "rc", resistance: "10k", capacitance: "10uF" }] });
+    const wrong = run({
+      ...base,
+      stages: [
+        { kind: "rc", resistance: "1k", capacitance: "20uF", current: "20mA" },
+        { kind: "rc", resistance: "10k", capacitance: "10uF" },
+      ],
+    });
     expect(has(wrong.warnings, "caution", /Stage 2 is given 60 mA, more than the 20 mA through stage 1/)).toBe(true);
-    const right = run({ ...base, stages: [{ kind: "rc", resistance: "1k", capacitance: "20uF" }, { kind: "rc", resistance: "10k", capacitance: "10uF", current: "5mA" }] });
+    const right = run({
+      ...base,
+      stages: [
+        { kind: "rc", resistance: "1k", capacitance: "20uF" },
+        { kind: "rc", resistance: "10k", capacitance: "10uF", current: "5mA" },
+      ],
+    });
     expect(has(right.warnings, "caution", /more than the/)).toBe(false);
   });
 });
@@ -134,7 +146,13 @@ describe("supply-ripple: identities", () => {
   });
 
   it("stages chain: final ripple is the product of the reservoir ripple and every stage's fraction", () => {
-    const o = out({ ...base, stages: [{ kind: "rc", resistance: "1k", capacitance: "22uF" }, { kind: "lc", inductance: "8H", capacitance: "16uF" }] });
+    const o = out({
+      ...base,
+      stages: [
+        { kind: "rc", resistance: "1k", capacitance: "22uF" },
+        { kind: "lc", inductance: "8H", capacitance: "16uF" },
+      ],
+    });
     expect(o.stages[0].rippleRms).toBeCloseTo(o.rippleRms * o.stages[0].attenuation, 12);
     expect(o.finalRippleRms).toBeCloseTo(o.rippleRms * o.stages[0].attenuation * o.stages[1].attenuation, 12);
     expect(o.finalRippleRms).toBe(o.stages[1].rippleRms);
@@ -186,7 +204,9 @@ describe("supply-ripple: warnings fire only when they should", () => {
 
   it("warns when the load is above the tube's rated DC output, and only then", () => {
     // 5Y3GT: 125 mA DC output with a capacitor-input filter (RCA data, from memory).
-    expect(has(run({ ...base, capacitance: "20uF", loadCurrent: "150mA", rectifierTube: "5Y3GT" }).warnings, "caution", /150 mA load is more than the 125 mA/)).toBe(true);
+    expect(
+      has(run({ ...base, capacitance: "20uF", loadCurrent: "150mA", rectifierTube: "5Y3GT" }).warnings, "caution", /150 mA load is more than the 125 mA/),
+    ).toBe(true);
     expect(has(run({ ...base, capacitance: "20uF", loadCurrent: "120mA", rectifierTube: "5Y3GT" }).warnings, "caution", /load is more than/)).toBe(false);
   });
 
@@ -200,7 +220,13 @@ describe("supply-ripple: warnings fire only when they should", () => {
 
 describe("supply-ripple: validation", () => {
   it("nested fields are reported by path", () => {
-    const f = fields({ ...base, stages: [{ kind: "rc", resistance: "1k", capacitance: "22uF" }, { kind: "rc", resistance: "-5", capacitance: "1 H" }] });
+    const f = fields({
+      ...base,
+      stages: [
+        { kind: "rc", resistance: "1k", capacitance: "22uF" },
+        { kind: "rc", resistance: "-5", capacitance: "1 H" },
+      ],
+    });
     expect(f["stages.1.resistance"]).toBeTruthy();
     expect(f["stages.1.capacitance"]).toMatch(/capacitance/);
   });
@@ -212,8 +238,12 @@ describe("supply-ripple: validation", () => {
   });
 
   it("a stage current above the load current, or a choke of zero resistance, is refused under its path", () => {
-    expect(fields({ ...base, stages: [{ kind: "rc", resistance: "1k", capacitance: "20uF", current: "80mA" }] })["stages.0.current"]).toMatch(/cannot be more than the 60 mA load current/);
-    expect(fields({ ...base, stages: [{ kind: "lc", inductance: "10H", capacitance: "20uF", resistance: 0 }] })["stages.0.resistance"]).toMatch(/greater than zero/);
+    expect(fields({ ...base, stages: [{ kind: "rc", resistance: "1k", capacitance: "20uF", current: "80mA" }] })["stages.0.current"]).toMatch(
+      /cannot be more than the 60 mA load current/,
+    );
+    expect(fields({ ...base, stages: [{ kind: "lc", inductance: "10H", capacitance: "20uF", resistance: 0 }] })["stages.0.resistance"]).toMatch(
+      /greater than zero/,
+    );
     expect(fields({ ...base, stages: [{ kind: "lc", inductance: "10H", capacitance: "20uF", current: "5 V" }] })["stages.0.current"]).toMatch(/current/);
   });
 });

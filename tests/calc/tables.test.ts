@@ -155,7 +155,16 @@ describe("IEC 60062 colour code", () => {
   it("digits black 0 … white 9", () => {
     // IEC 60062, table of colour codes for resistors (from memory)
     expect(DIGIT).toEqual({
-      black: 0, brown: 1, red: 2, orange: 3, yellow: 4, green: 5, blue: 6, violet: 7, grey: 8, white: 9,
+      black: 0,
+      brown: 1,
+      red: 2,
+      orange: 3,
+      yellow: 4,
+      green: 5,
+      blue: 6,
+      violet: 7,
+      grey: 8,
+      white: 9,
     });
     expect(digitColour(7)).toBe("violet");
   });
@@ -175,10 +184,30 @@ describe("IEC 60062 colour code", () => {
     // yellow P 0.02 %, green D 0.5 %, blue C 0.25 %, violet B 0.1 %, grey L 0.01 %, gold J 5 %,
     // silver K 10 %, no band M 20 %
     expect(TOLERANCE).toEqual({
-      brown: 0.01, red: 0.02, orange: 0.0005, yellow: 0.0002, green: 0.005, blue: 0.0025, violet: 0.001, grey: 0.0001, gold: 0.05, silver: 0.1, none: 0.2,
+      brown: 0.01,
+      red: 0.02,
+      orange: 0.0005,
+      yellow: 0.0002,
+      green: 0.005,
+      blue: 0.0025,
+      violet: 0.001,
+      grey: 0.0001,
+      gold: 0.05,
+      silver: 0.1,
+      none: 0.2,
     });
     expect(TOLERANCE_LETTER).toEqual({
-      brown: "F", red: "G", orange: "W", yellow: "P", green: "D", blue: "C", violet: "B", grey: "L", gold: "J", silver: "K", none: "M",
+      brown: "F",
+      red: "G",
+      orange: "W",
+      yellow: "P",
+      green: "D",
+      blue: "C",
+      violet: "B",
+      grey: "L",
+      gold: "J",
+      silver: "K",
+      none: "M",
     });
     expect(toleranceColour(0.05)).toBe("gold");
     expect(toleranceColour(0.0005)).toBe("orange");

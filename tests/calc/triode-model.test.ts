@@ -115,7 +115,12 @@ describe("model identities", () => {
 
   it("analytic gm and gp agree with central differences", () => {
     for (const t of TRIODES) {
-      for (const [ep, eg] of [[250, -2], [100, -1], [300, -10], [50, 0]] as const) {
+      for (const [ep, eg] of [
+        [250, -2],
+        [100, -1],
+        [300, -10],
+        [50, 0],
+      ] as const) {
         const pt = triodePoint(t.params, ep, eg);
         const h = 1e-4;
         const gm = (plateCurrent(t.params, ep, eg + h) - plateCurrent(t.params, ep, eg - h)) / (2 * h);
@@ -200,18 +205,13 @@ describe("properties", () => {
 
   it("finite, non-negative current and conductances anywhere in a wide range", () => {
     fc.assert(
-      fc.property(
-        params,
-        fc.double({ min: 0, max: 5000, noNaN: true }),
-        fc.double({ min: -1000, max: 0, noNaN: true }),
-        (p, ep, eg) => {
-          const pt = triodePoint(p, ep, eg);
-          for (const v of [pt.ip, pt.gm, pt.gp, pt.mu]) {
-            expect(Number.isFinite(v)).toBe(true);
-            expect(v).toBeGreaterThanOrEqual(0);
-          }
-        },
-      ),
+      fc.property(params, fc.double({ min: 0, max: 5000, noNaN: true }), fc.double({ min: -1000, max: 0, noNaN: true }), (p, ep, eg) => {
+        const pt = triodePoint(p, ep, eg);
+        for (const v of [pt.ip, pt.gm, pt.gp, pt.mu]) {
+          expect(Number.isFinite(v)).toBe(true);
+          expect(v).toBeGreaterThanOrEqual(0);
+        }
+      }),
       { numRuns: 2000 },
     );
   });

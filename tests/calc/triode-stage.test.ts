@@ -9,7 +9,15 @@ import type { Calculator } from "@/lib/calc/types";
 const calc = calculator as unknown as Calculator;
 
 type Out = Record<
-  "plateVoltage" | "plateCurrent" | "cathodeVoltage" | "plateDissipation" | "amplificationFactor" | "plateResistance" | "transconductance" | "gain" | "plateToChassisVoltage",
+  | "plateVoltage"
+  | "plateCurrent"
+  | "cathodeVoltage"
+  | "plateDissipation"
+  | "amplificationFactor"
+  | "plateResistance"
+  | "transconductance"
+  | "gain"
+  | "plateToChassisVoltage",
   number
 >;
 
@@ -282,7 +290,10 @@ describe("properties", () => {
   };
 
   it("every table tube, any valid stage: converges, no NaN or Infinity", () => {
-    fc.assert(fc.property(fc.constantFrom(...TRIODE_NAMES), stage, (tube, s) => checkFinite({ tube, ...s })), { numRuns: 1500 });
+    fc.assert(
+      fc.property(fc.constantFrom(...TRIODE_NAMES), stage, (tube, s) => checkFinite({ tube, ...s })),
+      { numRuns: 1500 },
+    );
   });
 
   it("custom parameters over their whole accepted range: converges, no NaN or Infinity", () => {
@@ -299,7 +310,10 @@ describe("properties", () => {
       cathodeResistor: fc.double({ min: 0, max: 1e8, noNaN: true }),
       cathodeBypassed: fc.boolean(),
     });
-    fc.assert(fc.property(params, wide, (p, s) => checkFinite({ ...p, ...s })), { numRuns: 1500 });
+    fc.assert(
+      fc.property(params, wide, (p, s) => checkFinite({ ...p, ...s })),
+      { numRuns: 1500 },
+    );
   });
 
   it("non-positive supply or plate resistor, or negative cathode resistor, always fails under that field", () => {

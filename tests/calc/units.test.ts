@@ -173,7 +173,17 @@ describe("parseQuantity: the fast path for a kind's own unit agrees with mathjs"
     ["power", "W", "watt"],
     ["conductance", "S", "siemens"],
   ];
-  const prefixes: [string, string][] = [["", ""], ["p", "pico"], ["n", "nano"], ["u", "micro"], ["µ", "micro"], ["m", "milli"], ["k", "kilo"], ["M", "mega"], ["G", "giga"]];
+  const prefixes: [string, string][] = [
+    ["", ""],
+    ["p", "pico"],
+    ["n", "nano"],
+    ["u", "micro"],
+    ["µ", "micro"],
+    ["m", "milli"],
+    ["k", "kilo"],
+    ["M", "mega"],
+    ["G", "giga"],
+  ];
 
   it("property: same SI value either way", () => {
     fc.assert(
@@ -343,13 +353,20 @@ describe("quantity schemas: magnitudes no bench quantity has are refused", () =>
   it("property: whatever a schema accepts is finite and, unless zero, within the kind's limits", () => {
     const s = optionalQuantity("capacitance", { positive: true });
     fc.assert(
-      fc.property(fc.oneof(fc.double(), fc.string(), fc.double().map((d) => `${d} uF`)), (raw) => {
-        const r = s.safeParse(raw);
-        if (r.success && r.data !== undefined) {
-          expect(Number.isFinite(r.data)).toBe(true);
-          expect(r.data >= 1e-14 && r.data <= 10).toBe(true);
-        }
-      }),
+      fc.property(
+        fc.oneof(
+          fc.double(),
+          fc.string(),
+          fc.double().map((d) => `${d} uF`),
+        ),
+        (raw) => {
+          const r = s.safeParse(raw);
+          if (r.success && r.data !== undefined) {
+            expect(Number.isFinite(r.data)).toBe(true);
+            expect(r.data >= 1e-14 && r.data <= 10).toBe(true);
+          }
+        },
+      ),
     );
   });
 });

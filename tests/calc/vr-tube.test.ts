@@ -18,7 +18,10 @@ type Out = {
 };
 
 const { run, out, fields } = calcRunner<Out>(calculator);
-const cautions = (raw: Record<string, unknown>) => run(raw).warnings.filter((w) => w.level === "caution").map((w) => w.message);
+const cautions = (raw: Record<string, unknown>) =>
+  run(raw)
+    .warnings.filter((w) => w.level === "caution")
+    .map((w) => w.message);
 const isE12 = (x: number) => {
   const m = x / 10 ** Math.floor(Math.log10(x) + 1e-12);
   return E12.some((e) => Math.abs(e - m) < 1e-9 * e);
@@ -142,7 +145,7 @@ describe("vr-tube: identities and properties", () => {
           const o = r.outputs as unknown as Out;
           const drop = vs - tube.regulatedVoltage;
           for (const v of Object.values(o)) if (v !== null) expect(Number.isFinite(v)).toBe(true);
-          expect(o.seriesResistance * (ilMax + tube.minCurrent) / drop).toBeCloseTo(1, 9);
+          expect((o.seriesResistance * (ilMax + tube.minCurrent)) / drop).toBeCloseTo(1, 9);
           expect(o.tubeCurrentAtMaxLoad / tube.minCurrent).toBeCloseTo(1, 9);
           expect(o.tubeCurrentAtMinLoad - o.tubeCurrentAtMaxLoad).toBeCloseTo(ilMax - ilMin, 9);
           expect(o.resistorPower / ((drop * drop) / o.seriesResistance)).toBeCloseTo(1, 9);
@@ -167,8 +170,12 @@ describe("vr-tube: refusals", () => {
     const missing = fields({ supplyVoltage: 250, loadCurrentMax: 0.01 });
     expect(Object.keys(missing).sort()).toEqual(["maxCurrent", "minCurrent", "regulatedVoltage"]);
     expect(fields({ supplyVoltage: 250, tube: "6V6", loadCurrentMax: 0.01 }).tube).toMatch(/one of 0A2, 0B2, 0C3, 0D3/);
-    expect(fields({ supplyVoltage: 250, regulatedVoltage: 150, minCurrent: 0.03, maxCurrent: 0.005, loadCurrentMax: 0.01 }).maxCurrent).toMatch(/above the minimum/);
-    expect(fields({ supplyVoltage: 250, regulatedVoltage: 150, minCurrent: 0.005, maxCurrent: 0.03, strikingVoltage: 100, loadCurrentMax: 0.01 })).toHaveProperty("strikingVoltage");
+    expect(fields({ supplyVoltage: 250, regulatedVoltage: 150, minCurrent: 0.03, maxCurrent: 0.005, loadCurrentMax: 0.01 }).maxCurrent).toMatch(
+      /above the minimum/,
+    );
+    expect(
+      fields({ supplyVoltage: 250, regulatedVoltage: 150, minCurrent: 0.005, maxCurrent: 0.03, strikingVoltage: 100, loadCurrentMax: 0.01 }),
+    ).toHaveProperty("strikingVoltage");
   });
 
   it("supply above the regulated voltage; least load not above the greatest", () => {

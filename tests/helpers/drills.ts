@@ -11,7 +11,7 @@ export function drillsOf(kind: DrillKind, n: number, first = 1): Drill[] {
 export const WRONG_UNIT: Record<Exclude<AskedUnit, "text">, string> = {
   V: "W",
   A: "V",
-  "Ω": "Hz",
+  Ω: "Hz",
   W: "V",
   F: "H",
   H: "F",

@@ -41,9 +41,7 @@ export class Client {
     for (const c of set) {
       const [pair] = c.split(";");
       const [name] = pair.split("=");
-      const rest = this.cookie
-        .split("; ")
-        .filter((p) => p && !p.startsWith(`${name}=`));
+      const rest = this.cookie.split("; ").filter((p) => p && !p.startsWith(`${name}=`));
       // A cleared cookie (empty value or Max-Age=0) is dropped.
       if (/Max-Age=0/i.test(c) || pair.endsWith("=")) this.cookie = rest.join("; ");
       else this.cookie = [...rest, pair].join("; ");

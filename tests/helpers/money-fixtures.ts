@@ -45,13 +45,22 @@ export interface JobFixture {
 export function createJob(workshopId: number, fixture: JobFixture = {}) {
   const d = testDb();
   const job = d
-    .prepare("INSERT INTO jobs (workshop_id, title, equipment_kind, customer_name, customer_email, status) VALUES (?, ?, 'table-radio', 'Iona Testwell', ?, ?) RETURNING id")
-    .get(workshopId, `Test set ${unique()}`, fixture.customerEmail === undefined ? `iona-${unique()}@example.com` : fixture.customerEmail, fixture.status ?? "inspecting") as { id: number };
+    .prepare(
+      "INSERT INTO jobs (workshop_id, title, equipment_kind, customer_name, customer_email, status) VALUES (?, ?, 'table-radio', 'Iona Testwell', ?, ?) RETURNING id",
+    )
+    .get(
+      workshopId,
+      `Test set ${unique()}`,
+      fixture.customerEmail === undefined ? `iona-${unique()}@example.com` : fixture.customerEmail,
+      fixture.status ?? "inspecting",
+    ) as { id: number };
   const partIds = (fixture.parts ?? []).map(
     (p) =>
       (
         d
-          .prepare("INSERT INTO parts (job_id, workshop_id, designator, kind, replacement_value, replacement_rating, unit_cost_minor) VALUES (?, ?, ?, 'paper', '0.047 µF', '630 V', ?) RETURNING id")
+          .prepare(
+            "INSERT INTO parts (job_id, workshop_id, designator, kind, replacement_value, replacement_rating, unit_cost_minor) VALUES (?, ?, ?, 'paper', '0.047 µF', '630 V', ?) RETURNING id",
+          )
           .get(job.id, workshopId, p.designator, p.unitCostMinor) as { id: number }
       ).id,
   );
@@ -69,7 +78,9 @@ export function logTexts(jobId: number, kind: string): string[] {
 /** The text of the newest e-mail to an address (optionally with a matching subject) the SMTP sink received, waiting briefly for it. */
 export async function latestMailText(to: string, subject?: RegExp): Promise<string> {
   for (let i = 0; i < 100; i++) {
-    const found = mailTo(to).filter((m) => !subject || subject.test(m.subject)).at(-1);
+    const found = mailTo(to)
+      .filter((m) => !subject || subject.test(m.subject))
+      .at(-1);
     if (found) return found.text;
     await new Promise((r) => setTimeout(r, 100));
   }
@@ -92,7 +103,9 @@ export async function ownMember(workshopId: number, role: "owner" | "technician"
   const { hashPassword } = await import("@/lib/auth/password");
   const email = `${role}-${unique()}@money.test`;
   const d = testDb();
-  const user = d.prepare("INSERT INTO users (email, name, password_hash) VALUES (?, ?, ?) RETURNING id").get(email, `Test ${role}`, await hashPassword("a sturdy passphrase")) as { id: number };
+  const user = d
+    .prepare("INSERT INTO users (email, name, password_hash) VALUES (?, ?, ?) RETURNING id")
+    .get(email, `Test ${role}`, await hashPassword("a sturdy passphrase")) as { id: number };
   d.prepare("INSERT INTO memberships (workshop_id, user_id, role) VALUES (?, ?, ?)").run(workshopId, user.id, role);
   const client = new Client({ "x-forwarded-for": `198.19.${Math.floor(Math.random() * 250)}.${Math.floor(Math.random() * 250)}` });
   const res = await client.post("/api/auth/sign-in", { email, password: "a sturdy passphrase" });

@@ -36,7 +36,9 @@ async function addMember(workshopId: number, role: "technician" | "apprentice", 
   db.pragma("busy_timeout = 5000");
   try {
     const hash = await hashPassword(PASSWORD);
-    const user = db.prepare("insert into users (email, name, password_hash) values (?, ?, ?) returning id").get(email, `${role} ${label}`, hash) as { id: number };
+    const user = db.prepare("insert into users (email, name, password_hash) values (?, ?, ?) returning id").get(email, `${role} ${label}`, hash) as {
+      id: number;
+    };
     db.prepare("insert into memberships (workshop_id, user_id, role) values (?, ?, ?)").run(workshopId, user.id, role);
   } finally {
     db.close();
@@ -58,7 +60,9 @@ export async function makeTeam(label = "team"): Promise<Team> {
 /** A tiny valid PNG (solid amber) made with sharp, for upload tests. */
 export async function samplePng(width = 64, height = 48): Promise<Buffer> {
   const sharp = (await import("sharp")).default;
-  return sharp({ create: { width, height, channels: 3, background: { r: 180, g: 83, b: 9 } } }).png().toBuffer();
+  return sharp({ create: { width, height, channels: 3, background: { r: 180, g: 83, b: 9 } } })
+    .png()
+    .toBuffer();
 }
 
 export function fileForm(bytes: Uint8Array, name: string, type = "application/octet-stream", kind?: string): FormData {

@@ -10,7 +10,12 @@ export async function ownWorkshop(label = "Test") {
   const tag = randomUUID().slice(0, 8);
   const owner = { email: `owner-${tag}@example.test`, password: `owner passphrase ${tag}`, name: `Owner ${tag}` };
   const client = new Client();
-  const res = await client.post("/api/auth/sign-up", { workshopName: `${label} Workshop ${tag}`, name: owner.name, email: owner.email, password: owner.password });
+  const res = await client.post("/api/auth/sign-up", {
+    workshopName: `${label} Workshop ${tag}`,
+    name: owner.name,
+    email: owner.email,
+    password: owner.password,
+  });
   if (res.status !== 201) throw new Error(`sign-up failed: ${res.status} ${await res.text()}`);
   const { workshop } = await res.json();
   return { client, owner, tag, workshopId: workshop.id as number, workshopName: `${label} Workshop ${tag}` };

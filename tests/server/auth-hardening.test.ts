@@ -67,11 +67,25 @@ describe("password hashing cannot be flooded", () => {
   test("reset completion and invitation acceptance are throttled per client, even with made-up tokens", async () => {
     const from = ip();
     const resets: number[] = [];
-    for (let i = 0; i < 11; i++) resets.push((await new Client({ "x-forwarded-for": from }).post("/api/auth/password-reset/complete", { token: "A".repeat(43), password: "a brand new passphrase" })).status);
+    for (let i = 0; i < 11; i++)
+      resets.push(
+        (await new Client({ "x-forwarded-for": from }).post("/api/auth/password-reset/complete", { token: "A".repeat(43), password: "a brand new passphrase" }))
+          .status,
+      );
     expect(resets.slice(0, 10).every((s) => s === 404)).toBe(true);
     expect(resets[10]).toBe(429);
     const joins: number[] = [];
-    for (let i = 0; i < 21; i++) joins.push((await new Client({ "x-forwarded-for": from }).post("/api/invitations/accept", { mode: "sign-up", token: "B".repeat(43), name: "Guess", password: "a brand new passphrase" })).status);
+    for (let i = 0; i < 21; i++)
+      joins.push(
+        (
+          await new Client({ "x-forwarded-for": from }).post("/api/invitations/accept", {
+            mode: "sign-up",
+            token: "B".repeat(43),
+            name: "Guess",
+            password: "a brand new passphrase",
+          })
+        ).status,
+      );
     expect(joins.slice(0, 20).every((s) => s === 404)).toBe(true);
     expect(joins[20]).toBe(429);
   });

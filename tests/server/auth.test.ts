@@ -57,7 +57,11 @@ describe("sign-in and sessions through the real server", () => {
     const res = await new Client().post("/api/auth/sign-in", { email: "tech@demo.test", password: "wrong-password" }, { "x-forwarded-for": "198.51.100.7" });
     expect(res.status).toBe(401);
     expect((await res.json()).error.message).toBe("E-mail or password is wrong.");
-    const unknown = await new Client().post("/api/auth/sign-in", { email: "nobody@demo.test", password: "wrong-password" }, { "x-forwarded-for": "198.51.100.7" });
+    const unknown = await new Client().post(
+      "/api/auth/sign-in",
+      { email: "nobody@demo.test", password: "wrong-password" },
+      { "x-forwarded-for": "198.51.100.7" },
+    );
     expect(unknown.status).toBe(401);
     expect((await unknown.json()).error.message).toBe("E-mail or password is wrong.");
   });
@@ -83,7 +87,11 @@ describe("sign-in and sessions through the real server", () => {
   test("a flood from one address across many accounts gets a 429", async () => {
     let last = 0;
     for (let i = 0; i < 22; i++) {
-      const res = await new Client().post("/api/auth/sign-in", { email: `stranger${i}@example.test`, password: "nope-nope" }, { "x-forwarded-for": "192.0.2.250" });
+      const res = await new Client().post(
+        "/api/auth/sign-in",
+        { email: `stranger${i}@example.test`, password: "nope-nope" },
+        { "x-forwarded-for": "192.0.2.250" },
+      );
       last = res.status;
     }
     expect(last).toBe(429);
@@ -108,7 +116,12 @@ describe("sign-in and sessions through the real server", () => {
   test("sign-up creates a workshop with its creator as owner", async () => {
     const client = new Client();
     const email = `founder-${Date.now()}@example.test`;
-    const res = await client.post("/api/auth/sign-up", { workshopName: "Kettle Lane Wireless", name: "Ruth Penhallow", email, password: "a sturdy passphrase" });
+    const res = await client.post("/api/auth/sign-up", {
+      workshopName: "Kettle Lane Wireless",
+      name: "Ruth Penhallow",
+      email,
+      password: "a sturdy passphrase",
+    });
     expect(res.status).toBe(201);
     const me = await (await client.get("/api/me")).json();
     expect(me).toMatchObject({ role: "owner", workshop: { name: "Kettle Lane Wireless" } });

@@ -29,7 +29,8 @@ describe("the Bench signed out", () => {
 
   test("/bench lists every calculator under its bench task, and each page opens with a worked example", async () => {
     const index = await (await client.get("/bench")).text();
-    for (const group of ["First power and safety", "Supplies and heaters", "Stages and tubes", "Radio and alignment", "Parts and measuring"]) expect(index).toContain(group);
+    for (const group of ["First power and safety", "Supplies and heaters", "Stages and tubes", "Radio and alignment", "Parts and measuring"])
+      expect(index).toContain(group);
     for (const c of calculators) expect(index).toContain(`/bench/${c.slug}`);
     const page = await client.get("/bench/cathode-bias");
     expect(page.status).toBe(200);

@@ -31,13 +31,20 @@ describe("tubes", () => {
     expect(lineup.status).toBe(201);
     const { tubes } = await lineup.json();
     expect(tubes.map((t: { position: string }) => t.position)).toEqual(["V1", "V2", "CRT"]);
-    const res = await team.apprentice.patch(`/api/jobs/${id}/tubes/${tubes[2].id}`, { substitute: "17hp4", test: { reading: "30", minimum: 50 }, verdict: "weak" });
+    const res = await team.apprentice.patch(`/api/jobs/${id}/tubes/${tubes[2].id}`, {
+      substitute: "17hp4",
+      test: { reading: "30", minimum: 50 },
+      verdict: "weak",
+    });
     expect(res.status).toBe(200);
     const { tube } = await res.json();
     expect(Object.keys(tube).sort()).toEqual(["createdAt", "differences", "function", "id", "position", "substitute", "test", "type", "updatedAt", "verdict"]);
     expect(tube).toMatchObject({ type: "17BP4A", substitute: "17HP4", test: { reading: 30, minimum: 50 }, verdict: "weak" });
     // RCA picture tube data (from memory): the same 6.3 V 0.6 A heater; magnetic against electrostatic focus.
-    expect(tube.differences.slice(0, 2).map((d: { what: string; level: string }) => [d.what, d.level])).toEqual([["Heater voltage", "info"], ["Heater current", "info"]]);
+    expect(tube.differences.slice(0, 2).map((d: { what: string; level: string }) => [d.what, d.level])).toEqual([
+      ["Heater voltage", "info"],
+      ["Heater current", "info"],
+    ]);
     expect(tube.differences.find((d: { what: string }) => d.what === "Focus").level).toBe("caution");
     expect(await logText(id)).toContain("Tube CRT (17BP4A, picture tube): tested 30 against its minimum of 50, verdict weak, substitute 17HP4.");
   });
@@ -58,21 +65,45 @@ describe("tubes", () => {
 describe("power-ups", () => {
   test("a step over the stop current is danger, and passing then needs a reason (400 naming reason)", async () => {
     const id = await newJob();
-    const start = await team.apprentice.post(`/api/jobs/${id}/power-ups`, { limiter: "series-lamp", lampPower: "150 W", stopCurrent: "1.2 A", checklist: { "filters-replaced": true, "caps-discharged": true } });
+    const start = await team.apprentice.post(`/api/jobs/${id}/power-ups`, {
+      limiter: "series-lamp",
+      lampPower: "150 W",
+      stopCurrent: "1.2 A",
+      checklist: { "filters-replaced": true, "caps-discharged": true },
+    });
     expect(start.status).toBe(201);
     const { session } = await start.json();
     expect(session).toMatchObject({ limiter: "series-lamp", lampPower: 150, currentLimit: null, stopCurrent: 1.2, outcome: null, steps: [] });
-    expect(session.checklistWarnings.map((w: { id: string }) => w.id)).toEqual(["fuse-rating", "hv-lead-dressed", "no-bplus-short", "tubes-seated", "output-loaded"]);
-    const ok = await (await team.apprentice.post(`/api/jobs/${id}/power-ups/${session.id}/steps`, { supplyVoltage: "60 V", currentDrawn: "0.5 A", minutes: 5 })).json();
+    expect(session.checklistWarnings.map((w: { id: string }) => w.id)).toEqual([
+      "fuse-rating",
+      "hv-lead-dressed",
+      "no-bplus-short",
+      "tubes-seated",
+      "output-loaded",
+    ]);
+    const ok = await (
+      await team.apprentice.post(`/api/jobs/${id}/power-ups/${session.id}/steps`, { supplyVoltage: "60 V", currentDrawn: "0.5 A", minutes: 5 })
+    ).json();
     expect(ok.step).toMatchObject({ supplyVoltage: 60, currentDrawn: 0.5, minutes: 5, bPlus: null, overStop: false, warnings: [] });
-    const over = await (await team.apprentice.post(`/api/jobs/${id}/power-ups/${session.id}/steps`, { supplyVoltage: 90, currentDrawn: "1.35 A", minutes: 1, bPlus: "180 V", note: "Lamp flared" })).json();
+    const over = await (
+      await team.apprentice.post(`/api/jobs/${id}/power-ups/${session.id}/steps`, {
+        supplyVoltage: 90,
+        currentDrawn: "1.35 A",
+        minutes: 1,
+        bPlus: "180 V",
+        note: "Lamp flared",
+      })
+    ).json();
     expect(over.step.overStop).toBe(true);
     expect(over.step.warnings[0].level).toBe("danger");
 
     const refused = await team.apprentice.patch(`/api/jobs/${id}/power-ups/${session.id}`, { outcome: "passed" });
     expect(refused.status).toBe(400);
     expect(Object.keys(await fields(refused))).toEqual(["reason"]);
-    const passed = await team.apprentice.patch(`/api/jobs/${id}/power-ups/${session.id}`, { outcome: "passed", reason: "Filter charging surge; settled at 1.05 A." });
+    const passed = await team.apprentice.patch(`/api/jobs/${id}/power-ups/${session.id}`, {
+      outcome: "passed",
+      reason: "Filter charging surge; settled at 1.05 A.",
+    });
     expect(passed.status).toBe(200);
     expect((await passed.json()).session).toMatchObject({ outcome: "passed", reason: "Filter charging surge; settled at 1.05 A." });
     expect((await tech().post(`/api/jobs/${id}/power-ups/${session.id}/steps`, { supplyVoltage: 100, currentDrawn: 1, minutes: 1 })).status).toBe(409);
@@ -99,19 +130,35 @@ describe("power-ups", () => {
 describe("faults", () => {
   test("open → found → fixed as candidates change, with a reading as evidence; back to open when the cause is reopened", async () => {
     const id = await newJob();
-    const { fault } = await (await team.apprentice.post(`/api/jobs/${id}/faults`, { symptom: "No vertical deflection", section: "vertical deflection" })).json();
+    const { fault } = await (
+      await team.apprentice.post(`/api/jobs/${id}/faults`, { symptom: "No vertical deflection", section: "vertical deflection" })
+    ).json();
     expect(fault).toMatchObject({ state: "open", candidates: [], resolution: null });
     const ids: number[] = [];
     for (const description of ["Yoke", "Vertical output transformer", "Vertical output tube", "Vertical oscillator"]) {
       ids.push((await (await team.apprentice.post(`/api/jobs/${id}/faults/${fault.id}/candidates`, { description })).json()).candidate.id);
     }
-    const { reading } = await (await team.apprentice.post(`/api/jobs/${id}/readings`, { kind: "voltage", designator: "V9 cathode", nominal: 18, measured: 1.6 })).json();
+    const { reading } = await (
+      await team.apprentice.post(`/api/jobs/${id}/readings`, { kind: "voltage", designator: "V9 cathode", nominal: 18, measured: 1.6 })
+    ).json();
     const early = await team.apprentice.patch(`/api/jobs/${id}/faults/${fault.id}`, { resolution: "New tube" });
     expect(early.status).toBe(400);
     expect(await fields(early)).toHaveProperty("resolution");
-    const found = await (await team.apprentice.patch(`/api/jobs/${id}/faults/${fault.id}/candidates/${ids[2]}`, { status: "cause", readingId: reading.id, evidence: "Cathode at 1.6 V" })).json();
+    const found = await (
+      await team.apprentice.patch(`/api/jobs/${id}/faults/${fault.id}/candidates/${ids[2]}`, {
+        status: "cause",
+        readingId: reading.id,
+        evidence: "Cathode at 1.6 V",
+      })
+    ).json();
     expect(found.fault.state).toBe("found");
-    expect(found.candidate).toMatchObject({ position: 3, status: "cause", evidence: "Cathode at 1.6 V", readingId: reading.id, reading: { designator: "V9 cathode", measured: 1.6, unit: "V" } });
+    expect(found.candidate).toMatchObject({
+      position: 3,
+      status: "cause",
+      evidence: "Cathode at 1.6 V",
+      readingId: reading.id,
+      reading: { designator: "V9 cathode", measured: 1.6, unit: "V" },
+    });
     const fixed = await (await team.apprentice.patch(`/api/jobs/${id}/faults/${fault.id}`, { resolution: "Fitted a new vertical output tube" })).json();
     expect(fixed.fault.state).toBe("fixed");
     const reopened = await (await tech().patch(`/api/jobs/${id}/faults/${fault.id}/candidates/${ids[2]}`, { status: "open" })).json();
@@ -181,7 +228,12 @@ describe("checks before ready", () => {
     expect(refused.status).toBe(409);
     expect((await refused.json()).error.checks.map((c: { id: string }) => c.id)).toEqual(["open-faults"]);
     expect(mailTo(customer)).toEqual([]);
-    const sent = await tech().post(`/api/jobs/${id}/ready-message`, { subject: "Ready", text: "Your set is ready.", override: true, reason: "Customer knows; will bring it back if it recurs" });
+    const sent = await tech().post(`/api/jobs/${id}/ready-message`, {
+      subject: "Ready",
+      text: "Your set is ready.",
+      override: true,
+      reason: "Customer knows; will bring it back if it recurs",
+    });
     expect(sent.status).toBe(200);
     expect((await waitForMail(customer)).attachments[0].content.subarray(0, 5).toString()).toBe("%PDF-");
     expect(await logText(id)).toContain("Ready message sent with checks still open");
@@ -190,12 +242,20 @@ describe("checks before ready", () => {
   test("the bench sheet of a job with 25 saved calculations is a PDF, not a 500", async () => {
     const id = await newJob();
     for (let i = 0; i < 25; i++) {
-      const res = await tech().post(`/api/jobs/${id}/calculations`, { slug: "time-constant", inputs: { resistance: "470k", capacitance: "50 uF", initialVoltage: 300, targetVoltage: 30 }, note: `Check ${i + 1}: τ of the filter with its bleeder` });
+      const res = await tech().post(`/api/jobs/${id}/calculations`, {
+        slug: "time-constant",
+        inputs: { resistance: "470k", capacitance: "50 uF", initialVoltage: 300, targetVoltage: 30 },
+        note: `Check ${i + 1}: τ of the filter with its bleeder`,
+      });
       expect(res.status).toBe(201);
     }
     const pdf = await tech().get(`/api/jobs/${id}/bench-sheet`);
     expect(pdf.status).toBe(200);
     expect(pdf.headers.get("content-type")).toBe("application/pdf");
-    expect(Buffer.from(await pdf.arrayBuffer()).subarray(0, 5).toString()).toBe("%PDF-");
+    expect(
+      Buffer.from(await pdf.arrayBuffer())
+        .subarray(0, 5)
+        .toString(),
+    ).toBe("%PDF-");
   }, 120_000);
 });

@@ -39,21 +39,64 @@ const CASES: Case[] = [
   { route: "GET tubes", call: (c) => c.get(`/api/jobs/${job}/tubes`), expect: [401, 200, 200, 200, 404] },
   { route: "POST tubes", call: (c) => c.post(`/api/jobs/${job}/tubes`, { position: "V2", type: "6J6", verdict: "strong" }), expect: [401, 201, 201, 201, 404] },
   { route: "POST tubes/lineup", call: (c) => c.post(`/api/jobs/${job}/tubes/lineup`, { types: "6CB6 6AL5" }), expect: [401, 201, 201, 201, 404] },
-  { route: "PATCH tubes/[tubeId]", call: (c) => c.patch(`/api/jobs/${job}/tubes/${tube}`, { test: { reading: 70, minimum: 60 }, verdict: "serviceable" }), expect: [401, 200, 200, 200, 404] },
+  {
+    route: "PATCH tubes/[tubeId]",
+    call: (c) => c.patch(`/api/jobs/${job}/tubes/${tube}`, { test: { reading: 70, minimum: 60 }, verdict: "serviceable" }),
+    expect: [401, 200, 200, 200, 404],
+  },
   { route: "DELETE tubes/[tubeId]", call: (c, id) => c.delete(`/api/jobs/${job}/tubes/${id}`), fresh: freshTube, expect: [401, 403, 200, 200, 404] },
   { route: "GET power-ups", call: (c) => c.get(`/api/jobs/${job}/power-ups`), expect: [401, 200, 200, 200, 404] },
-  { route: "POST power-ups", call: (c) => c.post(`/api/jobs/${job}/power-ups`, { limiter: "series-lamp", lampPower: "100 W", stopCurrent: "0.8 A" }), expect: [401, 201, 201, 201, 404] },
-  { route: "POST power-ups/[pid]/steps", call: (c) => c.post(`/api/jobs/${job}/power-ups/${session}/steps`, { supplyVoltage: 60, currentDrawn: "0.3 A", minutes: 5 }), expect: [401, 201, 201, 201, 404] },
-  { route: "PATCH power-ups/[pid]", call: (c, id) => c.patch(`/api/jobs/${job}/power-ups/${id}`, { outcome: "stopped", reason: "Hum too loud" }), fresh: freshSession, expect: [401, 200, 200, 200, 404] },
+  {
+    route: "POST power-ups",
+    call: (c) => c.post(`/api/jobs/${job}/power-ups`, { limiter: "series-lamp", lampPower: "100 W", stopCurrent: "0.8 A" }),
+    expect: [401, 201, 201, 201, 404],
+  },
+  {
+    route: "POST power-ups/[pid]/steps",
+    call: (c) => c.post(`/api/jobs/${job}/power-ups/${session}/steps`, { supplyVoltage: 60, currentDrawn: "0.3 A", minutes: 5 }),
+    expect: [401, 201, 201, 201, 404],
+  },
+  {
+    route: "PATCH power-ups/[pid]",
+    call: (c, id) => c.patch(`/api/jobs/${job}/power-ups/${id}`, { outcome: "stopped", reason: "Hum too loud" }),
+    fresh: freshSession,
+    expect: [401, 200, 200, 200, 404],
+  },
   { route: "GET faults", call: (c) => c.get(`/api/jobs/${job}/faults`), expect: [401, 200, 200, 200, 404] },
-  { route: "POST faults", call: (c) => c.post(`/api/jobs/${job}/faults`, { symptom: "Picture rolls", section: "vertical sync" }), expect: [401, 201, 201, 201, 404] },
-  { route: "PATCH faults/[fid]", call: (c) => c.patch(`/api/jobs/${job}/faults/${fault}`, { section: "vertical deflection" }), expect: [401, 200, 200, 200, 404] },
-  { route: "POST faults/[fid]/candidates", call: (c) => c.post(`/api/jobs/${job}/faults/${fault}/candidates`, { description: "Yoke" }), expect: [401, 201, 201, 201, 404] },
-  { route: "PATCH faults/[fid]/candidates/[cid]", call: (c) => c.patch(`/api/jobs/${job}/faults/${fault}/candidates/${candidate}`, { status: "ruled-out", evidence: "Windings measure alike." }), expect: [401, 200, 200, 200, 404] },
+  {
+    route: "POST faults",
+    call: (c) => c.post(`/api/jobs/${job}/faults`, { symptom: "Picture rolls", section: "vertical sync" }),
+    expect: [401, 201, 201, 201, 404],
+  },
+  {
+    route: "PATCH faults/[fid]",
+    call: (c) => c.patch(`/api/jobs/${job}/faults/${fault}`, { section: "vertical deflection" }),
+    expect: [401, 200, 200, 200, 404],
+  },
+  {
+    route: "POST faults/[fid]/candidates",
+    call: (c) => c.post(`/api/jobs/${job}/faults/${fault}/candidates`, { description: "Yoke" }),
+    expect: [401, 201, 201, 201, 404],
+  },
+  {
+    route: "PATCH faults/[fid]/candidates/[cid]",
+    call: (c) => c.patch(`/api/jobs/${job}/faults/${fault}/candidates/${candidate}`, { status: "ruled-out", evidence: "Windings measure alike." }),
+    expect: [401, 200, 200, 200, 404],
+  },
   { route: "GET ready-checks", call: (c) => c.get(`/api/jobs/${job}/ready-checks`), expect: [401, 200, 200, 200, 404] },
-  { route: "PATCH parts/[partId] fitted", call: (c, id) => c.patch(`/api/jobs/${job}/parts/${id}`, { state: "fitted" }), fresh: freshPart, expect: [401, 200, 200, 200, 404] },
+  {
+    route: "PATCH parts/[partId] fitted",
+    call: (c, id) => c.patch(`/api/jobs/${job}/parts/${id}`, { state: "fitted" }),
+    fresh: freshPart,
+    expect: [401, 200, 200, 200, 404],
+  },
   { route: "PATCH parts/[partId] checked", call: (c) => c.patch(`/api/jobs/${job}/parts/${part}`, { checked: true }), expect: [401, 403, 200, 200, 404] },
-  { route: "POST status ready, with a reason", call: (c, id) => c.post(`/api/jobs/${id}/status`, { status: READY, override: true, reason: "Customer collects today" }), fresh: freshJob, expect: [401, 403, 200, 200, 404] },
+  {
+    route: "POST status ready, with a reason",
+    call: (c, id) => c.post(`/api/jobs/${id}/status`, { status: READY, override: true, reason: "Customer collects today" }),
+    fresh: freshJob,
+    expect: [401, 403, 200, 200, 404],
+  },
 ];
 
 beforeAll(async () => {
@@ -96,8 +139,16 @@ describe("bench record role matrix", () => {
   });
 
   test("ids that are not numbers, or not this job's, are a JSON 404", async () => {
-    for (const path of [`/api/jobs/${job}/tubes/abc`, `/api/jobs/${job}/power-ups/0/steps`, `/api/jobs/${job}/faults/1e3/candidates`, `/api/jobs/${job}/faults/${fault}/candidates/999999999`]) {
-      const res = path.endsWith("steps") || path.endsWith("candidates") ? await tech().post(path, { description: "x", supplyVoltage: 1, currentDrawn: 0, minutes: 0 }) : await tech().patch(path, { status: "open", verdict: "weak" });
+    for (const path of [
+      `/api/jobs/${job}/tubes/abc`,
+      `/api/jobs/${job}/power-ups/0/steps`,
+      `/api/jobs/${job}/faults/1e3/candidates`,
+      `/api/jobs/${job}/faults/${fault}/candidates/999999999`,
+    ]) {
+      const res =
+        path.endsWith("steps") || path.endsWith("candidates")
+          ? await tech().post(path, { description: "x", supplyVoltage: 1, currentDrawn: 0, minutes: 0 })
+          : await tech().patch(path, { status: "open", verdict: "weak" });
       expect(res.status, path).toBe(404);
       expect((await res.json()).error.message).toBeTruthy();
     }

@@ -58,7 +58,17 @@ const CONTRACT: Record<string, { inputs: string[]; defaults?: Record<string, unk
     // docs/PRODUCT.md names the model parameters µ, EX, KG1, KP, KVB; the API spells them mu, ex, kg1, kp, kvb.
     inputs: ["tube", "mu", "ex", "kg1", "kp", "kvb", "supplyVoltage", "plateResistor", "cathodeResistor", "cathodeBypassed", "loadResistance"],
     defaults: { cathodeBypassed: true },
-    outputs: ["plateVoltage", "plateCurrent", "cathodeVoltage", "plateDissipation", "amplificationFactor", "plateResistance", "transconductance", "gain", "plateToChassisVoltage"],
+    outputs: [
+      "plateVoltage",
+      "plateCurrent",
+      "cathodeVoltage",
+      "plateDissipation",
+      "amplificationFactor",
+      "plateResistance",
+      "transconductance",
+      "gain",
+      "plateToChassisVoltage",
+    ],
   },
   "colour-code": {
     inputs: ["bands", "resistance", "tolerance"],
@@ -164,8 +174,14 @@ describe("GET /api/calculators", () => {
     for (const c of list) {
       const want = CONTRACT[c.slug];
       expect(typeof c.title).toBe("string");
-      expect(c.inputs.map((i) => i.name), c.slug).toEqual(expect.arrayContaining(want.inputs));
-      expect(c.outputs.map((o) => o.name), c.slug).toEqual(expect.arrayContaining(want.outputs));
+      expect(
+        c.inputs.map((i) => i.name),
+        c.slug,
+      ).toEqual(expect.arrayContaining(want.inputs));
+      expect(
+        c.outputs.map((o) => o.name),
+        c.slug,
+      ).toEqual(expect.arrayContaining(want.outputs));
       for (const i of c.inputs) {
         expect(Object.keys(i).sort()).toEqual(["default", "name", "required", "unit"]);
         expect(typeof i.unit).toBe("string");
@@ -182,8 +198,7 @@ describe("GET /api/calculators", () => {
 
   test("inputs and outputs carry docs/PRODUCT.md's SI units", async () => {
     const list = (await (await visitor.get("/api/calculators")).json()) as any[];
-    const unitOf = (slug: string, side: "inputs" | "outputs", name: string) =>
-      list.find((c) => c.slug === slug)[side].find((x: any) => x.name === name).unit;
+    const unitOf = (slug: string, side: "inputs" | "outputs", name: string) => list.find((c) => c.slug === slug)[side].find((x: any) => x.name === name).unit;
     expect(unitOf("cathode-bias", "inputs", "biasVoltage")).toBe("V");
     expect(unitOf("cathode-bias", "outputs", "cathodeResistance")).toBe("Ω");
     expect(unitOf("time-constant", "inputs", "capacitance")).toBe("F");
@@ -313,7 +328,11 @@ describe("POST /api/calculators/{slug}: bad input is a 400 naming the field", ()
   });
 
   test("wrong unit", async () => {
-    expectFieldError(await calc("time-constant", { resistance: "220k", capacitance: "5 V", initialVoltage: 350 }), "capacitance", /expected a capacitance, got volts/);
+    expectFieldError(
+      await calc("time-constant", { resistance: "220k", capacitance: "5 V", initialVoltage: 350 }),
+      "capacitance",
+      /expected a capacitance, got volts/,
+    );
     expectFieldError(await calc("cathode-bias", { biasVoltage: "1.5 A", plateCurrent: "1 mA" }), "biasVoltage", /expected a voltage, got amperes/);
   });
 

@@ -28,14 +28,18 @@ describe("reading and setting the charges", () => {
 
     // 1.5 h × £48.50 = £72.75; tax 17.5% of 7275 = 1273.125 → 1273; total 8548.
     const { jobId } = createJob(team.workshopId);
-    const estimate = await team.owner.request("PUT", `/api/jobs/${jobId}/estimate`, { lines: [{ kind: "labour", description: "Realign the IF stages", quantity: "1.5" }] });
+    const estimate = await team.owner.request("PUT", `/api/jobs/${jobId}/estimate`, {
+      lines: [{ kind: "labour", description: "Realign the IF stages", quantity: "1.5" }],
+    });
     expect(estimate.status).toBe(200);
     const body = (await estimate.json()).estimate;
     expect(body.lines[0]).toMatchObject({ unitPriceMinor: 4850, amountMinor: 7275 });
     expect(body).toMatchObject({ currency: "GBP", taxRateBp: 1750, subtotalMinor: 7275, taxMinor: 1273, totalMinor: 8548 });
 
     // The change is in the audit trail by field name.
-    const audit = testDb().prepare("SELECT detail FROM audit_events WHERE workshop_id = ? AND action = 'workshop.charges-updated' ORDER BY id DESC").get(team.workshopId) as { detail: string };
+    const audit = testDb()
+      .prepare("SELECT detail FROM audit_events WHERE workshop_id = ? AND action = 'workshop.charges-updated' ORDER BY id DESC")
+      .get(team.workshopId) as { detail: string };
     expect(JSON.parse(audit.detail)).toEqual({ changed: ["hourlyRateMinor", "taxRateBp"] });
   });
 
@@ -101,9 +105,16 @@ describe("refusals", () => {
   });
 
   test("PATCH takes only same-origin JSON", async () => {
-    const form = await team.owner.request("PATCH", "/api/workshop/charges", "currency=GBP&hourlyRate=1&taxRate=0", { "content-type": "application/x-www-form-urlencoded" });
+    const form = await team.owner.request("PATCH", "/api/workshop/charges", "currency=GBP&hourlyRate=1&taxRate=0", {
+      "content-type": "application/x-www-form-urlencoded",
+    });
     expect(form.status).toBe(415);
-    const foreign = await team.owner.request("PATCH", "/api/workshop/charges", { currency: "GBP", hourlyRate: "1", taxRate: "0" }, { origin: "https://elsewhere.example" });
+    const foreign = await team.owner.request(
+      "PATCH",
+      "/api/workshop/charges",
+      { currency: "GBP", hourlyRate: "1", taxRate: "0" },
+      { origin: "https://elsewhere.example" },
+    );
     expect(foreign.status).toBe(403);
     const broken = await team.owner.request("PATCH", "/api/workshop/charges", "{not json", { "content-type": "application/json" });
     expect(broken.status).toBe(400);
@@ -118,7 +129,9 @@ describe("refusals", () => {
     expect((await patch(owner, { currency: "GBP", hourlyRate: "45.00", taxRate: "20" })).status).toBe(200);
 
     const { jobId } = createJob(workshopId);
-    expect((await owner.request("PUT", `/api/jobs/${jobId}/estimate`, { lines: [{ kind: "labour", description: "Bench test", quantity: "1" }] })).status).toBe(200);
+    expect((await owner.request("PUT", `/api/jobs/${jobId}/estimate`, { lines: [{ kind: "labour", description: "Bench test", quantity: "1" }] })).status).toBe(
+      200,
+    );
     expect((await charges(owner)).currencyLocked).toBe(true);
 
     const refused = await patch(owner, { currency: "EUR", hourlyRate: "50.00", taxRate: "20" });
@@ -138,7 +151,9 @@ describe("refusals", () => {
     const { jobId } = createJob(workshopId);
     // Arranged straight in the database: an issued invoice in GBP, as the invoice tests' flow would leave it.
     testDb()
-      .prepare("INSERT INTO invoices (job_id, workshop_id, number, status, currency, tax_rate_bp, subtotal_minor, tax_minor, total_minor, issued_at) VALUES (?, ?, 1, 'issued', 'GBP', 2000, 1000, 200, 1200, ?)")
+      .prepare(
+        "INSERT INTO invoices (job_id, workshop_id, number, status, currency, tax_rate_bp, subtotal_minor, tax_minor, total_minor, issued_at) VALUES (?, ?, 1, 'issued', 'GBP', 2000, 1000, 200, 1200, ?)",
+      )
       .run(jobId, workshopId, Date.now());
     const refused = await patch(owner, { currency: "USD", hourlyRate: "45.00", taxRate: "20" });
     expect(refused.status).toBe(409);

@@ -38,7 +38,12 @@ async function apprenticeDrill(kind = "ohms-law/current"): Promise<number> {
 
 /** The stored row: the test's way to the seed and the solution the server kept. */
 const stored = (id: number) => {
-  const row = db.prepare("select kind, seed, solution, answered_at from drills where id = ?").get(id) as { kind: string; seed: number; solution: string; answered_at: number | null };
+  const row = db.prepare("select kind, seed, solution, answered_at from drills where id = ?").get(id) as {
+    kind: string;
+    seed: number;
+    solution: string;
+    answered_at: number | null;
+  };
   return { ...row, solution: JSON.parse(row.solution) as DrillSolution };
 };
 
@@ -54,10 +59,23 @@ const CASES: Case[] = [
   { route: "POST /api/drills { slug }", call: (c) => c.post("/api/drills", { slug: "cathode-bias" }), expect: [401, 201, 201, 201, 201] },
   { route: "POST /api/drills { calculationId }", call: (c) => c.post("/api/drills", { calculationId }), expect: [401, 201, 201, 201, 404] },
   { route: "GET /api/drills/[id]", call: (c) => c.get(`/api/drills/${drillId}`), expect: [401, 200, 200, 200, 404] },
-  { route: "POST /api/drills/[id]/answer", call: (c, id) => c.post(`/api/drills/${id}/answer`, { answer: "1 mA" }), fresh: () => apprenticeDrill(), expect: [401, 200, 403, 403, 404] },
+  {
+    route: "POST /api/drills/[id]/answer",
+    call: (c, id) => c.post(`/api/drills/${id}/answer`, { answer: "1 mA" }),
+    fresh: () => apprenticeDrill(),
+    expect: [401, 200, 403, 403, 404],
+  },
   { route: "GET /api/drills/progress", call: (c) => c.get("/api/drills/progress"), expect: [401, 200, 200, 200, 200] },
-  { route: "GET /api/drills/progress?member=apprentice", call: (c) => c.get(`/api/drills/progress?member=${uid.apprentice}`), expect: [401, 200, 200, 200, 404] },
-  { route: "GET /api/drills/progress?member=technician", call: (c) => c.get(`/api/drills/progress?member=${uid.technician}`), expect: [401, 403, 200, 404, 404] },
+  {
+    route: "GET /api/drills/progress?member=apprentice",
+    call: (c) => c.get(`/api/drills/progress?member=${uid.apprentice}`),
+    expect: [401, 200, 200, 200, 404],
+  },
+  {
+    route: "GET /api/drills/progress?member=technician",
+    call: (c) => c.get(`/api/drills/progress?member=${uid.technician}`),
+    expect: [401, 403, 200, 404, 404],
+  },
   { route: "GET /api/drills/assignments", call: (c) => c.get("/api/drills/assignments"), expect: [401, 200, 200, 200, 200] },
   {
     route: "POST /api/drills/assignments { kinds }",
@@ -74,9 +92,13 @@ const CASES: Case[] = [
 beforeAll(async () => {
   team = await makeTeam("drills");
   db = testDb();
-  for (const c of ["apprentice", "technician", "owner", "outsider"] as const) uid[c] = (await json<{ user: { id: number } }>(await team[c].get("/api/me"), 200)).user.id;
+  for (const c of ["apprentice", "technician", "owner", "outsider"] as const)
+    uid[c] = (await json<{ user: { id: number } }>(await team[c].get("/api/me"), 200)).user.id;
   const job = await json<{ job: { id: number } }>(await team.technician.post("/api/jobs", { title: "Drill source radio", equipmentKind: "table-radio" }), 201);
-  const calc = await team.technician.post(`/api/jobs/${job.job.id}/calculations`, { slug: "dropping-resistor", inputs: { supplyVoltage: 250, loadVoltage: 150, loadCurrent: 0.002 } });
+  const calc = await team.technician.post(`/api/jobs/${job.job.id}/calculations`, {
+    slug: "dropping-resistor",
+    inputs: { supplyVoltage: 250, loadVoltage: 150, loadCurrent: 0.002 },
+  });
   calculationId = (await json<{ calculation: { id: number } }>(calc, 201)).calculation.id;
   drillId = await apprenticeDrill();
 });
@@ -101,7 +123,14 @@ describe("drills role matrix", () => {
 });
 
 /** One of each answer unit: Ω, W, words, per cent, farads (a backward kind) and a plain number. */
-const HTTP_KINDS = ["cathode-bias/resistor", "dropping-resistor/dissipation", "resistor-drift/verdict", "plate-dissipation/fraction", "reactance/capacitor-for-reactance", "triode-stage/gain"];
+const HTTP_KINDS = [
+  "cathode-bias/resistor",
+  "dropping-resistor/dissipation",
+  "resistor-drift/verdict",
+  "plate-dissipation/fraction",
+  "reactance/capacitor-for-reactance",
+  "triode-stage/gain",
+];
 
 /** Every key anywhere in a JSON value. */
 function keysOf(v: unknown): string[] {
@@ -111,23 +140,31 @@ function keysOf(v: unknown): string[] {
 }
 
 describe("answering through the API", () => {
-  test.each(HTTP_KINDS)("%s: 100 drills, each answered as written and judged right; the problem is the core's for the stored seed", async (kindId) => {
-    const kind = getDrillKind(kindId)!;
-    for (let i = 0; i < 100; i++) {
-      const problem = await json<Record<string, unknown>>(await team.apprentice.post("/api/drills", { kind: kindId }), 201);
-      const row = stored(problem.id as number);
-      const drill = generateDrill(kindId, row.seed);
-      expect(problem.prompt).toBe(drill.problem.prompt);
-      expect(problem.given).toEqual(drill.problem.given);
-      expect(problem.asked).toMatchObject({ name: kind.asked.name, unit: kind.asked.unit });
-      const { expected } = drill.solution;
-      // Half as text the way the working writes it ("1.5 kΩ", "25 %"), half as the bare SI number.
-      const answer = i % 2 === 0 || typeof expected === "string" ? formatAnswer(expected, kind.asked.unit, 6) : kind.asked.unit === "%" ? expected * 100 : expected;
-      const result = await json<{ correct: boolean; verdict: string; expected: unknown }>(await team.apprentice.post(`/api/drills/${problem.id}/answer`, { answer }), 200);
-      expect([result.correct, result.verdict], `${kindId} seed ${row.seed}: ${String(answer)}`).toEqual([true, "correct"]);
-      expect(result.expected).toEqual(expected);
-    }
-  }, 120_000);
+  test.each(HTTP_KINDS)(
+    "%s: 100 drills, each answered as written and judged right; the problem is the core's for the stored seed",
+    async (kindId) => {
+      const kind = getDrillKind(kindId)!;
+      for (let i = 0; i < 100; i++) {
+        const problem = await json<Record<string, unknown>>(await team.apprentice.post("/api/drills", { kind: kindId }), 201);
+        const row = stored(problem.id as number);
+        const drill = generateDrill(kindId, row.seed);
+        expect(problem.prompt).toBe(drill.problem.prompt);
+        expect(problem.given).toEqual(drill.problem.given);
+        expect(problem.asked).toMatchObject({ name: kind.asked.name, unit: kind.asked.unit });
+        const { expected } = drill.solution;
+        // Half as text the way the working writes it ("1.5 kΩ", "25 %"), half as the bare SI number.
+        const answer =
+          i % 2 === 0 || typeof expected === "string" ? formatAnswer(expected, kind.asked.unit, 6) : kind.asked.unit === "%" ? expected * 100 : expected;
+        const result = await json<{ correct: boolean; verdict: string; expected: unknown }>(
+          await team.apprentice.post(`/api/drills/${problem.id}/answer`, { answer }),
+          200,
+        );
+        expect([result.correct, result.verdict], `${kindId} seed ${row.seed}: ${String(answer)}`).toEqual([true, "correct"]);
+        expect(result.expected).toEqual(expected);
+      }
+    },
+    120_000,
+  );
 
   test.each(HTTP_KINDS)("%s: the problem's answer carries no expected value, solution, seed or working", async (kindId) => {
     for (let i = 0; i < 5; i++) {
@@ -150,31 +187,40 @@ describe("answering through the API", () => {
     }
   });
 
-  test.each(HTTP_KINDS.filter((k) => getDrillKind(k)!.asked.unit !== "text"))("%s: a wrong number and a wrong unit are judged wrong, and told apart", async (kindId) => {
-    const kind = getDrillKind(kindId)!;
-    const unit = kind.asked.unit as keyof typeof WRONG_UNIT;
-    const a = await json<{ id: number }>(await team.apprentice.post("/api/drills", { kind: kindId }), 201);
-    const expected = stored(a.id).solution.expected as number;
-    const wrong = await json<Record<string, unknown>>(await team.apprentice.post(`/api/drills/${a.id}/answer`, { answer: formatAnswer(expected * 3, kind.asked.unit, 4) }), 200);
-    expect([wrong.correct, wrong.verdict]).toEqual([false, "wrong-number"]);
-    // Feedback that teaches: the working, the step to watch, and a similar one to try.
-    expect((wrong.steps as unknown[]).length).toBeGreaterThan(0);
-    expect(wrong.similar).toMatchObject({ kind: kindId });
-    expect(wrong.expected).toBe(expected);
+  test.each(HTTP_KINDS.filter((k) => getDrillKind(k)!.asked.unit !== "text"))(
+    "%s: a wrong number and a wrong unit are judged wrong, and told apart",
+    async (kindId) => {
+      const kind = getDrillKind(kindId)!;
+      const unit = kind.asked.unit as keyof typeof WRONG_UNIT;
+      const a = await json<{ id: number }>(await team.apprentice.post("/api/drills", { kind: kindId }), 201);
+      const expected = stored(a.id).solution.expected as number;
+      const wrong = await json<Record<string, unknown>>(
+        await team.apprentice.post(`/api/drills/${a.id}/answer`, { answer: formatAnswer(expected * 3, kind.asked.unit, 4) }),
+        200,
+      );
+      expect([wrong.correct, wrong.verdict]).toEqual([false, "wrong-number"]);
+      // Feedback that teaches: the working, the step to watch, and a similar one to try.
+      expect((wrong.steps as unknown[]).length).toBeGreaterThan(0);
+      expect(wrong.similar).toMatchObject({ kind: kindId });
+      expect(wrong.expected).toBe(expected);
 
-    const b = await json<{ id: number }>(await team.apprentice.post("/api/drills", { kind: kindId }), 201);
-    const right = stored(b.id).solution.expected as number;
-    const number = kind.asked.unit === "%" ? right * 100 : right;
-    const wrongUnit = await json<Record<string, unknown>>(await team.apprentice.post(`/api/drills/${b.id}/answer`, { answer: `${number} ${WRONG_UNIT[unit]}` }), 200);
-    expect([wrongUnit.correct, wrongUnit.verdict]).toEqual([false, "wrong-unit"]);
-    expect(wrongUnit.message).toMatch(/asks for/);
-  });
+      const b = await json<{ id: number }>(await team.apprentice.post("/api/drills", { kind: kindId }), 201);
+      const right = stored(b.id).solution.expected as number;
+      const number = kind.asked.unit === "%" ? right * 100 : right;
+      const wrongUnit = await json<Record<string, unknown>>(
+        await team.apprentice.post(`/api/drills/${b.id}/answer`, { answer: `${number} ${WRONG_UNIT[unit]}` }),
+        200,
+      );
+      expect([wrongUnit.correct, wrongUnit.verdict]).toEqual([false, "wrong-unit"]);
+      expect(wrongUnit.message).toMatch(/asks for/);
+    },
+  );
 
   test("progress counts the answers per kind with a mastery level that misses pull down, and a point for today", async () => {
-    const p = await json<{ kinds: { kind: string; attempts: number; correct: number; misses: number; mastery: number; level: string }[]; timeline: { date: string }[] }>(
-      await team.technician.get(`/api/drills/progress?member=${uid.apprentice}`),
-      200,
-    );
+    const p = await json<{
+      kinds: { kind: string; attempts: number; correct: number; misses: number; mastery: number; level: string }[];
+      timeline: { date: string }[];
+    }>(await team.technician.get(`/api/drills/progress?member=${uid.apprentice}`), 200);
     const byKind = (id: string) => p.kinds.find((k) => k.kind === id)!;
     // 100 right in one day and no miss: a day's full credit (lib/drills/mastery.ts), so above zero and "starting".
     const verdicts = byKind("resistor-drift/verdict");
@@ -246,7 +292,13 @@ describe("bad input gets a clear message, never a 500", () => {
   test("a set of drills shows up for the apprentice with its due date, made from the kinds chosen in turn", async () => {
     const when = due();
     const { assignment } = await json<{ assignment: { id: number; dueDate: string; drills: { id: number; kind: string }[] } }>(
-      await team.owner.post("/api/drills/assignments", { apprentice: uid.apprentice, kinds: ["ohms-law/power", "cathode-bias/dissipation"], count: 4, due: when, note: "Before Friday" }),
+      await team.owner.post("/api/drills/assignments", {
+        apprentice: uid.apprentice,
+        kinds: ["ohms-law/power", "cathode-bias/dissipation"],
+        count: 4,
+        due: when,
+        note: "Before Friday",
+      }),
       201,
     );
     expect(assignment.drills.map((d) => d.kind)).toEqual(["ohms-law/power", "cathode-bias/dissipation", "ohms-law/power", "cathode-bias/dissipation"]);

@@ -160,7 +160,9 @@ describe("the customer's approval link", () => {
     const { jobId } = await preparedJob(email);
     await tech.post(`/api/jobs/${jobId}/estimate/send`, {});
     const token = (await approvalLinkFor(email)).split("/estimate/")[1];
-    testDb().prepare("UPDATE estimates SET token_expires_at = ? WHERE job_id = ?").run(Date.now() - 1000, jobId);
+    testDb()
+      .prepare("UPDATE estimates SET token_expires_at = ? WHERE job_id = ?")
+      .run(Date.now() - 1000, jobId);
     const res = await answer(token, "approve");
     expect(res.status).toBe(410);
     expect(await (await fetch(`${baseUrl()}/estimate/${token}`)).text()).toContain("expired");

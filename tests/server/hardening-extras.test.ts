@@ -66,7 +66,12 @@ function bigPng(width: number, height: number): Buffer {
   ihdr.writeUInt32BE(height, 4);
   ihdr.set([8, 0, 0, 0, 0], 8); // 8-bit grayscale, no interlace
   const raw = Buffer.alloc((width + 1) * height); // filter byte 0 and black pixels on every row
-  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk("IHDR", ihdr), chunk("IDAT", deflateSync(raw, { level: 9 })), chunk("IEND", Buffer.alloc(0))]);
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk("IHDR", ihdr),
+    chunk("IDAT", deflateSync(raw, { level: 9 })),
+    chunk("IEND", Buffer.alloc(0)),
+  ]);
 }
 
 describe("images over the pixel limit", () => {

@@ -77,7 +77,9 @@ describe("invitations through the real server and SMTP", () => {
     const second = await invite(shop.client, email, "apprentice");
     expect(second.token).not.toBe(first.token);
     expect(mailTo(email)).toHaveLength(2);
-    expect((await new Client().post("/api/invitations/accept", { mode: "sign-up", token: first.token, name: "X", password: "some passphrase" })).status).toBe(410);
+    expect((await new Client().post("/api/invitations/accept", { mode: "sign-up", token: first.token, name: "X", password: "some passphrase" })).status).toBe(
+      410,
+    );
 
     const revoke = await shop.client.request("DELETE", `/api/workshop/invitations/${second.invitation.id}`);
     expect(revoke.status).toBe(200);

@@ -61,7 +61,10 @@ describe("sending the invoice", () => {
     expect(mail.headers["x-glowbench-workshop"]).toBe(String(A.workshopId));
     expect(mail.subject).toContain("£111.00");
     expect(mail.text).toContain("Thank you for your patience with this one.");
-    const stored = testDb().prepare("SELECT pay_token_hash AS h, pay_token_expires_at AS e FROM invoices WHERE id = ?").get(invoice.id) as { h: string; e: number };
+    const stored = testDb().prepare("SELECT pay_token_hash AS h, pay_token_expires_at AS e FROM invoices WHERE id = ?").get(invoice.id) as {
+      h: string;
+      e: number;
+    };
     expect(stored.h).toMatch(/^[0-9a-f]{64}$/);
     expect(stored.h).not.toContain(token);
     // About 30 days, give or take the test's own run time.
@@ -196,7 +199,9 @@ describe("the customer's pay link", () => {
   test("an expired link is 410 and says so", async () => {
     const { invoice, email } = await issuedInvoice();
     const { token } = await send(invoice.id, email!);
-    testDb().prepare("UPDATE invoices SET pay_token_expires_at = ? WHERE id = ?").run(Date.now() - 1000, invoice.id);
+    testDb()
+      .prepare("UPDATE invoices SET pay_token_expires_at = ? WHERE id = ?")
+      .run(Date.now() - 1000, invoice.id);
     expect((await pay(token)).status).toBe(410);
     const shown = await page(token);
     expect(shown.html).toContain("expired");

@@ -106,7 +106,13 @@ describe("parts CSV", () => {
   const header = "designator,kind,original_value,original_rating,replacement_value,replacement_rating,state";
   test("an import with bad rows imports nothing and names each bad row", async () => {
     const before = (await (await t().get(`/api/jobs/${job}/parts`)).json()).parts.length;
-    const csv = [header, "C1,paper,0.05 µF,400 V,0.047 µF,630 V,fitted", "C2,plastic,0.02 µF,400 V,,,", ",resistor,1k,0.5 W,,,", "C4,mica,100 pF,500 V,,,lost"].join("\n");
+    const csv = [
+      header,
+      "C1,paper,0.05 µF,400 V,0.047 µF,630 V,fitted",
+      "C2,plastic,0.02 µF,400 V,,,",
+      ",resistor,1k,0.5 W,,,",
+      "C4,mica,100 pF,500 V,,,lost",
+    ].join("\n");
     const res = await t().post(`/api/jobs/${job}/parts/import`, { csv });
     expect(res.status).toBe(400);
     const { error } = await res.json();
@@ -146,23 +152,46 @@ describe("readings and log", () => {
     const bad = await team.apprentice.post(`/api/jobs/${job}/readings`, { kind: "resistor", designator: "", nominal: "47 uF", measured: "-5" });
     expect(bad.status).toBe(400);
     expect(Object.keys((await bad.json()).error.fields).sort()).toEqual(["designator", "measured", "nominal"]);
-    const volts = await team.apprentice.post(`/api/jobs/${job}/readings`, { kind: "voltage", designator: "B+", nominal: "250 V", measured: "320 V", tolerance: 0.1 });
+    const volts = await team.apprentice.post(`/api/jobs/${job}/readings`, {
+      kind: "voltage",
+      designator: "B+",
+      nominal: "250 V",
+      measured: "320 V",
+      tolerance: 0.1,
+    });
     expect((await volts.json()).reading).toMatchObject({ verdict: "high" });
   });
 
   test("a voltage reading names the capacitors it was taken across; a bad list is refused by field", async () => {
-    const res = await team.apprentice.post(`/api/jobs/${job}/readings`, { kind: "voltage", designator: "TP3", partDesignators: "C12;c13 ", nominal: "350 V", measured: "380 V" });
+    const res = await team.apprentice.post(`/api/jobs/${job}/readings`, {
+      kind: "voltage",
+      designator: "TP3",
+      partDesignators: "C12;c13 ",
+      nominal: "350 V",
+      measured: "380 V",
+    });
     expect(res.status).toBe(201);
     expect((await res.json()).reading).toMatchObject({ designator: "TP3", partDesignators: "C12, c13", measured: 380 });
     const listed = (await (await t().get(`/api/jobs/${job}/readings`)).json()).readings;
     expect(listed.find((r: { designator: string }) => r.designator === "TP3").partDesignators).toBe("C12, c13");
-    const bad = await team.apprentice.post(`/api/jobs/${job}/readings`, { kind: "voltage", designator: "TP4", partDesignators: 12, nominal: "1 V", measured: "1 V" });
+    const bad = await team.apprentice.post(`/api/jobs/${job}/readings`, {
+      kind: "voltage",
+      designator: "TP4",
+      partDesignators: 12,
+      nominal: "1 V",
+      measured: "1 V",
+    });
     expect(bad.status).toBe(400);
     expect(Object.keys((await bad.json()).error.fields)).toEqual(["partDesignators"]);
   });
 
   test("a power-up entry keeps the supply voltage and current drawn", async () => {
-    const res = await team.apprentice.post(`/api/jobs/${job}/log`, { kind: "power-up", supplyVoltage: "60 V", currentDrawn: "180 mA", text: "Heaters lit; no smoke." });
+    const res = await team.apprentice.post(`/api/jobs/${job}/log`, {
+      kind: "power-up",
+      supplyVoltage: "60 V",
+      currentDrawn: "180 mA",
+      text: "Heaters lit; no smoke.",
+    });
     expect(res.status).toBe(201);
     const { entry } = await res.json();
     expect(entry.kind).toBe("power-up");

@@ -24,8 +24,10 @@ async function created(res: Response, key: string): Promise<number> {
 const tech = () => team.technician;
 const freshJob = async () => created(await tech().post("/api/jobs", { title: "Throwaway set", equipmentKind: "other" }), "job");
 const freshPart = async () => created(await tech().post(`/api/jobs/${job}/parts`, { designator: "C99", kind: "film" }), "part");
-const freshReading = async () => created(await tech().post(`/api/jobs/${job}/readings`, { kind: "resistor", designator: "R99", nominal: "1k", measured: "1.1k" }), "reading");
-const freshCalc = async () => created(await tech().post(`/api/jobs/${job}/calculations`, { slug: "ohms-law", inputs: { voltage: 10, current: 0.01 } }), "calculation");
+const freshReading = async () =>
+  created(await tech().post(`/api/jobs/${job}/readings`, { kind: "resistor", designator: "R99", nominal: "1k", measured: "1.1k" }), "reading");
+const freshCalc = async () =>
+  created(await tech().post(`/api/jobs/${job}/calculations`, { slug: "ohms-law", inputs: { voltage: 10, current: 0.01 } }), "calculation");
 const freshFile = async () => created(await tech().request("POST", `/api/jobs/${job}/files`, fileForm(png, "chassis.png", "image/png")), "file");
 
 interface Case {
@@ -47,23 +49,67 @@ const CASES: Case[] = [
   { route: "POST /api/jobs/[id]/status", call: (c) => c.post(`/api/jobs/${job}/status`, { status: "inspecting" }), expect: [401, 403, 200, 200, 404] },
   { route: "GET /api/jobs/[id]/parts", call: (c) => c.get(`/api/jobs/${job}/parts`), expect: [401, 200, 200, 200, 404] },
   { route: "POST /api/jobs/[id]/parts", call: (c) => c.post(`/api/jobs/${job}/parts`, { designator: "C3", kind: "paper" }), expect: [401, 403, 201, 201, 404] },
-  { route: "PATCH /api/jobs/[id]/parts/[partId]", call: (c) => c.patch(`/api/jobs/${job}/parts/${part}`, { state: "ordered" }), expect: [401, 403, 200, 200, 404] },
-  { route: "DELETE /api/jobs/[id]/parts/[partId]", call: (c, id) => c.delete(`/api/jobs/${job}/parts/${id}`), fresh: freshPart, expect: [401, 403, 200, 200, 404] },
+  {
+    route: "PATCH /api/jobs/[id]/parts/[partId]",
+    call: (c) => c.patch(`/api/jobs/${job}/parts/${part}`, { state: "ordered" }),
+    expect: [401, 403, 200, 200, 404],
+  },
+  {
+    route: "DELETE /api/jobs/[id]/parts/[partId]",
+    call: (c, id) => c.delete(`/api/jobs/${job}/parts/${id}`),
+    fresh: freshPart,
+    expect: [401, 403, 200, 200, 404],
+  },
   { route: "GET /api/jobs/[id]/parts/csv", call: (c) => c.get(`/api/jobs/${job}/parts/csv`), expect: [401, 200, 200, 200, 404] },
   { route: "POST /api/jobs/[id]/parts/import", call: (c) => c.post(`/api/jobs/${job}/parts/import`, { csv }), expect: [401, 403, 201, 201, 404] },
   { route: "GET /api/jobs/[id]/readings", call: (c) => c.get(`/api/jobs/${job}/readings`), expect: [401, 200, 200, 200, 404] },
-  { route: "POST /api/jobs/[id]/readings", call: (c) => c.post(`/api/jobs/${job}/readings`, { kind: "resistor", designator: "R2", nominal: "100k", measured: "131k" }), expect: [401, 201, 201, 201, 404] },
-  { route: "PATCH /api/jobs/[id]/readings/[readingId]", call: (c) => c.patch(`/api/jobs/${job}/readings/${reading}`, { kind: "resistor", designator: "R1", nominal: "22k", measured: "23k" }), expect: [401, 403, 200, 200, 404] },
-  { route: "DELETE /api/jobs/[id]/readings/[readingId]", call: (c, id) => c.delete(`/api/jobs/${job}/readings/${id}`), fresh: freshReading, expect: [401, 403, 200, 200, 404] },
+  {
+    route: "POST /api/jobs/[id]/readings",
+    call: (c) => c.post(`/api/jobs/${job}/readings`, { kind: "resistor", designator: "R2", nominal: "100k", measured: "131k" }),
+    expect: [401, 201, 201, 201, 404],
+  },
+  {
+    route: "PATCH /api/jobs/[id]/readings/[readingId]",
+    call: (c) => c.patch(`/api/jobs/${job}/readings/${reading}`, { kind: "resistor", designator: "R1", nominal: "22k", measured: "23k" }),
+    expect: [401, 403, 200, 200, 404],
+  },
+  {
+    route: "DELETE /api/jobs/[id]/readings/[readingId]",
+    call: (c, id) => c.delete(`/api/jobs/${job}/readings/${id}`),
+    fresh: freshReading,
+    expect: [401, 403, 200, 200, 404],
+  },
   { route: "GET /api/jobs/[id]/calculations", call: (c) => c.get(`/api/jobs/${job}/calculations`), expect: [401, 200, 200, 200, 404] },
-  { route: "POST /api/jobs/[id]/calculations", call: (c) => c.post(`/api/jobs/${job}/calculations`, { slug: "dropping-resistor", inputs: { supplyVoltage: 250, loadVoltage: 150, loadCurrent: 0.002 } }), expect: [401, 201, 201, 201, 404] },
-  { route: "DELETE /api/jobs/[id]/calculations/[calculationId]", call: (c, id) => c.delete(`/api/jobs/${job}/calculations/${id}`), fresh: freshCalc, expect: [401, 403, 200, 200, 404] },
+  {
+    route: "POST /api/jobs/[id]/calculations",
+    call: (c) => c.post(`/api/jobs/${job}/calculations`, { slug: "dropping-resistor", inputs: { supplyVoltage: 250, loadVoltage: 150, loadCurrent: 0.002 } }),
+    expect: [401, 201, 201, 201, 404],
+  },
+  {
+    route: "DELETE /api/jobs/[id]/calculations/[calculationId]",
+    call: (c, id) => c.delete(`/api/jobs/${job}/calculations/${id}`),
+    fresh: freshCalc,
+    expect: [401, 403, 200, 200, 404],
+  },
   { route: "GET /api/jobs/[id]/files", call: (c) => c.get(`/api/jobs/${job}/files`), expect: [401, 200, 200, 200, 404] },
-  { route: "POST /api/jobs/[id]/files", call: (c) => c.request("POST", `/api/jobs/${job}/files`, fileForm(png, "front.png", "image/png")), expect: [401, 403, 201, 201, 404] },
+  {
+    route: "POST /api/jobs/[id]/files",
+    call: (c) => c.request("POST", `/api/jobs/${job}/files`, fileForm(png, "front.png", "image/png")),
+    expect: [401, 403, 201, 201, 404],
+  },
   { route: "GET /api/jobs/[id]/files/[fileId]", call: (c) => c.get(`/api/jobs/${job}/files/${file}`), expect: [401, 200, 200, 200, 404] },
-  { route: "DELETE /api/jobs/[id]/files/[fileId]", call: (c, id) => c.delete(`/api/jobs/${job}/files/${id}`), fresh: freshFile, expect: [401, 403, 200, 200, 404] },
+  {
+    route: "DELETE /api/jobs/[id]/files/[fileId]",
+    call: (c, id) => c.delete(`/api/jobs/${job}/files/${id}`),
+    fresh: freshFile,
+    expect: [401, 403, 200, 200, 404],
+  },
   { route: "GET /api/jobs/[id]/log", call: (c) => c.get(`/api/jobs/${job}/log`), expect: [401, 200, 200, 200, 404] },
-  { route: "POST /api/jobs/[id]/log", call: (c) => c.post(`/api/jobs/${job}/log`, { kind: "note", text: "Dial cord restrung." }), expect: [401, 201, 201, 201, 404] },
+  {
+    route: "POST /api/jobs/[id]/log",
+    call: (c) => c.post(`/api/jobs/${job}/log`, { kind: "note", text: "Dial cord restrung." }),
+    expect: [401, 201, 201, 201, 404],
+  },
   { route: "GET /api/jobs/[id]/bench-sheet", call: (c) => c.get(`/api/jobs/${job}/bench-sheet`), expect: [401, 200, 200, 200, 404] },
 ];
 

@@ -3,7 +3,7 @@ import { Client, signedIn } from "../helpers/http";
 import { addMember, ownWorkshop } from "../helpers/workshops";
 
 type Row = { id: number; email: string; role: string };
-const members = async (c: Client) => ((await (await c.get("/api/workshop/members")).json()).members as Row[]);
+const members = async (c: Client) => (await (await c.get("/api/workshop/members")).json()).members as Row[];
 
 describe("members and roles through the real server", () => {
   test("every role reads the member list; passwords never appear", async () => {
@@ -32,7 +32,9 @@ describe("members and roles through the real server", () => {
       expect((await promote.json()).error.message).toMatch(/role does not allow/);
       expect((await actor.patch(`/api/workshop/members/${ownerRow.id}`, { role: "apprentice" })).status).toBe(403);
       expect((await actor.request("DELETE", `/api/workshop/members/${ownerRow.id}`)).status).toBe(403);
-      expect((await actor.patch("/api/workshop", { name: "Taken over", contactEmail: "", contactPhone: "", address: "", readyMessageTemplate: "" })).status).toBe(403);
+      expect(
+        (await actor.patch("/api/workshop", { name: "Taken over", contactEmail: "", contactPhone: "", address: "", readyMessageTemplate: "" })).status,
+      ).toBe(403);
       expect((await actor.get("/api/workshop/audit")).status).toBe(403);
     }
     expect((await members(shop.client)).map((m) => [m.email, m.role])).toEqual(list.map((m) => [m.email, m.role]));
@@ -110,11 +112,28 @@ describe("members and roles through the real server", () => {
 describe("workshop settings", () => {
   test("the owner saves name and contact details; blanks become empty; all bad fields are named", async () => {
     const shop = await ownWorkshop("Settings");
-    const res = await shop.client.patch("/api/workshop", { name: "Kiln Row Wireless", contactEmail: "Bench@KilnRow.example", contactPhone: "01632 960 001", address: "", readyMessageTemplate: "Hello {customer}" });
+    const res = await shop.client.patch("/api/workshop", {
+      name: "Kiln Row Wireless",
+      contactEmail: "Bench@KilnRow.example",
+      contactPhone: "01632 960 001",
+      address: "",
+      readyMessageTemplate: "Hello {customer}",
+    });
     expect(res.status).toBe(200);
-    expect((await res.json()).workshop).toMatchObject({ name: "Kiln Row Wireless", contactEmail: "bench@kilnrow.example", address: null, readyMessageTemplate: "Hello {customer}" });
+    expect((await res.json()).workshop).toMatchObject({
+      name: "Kiln Row Wireless",
+      contactEmail: "bench@kilnrow.example",
+      address: null,
+      readyMessageTemplate: "Hello {customer}",
+    });
     expect((await (await shop.client.get("/api/me")).json()).workshop.name).toBe("Kiln Row Wireless");
-    const bad = await shop.client.patch("/api/workshop", { name: "", contactEmail: "nope", contactPhone: "x".repeat(41), address: "", readyMessageTemplate: "" });
+    const bad = await shop.client.patch("/api/workshop", {
+      name: "",
+      contactEmail: "nope",
+      contactPhone: "x".repeat(41),
+      address: "",
+      readyMessageTemplate: "",
+    });
     expect(bad.status).toBe(400);
     expect(Object.keys((await bad.json()).error.fields).sort()).toEqual(["contactEmail", "contactPhone", "name"]);
     const events = (await (await shop.client.get("/api/workshop/audit")).json()).events as { action: string }[];

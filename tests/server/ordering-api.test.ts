@@ -44,7 +44,10 @@ describe("booking in with a customer and intake", () => {
       201,
     );
     expect(first.job).toMatchObject({ serialNumber: "TR-5521", accessories: ["Knobs", "Back cover", "Manual"], customerName: "Ada Quarrie" });
-    const second = await json(await t().post("/api/jobs", { title: "Her amplifier", equipmentKind: "amplifier", customerName: "Ada Q.", customerEmail: email.toUpperCase() }), 201);
+    const second = await json(
+      await t().post("/api/jobs", { title: "Her amplifier", equipmentKind: "amplifier", customerName: "Ada Q.", customerEmail: email.toUpperCase() }),
+      201,
+    );
     expect(second.job.customerId).toBe(first.job.customerId);
     const { customer } = await json(await t().get(`/api/customers/${first.job.customerId}`), 200);
     expect(customer).toMatchObject({ name: "Ada Quarrie", email, phone: "01632 960 123" });
@@ -79,7 +82,15 @@ describe("bad input is a 400 naming each field, never a 500", () => {
   });
 
   test("jobs: a customer not on file, too many accessories", async () => {
-    const { error } = await json(await t().post("/api/jobs", { title: "x", equipmentKind: "other", customerId: 99_999_999, accessories: Array.from({ length: 25 }, (_, i) => `item ${i}`) }), 400);
+    const { error } = await json(
+      await t().post("/api/jobs", {
+        title: "x",
+        equipmentKind: "other",
+        customerId: 99_999_999,
+        accessories: Array.from({ length: 25 }, (_, i) => `item ${i}`),
+      }),
+      400,
+    );
     expect(Object.keys(error.fields)).toEqual(["accessories"]);
     const missing = await json(await t().post("/api/jobs", { title: "x", equipmentKind: "other", customerId: 99_999_999 }), 400);
     expect(missing.error.fields.customerId).toMatch(/not on your workshop's list/);
@@ -105,10 +116,31 @@ describe("ordering", () => {
   test("values are read into SI; a group marked ordered moves every job's parts and writes each Log", async () => {
     const a = await json(await t().post("/api/jobs", { title: "Order job A", equipmentKind: "amplifier" }), 201);
     const b = await json(await t().post("/api/jobs", { title: "Order job B", equipmentKind: "table-radio" }), 201);
-    const p1 = await json(await t().post(`/api/jobs/${a.job.id}/parts`, { designator: "C5", kind: "electrolytic", replacementValue: "47 uF 450 V", quantity: 2, unitCost: "2.40", supplier: "Kiln Street Parts", supplierPartNumber: "KS-47-450" }), 201);
+    const p1 = await json(
+      await t().post(`/api/jobs/${a.job.id}/parts`, {
+        designator: "C5",
+        kind: "electrolytic",
+        replacementValue: "47 uF 450 V",
+        quantity: 2,
+        unitCost: "2.40",
+        supplier: "Kiln Street Parts",
+        supplierPartNumber: "KS-47-450",
+      }),
+      201,
+    );
     expect(p1.part).toMatchObject({ replacementRatingSi: 450, unitCostMinor: 240, quantity: 2 });
     expect(Math.abs(p1.part.replacementValueSi / 47e-6 - 1)).toBeLessThan(1e-12);
-    const p2 = await json(await t().post(`/api/jobs/${b.job.id}/parts`, { designator: "C1", kind: "paper", originalValue: "0.047 mfd 600 V", quantity: 3, unitCost: "0.85", supplier: "kiln street parts" }), 201);
+    const p2 = await json(
+      await t().post(`/api/jobs/${b.job.id}/parts`, {
+        designator: "C1",
+        kind: "paper",
+        originalValue: "0.047 mfd 600 V",
+        quantity: 3,
+        unitCost: "0.85",
+        supplier: "kiln street parts",
+      }),
+      201,
+    );
     expect(p2.part.originalRatingSi).toBe(600);
 
     const list = await json(await t().get("/api/orders"), 200);
@@ -118,7 +150,10 @@ describe("ordering", () => {
 
     const done = await json(await t().post("/api/orders/mark-ordered", { supplier: "Kiln Street Parts", partIds: [p1.part.id, p2.part.id] }), 200);
     expect(done).toEqual({ ordered: 2, jobs: [a.job.number, b.job.number].sort((x, y) => x - y) });
-    for (const [jobId, part] of [[a.job.id, p1.part.id], [b.job.id, p2.part.id]]) {
+    for (const [jobId, part] of [
+      [a.job.id, p1.part.id],
+      [b.job.id, p2.part.id],
+    ]) {
       const parts = (await json(await t().get(`/api/jobs/${jobId}/parts`), 200)).parts;
       expect(parts.find((p: { id: number }) => p.id === part)).toMatchObject({ state: "ordered" });
       const { log } = await json(await t().get(`/api/jobs/${jobId}/log`), 200);

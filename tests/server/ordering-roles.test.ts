@@ -22,7 +22,8 @@ async function created(res: Response, key: string): Promise<number> {
 }
 const freshCustomer = async () => created(await tech().post("/api/customers", { name: `Throwaway ${Math.random()}` }), "customer");
 /** A to-order part of the team's own supplier, one per caller, so a mark by one caller leaves the next a part to mark. */
-const freshPart = async () => created(await tech().post(`/api/jobs/${job}/parts`, { designator: "C40", kind: "film", supplier: "Roles Supply", unitCost: "0.95", quantity: "2" }), "part");
+const freshPart = async () =>
+  created(await tech().post(`/api/jobs/${job}/parts`, { designator: "C40", kind: "film", supplier: "Roles Supply", unitCost: "0.95", quantity: "2" }), "part");
 
 interface Case {
   route: string;

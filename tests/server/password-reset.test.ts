@@ -49,7 +49,9 @@ describe("password reset by e-mail", () => {
     expect(done.status).toBe(200);
     expect((await shop.client.get("/api/me")).status).toBe(401);
     expect((await other.get("/api/me")).status).toBe(401);
-    expect((await new Client().post("/api/auth/sign-in", { email: shop.owner.email, password: shop.owner.password }, { "x-forwarded-for": "198.51.100.43" })).status).toBe(401);
+    expect(
+      (await new Client().post("/api/auth/sign-in", { email: shop.owner.email, password: shop.owner.password }, { "x-forwarded-for": "198.51.100.43" })).status,
+    ).toBe(401);
     const fresh = new Client();
     expect((await fresh.post("/api/auth/sign-in", { email: shop.owner.email, password: "a brand new passphrase" })).status).toBe(200);
 
@@ -58,7 +60,12 @@ describe("password reset by e-mail", () => {
     expect(await (await new Client().get(link.pathname)).text()).toContain("expired or was already used");
     const events = (await (await fresh.get("/api/workshop/audit")).json()).events as { action: string }[];
     // The fresh sign-in is recorded too (session.signed-in); the password events come just before it.
-    expect(events.map((e) => e.action).filter((a) => a.startsWith("password.")).slice(0, 2)).toEqual(["password.reset", "password.reset-requested"]);
+    expect(
+      events
+        .map((e) => e.action)
+        .filter((a) => a.startsWith("password."))
+        .slice(0, 2),
+    ).toEqual(["password.reset", "password.reset-requested"]);
   });
 
   test("an expired link and an unknown token are refused", async () => {

@@ -4,7 +4,12 @@ import { mailTo, waitForMail } from "../helpers/mail";
 import { address, addMember, ownWorkshop } from "../helpers/workshops";
 
 async function readyJob(owner: Client, customerEmail: string | null) {
-  const res = await owner.post("/api/jobs", { title: "Two-band portable, early 1960s", equipmentKind: "table-radio", customerName: "Morwenna Kitto", customerEmail });
+  const res = await owner.post("/api/jobs", {
+    title: "Two-band portable, early 1960s",
+    equipmentKind: "table-radio",
+    customerName: "Morwenna Kitto",
+    customerEmail,
+  });
   if (res.status !== 201) throw new Error(`create job: ${res.status} ${await res.text()}`);
   const { job } = await res.json();
   // A finished record, so the checks before "ready" have nothing to say: one power-up session, passed.
@@ -18,7 +23,13 @@ const setStatus = (c: Client, id: number, status: string) => c.post(`/api/jobs/$
 describe("the customer's ready-to-collect e-mail", () => {
   test("at the ready state a technician sends the template message with the bench sheet attached", async () => {
     const shop = await ownWorkshop("Ready");
-    await shop.client.patch("/api/workshop", { name: shop.workshopName, contactEmail: "", contactPhone: "01632 960 777", address: "", readyMessageTemplate: "Dear {customer}, your {set} is ready at {workshop}. Ring {phone}." });
+    await shop.client.patch("/api/workshop", {
+      name: shop.workshopName,
+      contactEmail: "",
+      contactPhone: "01632 960 777",
+      address: "",
+      readyMessageTemplate: "Dear {customer}, your {set} is ready at {workshop}. Ring {phone}.",
+    });
     const tech = await addMember(shop.client, "technician");
     const customer = address("customer");
     const id = await readyJob(shop.client, customer);

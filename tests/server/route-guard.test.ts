@@ -99,7 +99,10 @@ describe("bodies are counted while they arrive", () => {
 
   test("an upload stops at 20 MB and the form's room", async () => {
     const total = 128 * MIB;
-    const res = await streamPost(`/api/jobs/${job}/files`, total, MIB, { "content-type": "multipart/form-data; boundary=guard", cookie: team.technician.cookies });
+    const res = await streamPost(`/api/jobs/${job}/files`, total, MIB, {
+      "content-type": "multipart/form-data; boundary=guard",
+      cookie: team.technician.cookies,
+    });
     expect(res.status).toBe(413);
     expect(JSON.parse(res.body).error.fields.file).toMatch(/20 MB/);
     expect(res.sentBeforeAnswer).toBeGreaterThan(20 * MIB);
@@ -119,16 +122,26 @@ describe("a foreign Origin is refused on every state-changing method", () => {
     return (await res.json())[key].id as number;
   };
   const fixtures: [string, () => Promise<string>, (id: string) => string][] = [
-    ["job", async () => String(await created(team.technician, "/api/jobs", { title: "Origin throwaway", equipmentKind: "other" }, "job")), (p) => `/api/jobs/${p}`],
-    ["part", async () => `${job}/parts/${await created(team.technician, `/api/jobs/${job}/parts`, { designator: "C9", kind: "film" }, "part")}`, (p) => `/api/jobs/${p}`],
+    [
+      "job",
+      async () => String(await created(team.technician, "/api/jobs", { title: "Origin throwaway", equipmentKind: "other" }, "job")),
+      (p) => `/api/jobs/${p}`,
+    ],
+    [
+      "part",
+      async () => `${job}/parts/${await created(team.technician, `/api/jobs/${job}/parts`, { designator: "C9", kind: "film" }, "part")}`,
+      (p) => `/api/jobs/${p}`,
+    ],
     [
       "reading",
-      async () => `${job}/readings/${await created(team.technician, `/api/jobs/${job}/readings`, { kind: "resistor", designator: "R9", nominal: "1k", measured: "1k" }, "reading")}`,
+      async () =>
+        `${job}/readings/${await created(team.technician, `/api/jobs/${job}/readings`, { kind: "resistor", designator: "R9", nominal: "1k", measured: "1k" }, "reading")}`,
       (p) => `/api/jobs/${p}`,
     ],
     [
       "calculation",
-      async () => `${job}/calculations/${await created(team.technician, `/api/jobs/${job}/calculations`, { slug: "ohms-law", inputs: { voltage: 10, current: 0.01 } }, "calculation")}`,
+      async () =>
+        `${job}/calculations/${await created(team.technician, `/api/jobs/${job}/calculations`, { slug: "ohms-law", inputs: { voltage: 10, current: 0.01 } }, "calculation")}`,
       (p) => `/api/jobs/${p}`,
     ],
     [

@@ -7,7 +7,10 @@ describe("static files from public/", () => {
     const res = await new Client().get("/robots.txt");
     expect(res.status).toBe(200);
     expect(res.headers.get("content-type")).toMatch(/^text\/plain/);
-    const rules = (await res.text()).split("\n").filter((l) => l.startsWith("Disallow:")).map((l) => l.slice("Disallow:".length).trim());
+    const rules = (await res.text())
+      .split("\n")
+      .filter((l) => l.startsWith("Disallow:"))
+      .map((l) => l.slice("Disallow:".length).trim());
     for (const path of ["/estimate/", "/pay/", "/invite/", "/reset-password/", "/jobs/", "/invoices/", "/workshop/"]) expect(rules).toContain(path);
     expect(rules.some((p) => "/bench/cathode-bias".startsWith(p) || p === "/")).toBe(false);
   });

@@ -28,9 +28,6 @@ const { partSchema, partUpdateSchema } = await import("@/lib/jobs/part-schemas")
 const { ReadyChecksError } = await import("@/lib/jobs/ready-checks");
 const { statusChangeWithChecksSchema } = await import("@/lib/jobs/ready-schemas");
 const { users } = await import("@/db/schema");
-const { JOB_STATUSES } = await import("@/lib/vocabulary");
-/** Ready to collect: the step before the set goes home. */
-const READY = JOB_STATUSES[JOB_STATUSES.indexOf("returned") - 1];
 const { eq } = await import("drizzle-orm");
 
 type M = NonNullable<ReturnType<typeof loadMember>>;
@@ -43,7 +40,16 @@ beforeAll(async () => {
   tech = member(DEMO_USERS.technician.email);
   apprentice = member(DEMO_USERS.apprentice.email);
   other = member(DEMO_USERS.other.email);
-  job = jobsQ.createJob(tech, { title: "Query test television", equipmentKind: "television", maker: null, model: null, year: null, customerName: null, customerEmail: null, notes: null } as never).id;
+  job = jobsQ.createJob(tech, {
+    title: "Query test television",
+    equipmentKind: "television",
+    maker: null,
+    model: null,
+    year: null,
+    customerName: null,
+    customerEmail: null,
+    notes: null,
+  } as never).id;
 });
 afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
@@ -54,7 +60,11 @@ describe("tubes", () => {
   test("a pasted line-up numbers the sockets after those listed and puts a picture tube at CRT", () => {
     tubesQ.createTube(apprentice, job, tubeSchema.parse({ position: "V1", type: "6CB6", function: "RF amplifier" }));
     const { tubes, seriesString } = tubesQ.createTubeLineup(apprentice, job, ["6SN7GT", "6S4", "17BP4A"]);
-    expect(tubes.map((t) => [t.position, t.type])).toEqual([["V2", "6SN7GT"], ["V3", "6S4"], ["CRT", "17BP4A"]]);
+    expect(tubes.map((t) => [t.position, t.type])).toEqual([
+      ["V2", "6SN7GT"],
+      ["V3", "6S4"],
+      ["CRT", "17BP4A"],
+    ]);
     expect(tubes[0].function).toBe("twin triode");
     expect(seriesString).toBe(false);
     expect(logTexts()[0]).toBe("Tube line-up added: 6SN7GT, 6S4, 17BP4A (3 tubes).");
@@ -70,7 +80,9 @@ describe("tubes", () => {
     const again = tubesQ.listTubes(tech, job);
     expect(again.seriesString).toBe(true);
     expect(again.tubes.find((x) => x.id === v2.id)!.differences.find((d) => d.what === "Heater current")!.level).toBe("danger");
-    expect(logTexts().some((l) => l.startsWith("Tube V2 (6SN7GT, twin triode): tested 48 against its minimum of 60, verdict weak, substitute 12SN7GT"))).toBe(true);
+    expect(logTexts().some((l) => l.startsWith("Tube V2 (6SN7GT, twin triode): tested 48 against its minimum of 60, verdict weak, substitute 12SN7GT"))).toBe(
+      true,
+    );
   });
 
   test("apprentices may not remove a tube; another workshop sees none of them", () => {
@@ -85,7 +97,11 @@ describe("tubes", () => {
 
 describe("power-ups", () => {
   test("steps over the stop current are danger, and the session passes only with a reason", () => {
-    const s = powerQ.createPowerUp(apprentice, job, powerUpSchema.parse({ limiter: "series-lamp", lampPower: "100 W", stopCurrent: "0.8 A", checklist: { "fuse-rating": true } }));
+    const s = powerQ.createPowerUp(
+      apprentice,
+      job,
+      powerUpSchema.parse({ limiter: "series-lamp", lampPower: "100 W", stopCurrent: "0.8 A", checklist: { "fuse-rating": true } }),
+    );
     expect(s.checklistWarnings).toHaveLength(6);
     expect(s.outcome).toBeNull();
     expect(powerQ.addPowerUpStep(apprentice, job, s.id, step(60, 0.4)).warnings).toEqual([]);
@@ -100,7 +116,10 @@ describe("power-ups", () => {
     }
     expect(err).toBeInstanceOf(ValidationError);
     expect(Object.keys((err as ValidationError).fields)).toEqual(["reason"]);
-    const passed = powerQ.updatePowerUp(apprentice, job, s.id, { outcome: "passed", reason: "Surge while the reformed filter charged; steady at 0.6 A after." });
+    const passed = powerQ.updatePowerUp(apprentice, job, s.id, {
+      outcome: "passed",
+      reason: "Surge while the reformed filter charged; steady at 0.6 A after.",
+    });
     expect(passed.outcome).toBe("passed");
     expect(passed.steps.map((x) => x.overStop)).toEqual([false, true]);
     expect(() => powerQ.addPowerUpStep(apprentice, job, s.id, step(100, 0.5))).toThrow(ConflictError);
@@ -115,7 +134,9 @@ describe("power-ups", () => {
   });
 
   test("the demo radio's power-up log entry was moved into a session by the migration or the seed", () => {
-    const radio = jobsQ.searchJobs(tech, { page: 1, pageSize: 100, sort: "updatedAt", dir: "desc" } as never).jobs.find((j) => j.equipmentKind === "table-radio")!;
+    const radio = jobsQ
+      .searchJobs(tech, { page: 1, pageSize: 100, sort: "updatedAt", dir: "desc" } as never)
+      .jobs.find((j) => j.equipmentKind === "table-radio")!;
     const sessions = powerQ.listPowerUps(tech, radio.id);
     expect(sessions.length).toBeGreaterThanOrEqual(1);
     expect(sessions.some((x) => x.steps.some((st) => st.supplyVoltage === 120 && st.currentDrawn === 0.21))).toBe(true);
@@ -126,11 +147,19 @@ describe("faults", () => {
   test("state follows the candidates: open → found → fixed → open again when the cause is reopened", () => {
     const f = faultsQ.createFault(apprentice, job, faultSchema.parse({ symptom: "No vertical deflection", section: "vertical deflection" }));
     expect(f.state).toBe("open");
-    const c = ["Yoke", "Vertical output transformer", "Vertical output tube", "Vertical oscillator"].map((d) => faultsQ.addCandidate(apprentice, job, f.id, { description: d }));
+    const c = ["Yoke", "Vertical output transformer", "Vertical output tube", "Vertical oscillator"].map((d) =>
+      faultsQ.addCandidate(apprentice, job, f.id, { description: d }),
+    );
     expect(c.map((x) => x.position)).toEqual([1, 2, 3, 4]);
     expect(() => faultsQ.updateFault(apprentice, job, f.id, faultUpdateSchema.parse({ resolution: "Replaced the tube" }))).toThrow(ValidationError);
     const reading = readingsQ.createReading(apprentice, job, readingSchema.parse({ kind: "voltage", designator: "V3 cathode", nominal: 18, measured: 2 }));
-    let now = faultsQ.updateCandidate(apprentice, job, f.id, c[2].id, candidateUpdateSchema.parse({ status: "cause", readingId: reading.id, evidence: "Cathode at 2 V against 18 V expected." }));
+    let now = faultsQ.updateCandidate(
+      apprentice,
+      job,
+      f.id,
+      c[2].id,
+      candidateUpdateSchema.parse({ status: "cause", readingId: reading.id, evidence: "Cathode at 2 V against 18 V expected." }),
+    );
     expect(now.state).toBe("found");
     expect(now.candidates[2].reading).toEqual({ designator: "V3 cathode", measured: 2, unit: "V" });
     now = faultsQ.updateFault(apprentice, job, f.id, faultUpdateSchema.parse({ resolution: "New vertical output tube; height and linearity set." }));
@@ -165,7 +194,10 @@ describe("parts fitted by apprentices, checked by technicians", () => {
     expect([fitted.state, fitted.checkedBy]).toEqual(["fitted", null]);
     const checked = partsQ.updatePart(tech, job, p.id, partUpdateSchema.parse({ checked: true }));
     expect(checked.checkedBy).toEqual({ id: tech.userId, name: tech.name });
-    expect(logTexts().slice(0, 2)).toEqual([`Part C40: fitting checked by ${tech.name}.`, `Part C40 recorded as fitted by ${apprentice.name}, waiting for a technician's check.`]);
+    expect(logTexts().slice(0, 2)).toEqual([
+      `Part C40: fitting checked by ${tech.name}.`,
+      `Part C40 recorded as fitted by ${apprentice.name}, waiting for a technician's check.`,
+    ]);
     expect(partsQ.updatePart(tech, job, p.id, partUpdateSchema.parse({ state: "ordered" })).checkedBy).toBeNull();
   });
 });
@@ -181,12 +213,20 @@ describe("checks before ready", () => {
     expect(err).toBeInstanceOf(ReadyChecksError);
     expect((err as InstanceType<typeof ReadyChecksError>).checks.map((c) => c.id)).toEqual(["parts-not-fitted"]);
     expect(jobsQ.getJob(tech, job).status).not.toBe("at-the-counter");
-    expect(() => readyQ.changeStatusWithChecks(apprentice, job, statusChangeWithChecksSchema.parse({ status: "at-the-counter", override: true, reason: "x" }))).toThrow(ForbiddenError);
-    const moved = readyQ.changeStatusWithChecks(tech, job, statusChangeWithChecksSchema.parse({ status: "at-the-counter", override: true, reason: "Customer collects today; C40 goes in at the counter." }));
+    expect(() =>
+      readyQ.changeStatusWithChecks(apprentice, job, statusChangeWithChecksSchema.parse({ status: "at-the-counter", override: true, reason: "x" })),
+    ).toThrow(ForbiddenError);
+    const moved = readyQ.changeStatusWithChecks(
+      tech,
+      job,
+      statusChangeWithChecksSchema.parse({ status: "at-the-counter", override: true, reason: "Customer collects today; C40 goes in at the counter." }),
+    );
     expect(moved.status).toBe("at-the-counter");
     const [override, status] = logQ.listLog(tech, job);
     expect(status.text).toBe("Status: On the rack → At the counter.");
-    expect(override.text).toMatch(/^Moved to “At the counter” with checks still open — 1 part on the list is not fitted yet: C40\. Reason: Customer collects today/);
+    expect(override.text).toMatch(
+      /^Moved to “At the counter” with checks still open — 1 part on the list is not fitted yet: C40\. Reason: Customer collects today/,
+    );
     expect(readyQ.changeStatusWithChecks(tech, job, statusChangeWithChecksSchema.parse({ status: "fault-finding" })).status).toBe("fault-finding");
   });
 });

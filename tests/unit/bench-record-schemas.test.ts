@@ -44,7 +44,11 @@ describe("bench record schemas: bad input names its field", () => {
   });
 
   test("steps and outcomes", () => {
-    expect(powerUpStepSchema.parse({ supplyVoltage: "60 V", currentDrawn: "450 mA", minutes: "5" })).toMatchObject({ supplyVoltage: 60, currentDrawn: 0.45, minutes: 5 });
+    expect(powerUpStepSchema.parse({ supplyVoltage: "60 V", currentDrawn: "450 mA", minutes: "5" })).toMatchObject({
+      supplyVoltage: 60,
+      currentDrawn: 0.45,
+      minutes: 5,
+    });
     expect(Object.keys(fields(powerUpStepSchema, { supplyVoltage: "abc", currentDrawn: -1 })).sort()).toEqual(["currentDrawn", "minutes", "supplyVoltage"]);
     expect(fields(powerUpOutcomeSchema, { outcome: "working" })).toHaveProperty("outcome");
   });

@@ -45,7 +45,19 @@ beforeAll(async () => {
     calcQ.saveCalculation(tech, big, { slug, inputs, note: i % 3 ? null : `Saved calculation ${i + 1}: checked against the schematic's figures.` });
   }
   for (let i = 0; i < 150; i++) {
-    partsQ.createPart(tech, big, partSchema.parse({ designator: `C${i + 1}`, kind: i % 2 ? "paper" : "electrolytic", originalValue: "0.05 µF", originalRating: "400 V", replacementValue: "47 nF", replacementRating: "630 V", state: i % 4 ? "fitted" : "to-order" }));
+    partsQ.createPart(
+      tech,
+      big,
+      partSchema.parse({
+        designator: `C${i + 1}`,
+        kind: i % 2 ? "paper" : "electrolytic",
+        originalValue: "0.05 µF",
+        originalRating: "400 V",
+        replacementValue: "47 nF",
+        replacementRating: "630 V",
+        state: i % 4 ? "fitted" : "to-order",
+      }),
+    );
   }
 }, 120_000);
 afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
@@ -93,7 +105,9 @@ describe("bench sheet", () => {
   test("the television: tubes and verdicts, each power-up's steps, faults with their causes, Ω and Greek as themselves", async () => {
     const data = benchSheetData(tech, tv);
     expect(data.tubes.rows.find((r) => r.position === "V9")).toMatchObject({ type: "6S4", verdict: "Weak", test: "38 (min. 60)" });
-    expect(data.tubes.substitutions.find((x) => x.title.startsWith("CRT"))!.lines.map((l) => l.text)).toContainEqual(expect.stringMatching(/^Focus: magnetic \(original\), electrostatic \(substitute\)/));
+    expect(data.tubes.substitutions.find((x) => x.title.startsWith("CRT"))!.lines.map((l) => l.text)).toContainEqual(
+      expect.stringMatching(/^Focus: magnetic \(original\), electrostatic \(substitute\)/),
+    );
     expect(data.powerUps[0].steps).toHaveLength(5);
     expect(data.powerUps[0].steps.filter((st) => st.overStop)).toHaveLength(1);
     expect(data.powerUps[0].outcome).toMatch(/^Came up well: The 1.35 A/);
@@ -111,7 +125,11 @@ describe("bench sheet", () => {
   }, 120_000);
 
   test("a Greek letter in a saved note is set in the Greek face, not dropped", async () => {
-    calcQ.saveCalculation(tech, tv, { slug: "time-constant", inputs: { resistance: "220k", capacitance: "40 uF", initialVoltage: 300 }, note: "τ = RC, so 5τ ≈ 44 s; 220 kΩ across C101" });
+    calcQ.saveCalculation(tech, tv, {
+      slug: "time-constant",
+      inputs: { resistance: "220k", capacitance: "40 uF", initialVoltage: 300 },
+      note: "τ = RC, so 5τ ≈ 44 s; 220 kΩ across C101",
+    });
     const data = benchSheetData(tech, tv);
     expect(data.calculations[0].note).toBe("τ = RC, so 5τ ~ 44 s; 220 kΩ across C101");
     const { pdf } = await renderWithLayout(tech, tv);

@@ -35,7 +35,9 @@ beforeAll(() => {
   sqlite.pragma("foreign_keys = ON");
   migrate(drizzle(sqlite), { migrationsFolder: migrationsUpTo(TAG, false) });
   sqlite.prepare("insert into workshops (id, name) values (1, 'North'), (2, 'South')").run();
-  const job = sqlite.prepare("insert into jobs (workshop_id, title, equipment_kind, customer_name, customer_email, created_at) values (?, ?, 'other', ?, ?, ?)");
+  const job = sqlite.prepare(
+    "insert into jobs (workshop_id, title, equipment_kind, customer_name, customer_email, created_at) values (?, ?, 'other', ?, ?, ?)",
+  );
   // Inserted out of date order on purpose: numbers follow created_at, not the id.
   job.run(1, "n-third", "Edith Marlow", "Edith@Example.com", 3000);
   job.run(1, "n-first", "Edith M.", " edith@example.com ", 1000);
@@ -53,7 +55,15 @@ afterAll(() => {
 
 const jobsByTitle = () =>
   Object.fromEntries(
-    (sqlite.prepare("select title, number, customer_id, customer_name, customer_email from jobs").all() as { title: string; number: number; customer_id: number | null; customer_name: string | null; customer_email: string | null }[]).map((j) => [j.title, j]),
+    (
+      sqlite.prepare("select title, number, customer_id, customer_name, customer_email from jobs").all() as {
+        title: string;
+        number: number;
+        customer_id: number | null;
+        customer_name: string | null;
+        customer_email: string | null;
+      }[]
+    ).map((j) => [j.title, j]),
   );
 
 describe("migration 0007", () => {

@@ -31,7 +31,11 @@ let owner: Member, tech: Member, apprentice: Member, other: Member;
 function freshWorkshop(name: string): Member {
   const db = getDb();
   const w = db.insert(workshops).values({ name, currency: "GBP" }).returning({ id: workshops.id }).get();
-  const u = db.insert(users).values({ email: `${name.toLowerCase().replace(/\W+/g, "-")}@example.test`, name: `${name} tech`, passwordHash: "x" }).returning({ id: users.id }).get();
+  const u = db
+    .insert(users)
+    .values({ email: `${name.toLowerCase().replace(/\W+/g, "-")}@example.test`, name: `${name} tech`, passwordHash: "x" })
+    .returning({ id: users.id })
+    .get();
   db.insert(memberships).values({ workshopId: w.id, userId: u.id, role: "technician" }).run();
   return { userId: u.id, email: "", name: `${name} tech`, workshopId: w.id, workshopName: name, role: "technician" };
 }
@@ -56,7 +60,10 @@ describe("job numbers count per workshop", () => {
   });
 
   test("the demo workshop's numbers run from 1 without gaps, and search finds “Job 3”", () => {
-    const numbers = jobsQ.searchJobs(tech, { page: 1, pageSize: 100, sort: "createdAt", dir: "asc" }).jobs.map((j) => j.number).sort((x, y) => x - y);
+    const numbers = jobsQ
+      .searchJobs(tech, { page: 1, pageSize: 100, sort: "createdAt", dir: "asc" })
+      .jobs.map((j) => j.number)
+      .sort((x, y) => x - y);
     expect(numbers).toEqual(numbers.map((_, i) => i + 1));
     const found = jobsQ.searchJobs(tech, { page: 1, pageSize: 50, sort: "updatedAt", dir: "desc", q: "Job 3" });
     expect(found.jobs.map((j) => j.number)).toContain(3);
@@ -108,7 +115,11 @@ describe("customers", () => {
 describe("parts ordering", () => {
   test("a typed unit cost becomes integer pence; more decimals than the currency has are refused", () => {
     const job = newJob(tech, { title: "Pricing set" }).id;
-    const part = partsQ.createPart(tech, job, partSchema.parse({ designator: "C1", kind: "paper", originalValue: "0.047 mfd 600 V", unitCost: "1.20", quantity: "3", supplier: "Kiln Street" }));
+    const part = partsQ.createPart(
+      tech,
+      job,
+      partSchema.parse({ designator: "C1", kind: "paper", originalValue: "0.047 mfd 600 V", unitCost: "1.20", quantity: "3", supplier: "Kiln Street" }),
+    );
     expect(part).toMatchObject({ unitCostMinor: 120, quantity: 3, originalRatingSi: 600 });
     expect(part.originalValueSi! / 47e-9).toBeCloseTo(1, 12);
     expect(() => partsQ.createPart(tech, job, partSchema.parse({ designator: "C2", kind: "paper", unitCost: "1.205" }))).toThrow(ValidationError);
@@ -139,7 +150,12 @@ describe("parts ordering", () => {
     expect(done.ordered).toBe(ids.length);
     expect(ordersQ.getOrderList(tech).groups.some((g) => g.key === "valve cellar supplies")).toBe(false);
     for (const jobId of new Set(cellar.lines.map((l) => l.jobId))) {
-      expect(partsQ.listParts(tech, jobId).filter((p) => ids.includes(p.id)).every((p) => p.state === "ordered" && p.orderedAt)).toBe(true);
+      expect(
+        partsQ
+          .listParts(tech, jobId)
+          .filter((p) => ids.includes(p.id))
+          .every((p) => p.state === "ordered" && p.orderedAt),
+      ).toBe(true);
       expect(logQ.listLog(tech, jobId)[0].text).toMatch(/^Ordered from Valve Cellar Supplies: /);
     }
     expect(() => ordersQ.markGroupOrdered(tech, { supplier: "Valve Cellar Supplies", partIds: ids })).toThrow(ConflictError);

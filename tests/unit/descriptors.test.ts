@@ -108,7 +108,11 @@ describe("the registry and the generated loaders", () => {
   it("slugs are unique and every group has a calculator", () => {
     const slugs = calculators.map((c) => c.slug);
     expect(new Set(slugs).size).toBe(slugs.length);
-    for (const g of GROUPS) expect(calculators.some((c) => c.bench.group === g.id), g.id).toBe(true);
+    for (const g of GROUPS)
+      expect(
+        calculators.some((c) => c.bench.group === g.id),
+        g.id,
+      ).toBe(true);
   });
 
   it("the registry lists the calculators group by group, in the index's order of groups", () => {

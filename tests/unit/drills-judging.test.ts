@@ -43,12 +43,24 @@ describe("reading answers as people write them", () => {
   });
 
   it("tells another quantity's unit from an unreadable answer", () => {
-    for (const [raw, unit] of [["0.25 V", "W"], ["4.7 uF", "Ω"], ["250 mW", "V"], ["1.5 kHz", "Ω"], ["12 V", "%"], ["3 A", ""]] as const) {
+    for (const [raw, unit] of [
+      ["0.25 V", "W"],
+      ["4.7 uF", "Ω"],
+      ["250 mW", "V"],
+      ["1.5 kHz", "Ω"],
+      ["12 V", "%"],
+      ["3 A", ""],
+    ] as const) {
       const r = read(raw, unit);
       expect(r.ok, raw).toBe(false);
       if (!r.ok) expect(r.verdict, raw).toBe("wrong-unit");
     }
-    for (const [raw, unit] of [["about a bit", "W"], ["", "Ω"], ["1.2.3", "V"], [null, "A"]] as const) {
+    for (const [raw, unit] of [
+      ["about a bit", "W"],
+      ["", "Ω"],
+      ["1.2.3", "V"],
+      [null, "A"],
+    ] as const) {
       const r = read(raw, unit);
       expect(r.ok).toBe(false);
       if (!r.ok) expect(r.verdict).toBe("unreadable");
@@ -82,7 +94,10 @@ function findDrill(id: string, test: (d: Drill) => boolean): Drill {
 describe("the bench examples of the issue", () => {
   it("6V6GT, 45 mA plate and 4.5 mA screen at 12.5 V bias: about 250 Ω, and 278 Ω is the forgotten screen current", () => {
     // 6V6GT data sheet, class A1 at 250 V: Rk about 250 Ω (from memory); 12.5 V/49.5 mA = 252.5 Ω.
-    const d = findDrill("cathode-bias/resistor", (x) => x.problem.given["Screen current"] === "4.5 mA" && x.problem.given["Plate current"] === "45 mA" && x.problem.given["Grid bias"] === "12.5 V");
+    const d = findDrill(
+      "cathode-bias/resistor",
+      (x) => x.problem.given["Screen current"] === "4.5 mA" && x.problem.given["Plate current"] === "45 mA" && x.problem.given["Grid bias"] === "12.5 V",
+    );
     expect(d.solution.expected as number).toBeCloseTo(252.525, 2);
     expect(judgeDrill(d, "250").correct).toBe(true); // within 2 %
     expect(judgeDrill(d, "252R5").correct).toBe(true);
@@ -95,7 +110,10 @@ describe("the bench examples of the issue", () => {
   });
 
   it("its rating: 2 W, and 1 W is the part without the factor of two", () => {
-    const d = findDrill("cathode-bias/rating", (x) => x.problem.given["Screen current"] === "4.5 mA" && x.problem.given["Plate current"] === "45 mA" && x.problem.given["Grid bias"] === "12.5 V");
+    const d = findDrill(
+      "cathode-bias/rating",
+      (x) => x.problem.given["Screen current"] === "4.5 mA" && x.problem.given["Plate current"] === "45 mA" && x.problem.given["Grid bias"] === "12.5 V",
+    );
     expect(d.solution.expected).toBe(2); // 2 × 0.619 W = 1.24 W → the next standard rating, 2 W (common practice)
     expect(judgeDrill(d, "2 W").correct).toBe(true);
     expect(judgeDrill(d, "2000 mW").correct).toBe(true);

@@ -68,9 +68,7 @@ describe("mastery", () => {
   });
 
   it("does not depend on the order of attempts", () => {
-    fc.assert(
-      fc.property(attempts, (list) => Math.abs(computeMastery([...list].reverse()).mastery - computeMastery(list).mastery) < 1e-12),
-    );
+    fc.assert(fc.property(attempts, (list) => Math.abs(computeMastery([...list].reverse()).mastery - computeMastery(list).mastery) < 1e-12));
   });
 
   it("climbs through the levels with a week of good days, and not in one sitting", () => {
@@ -82,7 +80,10 @@ describe("mastery", () => {
     const twelveDays = computeMastery(Array.from({ length: 36 }, (_, i) => on(Math.floor(i / 3), true, i % 3)));
     expect(twelveDays.levelId).toBe("sure-handed");
     // A run of misses brings it back down.
-    const slipping = computeMastery([...Array.from({ length: 14 }, (_, i) => on(Math.floor(i / 2), true, i % 2)), ...Array.from({ length: 6 }, (_, i) => on(8, false, i))]);
+    const slipping = computeMastery([
+      ...Array.from({ length: 14 }, (_, i) => on(Math.floor(i / 2), true, i % 2)),
+      ...Array.from({ length: 6 }, (_, i) => on(8, false, i)),
+    ]);
     expect(slipping.mastery).toBeLessThan(week.mastery);
     expect(slipping.levelId).not.toBe("dependable");
   });
@@ -90,7 +91,10 @@ describe("mastery", () => {
   it("counts days in the workshop's own time zone", () => {
     // 23:30 and 00:30 UTC are one evening in UTC−5 and two days in UTC.
     const late = Date.UTC(2024, 2, 4, 23, 30);
-    const list = [{ at: late, correct: true }, { at: late + 3_600_000, correct: true }];
+    const list = [
+      { at: late, correct: true },
+      { at: late + 3_600_000, correct: true },
+    ];
     expect(computeMastery(list).daysWithCorrect).toBe(2);
     expect(computeMastery(list, { utcOffsetMinutes: -300 }).daysWithCorrect).toBe(1);
     expect(computeMastery(list.map((a) => ({ ...a, at: new Date(a.at).toISOString() }))).daysWithCorrect).toBe(2);

@@ -22,7 +22,13 @@ function rerun(d: Drill) {
 }
 
 /** Figures of a number as it prints: 252.525… has many, 0.25 has two, 3e-6 has one. */
-const significantFigures = (x: number) => x.toPrecision(15).replace(/e.*$/, "").replace(".", "").replace(/^[-0]+/, "").replace(/0+$/, "").length;
+const significantFigures = (x: number) =>
+  x
+    .toPrecision(15)
+    .replace(/e.*$/, "")
+    .replace(".", "")
+    .replace(/^[-0]+/, "")
+    .replace(/0+$/, "").length;
 
 describe.each(DRILL_KINDS.map((k) => [k.id, k] as const))("%s", (_id, kind) => {
   // Seeds 1001… so these are other problems than the answers file's.
@@ -102,7 +108,9 @@ describe.each(DRILL_KINDS.map((k) => [k.id, k] as const))("%s", (_id, kind) => {
   it("carries the danger caution exactly when more than 50 V is involved, and never calls a figure safe", () => {
     for (const d of drills) {
       const r = rerun(d);
-      const volts = getCalculator(kind.slug)!.inputs.filter((i) => i.quantity === "voltage").map((i) => r.inputs[i.name]);
+      const volts = getCalculator(kind.slug)!
+        .inputs.filter((i) => i.quantity === "voltage")
+        .map((i) => r.inputs[i.name]);
       const over50 = volts.some((v) => typeof v === "number" && Math.abs(v) > 50);
       const benchDanger = r.warnings.some((w) => w.level === "danger");
       expect(d.problem.danger).toBe(over50 || benchDanger);

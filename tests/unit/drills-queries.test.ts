@@ -51,7 +51,8 @@ describe("drills queries", () => {
         expect(row.problem).toEqual(JSON.parse(JSON.stringify(again.problem)));
         // Alternate the answer's form: the text as the working writes it, and the bare SI number.
         const { expected } = again.solution;
-        const answer = i % 2 === 0 || typeof expected === "string" ? formatAnswer(expected, kind.asked.unit, 6) : kind.asked.unit === "%" ? expected * 100 : expected;
+        const answer =
+          i % 2 === 0 || typeof expected === "string" ? formatAnswer(expected, kind.asked.unit, 6) : kind.asked.unit === "%" ? expected * 100 : expected;
         const result = q.answerDrill(apprentice, made.id, answer);
         expect(result.correct, `${kind.id} seed ${row.seed}: ${String(answer)}`).toBe(true);
         expect(result.verdict).toBe("correct");
@@ -123,7 +124,11 @@ describe("drills queries", () => {
   });
 
   test("from the bench: a saved calculation becomes a drill of its calculator, and the prompt says it is a similar one", () => {
-    const calc = getDb().select({ id: calculations.id, slug: calculations.slug }).from(calculations).where(eq(calculations.workshopId, owner.workshopId)).get()!;
+    const calc = getDb()
+      .select({ id: calculations.id, slug: calculations.slug })
+      .from(calculations)
+      .where(eq(calculations.workshopId, owner.workshopId))
+      .get()!;
     const due = new Date().toISOString().slice(0, 10);
     const set = q.createAssignment(owner, { apprentice: apprentice.userId, calculationId: calc.id, due });
     const row = stored(set.drills[0].id);

@@ -60,7 +60,10 @@ describe("the fake payment service through the Stripe SDK", () => {
   });
 
   test("reads every line of a long form body (qs stops arrays at 20 unless told otherwise)", async () => {
-    const line_items = Array.from({ length: 25 }, (_, i) => ({ quantity: 2, price_data: { currency: "gbp", unit_amount: 100 + i, product_data: { name: `Line ${i}` } } }));
+    const line_items = Array.from({ length: 25 }, (_, i) => ({
+      quantity: 2,
+      price_data: { currency: "gbp", unit_amount: 100 + i, product_data: { name: `Line ${i}` } },
+    }));
     const session = await client().checkout.sessions.create({ ...params, line_items });
     // 2 × (100 + 101 + … + 124) = 2 × 2800
     expect(session.amount_total).toBe(5600);

@@ -8,7 +8,11 @@ const calc = calculator as unknown as Calculator;
 
 describe("heater-string form: the pilot lamp", () => {
   it("a lamp typed in the form reaches the calculator as one object, and back", () => {
-    const given = { lineVoltage: "117 V", tubes: ["12BE6", "12BA6", "12AV6", "50C5", "35W4"], pilotLamp: { voltage: "6.3", current: "150m", rectifierCurrent: "50m" } };
+    const given = {
+      lineVoltage: "117 V",
+      tubes: ["12BE6", "12BA6", "12AV6", "50C5", "35W4"],
+      pilotLamp: { voltage: "6.3", current: "150m", rectifierCurrent: "50m" },
+    };
     const form = initialValues(calc.inputs, given);
     expect(form.pilotLamp).toEqual({ voltage: "6.3", current: "150m", rectifierCurrent: "50m" });
     const raw = toRaw(calc, form, "tubes");
@@ -29,7 +33,11 @@ describe("heater-string form: the pilot lamp", () => {
 
   it("the lamp sits in the folding section and is kept in both entry modes", () => {
     expect(calc.bench.advanced?.fields).toContain("pilotLamp");
-    const form = initialValues(calc.inputs, { lineVoltage: "117", heaters: [{ voltage: "35", current: "150m" }], pilotLamp: { voltage: "6.3", current: "150m" } });
+    const form = initialValues(calc.inputs, {
+      lineVoltage: "117",
+      heaters: [{ voltage: "35", current: "150m" }],
+      pilotLamp: { voltage: "6.3", current: "150m" },
+    });
     expect(toRaw(calc, form, "heaters").pilotLamp).toEqual({ voltage: "6.3", current: "150m" });
   });
 });

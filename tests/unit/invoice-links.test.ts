@@ -100,7 +100,11 @@ describe("opening and paying", () => {
     const { token } = linksQ.issuePayLink(owner, invoice.id);
     expect(linksQ.payableByLink(token).totalMinor).toBe(invoice.totalMinor);
 
-    getDb().update(invoices).set({ payTokenExpiresAt: new Date(Date.now() - 1) }).where(eq(invoices.id, invoice.id)).run();
+    getDb()
+      .update(invoices)
+      .set({ payTokenExpiresAt: new Date(Date.now() - 1) })
+      .where(eq(invoices.id, invoice.id))
+      .run();
     expect(() => linksQ.payableByLink(token)).toThrow(/expired/);
     expect(linksQ.openPayLink(token).state).toBe("expired");
 

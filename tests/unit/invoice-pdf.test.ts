@@ -7,8 +7,16 @@ type Invoice = ComponentProps<typeof InvoicePdf>["invoice"];
 
 // An invented invoice: only the fields the document reads.
 const invoice = {
-  id: 1, number: 7, currency: "GBP", taxRateBp: 2000, status: "issued", issuedAt: new Date("2025-03-04T10:00:00Z"), paidAt: null,
-  subtotalMinor: 15450, taxMinor: 3090, totalMinor: 18540,
+  id: 1,
+  number: 7,
+  currency: "GBP",
+  taxRateBp: 2000,
+  status: "issued",
+  issuedAt: new Date("2025-03-04T10:00:00Z"),
+  paidAt: null,
+  subtotalMinor: 15450,
+  taxMinor: 3090,
+  totalMinor: 18540,
   lines: [
     { id: 1, kind: "labour", description: "Recap and bring-up on a current-limited supply", quantityMilli: 3500, unitPriceMinor: 4000, amountMinor: 14000 },
     { id: 2, kind: "part", description: "Filter capacitor 40 µF 450 V (C14)", quantityMilli: 2000, unitPriceMinor: 725, amountMinor: 1450 },

@@ -101,7 +101,9 @@ describe("migration 0006: job statuses", () => {
     const w = sqlite.prepare("SELECT id FROM workshops LIMIT 1").get() as { id: number };
     sqlite.prepare("INSERT INTO jobs (workshop_id, title, equipment_kind) VALUES (?, 'New arrival', 'amplifier')").run(w.id);
     expect((sqlite.prepare("SELECT status FROM jobs WHERE title = 'New arrival'").get() as { status: string }).status).toBe("on-the-rack");
-    const indexes = (sqlite.prepare("SELECT name FROM sqlite_master WHERE type = 'index' AND tbl_name = 'jobs'").all() as { name: string }[]).map((r) => r.name);
+    const indexes = (sqlite.prepare("SELECT name FROM sqlite_master WHERE type = 'index' AND tbl_name = 'jobs'").all() as { name: string }[]).map(
+      (r) => r.name,
+    );
     expect(indexes).toEqual(expect.arrayContaining(["jobs_workshop_status_updated", "jobs_workshop_updated", "jobs_workshop_kind"]));
     const columns = (sqlite.prepare("SELECT name FROM pragma_table_info('jobs')").all() as { name: string }[]).map((r) => r.name);
     expect(columns).toContain("status");

@@ -24,11 +24,25 @@ describe("capacitor rating cautions", () => {
     expect(ratingVolts("")).toBeNull();
   });
 
-  const part = (id: number, kind: "paper" | "electrolytic" | "resistor", originalRating: string | null, replacementRating: string | null) => ({ id, designator: `X${id}`, kind, originalRating, replacementRating });
-  const volts = (designator: string, measured: number | null, partDesignators: string | null = null) => ({ kind: "voltage", designator, partDesignators, measured });
+  const part = (id: number, kind: "paper" | "electrolytic" | "resistor", originalRating: string | null, replacementRating: string | null) => ({
+    id,
+    designator: `X${id}`,
+    kind,
+    originalRating,
+    replacementRating,
+  });
+  const volts = (designator: string, measured: number | null, partDesignators: string | null = null) => ({
+    kind: "voltage",
+    designator,
+    partDesignators,
+    measured,
+  });
 
   test("flags a replacement below the original whatever was measured, for capacitors only", () => {
-    const cautions = capacitorCautions([part(1, "electrolytic", "450 V", "350 V"), part(2, "paper", "200 V", "250 V"), part(4, "resistor", "500 V", "100 V")], []);
+    const cautions = capacitorCautions(
+      [part(1, "electrolytic", "450 V", "350 V"), part(2, "paper", "200 V", "250 V"), part(4, "resistor", "500 V", "100 V")],
+      [],
+    );
     expect(cautions.map((c) => c.partId)).toEqual([1]);
     expect(cautions[0].message).toMatch(/^X1: the replacement is rated 350 V, below the original 450 V/);
   });
@@ -41,7 +55,12 @@ describe("capacitor rating cautions", () => {
   });
 
   test("a capacitor is compared only with readings linked to it, by magnitude, case and spaces ignored", () => {
-    const parts = [part(1, "paper", "400 V", "350 V"), part(2, "electrolytic", "450 WV", null), part(3, "paper", null, "160 V"), part(4, "paper", null, "630 V")];
+    const parts = [
+      part(1, "paper", "400 V", "350 V"),
+      part(2, "electrolytic", "450 WV", null),
+      part(3, "paper", null, "160 V"),
+      part(4, "paper", null, "630 V"),
+    ];
     const readings = [volts("CRT anode", 6600), volts(" x1 ", 380), volts("TP3", 300, "X2, X4"), volts("Cathode", -180, "x3"), volts("X4", null)];
     const { cautions, notes } = capacitorChecks(parts, readings);
     expect(cautions.map((c) => c.partId)).toEqual([1, 3]);
@@ -62,7 +81,17 @@ describe("capacitor rating cautions", () => {
 
 describe("parts CSV", () => {
   test("round-trips, and neutralises cells a spreadsheet would run as formulas", () => {
-    const parts = [{ designator: "C1", kind: "paper", originalValue: "=HYPERLINK(1)", originalRating: "400 V", replacementValue: "0.047 µF", replacementRating: "630 V", state: "fitted" }] as const;
+    const parts = [
+      {
+        designator: "C1",
+        kind: "paper",
+        originalValue: "=HYPERLINK(1)",
+        originalRating: "400 V",
+        replacementValue: "0.047 µF",
+        replacementRating: "630 V",
+        state: "fitted",
+      },
+    ] as const;
     const csv = partsToCsv([...parts]);
     expect(csv).toContain("'=HYPERLINK(1)");
     const back = parsePartsCsv(csv);

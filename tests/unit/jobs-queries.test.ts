@@ -40,7 +40,17 @@ afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
 const query = (q: Record<string, string> = {}) => jobListQuerySchema.parse(q);
 const newJob = (m: M, title: string, extra: Record<string, unknown> = {}) =>
-  jobsQ.createJob(m, { title, equipmentKind: "table-radio", maker: null, model: null, year: null, customerName: null, customerEmail: null, notes: null, ...extra } as never);
+  jobsQ.createJob(m, {
+    title,
+    equipmentKind: "table-radio",
+    maker: null,
+    model: null,
+    year: null,
+    customerName: null,
+    customerEmail: null,
+    notes: null,
+    ...extra,
+  } as never);
 
 describe("jobs queries", () => {
   test("the default page holds only the member's workshop, newest work first", () => {
@@ -100,7 +110,15 @@ describe("jobs queries", () => {
 describe("parts, readings, calculations", () => {
   test("createParts writes all rows or none", () => {
     const job = newJob(tech, "Import set");
-    const good = { designator: "C1", kind: "paper", originalValue: null, originalRating: null, replacementValue: null, replacementRating: null, state: "to-order" } as const;
+    const good = {
+      designator: "C1",
+      kind: "paper",
+      originalValue: null,
+      originalRating: null,
+      replacementValue: null,
+      replacementRating: null,
+      state: "to-order",
+    } as const;
     // A row the database refuses (kind outside its CHECK list is impossible through zod, so break NOT NULL instead).
     expect(() => partsQ.createParts(tech, job.id, [good, { ...good, designator: null as unknown as string }])).toThrow();
     expect(partsQ.listParts(tech, job.id)).toEqual([]);
@@ -111,12 +129,20 @@ describe("parts, readings, calculations", () => {
 
   test("an apprentice adds readings whose verdicts come from resistor-drift; only technicians fix them", () => {
     const job = newJob(tech, "Survey set");
-    const r = readingsQ.createReading(apprentice, job.id, readingSchema.parse({ kind: "resistor", designator: "R4", nominal: "470k", measured: "655k", tolerance: "0.2" }));
+    const r = readingsQ.createReading(
+      apprentice,
+      job.id,
+      readingSchema.parse({ kind: "resistor", designator: "R4", nominal: "470k", measured: "655k", tolerance: "0.2" }),
+    );
     expect(r.verdict).toBe("high");
     expect(r.deviation).toBeCloseTo(185 / 470, 6);
     const open = readingsQ.createReading(apprentice, job.id, readingSchema.parse({ kind: "resistor", designator: "R9", nominal: "1M", measured: "OL" }));
     expect(open).toMatchObject({ measured: null, verdict: "open", deviation: null });
-    const v = readingsQ.createReading(apprentice, job.id, readingSchema.parse({ kind: "voltage", designator: "B+", nominal: "250", measured: "240 V", tolerance: "0.1" }));
+    const v = readingsQ.createReading(
+      apprentice,
+      job.id,
+      readingSchema.parse({ kind: "voltage", designator: "B+", nominal: "250", measured: "240 V", tolerance: "0.1" }),
+    );
     expect(v.verdict).toBe("within");
     expect(() => readingsQ.deleteReading(apprentice, job.id, r.id)).toThrow(ForbiddenError);
     readingsQ.deleteReading(tech, job.id, r.id);

@@ -42,7 +42,11 @@ interface Import {
 function importsOf(file: string): Import[] {
   const text = fs.readFileSync(path.join(ROOT, file), "utf8");
   const found: Import[] = [];
-  const patterns = [/^\s*(import|export)\s+(type\s+)?[^'";]*?\s+from\s+["']([^"']+)["']/gm, /^\s*import\s+()()["']([^"']+)["']/gm, /\bimport\(\s*()()["']([^"']+)["']\s*\)/g];
+  const patterns = [
+    /^\s*(import|export)\s+(type\s+)?[^'";]*?\s+from\s+["']([^"']+)["']/gm,
+    /^\s*import\s+()()["']([^"']+)["']/gm,
+    /\bimport\(\s*()()["']([^"']+)["']\s*\)/g,
+  ];
   for (const re of patterns) {
     for (const m of text.matchAll(re)) {
       const spec = m[3];
@@ -84,8 +88,10 @@ describe("import direction", () => {
     expect(outside).toEqual([]);
   });
 
-  test("every file of the server floor starts with import \"server-only\"", () => {
-    const unmarked = ALL.filter(({ floor }) => floor === "server").filter(({ file }) => !/^import "server-only";/.test(fs.readFileSync(path.join(ROOT, file), "utf8")));
+  test('every file of the server floor starts with import "server-only"', () => {
+    const unmarked = ALL.filter(({ floor }) => floor === "server").filter(
+      ({ file }) => !/^import "server-only";/.test(fs.readFileSync(path.join(ROOT, file), "utf8")),
+    );
     expect(unmarked.map((f) => f.file)).toEqual([]);
   });
 

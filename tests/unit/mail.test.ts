@@ -68,13 +68,17 @@ describe("MIME decoding", () => {
   const raw = (headers: string[], body: string) => Buffer.from([...headers, "MIME-Version: 1.0", "", body].join("\r\n"));
 
   test("encoded words in B and Q form", async () => {
-    const mail = await parseMail(raw(["From: =?UTF-8?Q?Caf=C3=A9_bench?= <bench@example.com>", "To: a@example.com", "Subject: =?UTF-8?B?Y2Fmw6k=?= and =?UTF-8?Q?caf=C3=A9_bar?="], "Hi"));
+    const mail = await parseMail(
+      raw(["From: =?UTF-8?Q?Caf=C3=A9_bench?= <bench@example.com>", "To: a@example.com", "Subject: =?UTF-8?B?Y2Fmw6k=?= and =?UTF-8?Q?caf=C3=A9_bar?="], "Hi"),
+    );
     expect(mail.subject).toBe("café and café bar");
     expect(mail.from).toContain("Café bench");
     expect(mail.headers.subject).toBe("=?UTF-8?B?Y2Fmw6k=?= and =?UTF-8?Q?caf=C3=A9_bar?=");
   });
   test("quoted-printable soft breaks and escapes", async () => {
-    const mail = await parseMail(raw(["Subject: QP", "Content-Type: text/plain; charset=utf-8", "Content-Transfer-Encoding: quoted-printable"], "a=3Db=\r\nc =E2=9C=93"));
+    const mail = await parseMail(
+      raw(["Subject: QP", "Content-Type: text/plain; charset=utf-8", "Content-Transfer-Encoding: quoted-printable"], "a=3Db=\r\nc =E2=9C=93"),
+    );
     expect(mail.text.trimEnd()).toBe("a=bc ✓");
   });
 });

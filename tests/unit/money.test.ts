@@ -162,7 +162,9 @@ describe("totals with tax on the subtotal", () => {
   test("properties: per-line rounding error is at most half a minor unit, totals add up", () => {
     fc.assert(
       fc.property(
-        fc.array(fc.record({ quantityMilli: fc.integer({ min: 1, max: 1_000_000 }), unitPriceMinor: fc.integer({ min: 0, max: 10_000_000 }) }), { maxLength: 20 }),
+        fc.array(fc.record({ quantityMilli: fc.integer({ min: 1, max: 1_000_000 }), unitPriceMinor: fc.integer({ min: 0, max: 10_000_000 }) }), {
+          maxLength: 20,
+        }),
         fc.integer({ min: 0, max: 5000 }),
         (lines, bp) => {
           const t = computeTotals(lines, bp);

@@ -7,7 +7,14 @@ import { groupOrders, supplierKey, type OrderPart } from "@/lib/jobs/order-list"
 // The sums below are worked by hand, in pence.
 
 let id = 0;
-const p = (jobNumber: number, designator: string, quantity: number, supplier: string | null, unitCostMinor: number | null, supplierPartNumber: string | null = null): OrderPart => ({
+const p = (
+  jobNumber: number,
+  designator: string,
+  quantity: number,
+  supplier: string | null,
+  unitCostMinor: number | null,
+  supplierPartNumber: string | null = null,
+): OrderPart => ({
   id: ++id,
   jobId: 100 + jobNumber,
   jobNumber,
@@ -59,7 +66,10 @@ describe("the order list", () => {
   });
 
   test("the CSV puts one part number on one row, quantities added, prices as exact decimals", () => {
-    const csv = orderGroupsToCsv(groupOrders(parts, true).filter((g) => g.key === "valve cellar"), "GBP");
+    const csv = orderGroupsToCsv(
+      groupOrders(parts, true).filter((g) => g.key === "valve cellar"),
+      "GBP",
+    );
     const rows = Papa.parse<Record<string, string>>(csv, { header: true }).data;
     expect(Object.keys(rows[0])).toEqual(["supplier", "supplier_part_number", "description", "quantity", "unit_cost", "line_total", "for"]);
     const vc = rows.find((r) => r.supplier_part_number === "VC-47-250")!;

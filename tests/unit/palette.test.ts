@@ -7,7 +7,10 @@ import { DARK, LIGHT, TOKENS, type Palette, type Token } from "@/lib/theme/palet
 
 const root = path.resolve(import.meta.dirname, "../..");
 const read = (p: string) => readFileSync(path.join(root, p), "utf8");
-const THEMES = [["light", LIGHT], ["dark", DARK]] as const;
+const THEMES = [
+  ["light", LIGHT],
+  ["dark", DARK],
+] as const;
 const lab = (hex: string) => rgbToOklab(hexToRgb(hex));
 const ratio = (p: Palette, a: Token, b: Token) => contrastRatio(hexToRgb(p[a]), hexToRgb(p[b]));
 
@@ -128,10 +131,14 @@ describe("red for danger alone, in the components", () => {
   test("the hazard colour appears only where it marks a danger", () => {
     const uses = all.filter((f) => /\b[a-z]+(?:-[a-z]+)?-hazard(?:-bg)?\b|C\.hazard|--gb-hazard/.test(read(f)));
     expect(uses.length).toBeGreaterThan(0);
-    expect(uses.filter((f) => !DANGER_FILES.has(f)), "hazard is for danger alone: use flag for errors and Remove, glow or a neutral for states").toEqual([]);
+    expect(
+      uses.filter((f) => !DANGER_FILES.has(f)),
+      "hazard is for danger alone: use flag for errors and Remove, glow or a neutral for states",
+    ).toEqual([]);
   });
   test("no stock colour utilities (text-red-600 and the like) anywhere in the UI", () => {
-    const stockClass = /\b(?:text|bg|border|fill|stroke|ring|outline|accent|from|to|via|decoration)-(?:red|orange|amber|yellow|lime|green|emerald|teal|cyan|sky|blue|indigo|violet|purple|fuchsia|pink|rose|slate|gray|zinc|neutral|stone)-\d{2,3}\b/;
+    const stockClass =
+      /\b(?:text|bg|border|fill|stroke|ring|outline|accent|from|to|via|decoration)-(?:red|orange|amber|yellow|lime|green|emerald|teal|cyan|sky|blue|indigo|violet|purple|fuchsia|pink|rose|slate|gray|zinc|neutral|stone)-\d{2,3}\b/;
     expect(all.filter((f) => stockClass.test(read(f)))).toEqual([]);
   });
 });

@@ -64,9 +64,25 @@ describe("reading a part's value and rating", () => {
   });
 });
 
-const part = (designator: string, kind: "paper" | "electrolytic" | "resistor" | "tube", texts: [string | null, string | null, string | null, string | null], extra = {}) => {
+const part = (
+  designator: string,
+  kind: "paper" | "electrolytic" | "resistor" | "tube",
+  texts: [string | null, string | null, string | null, string | null],
+  extra = {},
+) => {
   const [originalValue, originalRating, replacementValue, replacementRating] = texts;
-  return { designator, kind, originalValue, originalRating, replacementValue, replacementRating, state: "to-order" as const, supplier: null as string | null, ...readPartValues({ kind, originalValue, originalRating, replacementValue, replacementRating }), ...extra };
+  return {
+    designator,
+    kind,
+    originalValue,
+    originalRating,
+    replacementValue,
+    replacementRating,
+    state: "to-order" as const,
+    supplier: null as string | null,
+    ...readPartValues({ kind, originalValue, originalRating, replacementValue, replacementRating }),
+    ...extra,
+  };
 };
 
 describe("flags and sorting on the Parts tab", () => {
@@ -78,7 +94,10 @@ describe("flags and sorting on the Parts tab", () => {
   });
 
   test("a resistor rated below the one it replaces is a caution; equal or above is not", () => {
-    expect(partFlags(part("R7", "resistor", ["2.2 MΩ", "1 W", "2.2 MΩ", "1/2 W"]))[0]).toMatchObject({ level: "caution", message: expect.stringMatching(/0.5 W, below the original 1 W/) });
+    expect(partFlags(part("R7", "resistor", ["2.2 MΩ", "1 W", "2.2 MΩ", "1/2 W"]))[0]).toMatchObject({
+      level: "caution",
+      message: expect.stringMatching(/0.5 W, below the original 1 W/),
+    });
     expect(partFlags(part("R7", "resistor", ["2.2 MΩ", "1/2 W", "2.2 MΩ", "0.5 W"]))).toEqual([]);
   });
 

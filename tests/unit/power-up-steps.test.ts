@@ -57,6 +57,13 @@ describe("power-up steps", () => {
     expect(outcomeRefusal("passed", "  ", steps, 0.8)).not.toBeNull();
     expect(outcomeRefusal("passed", "Surge from the reformed filter; settled at 0.55 A.", steps, 0.8)).toBeNull();
     expect(outcomeRefusal("stopped", null, steps, 0.8)).toBeNull();
-    expect(outcomeRefusal("passed", null, steps.filter((s) => s.currentDrawn <= 0.8), 0.8)).toBeNull();
+    expect(
+      outcomeRefusal(
+        "passed",
+        null,
+        steps.filter((s) => s.currentDrawn <= 0.8),
+        0.8,
+      ),
+    ).toBeNull();
   });
 });

@@ -9,13 +9,11 @@ import { tidy } from "../../lib/calc/units";
 const anyDouble = fc.double({ noNaN: false });
 const benchRange = fc.double({ min: -1e6, max: 1e6, noNaN: true });
 /** Decimal ties and near-ties at p figures: n.5 / 10^k, nudged by a few ulps. */
-const nearTie = fc
-  .tuple(fc.integer({ min: 1, max: 999_999 }), fc.integer({ min: 0, max: 8 }), fc.integer({ min: -3, max: 3 }))
-  .map(([n, k, nudge]) => {
-    let x = (n + 0.5) / 10 ** k;
-    for (let i = 0; i < Math.abs(nudge); i++) x = nudge > 0 ? x + Number.EPSILON * x : x - Number.EPSILON * x;
-    return x;
-  });
+const nearTie = fc.tuple(fc.integer({ min: 1, max: 999_999 }), fc.integer({ min: 0, max: 8 }), fc.integer({ min: -3, max: 3 })).map(([n, k, nudge]) => {
+  let x = (n + 0.5) / 10 ** k;
+  for (let i = 0; i < Math.abs(nudge); i++) x = nudge > 0 ? x + Number.EPSILON * x : x - Number.EPSILON * x;
+  return x;
+});
 
 describe("toPrecision matches Number.prototype.toPrecision", () => {
   const cases = [1, 9.995, 9.9949999, 999.5, 999.4999, 1000, 4.7, 120, 122.8, 2.5, 0.5, 1.005, 12.345, 100, 99.95, -4.75, -0, 0, Infinity, NaN, 1e21, 5e-7];

@@ -5,8 +5,7 @@ import { publicOrigin } from "@/server/http/public-origin";
 
 // What Next hands a route behind a proxy: request.url is built from the listening address (localhost),
 // while the browser's host arrives in Host / X-Forwarded-Host and its scheme in X-Forwarded-Proto.
-const behindProxy = () =>
-  new Request("http://localhost:3000/api/auth/password-reset", { headers: { host: "bench.example", "x-forwarded-proto": "https" } });
+const behindProxy = () => new Request("http://localhost:3000/api/auth/password-reset", { headers: { host: "bench.example", "x-forwarded-proto": "https" } });
 
 describe("links that leave the app (README: GLOWBENCH_PUBLIC_URL, else the request's own origin)", () => {
   test("GLOWBENCH_PUBLIC_URL wins, trailing slash or not", () => {

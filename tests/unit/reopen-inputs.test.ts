@@ -10,7 +10,10 @@ test("saved SI inputs survive the URL and the form's text, capacitance included"
   const cases: [string, Record<string, unknown>][] = [
     ["bleeder", { capacitance: "32 uF", workingVoltage: "380" }],
     ["time-constant", { resistance: "220k", capacitance: "0.047 mfd", initialVoltage: "350 V" }],
-    ["supply-ripple", { loadCurrent: "60 mA", capacitance: "40 uF", rectifier: "full-wave", stages: [{ kind: "rc", resistance: "470", capacitance: "20 uF" }] }],
+    [
+      "supply-ripple",
+      { loadCurrent: "60 mA", capacitance: "40 uF", rectifier: "full-wave", stages: [{ kind: "rc", resistance: "470", capacitance: "20 uF" }] },
+    ],
   ];
   for (const [slug, typed] of cases) {
     const calc = getCalculator(slug)!;
@@ -26,6 +29,10 @@ test("saved SI inputs survive the URL and the form's text, capacitance included"
 
 test("numbers of other kinds and non-numbers are left alone", () => {
   const calc = getCalculator("time-constant")!;
-  expect(reopenInputs(calc.inputs, { resistance: 1000, capacitance: 1e-7, initialVoltage: 9 })).toEqual({ resistance: 1000, capacitance: "1e-7 F", initialVoltage: 9 });
+  expect(reopenInputs(calc.inputs, { resistance: 1000, capacitance: 1e-7, initialVoltage: 9 })).toEqual({
+    resistance: 1000,
+    capacitance: "1e-7 F",
+    initialVoltage: 9,
+  });
   expect(reopenInputs(calc.inputs, { capacitance: "47 uF" })).toEqual({ capacitance: "47 uF" });
 });

@@ -27,7 +27,12 @@ describe("supply-ripple form: stages with their own current and choke resistance
   });
 
   it("blank current and choke resistance are left out, so the calculator's stated defaults apply", () => {
-    const form = initialValues(calc.inputs, { loadCurrent: "60 mA", capacitance: "40 uF", rectifier: "full-wave", stages: [{ kind: "lc", inductance: "8 H", capacitance: "20 uF" }] });
+    const form = initialValues(calc.inputs, {
+      loadCurrent: "60 mA",
+      capacitance: "40 uF",
+      rectifier: "full-wave",
+      stages: [{ kind: "lc", inductance: "8 H", capacitance: "20 uF" }],
+    });
     const raw = toRaw(calc, form);
     expect(raw.stages).toEqual([{ kind: "lc", inductance: "8 H", capacitance: "20 uF" }]);
     const r = runCalculator(calc, raw);

@@ -13,7 +13,10 @@ afterAll(() => sqlite.close());
 
 describe("database", () => {
   test("migrations create every table of docs/PRODUCT.md's data section", () => {
-    const names = sqlite.prepare("select name from sqlite_master where type='table'").all().map((r) => (r as { name: string }).name);
+    const names = sqlite
+      .prepare("select name from sqlite_master where type='table'")
+      .all()
+      .map((r) => (r as { name: string }).name);
     for (const t of ["workshops", "users", "memberships", "invitations", "jobs", "parts", "readings", "calculations", "files", "log_entries"]) {
       expect(names).toContain(t);
     }

@@ -74,7 +74,10 @@ describe("the sweep of uploads whose row never committed", () => {
     put(name("b"), 2 * HOUR); // has a row
     put(name("c"), 60 * 1000); // orphan, but may still be mid-upload
     put("notes.txt", 2 * HOUR); // not an upload name
-    getDb().insert(files).values({ jobId, workshopId, storedName: name("b"), originalName: "b.jpg", type: "image/jpeg", size: 5, kind: "photo", hasThumbnail: false }).run();
+    getDb()
+      .insert(files)
+      .values({ jobId, workshopId, storedName: name("b"), originalName: "b.jpg", type: "image/jpeg", size: 5, kind: "photo", hasThumbnail: false })
+      .run();
 
     expect(await sweepOrphanUploads()).toEqual([name("a")]);
     expect(fs.readdirSync(up).sort()).toEqual([name("b"), name("c"), "notes.txt"].sort());

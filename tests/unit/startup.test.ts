@@ -8,7 +8,12 @@ import { afterAll, describe, expect, test } from "vitest";
 // port, and the payment stand-in not (a key is set). The upload sweep it starts needs a database.
 const dir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-startup-"));
 const saved = { ...process.env };
-Object.assign(process.env, { NEXT_RUNTIME: "nodejs", GLOWBENCH_DB: path.join(dir, "t.db"), GLOWBENCH_MAIL_DIR: path.join(dir, "mail"), STRIPE_SECRET_KEY: "sk_test_startup" });
+Object.assign(process.env, {
+  NEXT_RUNTIME: "nodejs",
+  GLOWBENCH_DB: path.join(dir, "t.db"),
+  GLOWBENCH_MAIL_DIR: path.join(dir, "mail"),
+  STRIPE_SECRET_KEY: "sk_test_startup",
+});
 delete process.env.SMTP_URL;
 afterAll(() => {
   process.env = saved;

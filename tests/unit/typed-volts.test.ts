@@ -19,7 +19,13 @@ describe("the typed voltage the danger banner follows", () => {
   });
 
   it("finds a voltage inside a list (a heater's) and reads engineering text, decimal commas and kV", () => {
-    const heaters = { lineVoltage: "", heaters: [{ voltage: "12,6", current: "150m" }, { voltage: "0.11 kV", current: "" }] };
+    const heaters = {
+      lineVoltage: "",
+      heaters: [
+        { voltage: "12,6", current: "150m" },
+        { voltage: "0.11 kV", current: "" },
+      ],
+    };
     expect(highestTypedVoltage(inputs("heater-string"), heaters)).toEqual({ label: "Heater 2 voltage", volts: 110 });
     expect(highestTypedVoltage(inputs("ohms-law"), { voltage: "-300" })?.volts).toBe(-300);
     expect(typedHazard(highestTypedVoltage(inputs("ohms-law"), { voltage: "-300" }))).toBe(true);

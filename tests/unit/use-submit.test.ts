@@ -4,7 +4,9 @@ import { dottedPath, fieldErrorsOf, readFailure } from "@/lib/client/submit-erro
 // The error body is docs/PRODUCT.md's route shape: { error: { message, fields } }, fields keyed by input path.
 describe("readFailure", () => {
   it("reads the message and every field message of a 400", () => {
-    const f = readFailure(400, { error: { message: "Check the marked fields.", fields: { email: "Enter an e-mail address.", "lines.0.description": "Describe the line." } } });
+    const f = readFailure(400, {
+      error: { message: "Check the marked fields.", fields: { email: "Enter an e-mail address.", "lines.0.description": "Describe the line." } },
+    });
     expect(f).toMatchObject({ ok: false, status: 400, message: "Check the marked fields." });
     expect(f.fields).toEqual({ email: "Enter an e-mail address.", "lines.0.description": "Describe the line." });
   });

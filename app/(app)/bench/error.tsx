@@ -6,9 +6,7 @@ export default function BenchError({ reset }: { error: Error & { digest?: string
   return (
     <div className="mx-auto flex min-h-[50vh] max-w-xl flex-col justify-center gap-4">
       <h1 className="text-title font-bold">This calculator tripped</h1>
-      <p className="text-muted">
-        Nothing you saved is affected. Try again, or go back to the Bench and open the calculator afresh.
-      </p>
+      <p className="text-muted">Nothing you saved is affected. Try again, or go back to the Bench and open the calculator afresh.</p>
       <div className="flex gap-4">
         <button type="button" onClick={reset} className="rounded-chip bg-glow px-4 py-2 font-bold text-glow-ink min-h-11">
           Try again

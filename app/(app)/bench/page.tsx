@@ -20,8 +20,8 @@ export default function BenchPage() {
       <p className="font-bold uppercase tracking-widest text-glow">The Bench</p>
       <h1 className="mt-2 text-display font-bold">Calculators that show their working</h1>
       <p className="mb-8 mt-3 max-w-3xl text-lead text-muted">
-        Type values the way you think of them (4k7, 47 µF, 250 V). Each answer comes with its formula, your numbers
-        substituted, and the handbook it comes from. No account needed to calculate.
+        Type values the way you think of them (4k7, 47 µF, 250 V). Each answer comes with its formula, your numbers substituted, and the handbook it comes from.
+        No account needed to calculate.
       </p>
       <BenchIndex entries={entries} />
     </>

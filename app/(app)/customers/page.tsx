@@ -32,12 +32,22 @@ export default async function CustomersPage({ searchParams }: Props) {
       <form role="search" method="get" className="flex flex-wrap items-end gap-3">
         <label className="flex min-w-0 flex-1 flex-col gap-1">
           <span className="font-bold">Find a customer</span>
-          <input type="search" name="q" defaultValue={q ?? ""} placeholder="Name, e-mail or phone" className="min-h-11 w-full rounded-chip border border-edge bg-panel px-3 py-2" />
+          <input
+            type="search"
+            name="q"
+            defaultValue={q ?? ""}
+            placeholder="Name, e-mail or phone"
+            className="min-h-11 w-full rounded-chip border border-edge bg-panel px-3 py-2"
+          />
         </label>
         <button type="submit" className="min-h-11 rounded-chip border border-rule bg-panel px-4 font-bold hover:bg-sunk">
           Search
         </button>
-        {!parsed.success ? <p role="alert" className="w-full font-bold text-flag">{parsed.error.issues[0].message}</p> : null}
+        {!parsed.success ? (
+          <p role="alert" className="w-full font-bold text-flag">
+            {parsed.error.issues[0].message}
+          </p>
+        ) : null}
       </form>
       {customers.length === 0 ? (
         q ? (
@@ -49,7 +59,10 @@ export default async function CustomersPage({ searchParams }: Props) {
         <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3" data-testid="customer-list">
           {customers.map((c) => (
             <li key={c.id}>
-              <Link href={`/customers/${c.id}`} className="flex h-full min-h-11 flex-col gap-1 rounded-card border border-rule bg-panel p-4 shadow-card hover:bg-sunk/40">
+              <Link
+                href={`/customers/${c.id}`}
+                className="flex h-full min-h-11 flex-col gap-1 rounded-card border border-rule bg-panel p-4 shadow-card hover:bg-sunk/40"
+              >
                 <span className="font-bold break-words">{c.name}</span>
                 {c.email || c.phone ? <span className="text-note text-muted break-all">{[c.email, c.phone].filter(Boolean).join(" · ")}</span> : null}
                 <span className="mt-auto text-note">

@@ -17,7 +17,10 @@ import { NotFoundError } from "@/lib/errors";
 import { parseId } from "@/lib/ids";
 import { getMember } from "@/server/auth/member";
 
-export const metadata: Metadata = { title: "Drills", description: "Bench problems made by the calculators, checked on the server, with the working and progress over time." };
+export const metadata: Metadata = {
+  title: "Drills",
+  description: "Bench problems made by the calculators, checked on the server, with the working and progress over time.",
+};
 
 type Props = { searchParams: Promise<{ member?: string }> };
 
@@ -44,8 +47,8 @@ export default async function DrillsPage({ searchParams }: Props) {
       <p className="font-bold uppercase tracking-widest text-glow">Drills</p>
       <h1 className="mt-2 text-display font-bold">Bench problems, checked by the calculators</h1>
       <p className="mb-8 mt-3 max-w-3xl text-lead text-muted">
-        Each drill is a problem made by one of the Bench&apos;s calculators. Answer the way you would write it at the bench (1k5, 250 mW);
-        the answer is checked on the server, and the working comes back step by step with the place this kind usually goes wrong.
+        Each drill is a problem made by one of the Bench&apos;s calculators. Answer the way you would write it at the bench (1k5, 250 mW); the answer is checked
+        on the server, and the working comes back step by step with the place this kind usually goes wrong.
       </p>
       {mentor ? <MentorView member={member} viewId={viewId} /> : <ApprenticeView member={member} progress={own} />}
       <section className="mt-10" aria-labelledby="kinds-title">

@@ -86,7 +86,9 @@ export default async function WorkshopPage() {
       {owner ? (
         <Card className="mt-6">
           <h2 className="mb-2 text-lead font-bold">Audit trail</h2>
-          <p className="mb-3 text-note text-muted">Membership, invitations, roles, password resets and changes to settings and charges, newest first. Only owners see this.</p>
+          <p className="mb-3 text-note text-muted">
+            Membership, invitations, roles, password resets and changes to settings and charges, newest first. Only owners see this.
+          </p>
           <AuditList events={listAuditEvents(member)} />
         </Card>
       ) : null}

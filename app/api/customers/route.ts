@@ -5,4 +5,6 @@ import { customerListQuerySchema, customerSchema } from "@/lib/customers/schemas
 
 export const GET = route({ query: customerListQuerySchema }, ({ member, query }) => NextResponse.json({ customers: listCustomers(member, query.q) }));
 
-export const POST = route({ role: "editJobs", body: customerSchema }, ({ member, body }) => NextResponse.json({ customer: createCustomer(member, body) }, { status: 201 }));
+export const POST = route({ role: "editJobs", body: customerSchema }, ({ member, body }) =>
+  NextResponse.json({ customer: createCustomer(member, body) }, { status: 201 }),
+);

@@ -23,11 +23,12 @@ export default function BreakdownChart({ inputs, outputs }: ChartProps) {
       title="Breakdown voltage against gap"
       caption={
         <>
-          The curve is where clean air between flat electrodes breaks down (a uniform field). Your working point ({kv(d.working.kv)} across{" "}
-          {mm(d.working.gap)}
+          The curve is where clean air between flat electrodes breaks down (a uniform field). Your working point ({kv(d.working.kv)} across {mm(d.working.gap)}
           {hasGap ? "" : ", the uniform-field minimum gap"}) is{" "}
           <strong className={arcs ? "text-hazard" : "text-ink"}>
-            {arcs ? "at or above the uniform-field breakdown voltage for this gap: it is expected to arc" : "on or below the uniform-field breakdown voltage for this gap"}
+            {arcs
+              ? "at or above the uniform-field breakdown voltage for this gap: it is expected to arc"
+              : "on or below the uniform-field breakdown voltage for this gap"}
           </strong>
           ; points, edges and dirt break down well below the curve.{" "}
           {d.standard !== undefined ? (
@@ -51,13 +52,32 @@ export default function BreakdownChart({ inputs, outputs }: ChartProps) {
           <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
           <XAxis dataKey="gap" type="number" domain={[0, "dataMax"]} tickFormatter={mm} tick={tick} stroke={C.muted} />
           <YAxis tickFormatter={kv} tick={tick} stroke={C.muted} width={64} />
-          <Tooltip formatter={(v) => kv(Number(v))} labelFormatter={(g) => mm(Number(g))} contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }} />
-          <ReferenceLine x={d.minimum} stroke={C.hazard} strokeDasharray="4 4" label={{ value: "Uniform-field minimum gap", fill: C.hazard, position: "insideTopLeft", fontSize: 13 }} />
+          <Tooltip
+            formatter={(v) => kv(Number(v))}
+            labelFormatter={(g) => mm(Number(g))}
+            contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
+          />
+          <ReferenceLine
+            x={d.minimum}
+            stroke={C.hazard}
+            strokeDasharray="4 4"
+            label={{ value: "Uniform-field minimum gap", fill: C.hazard, position: "insideTopLeft", fontSize: 13 }}
+          />
           {d.standard !== undefined ? (
-            <ReferenceLine x={d.standard} stroke={C.signal} strokeDasharray="8 3" label={{ value: "IEC 60664-1 clearance", fill: C.signal, position: "insideTopRight", fontSize: 13 }} />
+            <ReferenceLine
+              x={d.standard}
+              stroke={C.signal}
+              strokeDasharray="8 3"
+              label={{ value: "IEC 60664-1 clearance", fill: C.signal, position: "insideTopRight", fontSize: 13 }}
+            />
           ) : null}
           {d.recommended !== undefined && d.recommended !== d.standard ? (
-            <ReferenceLine x={d.recommended} stroke={C.ink} strokeDasharray="6 4" label={{ value: "Recommended clearance", fill: C.ink, position: "insideBottomRight", fontSize: 13 }} />
+            <ReferenceLine
+              x={d.recommended}
+              stroke={C.ink}
+              strokeDasharray="6 4"
+              label={{ value: "Recommended clearance", fill: C.ink, position: "insideBottomRight", fontSize: 13 }}
+            />
           ) : null}
           <Line type="monotone" dataKey="kv" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} name="Uniform-field breakdown" />
           <ReferenceDot x={d.working.gap} y={d.working.kv} r={7} fill={arcs ? C.hazard : C.signal} stroke={C.panel} strokeWidth={2} />

@@ -15,7 +15,10 @@ export const C = {
 
 export const tick = { fill: C.muted, fontSize: 13 };
 
-export const fmt = (unit: string, sig = 2) => (v: number) => formatQuantity(v, unit, sig);
+export const fmt =
+  (unit: string, sig = 2) =>
+  (v: number) =>
+    formatQuantity(v, unit, sig);
 
 /** A picture with a caption that says in words what it shows (its text alternative). */
 export function ChartFrame({ title, caption, children }: { title: string; caption: ReactNode; children: ReactNode }) {

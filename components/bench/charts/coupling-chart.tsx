@@ -34,11 +34,38 @@ export default function CouplingChart({ outputs, inputs }: ChartProps) {
           <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
           <XAxis dataKey="f" type="number" scale="log" domain={[lo, hi]} ticks={ticks} tickFormatter={hz} tick={tick} stroke={C.muted} />
           <YAxis type="number" domain={[-21, 3]} ticks={[-20, -15, -10, -6, -3, 0]} tickFormatter={db} tick={tick} stroke={C.muted} width={64} />
-          <Tooltip formatter={(v) => [db(Number(v)), "Reaching the grid"]} labelFormatter={(f) => hz(Number(f))} contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }} />
-          <ReferenceLine x={d.corner} stroke={C.signal} strokeDasharray="6 4" label={{ value: "Corner (−3 dB)", fill: C.signal, position: "insideBottomLeft", fontSize: 13, ...halo }} />
-          <ReferenceLine y={-3} stroke={C.muted} strokeDasharray="2 4" label={{ value: "−3 dB (71 %)", fill: C.muted, position: "insideBottomRight", fontSize: 13, ...halo }} />
-          <Line type="monotone" dataKey="db" name="Signal reaching the next grid" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false}
-            label={endLabel("Signal reaching the next grid", C.glow, d.points.map((p) => p.db), 3)} />
+          <Tooltip
+            formatter={(v) => [db(Number(v)), "Reaching the grid"]}
+            labelFormatter={(f) => hz(Number(f))}
+            contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
+          />
+          <ReferenceLine
+            x={d.corner}
+            stroke={C.signal}
+            strokeDasharray="6 4"
+            label={{ value: "Corner (−3 dB)", fill: C.signal, position: "insideBottomLeft", fontSize: 13, ...halo }}
+          />
+          <ReferenceLine
+            y={-3}
+            stroke={C.muted}
+            strokeDasharray="2 4"
+            label={{ value: "−3 dB (71 %)", fill: C.muted, position: "insideBottomRight", fontSize: 13, ...halo }}
+          />
+          <Line
+            type="monotone"
+            dataKey="db"
+            name="Signal reaching the next grid"
+            stroke={C.glow}
+            strokeWidth={3}
+            dot={false}
+            isAnimationActive={false}
+            label={endLabel(
+              "Signal reaching the next grid",
+              C.glow,
+              d.points.map((p) => p.db),
+              3,
+            )}
+          />
           <ReferenceDot x={d.corner} y={-10 * Math.log10(2)} r={6} fill={C.signal} stroke={C.panel} strokeWidth={2} />
         </LineChart>
       </ResponsiveContainer>

@@ -33,7 +33,10 @@ export default function DialChart({ inputs, outputs }: ChartProps) {
   const signal = d.marks.find((m) => m.name === "Signal")!;
   const imageDb = d.response?.find((p) => p.f === image.f)?.db;
   // Without a Q there is no curve: a flat, unlabelled path only sets the scale, and is not drawn.
-  const data = d.response ?? [{ f: d.span[0], db: 0 }, { f: d.span[1], db: 0 }];
+  const data = d.response ?? [
+    { f: d.span[0], db: 0 },
+    { f: d.span[1], db: 0 },
+  ];
   const [a, b] = signal.f < image.f ? [signal.f, image.f] : [image.f, signal.f];
   return (
     <ChartFrame
@@ -57,17 +60,54 @@ export default function DialChart({ inputs, outputs }: ChartProps) {
       <ResponsiveContainer width="100%" height="100%">
         <LineChart data={data} margin={{ top: 22, right: 16, bottom: 4, left: 8 }}>
           <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
-          <XAxis dataKey="f" type="number" domain={d.span} ticks={dialTicks(d.span)} tickFormatter={(v) => formatQuantity(v, "Hz", 3)} tick={tick} stroke={C.muted} />
-          <YAxis type="number" domain={[FLOOR, 5]} ticks={[-60, -40, -20, 0]} tickFormatter={db} tick={tick} stroke={C.muted} width={56} hide={!d.response} allowDataOverflow />
+          <XAxis
+            dataKey="f"
+            type="number"
+            domain={d.span}
+            ticks={dialTicks(d.span)}
+            tickFormatter={(v) => formatQuantity(v, "Hz", 3)}
+            tick={tick}
+            stroke={C.muted}
+          />
+          <YAxis
+            type="number"
+            domain={[FLOOR, 5]}
+            ticks={[-60, -40, -20, 0]}
+            tickFormatter={db}
+            tick={tick}
+            stroke={C.muted}
+            width={56}
+            hide={!d.response}
+            allowDataOverflow
+          />
           <ReferenceArea x1={a} x2={b} fill={C.rule} fillOpacity={0.35} />
           {d.marks.map((m) => (
-            <ReferenceLine key={m.name} x={m.f} stroke={COLOUR[m.name]} strokeWidth={2} strokeDasharray={m.name === "Image" ? "6 4" : undefined} label={{ value: m.name, fill: COLOUR[m.name], position: "top", fontSize: 13, fontWeight: 700, ...halo }} />
+            <ReferenceLine
+              key={m.name}
+              x={m.f}
+              stroke={COLOUR[m.name]}
+              strokeWidth={2}
+              strokeDasharray={m.name === "Image" ? "6 4" : undefined}
+              label={{ value: m.name, fill: COLOUR[m.name], position: "top", fontSize: 13, fontWeight: 700, ...halo }}
+            />
           ))}
           {d.response ? (
             <>
-              <Tooltip formatter={(v) => [db(Number(v)), "Front end passes"]} labelFormatter={(f) => hz(Number(f))} contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }} />
-              <Line type="monotone" dataKey="db" name="Front end's response" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false}
-                label={lineLabel(`One tuned circuit, Q ${d.q}`, C.glow, d.response.length - 1)} />
+              <Tooltip
+                formatter={(v) => [db(Number(v)), "Front end passes"]}
+                labelFormatter={(f) => hz(Number(f))}
+                contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
+              />
+              <Line
+                type="monotone"
+                dataKey="db"
+                name="Front end's response"
+                stroke={C.glow}
+                strokeWidth={3}
+                dot={false}
+                isAnimationActive={false}
+                label={lineLabel(`One tuned circuit, Q ${d.q}`, C.glow, d.response.length - 1)}
+              />
               {imageDb !== undefined ? <ReferenceDot x={image.f} y={Math.max(imageDb, FLOOR)} r={6} fill={C.ink} stroke={C.panel} strokeWidth={2} /> : null}
             </>
           ) : (

@@ -33,9 +33,20 @@ export default function DischargeChart({ kind, inputs, outputs }: ChartProps) {
             contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
           />
           {/* A reference line in the neutral signal colour: green would read as "safe below here", which no limit is. */}
-          <ReferenceLine y={d.safe} stroke={C.signal} strokeDasharray="6 4" strokeWidth={2} label={{ value: `${d.safeLabel} (${formatQuantity(d.safe, "V")})`, fill: C.signal, position: "insideTopRight", fontSize: 13 }} />
+          <ReferenceLine
+            y={d.safe}
+            stroke={C.signal}
+            strokeDasharray="6 4"
+            strokeWidth={2}
+            label={{ value: `${d.safeLabel} (${formatQuantity(d.safe, "V")})`, fill: C.signal, position: "insideTopRight", fontSize: 13 }}
+          />
           {d.deadline !== undefined ? (
-            <ReferenceLine x={d.deadline} stroke={C.hazard} strokeDasharray="4 4" label={{ value: "Time allowed", fill: C.hazard, position: "insideTopLeft", fontSize: 13 }} />
+            <ReferenceLine
+              x={d.deadline}
+              stroke={C.hazard}
+              strokeDasharray="4 4"
+              label={{ value: "Time allowed", fill: C.hazard, position: "insideTopLeft", fontSize: 13 }}
+            />
           ) : null}
           <Line type="monotone" dataKey="v" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} name="Voltage" />
           <ReferenceDot x={d.tSafe} y={d.safe} r={6} fill={late ? C.hazard : C.signal} stroke={C.panel} strokeWidth={2} />

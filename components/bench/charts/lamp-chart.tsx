@@ -24,12 +24,13 @@ export default function LampChart({ inputs, outputs }: ChartProps) {
       title="Current through the lamp, by the set's power"
       caption={
         <>
-          What a set of each power draws from {formatQuantity(d.lineVoltage, "V")} mains through lamps of common sizes (thin lines), through your {yours.label} (thick
-          line), and with no lamp at all (dashed). Once its filament is hot, a lamp passes no more than its rated current however much the set draws: your lamp&apos;s{" "}
-          <strong className="text-ink">{formatQuantity(d.maxCurrent, "A")}</strong> with a dead short in the set (the dotted line).{" "}
+          What a set of each power draws from {formatQuantity(d.lineVoltage, "V")} mains through lamps of common sizes (thin lines), through your {yours.label}{" "}
+          (thick line), and with no lamp at all (dashed). Once its filament is hot, a lamp passes no more than its rated current however much the set draws:
+          your lamp&apos;s <strong className="text-ink">{formatQuantity(d.maxCurrent, "A")}</strong> with a dead short in the set (the dotted line).{" "}
           {d.set ? (
             <>
-              The dot is your {watts(d.set.power)} set: about <strong className="text-ink">{formatQuantity(d.set.current, "A")}</strong>, an estimate with the set taken as a fixed resistance.
+              The dot is your {watts(d.set.power)} set: about <strong className="text-ink">{formatQuantity(d.set.current, "A")}</strong>, an estimate with the
+              set taken as a fixed resistance.
             </>
           ) : (
             <>Enter the set&apos;s power to mark it.</>
@@ -48,7 +49,12 @@ export default function LampChart({ inputs, outputs }: ChartProps) {
             labelFormatter={(p) => `Set of ${watts(Number(p))}`}
             contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
           />
-          <ReferenceLine y={d.maxCurrent} stroke={C.ink} strokeDasharray="2 4" label={{ value: `Dead short, ${yours.label}`, fill: C.ink, position: "insideBottomLeft", fontSize: 13, ...halo }} />
+          <ReferenceLine
+            y={d.maxCurrent}
+            stroke={C.ink}
+            strokeDasharray="2 4"
+            label={{ value: `Dead short, ${yours.label}`, fill: C.ink, position: "insideBottomLeft", fontSize: 13, ...halo }}
+          />
           {d.lines.map((l) => {
             const alone = l.lampPower === null;
             const color = alone ? C.signal : l.yours ? C.glow : C.muted;
@@ -63,7 +69,12 @@ export default function LampChart({ inputs, outputs }: ChartProps) {
                 strokeDasharray={alone ? "6 4" : undefined}
                 dot={false}
                 isAnimationActive={false}
-                label={endLabel(l.label, color, d.points.map((p) => p[l.key]), yMax)}
+                label={endLabel(
+                  l.label,
+                  color,
+                  d.points.map((p) => p[l.key]),
+                  yMax,
+                )}
               />
             );
           })}

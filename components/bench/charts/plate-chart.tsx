@@ -34,7 +34,16 @@ export default function PlateChart({ inputs, outputs }: ChartProps) {
         <LineChart margin={{ top: 10, right: 16, bottom: 4, left: 8 }}>
           <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
           <XAxis dataKey="ep" type="number" domain={[0, Math.ceil(d.maxEp)]} tickFormatter={volts} tick={tick} stroke={C.muted} allowDataOverflow />
-          <YAxis dataKey="ip" type="number" domain={[0, Number(d.maxIpMa.toPrecision(2))]} tickFormatter={ma} tick={tick} stroke={C.muted} width={64} allowDataOverflow />
+          <YAxis
+            dataKey="ip"
+            type="number"
+            domain={[0, Number(d.maxIpMa.toPrecision(2))]}
+            tickFormatter={ma}
+            tick={tick}
+            stroke={C.muted}
+            width={64}
+            allowDataOverflow
+          />
           {d.curves.map((c, i) => (
             <Line
               key={c.eg}

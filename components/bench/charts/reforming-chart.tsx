@@ -49,9 +49,22 @@ export default function ReformingChart({ inputs, outputs }: ChartProps) {
             labelFormatter={(t) => `From ${minutes(Number(t))}`}
             contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
           />
-          <ReferenceLine y={d.rated} stroke={C.ink} strokeDasharray="6 4" label={{ value: `Rated voltage (${formatQuantity(d.rated, "V")})`, fill: C.ink, position: "insideTopLeft", fontSize: 13, ...halo }} />
-          <Line type="stepAfter" dataKey="v" name="Voltage applied" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false}
-            label={lineLabel("Voltage applied", C.glow, 3, "start")} />
+          <ReferenceLine
+            y={d.rated}
+            stroke={C.ink}
+            strokeDasharray="6 4"
+            label={{ value: `Rated voltage (${formatQuantity(d.rated, "V")})`, fill: C.ink, position: "insideTopLeft", fontSize: 13, ...halo }}
+          />
+          <Line
+            type="stepAfter"
+            dataKey="v"
+            name="Voltage applied"
+            stroke={C.glow}
+            strokeWidth={3}
+            dot={false}
+            isAnimationActive={false}
+            label={lineLabel("Voltage applied", C.glow, 3, "start")}
+          />
         </LineChart>
       </ResponsiveContainer>
     </ChartFrame>

@@ -47,7 +47,9 @@ export default function RippleChart({ inputs, outputs }: ChartProps) {
             </li>
           ))}
         </ul>
-        <figcaption className="mt-2 text-note text-muted">The bars use a log scale: every tenfold drop in ripple shortens a bar by the same length. Add a stage to see what it removes.</figcaption>
+        <figcaption className="mt-2 text-note text-muted">
+          The bars use a log scale: every tenfold drop in ripple shortens a bar by the same length. Add a stage to see what it removes.
+        </figcaption>
       </figure>
     </div>
   );

@@ -20,20 +20,41 @@ export interface ReadingChoice {
   label: string;
 }
 
-
 export function readingText(r: NonNullable<CandidateView["reading"]>): string {
   return `${r.designator}: ${r.measured === null ? "open" : formatQuantity(r.measured, r.unit)}`;
 }
 
-function EvidenceForm({ url, candidate, readings, onClose }: { url: string; candidate: CandidateView; readings: readonly ReadingChoice[]; onClose: () => void }) {
+function EvidenceForm({
+  url,
+  candidate,
+  readings,
+  onClose,
+}: {
+  url: string;
+  candidate: CandidateView;
+  readings: readonly ReadingChoice[];
+  onClose: () => void;
+}) {
   const defaults = { evidence: candidate.evidence ?? "", readingId: candidate.readingId ? String(candidate.readingId) : "" };
-  const { form, onSubmit, formError } = useRecordForm<typeof defaults, typeof candidateUpdateSchema>(candidateUpdateSchema, { url, method: "PATCH", defaults, onDone: onClose });
+  const { form, onSubmit, formError } = useRecordForm<typeof defaults, typeof candidateUpdateSchema>(candidateUpdateSchema, {
+    url,
+    method: "PATCH",
+    defaults,
+    onDone: onClose,
+  });
   const { errors, isSubmitting } = form.formState;
   const err = (n: string) => fieldError(errors as Record<string, unknown>, n);
   const id = (n: string) => `cand-${candidate.id}-${n}`;
   return (
     <form onSubmit={onSubmit} noValidate aria-label={`Evidence for ${candidate.description}`} className="mt-2 grid gap-x-3 sm:grid-cols-2">
-      <TextareaField id={id("evidence")} label="Evidence" rows={2} placeholder="Substituted a known-good tube: no change" error={err("evidence")} {...form.register("evidence")} />
+      <TextareaField
+        id={id("evidence")}
+        label="Evidence"
+        rows={2}
+        placeholder="Substituted a known-good tube: no change"
+        error={err("evidence")}
+        {...form.register("evidence")}
+      />
       <SelectField
         id={id("reading")}
         label="Or a reading"
@@ -43,16 +64,34 @@ function EvidenceForm({ url, candidate, readings, onClose }: { url: string; cand
         {...form.register("readingId")}
       />
       <div className="flex flex-wrap items-center gap-3 sm:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>Save evidence</Button>
-        <Button type="button" variant="secondary" onClick={onClose}>Cancel</Button>
-        <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
+        <Button type="submit" disabled={isSubmitting}>
+          Save evidence
+        </Button>
+        <Button type="button" variant="secondary" onClick={onClose}>
+          Cancel
+        </Button>
+        <p role="alert" aria-live="polite" className="font-bold text-flag">
+          {formError ?? ""}
+        </p>
       </div>
     </form>
   );
 }
 
 /** One suspect: its place in the test order, its status as three buttons, and the evidence for it. */
-export function CandidateItem({ jobId, faultId, candidate, readings, next }: { jobId: number; faultId: number; candidate: CandidateView; readings: readonly ReadingChoice[]; next: boolean }) {
+export function CandidateItem({
+  jobId,
+  faultId,
+  candidate,
+  readings,
+  next,
+}: {
+  jobId: number;
+  faultId: number;
+  candidate: CandidateView;
+  readings: readonly ReadingChoice[];
+  next: boolean;
+}) {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
   const [error, setError] = useState<string | null>(null);
@@ -86,7 +125,11 @@ export function CandidateItem({ jobId, faultId, candidate, readings, next }: { j
       ) : null}
       <div className="mt-2 flex flex-wrap items-center gap-2">
         {/* One control with three positions: the pressed one is the candidate's status. */}
-        <div role="group" aria-label={`Status of ${c.description}`} className="grid w-full grid-cols-3 overflow-hidden rounded-chip border border-edge sm:inline-grid sm:w-auto">
+        <div
+          role="group"
+          aria-label={`Status of ${c.description}`}
+          className="grid w-full grid-cols-3 overflow-hidden rounded-chip border border-edge sm:inline-grid sm:w-auto"
+        >
           {FAULT_CANDIDATE_STATUSES.map((s) => {
             const on = c.status === s;
             return (
@@ -104,12 +147,21 @@ export function CandidateItem({ jobId, faultId, candidate, readings, next }: { j
           })}
         </div>
         {!editing ? (
-          <Button type="button" variant="quiet" onClick={() => setEditing(true)} aria-label={`${c.evidence || c.reading ? "Edit" : "Add"} evidence for ${c.description}`}>
+          <Button
+            type="button"
+            variant="quiet"
+            onClick={() => setEditing(true)}
+            aria-label={`${c.evidence || c.reading ? "Edit" : "Add"} evidence for ${c.description}`}
+          >
             {c.evidence || c.reading ? "Edit evidence" : "Add evidence"}
           </Button>
         ) : null}
       </div>
-      {error ? <p role="alert" className="mt-1 text-note font-bold text-flag">{error}</p> : null}
+      {error ? (
+        <p role="alert" className="mt-1 text-note font-bold text-flag">
+          {error}
+        </p>
+      ) : null}
       {editing ? <EvidenceForm url={url} candidate={c} readings={readings} onClose={() => setEditing(false)} /> : null}
     </li>
   );

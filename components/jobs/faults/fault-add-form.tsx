@@ -15,11 +15,30 @@ export function FaultAddForm({ jobId }: { jobId: number }) {
   const err = (n: string) => fieldError(errors as Record<string, unknown>, n);
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Add a fault" className="grid gap-x-3 sm:grid-cols-[2fr_1fr]">
-      <Field id="fault-symptom" label="Symptom" placeholder="No vertical deflection: a bright horizontal line" autoComplete="off" error={err("symptom")} {...form.register("symptom")} />
-      <Field id="fault-section" label="Section" placeholder="Vertical sweep" autoComplete="off" hint="Where it points, if you can tell" error={err("section")} {...form.register("section")} />
+      <Field
+        id="fault-symptom"
+        label="Symptom"
+        placeholder="No vertical deflection: a bright horizontal line"
+        autoComplete="off"
+        error={err("symptom")}
+        {...form.register("symptom")}
+      />
+      <Field
+        id="fault-section"
+        label="Section"
+        placeholder="Vertical sweep"
+        autoComplete="off"
+        hint="Where it points, if you can tell"
+        error={err("section")}
+        {...form.register("section")}
+      />
       <div className="flex flex-wrap items-center gap-3 sm:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>Add fault</Button>
-        <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
+        <Button type="submit" disabled={isSubmitting}>
+          Add fault
+        </Button>
+        <p role="alert" aria-live="polite" className="font-bold text-flag">
+          {formError ?? ""}
+        </p>
       </div>
     </form>
   );

@@ -13,12 +13,22 @@ export function FaultCard({ jobId, fault, readings, canAdd }: { jobId: number; f
   const next = fault.state === "open" ? nextCandidate(ordered) : undefined;
   const hasCause = ordered.some((c) => c.status === "cause");
   return (
-    <article className="rounded-card border border-rule bg-panel p-4 shadow-card sm:p-6" data-testid={`fault-${fault.id}`} aria-labelledby={`fault-${fault.id}-h`}>
+    <article
+      className="rounded-card border border-rule bg-panel p-4 shadow-card sm:p-6"
+      data-testid={`fault-${fault.id}`}
+      aria-labelledby={`fault-${fault.id}-h`}
+    >
       <header className="flex flex-wrap items-start justify-between gap-x-4 gap-y-2">
         <div className="min-w-0">
-          <h3 id={`fault-${fault.id}-h`} className="text-lead font-bold">{fault.symptom}</h3>
+          <h3 id={`fault-${fault.id}-h`} className="text-lead font-bold">
+            {fault.symptom}
+          </h3>
           <p className="text-note text-muted">
-            {fault.section ? <>Points to <strong className="text-ink">{fault.section}</strong> · </> : null}
+            {fault.section ? (
+              <>
+                Points to <strong className="text-ink">{fault.section}</strong> ·{" "}
+              </>
+            ) : null}
             noted {formatDateTime(fault.createdAt)}
           </p>
         </div>
@@ -41,7 +51,9 @@ export function FaultCard({ jobId, fault, readings, canAdd }: { jobId: number; f
           {hasCause || fault.resolution ? <ResolutionForm jobId={jobId} faultId={fault.id} resolution={fault.resolution} /> : null}
         </div>
       ) : fault.resolution ? (
-        <p className="mt-3"><strong>Resolution:</strong> {fault.resolution}</p>
+        <p className="mt-3">
+          <strong>Resolution:</strong> {fault.resolution}
+        </p>
       ) : null}
     </article>
   );

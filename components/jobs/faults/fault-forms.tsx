@@ -30,8 +30,12 @@ export function CandidateAddForm({ jobId, faultId }: { jobId: number; faultId: n
         {...form.register("description")}
       />
       <div className="flex flex-wrap items-center gap-3 pt-0 sm:pt-7">
-        <Button type="submit" disabled={isSubmitting}>Add candidate</Button>
-        <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
+        <Button type="submit" disabled={isSubmitting}>
+          Add candidate
+        </Button>
+        <p role="alert" aria-live="polite" className="font-bold text-flag">
+          {formError ?? ""}
+        </p>
       </div>
     </form>
   );
@@ -58,8 +62,12 @@ export function ResolutionForm({ jobId, faultId, resolution }: { jobId: number; 
         {...form.register("resolution")}
       />
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" disabled={isSubmitting || !isDirty}>{!isDirty && resolution ? "Resolution saved" : "Save resolution"}</Button>
-        <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
+        <Button type="submit" disabled={isSubmitting || !isDirty}>
+          {!isDirty && resolution ? "Resolution saved" : "Save resolution"}
+        </Button>
+        <p role="alert" aria-live="polite" className="font-bold text-flag">
+          {formError ?? ""}
+        </p>
       </div>
     </form>
   );

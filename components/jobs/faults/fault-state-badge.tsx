@@ -15,7 +15,11 @@ export const STATE_HINT: Record<FaultState, string> = {
 
 export function FaultStateBadge({ state }: { state: FaultState }) {
   return (
-    <span className={`whitespace-nowrap rounded-full border px-2.5 py-0.5 text-note font-bold ${STATE_TONE[state]}`} data-testid="fault-state" data-state={state}>
+    <span
+      className={`whitespace-nowrap rounded-full border px-2.5 py-0.5 text-note font-bold ${STATE_TONE[state]}`}
+      data-testid="fault-state"
+      data-state={state}
+    >
       {FAULT_STATE_LABELS[state]}
     </span>
   );

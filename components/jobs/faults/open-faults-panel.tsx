@@ -4,7 +4,13 @@ import type { FaultState } from "@/lib/vocabulary";
 import { FaultStateBadge } from "./fault-state-badge";
 
 /** The Overview's short list of faults not yet fixed, each linking to the Faults tab. Nothing shows when all are fixed. */
-export function OpenFaultsPanel({ jobId, faults }: { jobId: number; faults: readonly { id: number; symptom: string; state: FaultState; candidates: readonly { status: string }[] }[] }) {
+export function OpenFaultsPanel({
+  jobId,
+  faults,
+}: {
+  jobId: number;
+  faults: readonly { id: number; symptom: string; state: FaultState; candidates: readonly { status: string }[] }[];
+}) {
   const open = faults.filter((f) => f.state !== "fixed");
   return (
     <Card>
@@ -19,7 +25,11 @@ export function OpenFaultsPanel({ jobId, faults }: { jobId: number; faults: read
                   <span className="min-w-0 font-bold">{f.symptom}</span>
                   <FaultStateBadge state={f.state} />
                 </Link>
-                {f.state === "open" ? <p className="text-note text-muted">{left ? `${left} ${left === 1 ? "candidate" : "candidates"} still to test` : "No candidates listed yet"}</p> : null}
+                {f.state === "open" ? (
+                  <p className="text-note text-muted">
+                    {left ? `${left} ${left === 1 ? "candidate" : "candidates"} still to test` : "No candidates listed yet"}
+                  </p>
+                ) : null}
               </li>
             );
           })}
@@ -27,7 +37,9 @@ export function OpenFaultsPanel({ jobId, faults }: { jobId: number; faults: read
       ) : (
         <p className="text-muted" data-testid="no-open-faults">
           {faults.length ? "Every fault noted is fixed." : "No faults noted."}{" "}
-          <Link href={`/jobs/${jobId}/faults`} className="font-bold text-signal underline-offset-4 hover:underline">Faults</Link>
+          <Link href={`/jobs/${jobId}/faults`} className="font-bold text-signal underline-offset-4 hover:underline">
+            Faults
+          </Link>
         </p>
       )}
     </Card>

@@ -24,8 +24,8 @@ export function CurrentChartSlot({ steps, stopCurrent }: CurrentChartProps) {
         {stopCurrent !== null ? (
           <>
             The dashed line is the stop current of {formatQuantity(stopCurrent, "A")}, where this session is switched off;{" "}
-            {over ? <strong className="text-hazard">{over === 1 ? "one step went" : `${over} steps went`} above it.</strong> : "no step went above it."}{" "}
-            Staying under it says only that the set drew less than you chose to allow.
+            {over ? <strong className="text-hazard">{over === 1 ? "one step went" : `${over} steps went`} above it.</strong> : "no step went above it."} Staying
+            under it says only that the set drew less than you chose to allow.
           </>
         ) : null}
       </figcaption>

@@ -48,7 +48,16 @@ export default function CurrentChart({ steps, stopCurrent }: CurrentChartProps) 
             />
           </>
         ) : null}
-        <Line dataKey="currentDrawn" type="linear" stroke={C.glow} strokeWidth={2} dot={<StepDot />} activeDot={false} isAnimationActive={false} name="Current drawn" />
+        <Line
+          dataKey="currentDrawn"
+          type="linear"
+          stroke={C.glow}
+          strokeWidth={2}
+          dot={<StepDot />}
+          activeDot={false}
+          isAnimationActive={false}
+          name="Current drawn"
+        />
       </LineChart>
     </ResponsiveContainer>
   );

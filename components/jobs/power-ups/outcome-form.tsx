@@ -13,7 +13,17 @@ type OutcomeForm = { outcome: PowerUpOutcome; reason: string };
  * How the session ended. Passing a session with a step over its stop current needs a reason (the same
  * rule the server keeps, from lib/jobs/power-up-steps.ts); stopping always asks what stopped it.
  */
-export function OutcomeForm({ jobId, sessionId, steps, stopCurrent }: { jobId: number; sessionId: number; steps: readonly StepFigures[]; stopCurrent: number | null }) {
+export function OutcomeForm({
+  jobId,
+  sessionId,
+  steps,
+  stopCurrent,
+}: {
+  jobId: number;
+  sessionId: number;
+  steps: readonly StepFigures[];
+  stopCurrent: number | null;
+}) {
   const schema = powerUpOutcomeSchema.superRefine((v, ctx) => {
     const refusal = outcomeRefusal(v.outcome, v.reason, steps, stopCurrent);
     if (refusal) ctx.addIssue({ code: "custom", path: ["reason"], message: refusal });
@@ -39,9 +49,15 @@ export function OutcomeForm({ jobId, sessionId, steps, stopCurrent }: { jobId: n
         {...form.register("reason")}
       />
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" disabled={isSubmitting} onClick={() => form.setValue("outcome", "passed")}>Mark passed</Button>
-        <Button type="submit" variant="secondary" disabled={isSubmitting} onClick={() => form.setValue("outcome", "stopped")}>Stop the session</Button>
-        <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
+        <Button type="submit" disabled={isSubmitting} onClick={() => form.setValue("outcome", "passed")}>
+          Mark passed
+        </Button>
+        <Button type="submit" variant="secondary" disabled={isSubmitting} onClick={() => form.setValue("outcome", "stopped")}>
+          Stop the session
+        </Button>
+        <p role="alert" aria-live="polite" className="font-bold text-flag">
+          {formError ?? ""}
+        </p>
       </div>
     </form>
   );

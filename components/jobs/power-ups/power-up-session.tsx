@@ -31,7 +31,12 @@ function seriesLampHref(s: PowerUpView): string {
 }
 
 function OutcomeBadge({ outcome }: { outcome: PowerUpOutcome | null }) {
-  const tone = outcome === "passed" ? "border-ok/40 bg-ok-bg text-ok" : outcome === "stopped" ? "border-caution/40 bg-caution-bg text-caution" : "border-glow/40 bg-glow-bg text-glow";
+  const tone =
+    outcome === "passed"
+      ? "border-ok/40 bg-ok-bg text-ok"
+      : outcome === "stopped"
+        ? "border-caution/40 bg-caution-bg text-caution"
+        : "border-glow/40 bg-glow-bg text-glow";
   return (
     <span className={`whitespace-nowrap rounded-full border px-2.5 py-0.5 text-note font-bold ${tone}`} data-testid="power-up-outcome">
       {outcome ? POWER_UP_OUTCOME_LABELS[outcome] : "Under way"}
@@ -45,7 +50,11 @@ export function PowerUpSession({ jobId, session, number, canAdd }: { jobId: numb
   const figures = session.steps.map((s) => ({ supplyVoltage: s.supplyVoltage, currentDrawn: s.currentDrawn }));
   const open = session.outcome === null;
   return (
-    <article className="rounded-card border border-rule bg-panel p-4 shadow-card sm:p-6" data-testid={`power-up-${session.id}`} aria-labelledby={`pu-${session.id}-h`}>
+    <article
+      className="rounded-card border border-rule bg-panel p-4 shadow-card sm:p-6"
+      data-testid={`power-up-${session.id}`}
+      aria-labelledby={`pu-${session.id}-h`}
+    >
       <header className="flex flex-wrap items-start justify-between gap-x-4 gap-y-2">
         <div className="min-w-0">
           <h3 id={`pu-${session.id}-h`} className="text-lead font-bold">
@@ -56,7 +65,8 @@ export function PowerUpSession({ jobId, session, number, canAdd }: { jobId: numb
             {author ? ` by ${author}` : ""}
             {session.stopCurrent !== null ? (
               <>
-                {" "}· stop at <span className="font-mono font-bold text-ink">{A(session.stopCurrent)}</span>
+                {" "}
+                · stop at <span className="font-mono font-bold text-ink">{A(session.stopCurrent)}</span>
               </>
             ) : null}
           </p>
@@ -90,7 +100,9 @@ export function PowerUpSession({ jobId, session, number, canAdd }: { jobId: numb
             <ButtonLink href={seriesLampHref(session)} variant="secondary" className="self-start" data-testid="series-lamp-link">
               Series lamp on the Bench ↗
             </ButtonLink>
-            <p className="text-note text-muted">What a {formatQuantity(session.lampPower, "W")} lamp lets through, with this session&rsquo;s figures filled in.</p>
+            <p className="text-note text-muted">
+              What a {formatQuantity(session.lampPower, "W")} lamp lets through, with this session&rsquo;s figures filled in.
+            </p>
           </div>
         ) : null}
         {open && canAdd ? (

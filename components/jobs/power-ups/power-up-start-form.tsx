@@ -64,7 +64,15 @@ export function PowerUpStartForm({ jobId }: { jobId: number }) {
           <Field id="pu-lamp" label="Lamp wattage" placeholder="100 W" suffix="W" autoComplete="off" error={err("lampPower")} {...form.register("lampPower")} />
         ) : null}
         {limiter === "limited-supply" ? (
-          <Field id="pu-limit" label="Current limit" placeholder="500 mA" suffix="A" autoComplete="off" error={err("currentLimit")} {...form.register("currentLimit")} />
+          <Field
+            id="pu-limit"
+            label="Current limit"
+            placeholder="500 mA"
+            suffix="A"
+            autoComplete="off"
+            error={err("currentLimit")}
+            {...form.register("currentLimit")}
+          />
         ) : null}
         <Field
           id="pu-stop"
@@ -91,14 +99,20 @@ export function PowerUpStartForm({ jobId }: { jobId: number }) {
         </ul>
         {undone.length ? (
           <p className="mt-2 rounded-chip border border-caution/50 bg-caution-bg px-3 py-2 text-note" data-testid="checklist-undone">
-            <strong className="text-caution">Not done yet: {undone.length} of {POWER_UP_CHECKLIST.length}. </strong>
+            <strong className="text-caution">
+              Not done yet: {undone.length} of {POWER_UP_CHECKLIST.length}.{" "}
+            </strong>
             You can still start; each one left will show as not done on the session.
           </p>
         ) : null}
       </fieldset>
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" disabled={isSubmitting}>Start the session</Button>
-        <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
+        <Button type="submit" disabled={isSubmitting}>
+          Start the session
+        </Button>
+        <p role="alert" aria-live="polite" className="font-bold text-flag">
+          {formError ?? ""}
+        </p>
       </div>
     </form>
   );

@@ -16,10 +16,18 @@ export function StepsTable({ steps }: { steps: readonly StepView[] }) {
     <table className="w-full border-collapse text-left" data-testid="power-up-steps">
       <thead className="border-b border-rule bg-sunk/60">
         <tr>
-          <th scope="col" className={th}>Supply</th>
-          <th scope="col" className={th}>Drawn</th>
-          <th scope="col" className={th}>Held</th>
-          <th scope="col" className={th}>B+</th>
+          <th scope="col" className={th}>
+            Supply
+          </th>
+          <th scope="col" className={th}>
+            Drawn
+          </th>
+          <th scope="col" className={th}>
+            Held
+          </th>
+          <th scope="col" className={th}>
+            B+
+          </th>
         </tr>
       </thead>
       {steps.map((s, i) => {

@@ -9,7 +9,8 @@ export function DifferencesList({ original, substitute, differences }: { origina
   return (
     <div data-testid="tube-differences">
       <p className="text-note text-muted">
-        <span className="font-mono font-bold text-ink">{substitute}</span> in place of <span className="font-mono">{original}</span>, from the built-in tube data:
+        <span className="font-mono font-bold text-ink">{substitute}</span> in place of <span className="font-mono">{original}</span>, from the built-in tube
+        data:
       </p>
       {sorted.length === 0 ? (
         <p className="mt-1 text-note text-muted">Neither type is in the built-in table: compare the data sheets.</p>

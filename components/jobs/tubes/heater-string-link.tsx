@@ -36,7 +36,9 @@ export function HeaterStringLink({ tubes, seriesString }: { tubes: readonly { ty
         {left.length ? ` Left out, with no heater data: ${left.join(", ")}.` : ""}
       </p>
       {seriesString ? null : (
-        <p className="text-note text-muted">No heater here is above 6.3 V, so these heaters probably run in parallel from a transformer winding, not in a series string.</p>
+        <p className="text-note text-muted">
+          No heater here is above 6.3 V, so these heaters probably run in parallel from a transformer winding, not in a series string.
+        </p>
       )}
     </div>
   );

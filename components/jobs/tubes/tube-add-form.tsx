@@ -21,8 +21,12 @@ export function TubeAddForm({ jobId }: { jobId: number }) {
     <form onSubmit={onSubmit} noValidate aria-label="Add a tube" className="grid gap-x-3 sm:grid-cols-2">
       <TubeFields idPrefix="tube-add" register={form.register} errors={errors} />
       <div className="flex flex-wrap items-center gap-3 sm:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>Add tube</Button>
-        <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
+        <Button type="submit" disabled={isSubmitting}>
+          Add tube
+        </Button>
+        <p role="alert" aria-live="polite" className="font-bold text-flag">
+          {formError ?? ""}
+        </p>
       </div>
     </form>
   );

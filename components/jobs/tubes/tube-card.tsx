@@ -56,9 +56,15 @@ function EditTube({ jobId, tube, onClose }: { jobId: number; tube: TubeView; onC
     <form onSubmit={onSubmit} noValidate aria-label={`Edit ${tube.position}`} className="mt-3 grid gap-x-3 border-t border-rule pt-3 sm:grid-cols-2">
       <TubeFields idPrefix={`tube-${tube.id}`} register={form.register} errors={errors} />
       <div className="flex flex-wrap items-center gap-3 sm:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>Save</Button>
-        <Button type="button" variant="secondary" onClick={onClose}>Cancel</Button>
-        <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
+        <Button type="submit" disabled={isSubmitting}>
+          Save
+        </Button>
+        <Button type="button" variant="secondary" onClick={onClose}>
+          Cancel
+        </Button>
+        <p role="alert" aria-live="polite" className="font-bold text-flag">
+          {formError ?? ""}
+        </p>
       </div>
     </form>
   );
@@ -70,7 +76,10 @@ export function TubeCard({ jobId, tube, canDelete }: { jobId: number; tube: Tube
   const danger = tube.differences.some((d) => d.level === "danger");
   const action = tube.test || tube.verdict !== "not-tested" ? "Edit result" : "Record result";
   return (
-    <li className={`rounded-card border bg-panel p-4 shadow-card ${tube.verdict === "short" || danger ? "border-hazard/60" : "border-rule"}`} data-testid={`tube-${tube.position}`}>
+    <li
+      className={`rounded-card border bg-panel p-4 shadow-card ${tube.verdict === "short" || danger ? "border-hazard/60" : "border-rule"}`}
+      data-testid={`tube-${tube.position}`}
+    >
       <div className="flex items-start justify-between gap-3">
         <div className="min-w-0 flex-1">
           <p className="flex flex-wrap items-baseline gap-x-3">
@@ -97,7 +106,13 @@ export function TubeCard({ jobId, tube, canDelete }: { jobId: number; tube: Tube
           <Button type="button" variant="secondary" onClick={() => setEditing(true)} aria-label={`${action} of ${tube.position} ${tube.type}`}>
             {action}
           </Button>
-          {canDelete ? <RemoveButton url={`/api/jobs/${jobId}/tubes/${tube.id}`} confirm={`Remove ${tube.position} (${tube.type}) from the tubes?`} label={`Remove ${tube.position}`} /> : null}
+          {canDelete ? (
+            <RemoveButton
+              url={`/api/jobs/${jobId}/tubes/${tube.id}`}
+              confirm={`Remove ${tube.position} (${tube.type}) from the tubes?`}
+              label={`Remove ${tube.position}`}
+            />
+          ) : null}
         </div>
       )}
     </li>

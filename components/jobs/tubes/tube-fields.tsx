@@ -37,7 +37,17 @@ export function TubeTypeOptions({ types }: { types: readonly string[] }) {
   );
 }
 
-export function TubeFields({ idPrefix, register, errors, withPlace = true }: { idPrefix: string; register: UseFormRegister<TubeForm>; errors: FieldErrors<TubeForm>; withPlace?: boolean }) {
+export function TubeFields({
+  idPrefix,
+  register,
+  errors,
+  withPlace = true,
+}: {
+  idPrefix: string;
+  register: UseFormRegister<TubeForm>;
+  errors: FieldErrors<TubeForm>;
+  withPlace?: boolean;
+}) {
   const id = (n: string) => `${idPrefix}-${n}`;
   const err = (n: string) => fieldError(errors as Record<string, unknown>, n);
   return (
@@ -49,10 +59,40 @@ export function TubeFields({ idPrefix, register, errors, withPlace = true }: { i
           <Field id={id("function")} label="Function" placeholder="Vertical oscillator" error={err("function")} {...register("function")} />
         </>
       ) : null}
-      <Field id={id("reading")} label="Tester reading" placeholder="42" inputMode="decimal" hint="On the tester's own scale" error={err("test.reading") ?? err("test")} {...register("test.reading")} />
-      <Field id={id("minimum")} label="Tester minimum" placeholder="35" inputMode="decimal" hint="From the tester's roll chart" error={err("test.minimum")} {...register("test.minimum")} />
-      <SelectField id={id("verdict")} label="Verdict" options={TUBE_VERDICTS.map((v) => ({ value: v, label: TUBE_VERDICT_LABELS[v] }))} error={err("verdict")} {...register("verdict")} />
-      <Field id={id("substitute")} label="Substitute" placeholder="Blank for none" list={TYPES_LIST_ID} autoComplete="off" error={err("substitute")} {...register("substitute")} />
+      <Field
+        id={id("reading")}
+        label="Tester reading"
+        placeholder="42"
+        inputMode="decimal"
+        hint="On the tester's own scale"
+        error={err("test.reading") ?? err("test")}
+        {...register("test.reading")}
+      />
+      <Field
+        id={id("minimum")}
+        label="Tester minimum"
+        placeholder="35"
+        inputMode="decimal"
+        hint="From the tester's roll chart"
+        error={err("test.minimum")}
+        {...register("test.minimum")}
+      />
+      <SelectField
+        id={id("verdict")}
+        label="Verdict"
+        options={TUBE_VERDICTS.map((v) => ({ value: v, label: TUBE_VERDICT_LABELS[v] }))}
+        error={err("verdict")}
+        {...register("verdict")}
+      />
+      <Field
+        id={id("substitute")}
+        label="Substitute"
+        placeholder="Blank for none"
+        list={TYPES_LIST_ID}
+        autoComplete="off"
+        error={err("substitute")}
+        {...register("substitute")}
+      />
     </>
   );
 }

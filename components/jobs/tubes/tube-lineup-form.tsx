@@ -44,22 +44,35 @@ export function TubeLineupForm({ jobId, groups }: { jobId: number; groups: reado
       <div className="flex flex-wrap items-end gap-2">
         <label className="flex min-w-0 flex-1 flex-col gap-1">
           <span className="text-note font-bold">Or pick from the built-in tables</span>
-          <select value={pick} onChange={(e) => setPick(e.target.value)} className="min-h-11 w-full rounded-chip border border-edge bg-panel px-3" aria-label="Tube type from the tables">
+          <select
+            value={pick}
+            onChange={(e) => setPick(e.target.value)}
+            className="min-h-11 w-full rounded-chip border border-edge bg-panel px-3"
+            aria-label="Tube type from the tables"
+          >
             <option value="">Choose a type…</option>
             {groups.map((g) => (
               <optgroup key={g.label} label={g.label}>
                 {g.types.map((t) => (
-                  <option key={t} value={t}>{t}</option>
+                  <option key={t} value={t}>
+                    {t}
+                  </option>
                 ))}
               </optgroup>
             ))}
           </select>
         </label>
-        <Button type="button" variant="secondary" onClick={add} disabled={!pick}>Add to the line-up</Button>
+        <Button type="button" variant="secondary" onClick={add} disabled={!pick}>
+          Add to the line-up
+        </Button>
       </div>
       <div className="flex flex-wrap items-center gap-3">
-        <Button type="submit" disabled={isSubmitting}>Add these tubes</Button>
-        <p role="alert" aria-live="polite" className="font-bold text-flag">{formError ?? ""}</p>
+        <Button type="submit" disabled={isSubmitting}>
+          Add these tubes
+        </Button>
+        <p role="alert" aria-live="polite" className="font-bold text-flag">
+          {formError ?? ""}
+        </p>
       </div>
     </form>
   );

@@ -29,8 +29,15 @@ export const VERDICT_HINTS: Record<TubeVerdict, string> = {
 
 export function VerdictBadge({ verdict }: { verdict: TubeVerdict }) {
   return (
-    <span className={`inline-flex items-center whitespace-nowrap rounded-full border px-2.5 py-0.5 text-note font-bold ${VERDICT_TONE[verdict]}`} data-verdict={verdict}>
-      {verdict === "short" ? <span aria-hidden="true" className="mr-1">⚠</span> : null}
+    <span
+      className={`inline-flex items-center whitespace-nowrap rounded-full border px-2.5 py-0.5 text-note font-bold ${VERDICT_TONE[verdict]}`}
+      data-verdict={verdict}
+    >
+      {verdict === "short" ? (
+        <span aria-hidden="true" className="mr-1">
+          ⚠
+        </span>
+      ) : null}
       {TUBE_VERDICT_LABELS[verdict]}
     </span>
   );

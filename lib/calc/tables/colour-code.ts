@@ -4,22 +4,7 @@
  * Glowbench spells the colours the British way ("grey", "violet") and also reads "gray".
  */
 
-export const COLOURS = [
-  "black",
-  "brown",
-  "red",
-  "orange",
-  "yellow",
-  "green",
-  "blue",
-  "violet",
-  "grey",
-  "white",
-  "gold",
-  "silver",
-  "pink",
-  "none",
-] as const;
+export const COLOURS = ["black", "brown", "red", "orange", "yellow", "green", "blue", "violet", "grey", "white", "gold", "silver", "pink", "none"] as const;
 export type Colour = (typeof COLOURS)[number];
 
 /** Significant-figure bands: black 0 … white 9. */

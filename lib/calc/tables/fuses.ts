@@ -18,10 +18,7 @@ export const FUSE_SERIES_TEXT = "IEC 60127: 1 – 1.25 – 1.6 – 2 – 2.5 –
 
 /** Every listed rated current in amperes, ascending: 32 mA … 10 A. */
 export const FUSE_RATINGS: readonly number[] = [
-  0.032, 0.04, 0.05, 0.063, 0.08,
-  0.1, 0.125, 0.16, 0.2, 0.25, 0.315, 0.4, 0.5, 0.63, 0.8,
-  1, 1.25, 1.6, 2, 2.5, 3.15, 4, 5, 6.3, 8,
-  10,
+  0.032, 0.04, 0.05, 0.063, 0.08, 0.1, 0.125, 0.16, 0.2, 0.25, 0.315, 0.4, 0.5, 0.63, 0.8, 1, 1.25, 1.6, 2, 2.5, 3.15, 4, 5, 6.3, 8, 10,
 ];
 
 // Products like 0.8 × 1.25 land a hair above 1 in binary; a rating this close counts as "at or above".

@@ -6,8 +6,7 @@
  * relying on one for a design that matters.
  */
 
-export const HEATER_SOURCE =
-  "RCA receiving tube manual (RC-series) and tube data sheets; values recalled from memory, check the data sheet for critical work";
+export const HEATER_SOURCE = "RCA receiving tube manual (RC-series) and tube data sheets; values recalled from memory, check the data sheet for critical work";
 
 /**
  * Where the tap and warm-up figures come from. The 35Z5GT's 7.5 V lamp section of its 35 V heater was read
@@ -16,7 +15,7 @@ export const HEATER_SOURCE =
  * ("A"/"B" variants for series strings) is from memory of their data sheets.
  */
 export const TAP_SOURCE =
-  "35Z5GT lamp section 7.5 V of 35 V: period note \"Longer Life for Dial Lamps\" (read); 35W4 tap 7.5 V and the 11 s warm-up ratings: from memory of the data sheets";
+  '35Z5GT lamp section 7.5 V of 35 V: period note "Longer Life for Dial Lamps" (read); 35W4 tap 7.5 V and the 11 s warm-up ratings: from memory of the data sheets';
 
 export interface HeaterEntry {
   /** Type numbers, first the one we show; the rest are variants with the same heater. */
@@ -68,7 +67,9 @@ export const HEATERS: readonly HeaterEntry[] = [
   e(["35C5"], 35, 0.15, "beam power output"),
   e(["35L6GT", "35L6"], 35, 0.15, "beam power output"),
   e(["35W4"], 35, 0.15, "half-wave rectifier", "heater tapped for a pilot lamp", { tap: { voltage: 7.5, from: "recalled from memory" } }),
-  e(["35Z5GT", "35Z5"], 35, 0.15, "half-wave rectifier", "heater tapped for a pilot lamp", { tap: { voltage: 7.5, from: "read in a period note on the type" } }),
+  e(["35Z5GT", "35Z5"], 35, 0.15, "half-wave rectifier", "heater tapped for a pilot lamp", {
+    tap: { voltage: 7.5, from: "read in a period note on the type" },
+  }),
   e(["70L7GT"], 70, 0.15, "rectifier and beam power output"),
   // 300 mA series-string types
   e(["25L6GT", "25L6"], 25, 0.3, "beam power output"),

@@ -154,9 +154,10 @@ const F2_FLOOR = "IEC 60664-1:2020 Table F.2 minimum for pollution degree 2 (0.2
 const ALTITUDE_WORDS = A2.map(([upTo, f]) => `; altitude factor ${f} (Table A.2, up to ${upTo} m)`);
 function names(field: FieldCase): { rows: string[][]; out: string[] } {
   const rows = F8.map(([kv], i) => {
-    const base = FLOORED_M[field][i] > COLUMN_MM[field][i] / 1000
-      ? `${F2_FLOOR} ${TABLE_NAME} ${CASE_WORDS[field]} up to ${kv} kV`
-      : `${TABLE_NAME}, ${CASE_WORDS[field]}, row up to ${kv} kV`;
+    const base =
+      FLOORED_M[field][i] > COLUMN_MM[field][i] / 1000
+        ? `${F2_FLOOR} ${TABLE_NAME} ${CASE_WORDS[field]} up to ${kv} kV`
+        : `${TABLE_NAME}, ${CASE_WORDS[field]}, row up to ${kv} kV`;
     return ALTITUDE_WORDS.map((a) => base + a);
   });
   const out = ALTITUDE_WORDS.map((a) => `${TABLE_NAME}, ${CASE_WORDS[field]}: no row above ${TABLE_MAX_VOLTS[field] / 1000} kV, no figure${a}`);

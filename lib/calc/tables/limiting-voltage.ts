@@ -16,10 +16,7 @@ export const LIMITING_VOLTAGE_SOURCE =
   "IEC 60115-1 limiting element voltage; typical leaded film and metal-oxide data-sheet figures by body size (from memory)";
 
 /** [rating in W, typical limiting element voltage in V], by rating. */
-const BY_RATING: readonly (readonly [number, number])[] = STANDARD_WATTAGES.map((w) => [
-  w,
-  w <= 0.125 ? 200 : w <= 0.25 ? 250 : w <= 1 ? 350 : 500,
-]);
+const BY_RATING: readonly (readonly [number, number])[] = STANDARD_WATTAGES.map((w) => [w, w <= 0.125 ? 200 : w <= 0.25 ? 250 : w <= 1 ? 350 : 500]);
 
 /** The highest typical limit we use for any ordinary part, V. */
 export const MAX_LIMITING_VOLTAGE = 500;

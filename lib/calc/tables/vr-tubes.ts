@@ -29,19 +29,39 @@ const mA = 1e-3;
 
 export const VR_TUBES: readonly VrTube[] = [
   {
-    type: "0A2", aliases: ["OA2"], regulatedVoltage: 150, minCurrent: 5 * mA, maxCurrent: 30 * mA, strikingVoltage: 185,
+    type: "0A2",
+    aliases: ["OA2"],
+    regulatedVoltage: 150,
+    minCurrent: 5 * mA,
+    maxCurrent: 30 * mA,
+    strikingVoltage: 185,
     source: "0A2 data (RCA manual, from memory); the 185 V starting figure agrees with a published summary of the sheet",
   },
   {
-    type: "0B2", aliases: ["OB2"], regulatedVoltage: 108, minCurrent: 5 * mA, maxCurrent: 30 * mA, strikingVoltage: 133,
+    type: "0B2",
+    aliases: ["OB2"],
+    regulatedVoltage: 108,
+    minCurrent: 5 * mA,
+    maxCurrent: 30 * mA,
+    strikingVoltage: 133,
     source: "0B2 data (RCA manual, from memory)",
   },
   {
-    type: "0C3", aliases: ["OC3", "VR105", "VR-105"], regulatedVoltage: 105, minCurrent: 5 * mA, maxCurrent: 40 * mA, strikingVoltage: 133,
+    type: "0C3",
+    aliases: ["OC3", "VR105", "VR-105"],
+    regulatedVoltage: 105,
+    minCurrent: 5 * mA,
+    maxCurrent: 40 * mA,
+    strikingVoltage: 133,
     source: "0C3/VR105 data (RCA manual, from memory)",
   },
   {
-    type: "0D3", aliases: ["OD3", "VR150", "VR-150"], regulatedVoltage: 150, minCurrent: 5 * mA, maxCurrent: 40 * mA, strikingVoltage: 185,
+    type: "0D3",
+    aliases: ["OD3", "VR150", "VR-150"],
+    regulatedVoltage: 150,
+    minCurrent: 5 * mA,
+    maxCurrent: 40 * mA,
+    strikingVoltage: 185,
     source: "0D3/VR150 data (RCA manual, from memory)",
   },
 ];

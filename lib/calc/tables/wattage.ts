@@ -16,9 +16,7 @@ export type RatingChoice =
 export function nextRatingAtLeast(watts: number): RatingChoice {
   if (!(watts >= 0) || !Number.isFinite(watts)) throw new RangeError("A power rating needs a non-negative, finite number");
   const found = STANDARD_WATTAGES.find((w) => w >= watts);
-  return found === undefined
-    ? { inTable: false, needed: watts, largest: STANDARD_WATTAGES[STANDARD_WATTAGES.length - 1] }
-    : { inTable: true, watts: found };
+  return found === undefined ? { inTable: false, needed: watts, largest: STANDARD_WATTAGES[STANDARD_WATTAGES.length - 1] } : { inTable: true, watts: found };
 }
 
 /**

@@ -63,7 +63,11 @@ export const cathodeBiasKinds: DrillKind[] = [
     generate: (rng) => pointSetup(rng, "What cathode resistor gives that bias?"),
     mistakes: (ctx) => [
       ...withoutScreen(ctx, "cathodeResistance", SCREEN_HINT),
-      { value: ctx.outputs.nearestPreferred as number, step: "Nearest E12", hint: "The question asks for the resistance the bias needs; rounding to a preferred value comes after." },
+      {
+        value: ctx.outputs.nearestPreferred as number,
+        step: "Nearest E12",
+        hint: "The question asks for the resistance the bias needs; rounding to a preferred value comes after.",
+      },
     ],
   },
   {
@@ -117,7 +121,13 @@ export const cathodeBiasKinds: DrillKind[] = [
       } catch {
         // No such bias within the bracket: the mistake is left out.
       }
-      return [{ value: plateOnly, step: "Cathode current", hint: "The bias is the cathode resistor times the whole cathode current: plate and screen current together." }];
+      return [
+        {
+          value: plateOnly,
+          step: "Cathode current",
+          hint: "The bias is the cathode resistor times the whole cathode current: plate and screen current together.",
+        },
+      ];
     },
   },
   {
@@ -130,7 +140,11 @@ export const cathodeBiasKinds: DrillKind[] = [
     answerStep: "Bypass corner frequency",
     generate(rng) {
       const ck = rng.pick([5, 10, 20, 25, 50, 100]) * 1e-6;
-      const s = pointSetup(rng, `It is bypassed by ${fmt(ck, "F")}. Taking the cathode resistor alone (the first estimate), at what frequency is the bypass 3 dB down?`, TRIODE_POINTS);
+      const s = pointSetup(
+        rng,
+        `It is bypassed by ${fmt(ck, "F")}. Taking the cathode resistor alone (the first estimate), at what frequency is the bypass 3 dB down?`,
+        TRIODE_POINTS,
+      );
       return { ...s, inputs: { ...s.inputs, bypassCapacitance: ck }, given: { ...s.given, "Bypass capacitor": fmt(ck, "F") } };
     },
     mistakes: (ctx) => [

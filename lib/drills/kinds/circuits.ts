@@ -94,7 +94,11 @@ export const circuitKinds: DrillKind[] = [
       };
     },
     mistakes: (ctx) => [
-      { value: (ctx.inputs.current as number) / (ctx.inputs.voltage as number), step: "Resistance: formula", hint: "Resistance is voltage over current, R = V/I." },
+      {
+        value: (ctx.inputs.current as number) / (ctx.inputs.voltage as number),
+        step: "Resistance: formula",
+        hint: "Resistance is voltage over current, R = V/I.",
+      },
     ],
   },
   {
@@ -113,7 +117,9 @@ export const circuitKinds: DrillKind[] = [
         given: { Capacitor: fmt(c.capacitance, "F"), Frequency: fmt(c.frequency, "Hz") },
       };
     },
-    mistakes: (ctx) => [{ value: (ctx.expected as number) * TWO_PI, step: "Capacitive reactance", hint: "Xc = 1/(2πfC): the 2π turns hertz into radians per second." }],
+    mistakes: (ctx) => [
+      { value: (ctx.expected as number) * TWO_PI, step: "Capacitive reactance", hint: "Xc = 1/(2πfC): the 2π turns hertz into radians per second." },
+    ],
   },
   {
     id: "reactance/inductive",
@@ -132,7 +138,9 @@ export const circuitKinds: DrillKind[] = [
         given: { Choke: fmt(l, "H"), "Ripple frequency": fmt(f, "Hz") },
       };
     },
-    mistakes: (ctx) => [{ value: (ctx.expected as number) / TWO_PI, step: "Inductive reactance", hint: "XL = 2πfL: the 2π turns hertz into radians per second." }],
+    mistakes: (ctx) => [
+      { value: (ctx.expected as number) / TWO_PI, step: "Inductive reactance", hint: "XL = 2πfL: the 2π turns hertz into radians per second." },
+    ],
   },
   {
     id: "reactance/resonance",
@@ -171,6 +179,12 @@ export const circuitKinds: DrillKind[] = [
         solve: { input: "capacitance", output: "capacitiveReactance", target: xc, lo: 1e-13, hi: 1 },
       };
     },
-    mistakes: (ctx) => [{ value: (ctx.expected as number) * TWO_PI, step: "Capacitive reactance", hint: "C = 1/(2πf·Xc): leave out the 2π and the answer is 2π times too large." }],
+    mistakes: (ctx) => [
+      {
+        value: (ctx.expected as number) * TWO_PI,
+        step: "Capacitive reactance",
+        hint: "C = 1/(2πf·Xc): leave out the 2π and the answer is 2π times too large.",
+      },
+    ],
   },
 ];

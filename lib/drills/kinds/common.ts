@@ -28,7 +28,13 @@ export function nearby(rng: Rng, typical: number, spread = 0.15, sig = 2): numbe
 export function noDerating(dissipation: number, step = "Suggested rating"): MistakeSpec[] {
   const r = nextRatingAtLeast(dissipation);
   if (!r.inTable) return [];
-  return [{ value: r.watts, step, hint: "A resistor is chosen rated for at least twice what it dissipates; double the dissipation first, then take the next standard wattage." }];
+  return [
+    {
+      value: r.watts,
+      step,
+      hint: "A resistor is chosen rated for at least twice what it dissipates; double the dissipation first, then take the next standard wattage.",
+    },
+  ];
 }
 
 /** Ohm's law through its own calculator: the figure a slip gives (the whole supply across a resistor, say); NaN if refused. */

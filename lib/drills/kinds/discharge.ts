@@ -52,8 +52,16 @@ export const dischargeKinds: DrillKind[] = [
       };
     },
     mistakes: (ctx) => [
-      { value: (ctx.expected as number) / LN10, step: "Time to the target voltage", hint: "The discharge follows e: use the natural logarithm, t = τ·ln(V₀/V), not log₁₀." },
-      { value: ctx.outputs.fiveTau as number, step: "Five time constants", hint: "Five time constants is a rule of thumb for 'nearly empty'; the time to a given voltage is τ·ln(V₀/V)." },
+      {
+        value: (ctx.expected as number) / LN10,
+        step: "Time to the target voltage",
+        hint: "The discharge follows e: use the natural logarithm, t = τ·ln(V₀/V), not log₁₀.",
+      },
+      {
+        value: ctx.outputs.fiveTau as number,
+        step: "Five time constants",
+        hint: "Five time constants is a rule of thumb for 'nearly empty'; the time to a given voltage is τ·ln(V₀/V).",
+      },
     ],
   },
   {
@@ -70,13 +78,22 @@ export const dischargeKinds: DrillKind[] = [
       return {
         inputs: { ...d, elapsed: t },
         prompt: `A ${fmt(d.capacitance, "F")} filter capacitor charged to ${fmt(d.initialVoltage, "V")} discharges through a ${fmt(d.resistance, "Ω")} resistor. What voltage is left after ${fmt(t, "s")}?`,
-        given: { Capacitor: fmt(d.capacitance, "F"), "Charged to": fmt(d.initialVoltage, "V"), Resistor: fmt(d.resistance, "Ω"), "Time after switch-off": fmt(t, "s") },
+        given: {
+          Capacitor: fmt(d.capacitance, "F"),
+          "Charged to": fmt(d.initialVoltage, "V"),
+          Resistor: fmt(d.resistance, "Ω"),
+          "Time after switch-off": fmt(t, "s"),
+        },
       };
     },
     // Below a millivolt the figure is noise on any meter; such a problem teaches nothing.
     accept: (ctx) => (ctx.expected as number) > 0.1,
     mistakes: (ctx) => [
-      { value: (ctx.inputs.initialVoltage as number) - (ctx.expected as number), step: "Voltage after the elapsed time", hint: "That is how far it has fallen; what is left is V₀·e^(−t/τ)." },
+      {
+        value: (ctx.inputs.initialVoltage as number) - (ctx.expected as number),
+        step: "Voltage after the elapsed time",
+        hint: "That is how far it has fallen; what is left is V₀·e^(−t/τ).",
+      },
     ],
   },
   {
@@ -97,7 +114,11 @@ export const dischargeKinds: DrillKind[] = [
       };
     },
     mistakes: (ctx) => [
-      { value: (ctx.expected as number) * LN10, step: "Largest bleeder", hint: "The discharge follows e: R = t/(C·ln(Vw/Vres)) with the natural logarithm, not log₁₀." },
+      {
+        value: (ctx.expected as number) * LN10,
+        step: "Largest bleeder",
+        hint: "The discharge follows e: R = t/(C·ln(Vw/Vres)) with the natural logarithm, not log₁₀.",
+      },
     ],
   },
   {
@@ -116,12 +137,26 @@ export const dischargeKinds: DrillKind[] = [
         prompt:
           `A ${fmt(c, "F")} electrolytic (it may be up to 50 % above its marking) works at ${fmt(v, "V")}. Which E12 bleeder (5 % parts) still brings it ` +
           "below 60 V within 5 s of switch-off, the residual-voltage limit of IEC 60204-1, with both parts at the worst end of their tolerance?",
-        given: { Capacitor: `${fmt(c, "F")} (+50 %)`, "Working voltage": fmt(v, "V"), "Resistor tolerance": "5 %", "Residual-voltage limit": "60 V", "Time allowed": "5 s" },
+        given: {
+          Capacitor: `${fmt(c, "F")} (+50 %)`,
+          "Working voltage": fmt(v, "V"),
+          "Resistor tolerance": "5 %",
+          "Residual-voltage limit": "60 V",
+          "Time allowed": "5 s",
+        },
       };
     },
     mistakes: (ctx) => [
-      { value: preferredBelow(ctx.outputs.maxResistance as number, "E12"), step: "Allowing for both tolerances", hint: "A capacitor above its marking and a resistor on the high side both slow the discharge: divide by (1 + 0.5)·(1 + 0.05) before choosing." },
-      { value: nearestPreferred(ctx.outputs.maxResistance as number, "E12"), step: "Largest E12 value", hint: "Round down, never to the nearest: a larger bleeder takes longer than the limit allows." },
+      {
+        value: preferredBelow(ctx.outputs.maxResistance as number, "E12"),
+        step: "Allowing for both tolerances",
+        hint: "A capacitor above its marking and a resistor on the high side both slow the discharge: divide by (1 + 0.5)·(1 + 0.05) before choosing.",
+      },
+      {
+        value: nearestPreferred(ctx.outputs.maxResistance as number, "E12"),
+        step: "Largest E12 value",
+        hint: "Round down, never to the nearest: a larger bleeder takes longer than the limit allows.",
+      },
     ],
   },
   {
@@ -143,7 +178,11 @@ export const dischargeKinds: DrillKind[] = [
       };
     },
     mistakes: (ctx) => [
-      { value: slipOf("reforming", { ...ctx.inputs, leakageFloor: 0 }, "leakageLimit"), step: "Leakage limit", hint: "The limit is never below the 3 µA floor: take whichever is greater." },
+      {
+        value: slipOf("reforming", { ...ctx.inputs, leakageFloor: 0 }, "leakageLimit"),
+        step: "Leakage limit",
+        hint: "The limit is never below the 3 µA floor: take whichever is greater.",
+      },
     ],
   },
   {

@@ -45,9 +45,21 @@ export const droppingResistorKinds: DrillKind[] = [
     answerStep: "Resistance",
     generate: (rng) => forward(rng, "What resistance does it need?"),
     mistakes: (ctx) => [
-      { value: ohms({ voltage: supplyOf(ctx), current: currentOf(ctx) }, "resistance"), step: "Resistance", hint: "The resistor drops only the difference, B+ minus the stage's voltage; the full B+ is not across it." },
-      { value: ohms({ voltage: ctx.inputs.loadVoltage as number, current: currentOf(ctx) }, "resistance"), step: "Resistance", hint: "The stage's voltage over its current is the stage itself; the resistor takes the voltage that is left over." },
-      { value: ctx.outputs.nearestPreferred as number, step: "Nearest E12", hint: "The question asks for the resistance worked out; choosing a preferred value comes after." },
+      {
+        value: ohms({ voltage: supplyOf(ctx), current: currentOf(ctx) }, "resistance"),
+        step: "Resistance",
+        hint: "The resistor drops only the difference, B+ minus the stage's voltage; the full B+ is not across it.",
+      },
+      {
+        value: ohms({ voltage: ctx.inputs.loadVoltage as number, current: currentOf(ctx) }, "resistance"),
+        step: "Resistance",
+        hint: "The stage's voltage over its current is the stage itself; the resistor takes the voltage that is left over.",
+      },
+      {
+        value: ctx.outputs.nearestPreferred as number,
+        step: "Nearest E12",
+        hint: "The question asks for the resistance worked out; choosing a preferred value comes after.",
+      },
     ],
   },
   {
@@ -60,7 +72,11 @@ export const droppingResistorKinds: DrillKind[] = [
     answerStep: "Dissipation",
     generate: (rng) => forward(rng, "How much power does the resistor dissipate?"),
     mistakes: (ctx) => [
-      { value: ohms({ voltage: supplyOf(ctx), current: currentOf(ctx) }, "power"), step: "Dissipation", hint: "The resistor dissipates the voltage across it (the drop) times the current, not the full B+ times the current." },
+      {
+        value: ohms({ voltage: supplyOf(ctx), current: currentOf(ctx) }, "power"),
+        step: "Dissipation",
+        hint: "The resistor dissipates the voltage across it (the drop) times the current, not the full B+ times the current.",
+      },
     ],
   },
   {

@@ -13,7 +13,15 @@ const SLUG = "heater-string";
 const LINEUPS: readonly { set: string; tubes: readonly (readonly string[])[] }[] = [
   { set: "a miniature five-tube AC/DC table radio", tubes: [["12BE6"], ["12BA6"], ["12AV6", "12AT6"], ["35C5"], ["35W4"]] },
   { set: "an octal five-tube AC/DC table radio", tubes: [["12SA7"], ["12SK7"], ["12SQ7"], ["35L6GT"], ["35Z5GT"]] },
-  { set: "a four-tube AC/DC radio without an IF stage", tubes: [["12SA7", "12BE6"], ["12SQ7", "12AV6"], ["50L6GT", "50C5"], ["35Z5GT", "35W4"]] },
+  {
+    set: "a four-tube AC/DC radio without an IF stage",
+    tubes: [
+      ["12SA7", "12BE6"],
+      ["12SQ7", "12AV6"],
+      ["50L6GT", "50C5"],
+      ["35Z5GT", "35W4"],
+    ],
+  },
   { set: "a 300 mA AC/DC radio", tubes: [["6SA7"], ["6SK7"], ["6SQ7"], ["25L6GT"], ["25Z6GT"]] },
 ];
 
@@ -47,8 +55,16 @@ export const heaterStringKinds: DrillKind[] = [
     generate: (rng) => draw(rng, "What dropping resistor does the string need?"),
     accept: needsDropper,
     mistakes: (ctx) => [
-      { value: ohms({ voltage: lineOf(ctx), current: currentOf(ctx) }, "resistance"), step: "Dropping resistor", hint: "The resistor takes only what the heaters leave: the line voltage minus the string voltage, at the string current." },
-      { value: ohms({ voltage: ctx.outputs.stringVoltage as number, current: currentOf(ctx) }, "resistance"), step: "Dropping resistor", hint: "That is the heaters' own resistance; the dropper takes the line voltage the heaters do not use." },
+      {
+        value: ohms({ voltage: lineOf(ctx), current: currentOf(ctx) }, "resistance"),
+        step: "Dropping resistor",
+        hint: "The resistor takes only what the heaters leave: the line voltage minus the string voltage, at the string current.",
+      },
+      {
+        value: ohms({ voltage: ctx.outputs.stringVoltage as number, current: currentOf(ctx) }, "resistance"),
+        step: "Dropping resistor",
+        hint: "That is the heaters' own resistance; the dropper takes the line voltage the heaters do not use.",
+      },
     ],
   },
   {
@@ -62,7 +78,11 @@ export const heaterStringKinds: DrillKind[] = [
     generate: (rng) => draw(rng, "How much power does the dropping resistor dissipate?"),
     accept: needsDropper,
     mistakes: (ctx) => [
-      { value: ohms({ voltage: lineOf(ctx), current: currentOf(ctx) }, "power"), step: "Dissipation", hint: "That is what the whole string draws from the line; the dropper dissipates only its own drop times the current." },
+      {
+        value: ohms({ voltage: lineOf(ctx), current: currentOf(ctx) }, "power"),
+        step: "Dissipation",
+        hint: "That is what the whole string draws from the line; the dropper dissipates only its own drop times the current.",
+      },
     ],
   },
   {

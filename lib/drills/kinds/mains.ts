@@ -50,7 +50,11 @@ export const mainsKinds: DrillKind[] = [
     generate: (rng) => lampSetup(rng, "What is the lamp's resistance when lit?"),
     mistakes: (ctx) => [
       { value: line(ctx) / (ctx.inputs.lampPower as number), step: "Lamp resistance, hot", hint: "R = V²/P: the voltage is squared." },
-      { value: ctx.outputs.lampColdResistance as number, step: "Lamp resistance, cold", hint: "That is the cold filament; lit, tungsten has about ten times the resistance." },
+      {
+        value: ctx.outputs.lampColdResistance as number,
+        step: "Lamp resistance, cold",
+        hint: "That is the cold filament; lit, tungsten has about ten times the resistance.",
+      },
     ],
   },
   {
@@ -63,7 +67,11 @@ export const mainsKinds: DrillKind[] = [
     answerStep: "Most current",
     generate: (rng) => lampSetup(rng, "With a dead short in the set, what current flows once the lamp is lit?"),
     mistakes: (ctx) => [
-      { value: ohms({ voltage: line(ctx), resistance: ctx.outputs.lampColdResistance as number }, "current"), step: "Surge while the lamp is cold", hint: "That is the surge through the cold filament, over in a moment; lit, the lamp passes its rated P/V." },
+      {
+        value: ohms({ voltage: line(ctx), resistance: ctx.outputs.lampColdResistance as number }, "current"),
+        step: "Surge while the lamp is cold",
+        hint: "That is the surge through the cold filament, over in a moment; lit, the lamp passes its rated P/V.",
+      },
     ],
   },
   {
@@ -78,7 +86,11 @@ export const mainsKinds: DrillKind[] = [
     // Only while the lamp is lit near its rating does the hot resistance describe it (the Bench's estimate).
     accept: (ctx) => !ctx.warnings.some((w) => w.level === "caution" && /cold/i.test(w.message)),
     mistakes: (ctx) => [
-      { value: line(ctx) - (ctx.expected as number), step: "Voltage the set sees", hint: "That is the lamp's share. The larger the lamp's wattage, the lower its resistance and the more voltage reaches the set." },
+      {
+        value: line(ctx) - (ctx.expected as number),
+        step: "Voltage the set sees",
+        hint: "That is the lamp's share. The larger the lamp's wattage, the lower its resistance and the more voltage reaches the set.",
+      },
     ],
   },
   {
@@ -95,8 +107,20 @@ export const mainsKinds: DrillKind[] = [
       const noMargin = ratingAtLeast(ctx.outputs.runningCurrent as number);
       const other = ctx.inputs.kind === "quick" ? "time-lag" : "quick";
       return [
-        ...(noMargin === null ? [] : [{ value: noMargin, step: "Least rating", hint: "A fuse at the running current blows on the switch-on surge: multiply by the margin the fuse kind needs first." }]),
-        { value: slipOf("fuse", { ...ctx.inputs, kind: other }, "suggestedRating"), step: "Least rating", hint: `That is the margin of a ${other} fuse; a ${ctx.inputs.kind} fuse needs its own.` },
+        ...(noMargin === null
+          ? []
+          : [
+              {
+                value: noMargin,
+                step: "Least rating",
+                hint: "A fuse at the running current blows on the switch-on surge: multiply by the margin the fuse kind needs first.",
+              },
+            ]),
+        {
+          value: slipOf("fuse", { ...ctx.inputs, kind: other }, "suggestedRating"),
+          step: "Least rating",
+          hint: `That is the margin of a ${other} fuse; a ${ctx.inputs.kind} fuse needs its own.`,
+        },
       ];
     },
   },
@@ -111,7 +135,13 @@ export const mainsKinds: DrillKind[] = [
     generate: (rng) => fuseSetup(rng, "What current does it draw from the mains?"),
     mistakes: (ctx) =>
       (ctx.inputs.powerFactor as number) < 1
-        ? [{ value: slipOf("fuse", { ...ctx.inputs, powerFactor: 1 }, "runningCurrent"), step: "Running current", hint: "With a power factor below 1 the set draws more current than P/V: divide by the power factor as well." }]
+        ? [
+            {
+              value: slipOf("fuse", { ...ctx.inputs, powerFactor: 1 }, "runningCurrent"),
+              step: "Running current",
+              hint: "With a power factor below 1 the set draws more current than P/V: divide by the power factor as well.",
+            },
+          ]
         : [],
   },
   {
@@ -134,7 +164,11 @@ export const mainsKinds: DrillKind[] = [
       };
     },
     mistakes: (ctx) => [
-      { value: slipOf("arc-clearance", { ...ctx.inputs, gap: (ctx.inputs.gap as number) * 10 }, "breakdownVoltage"), step: "Uniform-field breakdown", hint: "The constants are per centimetre: 5 mm is 0.5 cm, not 5." },
+      {
+        value: slipOf("arc-clearance", { ...ctx.inputs, gap: (ctx.inputs.gap as number) * 10 }, "breakdownVoltage"),
+        step: "Uniform-field breakdown",
+        hint: "The constants are per centimetre: 5 mm is 0.5 cm, not 5.",
+      },
     ],
   },
   {
@@ -157,8 +191,16 @@ export const mainsKinds: DrillKind[] = [
     },
     accept: (ctx) => typeof ctx.outputs.standardClearance === "number",
     mistakes: (ctx) => [
-      { value: slipOf("arc-clearance", { ...ctx.inputs, altitude: 0 }, "standardClearance"), step: "Altitude factor", hint: "The table is for up to 2000 m; higher up the air is thinner, so multiply by the altitude factor of Table A.2." },
-      { value: slipOf("arc-clearance", { ...ctx.inputs, electrode: "uniform" }, "standardClearance"), step: "IEC 60664-1 Table F.8", hint: "A chassis, solder tags and wire ends make a non-uniform field: read case A, not case B." },
+      {
+        value: slipOf("arc-clearance", { ...ctx.inputs, altitude: 0 }, "standardClearance"),
+        step: "Altitude factor",
+        hint: "The table is for up to 2000 m; higher up the air is thinner, so multiply by the altitude factor of Table A.2.",
+      },
+      {
+        value: slipOf("arc-clearance", { ...ctx.inputs, electrode: "uniform" }, "standardClearance"),
+        step: "IEC 60664-1 Table F.8",
+        hint: "A chassis, solder tags and wire ends make a non-uniform field: read case A, not case B.",
+      },
     ],
   },
 ];

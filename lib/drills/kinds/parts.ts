@@ -57,7 +57,11 @@ export const partsKinds: DrillKind[] = [
     asked: { name: "verdict", label: "verdict", unit: "text", choices: ["within", "high", "low"] },
     tolerance: EXACT,
     answerStep: "Compare with the tolerance",
-    synonyms: { within: ["within tolerance", "in tolerance", "inside tolerance"], high: ["reads high", "too high", "drifted high", "high out of tolerance"], low: ["reads low", "too low", "drifted low", "low out of tolerance"] },
+    synonyms: {
+      within: ["within tolerance", "in tolerance", "inside tolerance"],
+      high: ["reads high", "too high", "drifted high", "high out of tolerance"],
+      low: ["reads low", "too low", "drifted low", "low out of tolerance"],
+    },
     generate: (rng) => driftSetup(rng, "Is it within its tolerance, high, or low?"),
     accept: clearOfEdge,
     mistakes(ctx) {
@@ -114,7 +118,11 @@ export const partsKinds: DrillKind[] = [
       const other = ctx.expected === below ? above : below;
       return [
         { value: linear, step: "Distance on a log scale", hint: "The series is spaced by ratios: compare x/below with above/x, not the differences." },
-        { value: other, step: "Nearest preferred value", hint: "That is the neighbour on the other side; take the nearer one on the log scale, whichever side it is." },
+        {
+          value: other,
+          step: "Nearest preferred value",
+          hint: "That is the neighbour on the other side; take the nearer one on the log scale, whichever side it is.",
+        },
       ];
     },
   },
@@ -135,8 +143,16 @@ export const partsKinds: DrillKind[] = [
       };
     },
     mistakes: (ctx) => [
-      { value: (ctx.expected as number) * 10, step: "Figures and multiplier", hint: "The multiplier band is a power of ten (the number of noughts), not another figure." },
-      { value: (ctx.expected as number) / 10, step: "Figures and multiplier", hint: "Count the noughts again: the multiplier's colour gives the power of ten." },
+      {
+        value: (ctx.expected as number) * 10,
+        step: "Figures and multiplier",
+        hint: "The multiplier band is a power of ten (the number of noughts), not another figure.",
+      },
+      {
+        value: (ctx.expected as number) / 10,
+        step: "Figures and multiplier",
+        hint: "Count the noughts again: the multiplier's colour gives the power of ten.",
+      },
     ],
   },
   {

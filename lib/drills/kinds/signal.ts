@@ -71,7 +71,11 @@ export const signalKinds: DrillKind[] = [
     answerStep: "Oscillator",
     generate: (rng) => superhetSetup(rng, "What frequency is the oscillator on?"),
     mistakes: (ctx) => [
-      { value: slipOf("superhet", { ...ctx.inputs, oscillatorAbove: false }, "oscillatorFrequency"), step: "Oscillator", hint: "That is signal minus IF; with the oscillator above the signal, add the IF." },
+      {
+        value: slipOf("superhet", { ...ctx.inputs, oscillatorAbove: false }, "oscillatorFrequency"),
+        step: "Oscillator",
+        hint: "That is signal minus IF; with the oscillator above the signal, add the IF.",
+      },
     ],
   },
   {
@@ -84,7 +88,11 @@ export const signalKinds: DrillKind[] = [
     answerStep: "Image",
     generate: (rng) => superhetSetup(rng, "On what frequency would a station come through as the image?"),
     mistakes: (ctx) => [
-      { value: ctx.outputs.oscillatorFrequency as number, step: "Image", hint: "That is the oscillator. The image lies one IF beyond it, two IFs from the signal: it mixes to the same IF." },
+      {
+        value: ctx.outputs.oscillatorFrequency as number,
+        step: "Image",
+        hint: "That is the oscillator. The image lies one IF beyond it, two IFs from the signal: it mixes to the same IF.",
+      },
     ],
   },
   {
@@ -99,7 +107,13 @@ export const signalKinds: DrillKind[] = [
     mistakes: (ctx) => [
       { value: (ctx.expected as number) * TWO_PI, step: "Low-frequency corner", hint: "1/(R·C) is in radians per second; divide by 2π for hertz." },
       ...((ctx.inputs.sourceResistance as number) > 0
-        ? [{ value: slipOf("coupling-cap", { ...ctx.inputs, sourceResistance: 0 }, "cornerFrequency"), step: "Low-frequency corner", hint: "The capacitor sees the driving stage's resistance in series with the grid resistor: add them." }]
+        ? [
+            {
+              value: slipOf("coupling-cap", { ...ctx.inputs, sourceResistance: 0 }, "cornerFrequency"),
+              step: "Low-frequency corner",
+              hint: "The capacitor sees the driving stage's resistance in series with the grid resistor: add them.",
+            },
+          ]
         : []),
     ],
   },
@@ -152,7 +166,11 @@ export const signalKinds: DrillKind[] = [
       };
     },
     mistakes: (ctx) => [
-      { value: (ctx.inputs.primaryImpedance as number) / (ctx.inputs.secondaryImpedance as number), step: "Turns ratio", hint: "That is the impedance ratio; impedance goes as the square of the turns ratio, so take the square root." },
+      {
+        value: (ctx.inputs.primaryImpedance as number) / (ctx.inputs.secondaryImpedance as number),
+        step: "Turns ratio",
+        hint: "That is the impedance ratio; impedance goes as the square of the turns ratio, so take the square root.",
+      },
     ],
   },
   {
@@ -173,7 +191,13 @@ export const signalKinds: DrillKind[] = [
     },
     mistakes: (ctx) => {
       const { primaryImpedance: zp, secondaryImpedance: zs, newLoad } = ctx.inputs as Record<string, number>;
-      return [{ value: (zp * zs) / newLoad, step: "Plate load with the new speaker", hint: "Scale by new/old: a lower-impedance speaker reflects a lower plate load, not a higher one." }];
+      return [
+        {
+          value: (zp * zs) / newLoad,
+          step: "Plate load with the new speaker",
+          hint: "Scale by new/old: a lower-impedance speaker reflects a lower plate load, not a higher one.",
+        },
+      ];
     },
   },
 ];

@@ -40,7 +40,8 @@ function otherRectifier(ctx: SolvedContext, output: string) {
 
 /** Transformer secondaries and AC/DC lines: rms volts a meter reads (per half of a centre-tapped winding). */
 function drawSecondary(rng: Rng) {
-  if (rng.chance(0.3)) return { secondaryVoltage: rng.pick([110, 117, 120]), rectifier: "half-wave" as const, what: "the mains (an AC/DC set, no transformer)" };
+  if (rng.chance(0.3))
+    return { secondaryVoltage: rng.pick([110, 117, 120]), rectifier: "half-wave" as const, what: "the mains (an AC/DC set, no transformer)" };
   return { secondaryVoltage: rng.pick([250, 275, 300, 325, 350, 375]), rectifier: "full-wave" as const, what: "each half of a centre-tapped secondary" };
 }
 
@@ -67,7 +68,11 @@ export const supplyKinds: DrillKind[] = [
     generate: (rng) => rippleSetup(rng, "What rms ripple would an AC meter across the reservoir read?"),
     mistakes: (ctx) => [
       otherRectifier(ctx, "rippleRms"),
-      { value: ctx.outputs.ripplePeakToPeak as number, step: "Ripple on the reservoir, rms", hint: "That is peak to peak; the rms of a sawtooth is Vpp/(2√3)." },
+      {
+        value: ctx.outputs.ripplePeakToPeak as number,
+        step: "Ripple on the reservoir, rms",
+        hint: "That is peak to peak; the rms of a sawtooth is Vpp/(2√3).",
+      },
       {
         value: (ctx.outputs.ripplePeakToPeak as number) / (2 * Math.SQRT2),
         step: "Ripple on the reservoir, rms",
@@ -85,7 +90,14 @@ export const supplyKinds: DrillKind[] = [
     answerStep: "Peak of the secondary",
     generate(rng) {
       const s = drawSecondary(rng);
-      const inputs = { secondaryVoltage: s.secondaryVoltage, rectifier: s.rectifier, rectifierDrop: 0, loadCurrent: 0.05, capacitance: 40e-6, lineFrequency: 60 };
+      const inputs = {
+        secondaryVoltage: s.secondaryVoltage,
+        rectifier: s.rectifier,
+        rectifierDrop: 0,
+        loadCurrent: 0.05,
+        capacitance: 40e-6,
+        lineFrequency: 60,
+      };
       return {
         inputs,
         prompt: `A meter reads ${fmt(s.secondaryVoltage, "V")} AC across ${s.what}. With no load, to what peak does the reservoir capacitor charge (ignore the rectifier's drop)?`,
@@ -93,8 +105,16 @@ export const supplyKinds: DrillKind[] = [
       };
     },
     mistakes: (ctx) => [
-      { value: ctx.inputs.secondaryVoltage as number, step: "Peak of the secondary", hint: "A meter reads the rms; the capacitor charges to the peak of the sine, √2 times as much." },
-      { value: 2 * (ctx.outputs.peakVoltage as number), step: "Peak of the secondary", hint: "That is peak to peak; the capacitor charges to one peak, √2 times the rms." },
+      {
+        value: ctx.inputs.secondaryVoltage as number,
+        step: "Peak of the secondary",
+        hint: "A meter reads the rms; the capacitor charges to the peak of the sine, √2 times as much.",
+      },
+      {
+        value: 2 * (ctx.outputs.peakVoltage as number),
+        step: "Peak of the secondary",
+        hint: "That is peak to peak; the capacitor charges to one peak, √2 times the rms.",
+      },
     ],
   },
   {
@@ -112,20 +132,42 @@ export const supplyKinds: DrillKind[] = [
       // tubes about 15–20 V, full-wave tubes from 17 V (5AR4) to 60 V (5Y3GT); silicon about 1 V.
       const tube = rng.chance(0.6);
       const drop = tube ? rng.pick(s.rectifier === "half-wave" ? [15, 20] : [17, 25, 44, 50, 60]) : 1;
-      const inputs = { secondaryVoltage: s.secondaryVoltage, rectifier: s.rectifier, rectifierDrop: drop, loadCurrent: r.loadCurrent, capacitance: r.capacitance, lineFrequency: r.lineFrequency };
+      const inputs = {
+        secondaryVoltage: s.secondaryVoltage,
+        rectifier: s.rectifier,
+        rectifierDrop: drop,
+        loadCurrent: r.loadCurrent,
+        capacitance: r.capacitance,
+        lineFrequency: r.lineFrequency,
+      };
       return {
         inputs,
         prompt:
           `${fmt(s.secondaryVoltage, "V")} AC (rms) across ${s.what} feeds a ${s.rectifier} ${tube ? "tube rectifier" : "silicon rectifier"} that drops ${fmt(drop, "V")}, ` +
           `into a ${fmt(r.capacitance, "F")} reservoir on ${fmt(r.lineFrequency, "Hz")} mains. The set draws ${fmt(r.loadCurrent, "A")}. Estimate the B+ on the reservoir.`,
-        given: { "AC (rms)": fmt(s.secondaryVoltage, "V"), Circuit: s.rectifier, "Rectifier drop": fmt(drop, "V"), Reservoir: fmt(r.capacitance, "F"), Mains: fmt(r.lineFrequency, "Hz"), "Load current": fmt(r.loadCurrent, "A") },
+        given: {
+          "AC (rms)": fmt(s.secondaryVoltage, "V"),
+          Circuit: s.rectifier,
+          "Rectifier drop": fmt(drop, "V"),
+          Reservoir: fmt(r.capacitance, "F"),
+          Mains: fmt(r.lineFrequency, "Hz"),
+          "Load current": fmt(r.loadCurrent, "A"),
+        },
       };
     },
     // The estimate only holds while the ripple is small beside B+ (the Bench cautions otherwise).
     accept: (ctx) => !ctx.warnings.some((w) => w.level === "caution") && (ctx.expected as number) > 0,
     mistakes: (ctx) => [
-      { value: (ctx.expected as number) + (ctx.outputs.ripplePeakToPeak as number) / 2, step: "B+ under load", hint: "The reservoir sags between charging peaks: the average sits half the peak-to-peak ripple below the top." },
-      { value: (ctx.expected as number) - (ctx.outputs.peakVoltage as number) + (ctx.inputs.secondaryVoltage as number), step: "Peak of the secondary", hint: "Start from the peak, √2 times the rms reading: the capacitor charges to the top of the sine." },
+      {
+        value: (ctx.expected as number) + (ctx.outputs.ripplePeakToPeak as number) / 2,
+        step: "B+ under load",
+        hint: "The reservoir sags between charging peaks: the average sits half the peak-to-peak ripple below the top.",
+      },
+      {
+        value: (ctx.expected as number) - (ctx.outputs.peakVoltage as number) + (ctx.inputs.secondaryVoltage as number),
+        step: "Peak of the secondary",
+        hint: "Start from the peak, √2 times the rms reading: the capacitor charges to the top of the sine.",
+      },
     ],
   },
 ];

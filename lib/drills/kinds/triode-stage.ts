@@ -17,7 +17,14 @@ const HIGH_MU = { ra: [47e3, 270e3], rk: [680, 2700] } as const;
 const LOW_MU = { ra: [10e3, 47e3], rk: [470, 2700] } as const;
 const MEDIUM = { ra: [10e3, 47e3], rk: [100, 1000] } as const;
 const RANGES: Record<string, { ra: readonly [number, number]; rk: readonly [number, number] }> = {
-  "12AX7": HIGH_MU, "6SL7": HIGH_MU, "12AY7": HIGH_MU, "12AU7": LOW_MU, "6SN7": LOW_MU, "6CG7": LOW_MU, "12AT7": MEDIUM, "6DJ8": MEDIUM,
+  "12AX7": HIGH_MU,
+  "6SL7": HIGH_MU,
+  "12AY7": HIGH_MU,
+  "12AU7": LOW_MU,
+  "6SN7": LOW_MU,
+  "6CG7": LOW_MU,
+  "12AT7": MEDIUM,
+  "6DJ8": MEDIUM,
 };
 
 function drawStage(rng: Rng) {
@@ -40,7 +47,13 @@ function stageSetup(rng: Rng, ask: string): DrillSetup {
     prompt:
       `A ${s.tube} stage runs from ${fmt(s.supplyVoltage, "V")} B+ through a ${fmt(s.plateResistor, "Ω")} plate resistor, ` +
       `with a ${fmt(s.cathodeResistor, "Ω")} cathode resistor; the plate current is ${fmt(ip, "A")}. ${ask}`,
-    given: { Tube: s.tube, "B+": fmt(s.supplyVoltage, "V"), "Plate resistor": fmt(s.plateResistor, "Ω"), "Cathode resistor": fmt(s.cathodeResistor, "Ω"), "Plate current": fmt(ip, "A") },
+    given: {
+      Tube: s.tube,
+      "B+": fmt(s.supplyVoltage, "V"),
+      "Plate resistor": fmt(s.plateResistor, "Ω"),
+      "Cathode resistor": fmt(s.cathodeResistor, "Ω"),
+      "Plate current": fmt(ip, "A"),
+    },
   };
 }
 
@@ -147,7 +160,14 @@ export const triodeStageKinds: DrillKind[] = [
       const inputs = { ...s, cathodeBypassed: bypassed, ...(load ? { loadResistance: load } : {}) };
       const mu = roundTo(outputOrZero(inputs, "amplificationFactor"), 3);
       const rp = roundTo(outputOrZero(inputs, "plateResistance"), 3);
-      const given: Record<string, string> = { Tube: s.tube, "Plate resistor": fmt(s.plateResistor, "Ω"), "Cathode resistor": fmt(s.cathodeResistor, "Ω"), "Cathode bypassed": bypassed ? "yes" : "no", "µ": String(mu), "Plate resistance rp": fmt(rp, "Ω") };
+      const given: Record<string, string> = {
+        Tube: s.tube,
+        "Plate resistor": fmt(s.plateResistor, "Ω"),
+        "Cathode resistor": fmt(s.cathodeResistor, "Ω"),
+        "Cathode bypassed": bypassed ? "yes" : "no",
+        µ: String(mu),
+        "Plate resistance rp": fmt(rp, "Ω"),
+      };
       if (load) given["Next stage's grid resistor"] = fmt(load, "Ω");
       return {
         inputs,
@@ -164,12 +184,24 @@ export const triodeStageKinds: DrillKind[] = [
       const out = [];
       if (ctx.inputs.loadResistance !== undefined) {
         const { loadResistance: _, ...alone } = ctx.inputs;
-        out.push({ value: slipOf(SLUG, alone, "gain"), step: "Signal load", hint: "The next stage's grid resistor is in parallel with the plate resistor: use Ra ∥ RL as the load." });
+        out.push({
+          value: slipOf(SLUG, alone, "gain"),
+          step: "Signal load",
+          hint: "The next stage's grid resistor is in parallel with the plate resistor: use Ra ∥ RL as the load.",
+        });
       }
       if (ctx.inputs.cathodeBypassed === false) {
-        out.push({ value: slipOf(SLUG, { ...ctx.inputs, cathodeBypassed: true }, "gain"), step: "Voltage gain", hint: "Without a bypass capacitor the cathode resistor feeds back: add (µ + 1)·Rk to the denominator." });
+        out.push({
+          value: slipOf(SLUG, { ...ctx.inputs, cathodeBypassed: true }, "gain"),
+          step: "Voltage gain",
+          hint: "Without a bypass capacitor the cathode resistor feeds back: add (µ + 1)·Rk to the denominator.",
+        });
       }
-      out.push({ value: ctx.outputs.amplificationFactor as number, step: "Voltage gain", hint: "µ is the most a triode could give; the stage gives µ·RL′/(rp + RL′)." });
+      out.push({
+        value: ctx.outputs.amplificationFactor as number,
+        step: "Voltage gain",
+        hint: "µ is the most a triode could give; the stage gives µ·RL′/(rp + RL′).",
+      });
       return out;
     },
   },

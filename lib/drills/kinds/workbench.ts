@@ -16,7 +16,13 @@ function vrSetup(rng: Rng, ask: string): DrillSetup {
     prompt:
       `A ${tube.type} (${fmt(tube.regulatedVoltage, "V")}, ${fmt(tube.minCurrent, "A")} to ${fmt(tube.maxCurrent, "A")}) regulates a supply for an oscillator drawing up to ${fmt(load, "A")}, ` +
       `fed through a series resistor from ${fmt(supply, "V")}. ${ask}`,
-    given: { Tube: tube.type, "Regulated voltage": fmt(tube.regulatedVoltage, "V"), "Tube current range": `${fmt(tube.minCurrent, "A")} to ${fmt(tube.maxCurrent, "A")}`, Supply: fmt(supply, "V"), "Greatest load": fmt(load, "A") },
+    given: {
+      Tube: tube.type,
+      "Regulated voltage": fmt(tube.regulatedVoltage, "V"),
+      "Tube current range": `${fmt(tube.minCurrent, "A")} to ${fmt(tube.maxCurrent, "A")}`,
+      Supply: fmt(supply, "V"),
+      "Greatest load": fmt(load, "A"),
+    },
   };
 }
 
@@ -31,8 +37,7 @@ function meterSetup(rng: Rng, ask: string): DrillSetup {
   const source = rng.preferred("E12", 100e3, 2.2e6);
   return {
     inputs: { trueVoltage, sourceResistance: source, ohmsPerVolt, range },
-    prompt:
-      `A screen grid sits at ${fmt(trueVoltage, "V")}, fed through ${fmt(source, "Ω")}. It is measured with a ${ohmsPerVolt} Ω/V meter on its ${fmt(range, "V")} range. ${ask}`,
+    prompt: `A screen grid sits at ${fmt(trueVoltage, "V")}, fed through ${fmt(source, "Ω")}. It is measured with a ${ohmsPerVolt} Ω/V meter on its ${fmt(range, "V")} range. ${ask}`,
     given: { "True voltage": fmt(trueVoltage, "V"), "Feed resistor": fmt(source, "Ω"), Meter: `${ohmsPerVolt} Ω/V`, Range: fmt(range, "V") },
   };
 }
@@ -55,8 +60,16 @@ export const workbenchKinds: DrillKind[] = [
     generate: (rng) => vrSetup(rng, "What series resistance keeps the tube at its minimum current at full load?"),
     accept: inRange,
     mistakes: (ctx) => [
-      { value: ohms({ voltage: (ctx.inputs.supplyVoltage as number) - vr(ctx).regulatedVoltage, current: ctx.inputs.loadCurrentMax as number }, "resistance"), step: "Series resistance", hint: "The resistor carries the tube's minimum current as well as the load's: add them." },
-      { value: ohms({ voltage: ctx.inputs.supplyVoltage as number, current: (ctx.inputs.loadCurrentMax as number) + vr(ctx).minCurrent }, "resistance"), step: "Series resistance", hint: "The resistor drops the supply minus the tube's regulated voltage, not the whole supply." },
+      {
+        value: ohms({ voltage: (ctx.inputs.supplyVoltage as number) - vr(ctx).regulatedVoltage, current: ctx.inputs.loadCurrentMax as number }, "resistance"),
+        step: "Series resistance",
+        hint: "The resistor carries the tube's minimum current as well as the load's: add them.",
+      },
+      {
+        value: ohms({ voltage: ctx.inputs.supplyVoltage as number, current: (ctx.inputs.loadCurrentMax as number) + vr(ctx).minCurrent }, "resistance"),
+        step: "Series resistance",
+        hint: "The resistor drops the supply minus the tube's regulated voltage, not the whole supply.",
+      },
     ],
   },
   {
@@ -70,7 +83,11 @@ export const workbenchKinds: DrillKind[] = [
     generate: (rng) => vrSetup(rng, "With the series resistance chosen for full load, how much power does it dissipate?"),
     accept: inRange,
     mistakes: (ctx) => [
-      { value: ohms({ voltage: ctx.inputs.supplyVoltage as number, current: (ctx.inputs.loadCurrentMax as number) + vr(ctx).minCurrent }, "power"), step: "Resistor dissipation", hint: "The resistor dissipates its own drop (supply minus the tube's voltage) times its current, not the whole supply." },
+      {
+        value: ohms({ voltage: ctx.inputs.supplyVoltage as number, current: (ctx.inputs.loadCurrentMax as number) + vr(ctx).minCurrent }, "power"),
+        step: "Resistor dissipation",
+        hint: "The resistor dissipates its own drop (supply minus the tube's voltage) times its current, not the whole supply.",
+      },
     ],
   },
   {
@@ -123,7 +140,11 @@ export const workbenchKinds: DrillKind[] = [
       return needed > 0 && Number.isFinite(needed) && nearestPreferred(needed, "E12") === ctx.expected;
     },
     mistakes: (ctx) => [
-      { value: nearestPreferred(ctx.inputs.target as number, "E12"), step: "In ", hint: "Work out what the second part must make up first, then round that to the series." },
+      {
+        value: nearestPreferred(ctx.inputs.target as number, "E12"),
+        step: "In ",
+        hint: "Work out what the second part must make up first, then round that to the series.",
+      },
     ],
   },
   {

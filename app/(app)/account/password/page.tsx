@@ -13,8 +13,8 @@ export default async function ChangePasswordPage() {
     <>
       <h1 className="text-title font-bold">Change password</h1>
       <p className="mb-6 mt-2 max-w-prose text-muted">
-        For {member.email}. Your current password is asked for first. Once the new one is set, every other browser signed in to your account is
-        signed out; this one stays signed in.
+        For {member.email}. Your current password is asked for first. Once the new one is set, every other browser signed in to your account is signed out; this
+        one stays signed in.
       </p>
       <Card>
         <ChangePasswordForm context={[member.email, member.name, member.workshopName]} />

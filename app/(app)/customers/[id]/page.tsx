@@ -42,7 +42,9 @@ export default async function CustomerPage({ params }: Props) {
         <Link href="/customers" className="text-note font-bold text-signal underline-offset-4 hover:underline">
           ← All customers
         </Link>
-        <h1 className="mt-2 text-title font-bold break-words" data-testid="customer-name">{customer.name}</h1>
+        <h1 className="mt-2 text-title font-bold break-words" data-testid="customer-name">
+          {customer.name}
+        </h1>
         <p className="mt-1 text-muted">On file since {formatDate(customer.createdAt)}</p>
       </div>
       <div className="grid gap-5 lg:grid-cols-[1fr_2fr]">
@@ -55,7 +57,11 @@ export default async function CustomerPage({ params }: Props) {
             <h2 id="their-jobs" className="text-lead font-bold">
               Their sets <span className="font-mono text-muted">({customer.jobs.length})</span>
             </h2>
-            {can.editJobs(member) ? <ButtonLink href={`/jobs?customer=${customer.id}`} variant="secondary">Book in a set for them</ButtonLink> : null}
+            {can.editJobs(member) ? (
+              <ButtonLink href={`/jobs?customer=${customer.id}`} variant="secondary">
+                Book in a set for them
+              </ButtonLink>
+            ) : null}
           </div>
           {customer.jobs.length === 0 ? (
             <EmptyState title="No sets yet">Their sets show here once one is booked in for them.</EmptyState>
@@ -63,7 +69,10 @@ export default async function CustomerPage({ params }: Props) {
             <ul className="flex flex-col gap-3" data-testid="customer-jobs">
               {customer.jobs.map((j) => (
                 <li key={j.id}>
-                  <Link href={`/jobs/${j.id}`} className="flex min-h-11 flex-col gap-1 rounded-card border border-rule bg-panel p-4 shadow-card hover:bg-sunk/40">
+                  <Link
+                    href={`/jobs/${j.id}`}
+                    className="flex min-h-11 flex-col gap-1 rounded-card border border-rule bg-panel p-4 shadow-card hover:bg-sunk/40"
+                  >
                     <span className="flex flex-wrap items-center gap-x-3 gap-y-1">
                       <span className="font-mono text-note">Job {j.number}</span>
                       <StatusBadge status={j.status} />

@@ -69,7 +69,13 @@ export default async function InvoicePage({ params, searchParams }: { params: Pr
       {invoice.status !== "void" ? (
         <Card>
           <h2 className="mb-4 text-lead font-bold">With the customer</h2>
-          <InvoiceDelivery sentTo={invoice.sentTo} sentAt={invoice.sentAt} viewedAt={invoice.viewedAt} paidAt={invoice.paidAt} linkExpired={invoice.payLinkExpired} />
+          <InvoiceDelivery
+            sentTo={invoice.sentTo}
+            sentAt={invoice.sentAt}
+            viewedAt={invoice.viewedAt}
+            paidAt={invoice.paidAt}
+            linkExpired={invoice.payLinkExpired}
+          />
           {invoice.status === "issued" ? (
             <div className="mt-6">
               <SendInvoice invoiceId={invoice.id} to={invoice.job.customerEmail} again={!!invoice.sentAt} />

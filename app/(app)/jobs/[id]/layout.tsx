@@ -38,7 +38,11 @@ export default async function JobLayout({ children, params }: { children: ReactN
               <StatusBadge status={job.status} />
             </p>
           </div>
-          <a href={`/api/jobs/${job.id}/bench-sheet`} download className="gb-no-print inline-flex min-h-11 items-center gap-2 rounded-chip border border-rule bg-panel px-4 font-bold hover:bg-sunk">
+          <a
+            href={`/api/jobs/${job.id}/bench-sheet`}
+            download
+            className="gb-no-print inline-flex min-h-11 items-center gap-2 rounded-chip border border-rule bg-panel px-4 font-bold hover:bg-sunk"
+          >
             Bench sheet (PDF)
           </a>
         </div>

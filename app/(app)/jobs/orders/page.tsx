@@ -23,7 +23,8 @@ export default async function OrderListPage() {
         </Link>
         <h1 className="mt-2 text-title font-bold">Order list</h1>
         <p className="mt-1 max-w-prose text-muted">
-          Every part still to order on {member.workshopName}&rsquo;s jobs, by supplier. Download a supplier&rsquo;s order form, place the order, then mark the group ordered: each job&rsquo;s parts and Log follow.
+          Every part still to order on {member.workshopName}&rsquo;s jobs, by supplier. Download a supplier&rsquo;s order form, place the order, then mark the
+          group ordered: each job&rsquo;s parts and Log follow.
         </p>
       </div>
       {count === 0 ? (
@@ -32,9 +33,15 @@ export default async function OrderListPage() {
         <>
           <div className="flex flex-wrap items-center gap-3">
             <p className="text-muted">
-              <span className="font-mono text-ink">{count}</span> part{count === 1 ? "" : "s"} from <span className="font-mono text-ink">{groups.filter((g) => g.supplier).length}</span> supplier{groups.filter((g) => g.supplier).length === 1 ? "" : "s"}
+              <span className="font-mono text-ink">{count}</span> part{count === 1 ? "" : "s"} from{" "}
+              <span className="font-mono text-ink">{groups.filter((g) => g.supplier).length}</span> supplier
+              {groups.filter((g) => g.supplier).length === 1 ? "" : "s"}
             </p>
-            <a href="/api/orders/csv" download className="inline-flex min-h-11 items-center rounded-chip border border-rule bg-panel px-4 font-bold hover:bg-sunk">
+            <a
+              href="/api/orders/csv"
+              download
+              className="inline-flex min-h-11 items-center rounded-chip border border-rule bg-panel px-4 font-bold hover:bg-sunk"
+            >
               Whole list (CSV)
             </a>
           </div>

@@ -20,7 +20,14 @@ export default async function OutboxPage() {
   if (mail === null) notFound();
   if (!can.manageMembers(member)) {
     return (
-      <EmptyState title="The outbox is for owners" action={<Link href="/workshop" className="font-bold text-signal underline underline-offset-4">Back to the workshop</Link>}>
+      <EmptyState
+        title="The outbox is for owners"
+        action={
+          <Link href="/workshop" className="font-bold text-signal underline underline-offset-4">
+            Back to the workshop
+          </Link>
+        }
+      >
         Ask your workshop owner if you need to see a message Glowbench sent.
       </EmptyState>
     );
@@ -35,8 +42,8 @@ export default async function OutboxPage() {
       </p>
       <h1 className="mt-1 text-title font-bold">Outbox</h1>
       <p className="mb-6 mt-1 max-w-prose text-muted">
-        In development and the demo, Glowbench delivers e-mail to a local mail sink instead of the internet. Here is what it
-        sent for {member.workshopName}, newest first. Nothing on this page left this computer.
+        In development and the demo, Glowbench delivers e-mail to a local mail sink instead of the internet. Here is what it sent for {member.workshopName},
+        newest first. Nothing on this page left this computer.
       </p>
       {mail.length === 0 ? (
         <EmptyState title="No mail sent yet">Invite someone from the workshop page, or send a customer their collection message from a job.</EmptyState>
@@ -49,7 +56,11 @@ export default async function OutboxPage() {
                   <summary className="flex cursor-pointer flex-wrap items-baseline gap-x-4 gap-y-1 px-6 py-4">
                     <span className="font-bold">{m.subject || "(no subject)"}</span>
                     <span className="text-muted">to {m.envelope.to.join(", ")}</span>
-                    {m.attachments.length ? <span className="text-note font-bold text-signal">{m.attachments.length} attachment{m.attachments.length > 1 ? "s" : ""}</span> : null}
+                    {m.attachments.length ? (
+                      <span className="text-note font-bold text-signal">
+                        {m.attachments.length} attachment{m.attachments.length > 1 ? "s" : ""}
+                      </span>
+                    ) : null}
                     <time className="ml-auto font-mono text-note text-muted" dateTime={m.receivedAt}>
                       {when(m.receivedAt)}
                     </time>
@@ -60,7 +71,10 @@ export default async function OutboxPage() {
                       <ul className="mt-4 flex flex-wrap gap-2">
                         {m.attachments.map((a) => (
                           <li key={a.filename} className="rounded-chip border border-rule bg-sunk px-3 py-1 text-note">
-                            {a.filename} <span className="font-mono text-muted">({a.contentType}, {size(a.size)})</span>
+                            {a.filename}{" "}
+                            <span className="font-mono text-muted">
+                              ({a.contentType}, {size(a.size)})
+                            </span>
                           </li>
                         ))}
                       </ul>

@@ -26,7 +26,13 @@ function Gone({ title, message }: { title: string; message: string }) {
 export default async function InvitePage({ params }: { params: Promise<{ token: string }> }) {
   const { token } = await params;
   const invitation = tokenField.safeParse(token).success ? findInvitation(token) : null;
-  if (!invitation) return <Gone title="This invitation link does not work" message="Check that you opened the whole link from the e-mail, or ask the workshop owner to invite you again." />;
+  if (!invitation)
+    return (
+      <Gone
+        title="This invitation link does not work"
+        message="Check that you opened the whole link from the e-mail, or ask the workshop owner to invite you again."
+      />
+    );
   if (invitation.state !== "pending") return <Gone title="This invitation cannot be used" message={INVITATION_GONE[invitation.state]} />;
 
   const member = await getMember();

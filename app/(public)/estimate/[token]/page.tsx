@@ -15,7 +15,9 @@ export default async function EstimateAnswerPage({ params }: { params: Promise<{
   const found = token.length >= 20 && token.length <= 200 ? findEstimateByToken(token) : { state: "unknown" as const };
 
   if (found.state === "unknown") {
-    return <Notice title="This link is not valid">Check that the whole link from the e-mail was opened, or ask the workshop to send the estimate again.</Notice>;
+    return (
+      <Notice title="This link is not valid">Check that the whole link from the e-mail was opened, or ask the workshop to send the estimate again.</Notice>
+    );
   }
   if (found.state === "expired") {
     return (

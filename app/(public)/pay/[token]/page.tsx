@@ -27,15 +27,24 @@ export default async function PayPage({ params }: { params: Promise<{ token: str
   if (found.state === "paid") {
     return (
       <Notice title="Paid, thank you" testId="paid">
-        Invoice {found.number} from {found.workshop.name} was paid{found.paidAt ? ` on ${longDate(found.paidAt)}` : ""}. There is nothing more to do; you can close this page.
+        Invoice {found.number} from {found.workshop.name} was paid{found.paidAt ? ` on ${longDate(found.paidAt)}` : ""}. There is nothing more to do; you can
+        close this page.
       </Notice>
     );
   }
   if (found.state === "void") {
-    return <Notice title="This invoice was withdrawn">{found.workshop.name} has cancelled invoice {found.number}, so there is nothing to pay. Questions? Contact {reach(found.workshop)}.</Notice>;
+    return (
+      <Notice title="This invoice was withdrawn">
+        {found.workshop.name} has cancelled invoice {found.number}, so there is nothing to pay. Questions? Contact {reach(found.workshop)}.
+      </Notice>
+    );
   }
   if (found.state === "expired") {
-    return <Notice title="This link has expired">Ask {reach(found.workshop)} to send invoice {found.number} again.</Notice>;
+    return (
+      <Notice title="This link has expired">
+        Ask {reach(found.workshop)} to send invoice {found.number} again.
+      </Notice>
+    );
   }
 
   const { workshop, job, invoice } = found;

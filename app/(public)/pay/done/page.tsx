@@ -22,11 +22,16 @@ export default async function PaymentDonePage({ searchParams }: { searchParams: 
   if (typeof cancelled === "string") {
     const invoiceId = parseId(cancelled);
     if (owner && invoiceId !== null) redirect(`/invoices/${invoiceId}`);
-    return <Notice title="No payment was taken">Nothing has been charged. When you are ready, open the link in the workshop&apos;s e-mail again to pay.</Notice>;
+    return (
+      <Notice title="No payment was taken">Nothing has been charged. When you are ready, open the link in the workshop&apos;s e-mail again to pay.</Notice>
+    );
   }
 
   const paid = typeof session === "string" && /^[\w-]{1,200}$/.test(session) ? invoiceForReturn(session) : undefined;
-  if (!paid) return <Notice title="This page has nothing to show">If you have just paid, the workshop will have your payment; the e-mailed link shows it as paid.</Notice>;
+  if (!paid)
+    return (
+      <Notice title="This page has nothing to show">If you have just paid, the workshop will have your payment; the e-mailed link shows it as paid.</Notice>
+    );
   if (owner && owner.workshopId === paid.workshopId) redirect(`/invoices/${paid.id}?paid=1`);
   if (paid.status === "paid") {
     return (
@@ -37,7 +42,8 @@ export default async function PaymentDonePage({ searchParams }: { searchParams: 
   }
   return (
     <Notice title="Thank you: your payment is on its way">
-      The card service is confirming it with {paid.workshopName} now. You do not need to pay again; the link in the e-mail will show the invoice as paid once it lands.
+      The card service is confirming it with {paid.workshopName} now. You do not need to pay again; the link in the e-mail will show the invoice as paid once it
+      lands.
     </Notice>
   );
 }

@@ -21,7 +21,8 @@ export const POST = route({ body: changePasswordSchema }, async ({ request, memb
     throttles.account.recordFailure(member.email);
     throw new HttpError(400, "Your current password is not right.", { currentPassword: "That is not your current password." });
   }
-  if (newPassword === currentPassword) throw new HttpError(400, "Choose a new password.", { newPassword: "That is the password you have now; choose a different one." });
+  if (newPassword === currentPassword)
+    throw new HttpError(400, "Choose a new password.", { newPassword: "That is the password you have now; choose a different one." });
   assertStrongPassword(newPassword, [member.email, member.name, member.workshopName], "newPassword");
   const { sessionVersion } = changePassword(member.userId, await gatedHash(newPassword));
   await startSession(member.userId, sessionVersion, member.workshopId);

@@ -8,7 +8,9 @@ const ids = { id: "That customer" };
 /** The customer with every job of theirs. */
 export const GET = route({ ids }, ({ member, ids }) => NextResponse.json({ customer: getCustomer(member, ids.id) }));
 
-export const PATCH = route({ role: "editJobs", ids, body: customerUpdateSchema }, ({ member, ids, body }) => NextResponse.json({ customer: updateCustomer(member, ids.id, body) }));
+export const PATCH = route({ role: "editJobs", ids, body: customerUpdateSchema }, ({ member, ids, body }) =>
+  NextResponse.json({ customer: updateCustomer(member, ids.id, body) }),
+);
 
 /** Owners only; a customer with jobs stays (409). */
 export const DELETE = route({ role: "deleteJobs", ids }, ({ member, ids }) => {

@@ -10,7 +10,9 @@ const ids = { id: "That job" };
 /** GET: the whole record of one job (details, parts, readings with verdicts, calculations, files, log). */
 export const GET = route({ ids }, ({ member, ids }) => NextResponse.json(getJobRecord(member, ids.id)));
 
-export const PATCH = route({ role: "editJobs", ids, body: jobUpdateSchema }, ({ member, ids, body }) => NextResponse.json({ job: updateJob(member, ids.id, body) }));
+export const PATCH = route({ role: "editJobs", ids, body: jobUpdateSchema }, ({ member, ids, body }) =>
+  NextResponse.json({ job: updateJob(member, ids.id, body) }),
+);
 
 export const DELETE = route({ role: "deleteJobs", ids }, async ({ member, ids }) => {
   const { storedNames } = deleteJob(member, ids.id);

@@ -9,7 +9,11 @@ import { downloadName } from "@/lib/jobs/download-name";
 export const GET = route({ query: orderCsvQuerySchema }, ({ member, query }) => {
   const { currency, groups } = getOrderList(member);
   const chosen = query.supplier ? groups.filter((g) => g.key === supplierKey(query.supplier)) : groups;
-  const slug = query.supplier ? supplierKey(query.supplier).replace(/[^a-z0-9]+/g, "-").replace(/^-|-$/g, "") || "supplier" : "all-suppliers";
+  const slug = query.supplier
+    ? supplierKey(query.supplier)
+        .replace(/[^a-z0-9]+/g, "-")
+        .replace(/^-|-$/g, "") || "supplier"
+    : "all-suppliers";
   return new Response(`\uFEFF${orderGroupsToCsv(chosen, currency)}\r\n`, {
     headers: {
       "content-type": "text/csv; charset=utf-8",

@@ -15,7 +15,11 @@ export const POST = route({ role: "manageMembers", body: invitationSchema }, asy
   const invitation = createInvitation(member, input);
   const link = `${base}/invite/${invitation.token}`;
   try {
-    await sendMail({ to: invitation.email, ...invitationMail({ workshopName: member.workshopName, inviterName: member.name, role: invitation.role, link, expiresAt: invitation.expiresAt }), workshopId: member.workshopId });
+    await sendMail({
+      to: invitation.email,
+      ...invitationMail({ workshopName: member.workshopName, inviterName: member.name, role: invitation.role, link, expiresAt: invitation.expiresAt }),
+      workshopId: member.workshopId,
+    });
   } catch (err) {
     // A link nobody received must not stay valid.
     console.error("Invitation e-mail failed", err);

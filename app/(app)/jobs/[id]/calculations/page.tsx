@@ -28,7 +28,11 @@ export default async function CalculationsPage({ params }: JobPageProps) {
   const { member, job } = await loadJobPage((await params).id, "calculations");
   const calcs = listCalculations(member, job.id);
   // "Do this one yourself": mentors set it for an apprentice; an apprentice makes one at once (null).
-  const apprentices = can.assignDrills(member) ? listMembers(member).filter((m) => m.role === "apprentice").map((m) => ({ userId: m.userId, name: m.name })) : null;
+  const apprentices = can.assignDrills(member)
+    ? listMembers(member)
+        .filter((m) => m.role === "apprentice")
+        .map((m) => ({ userId: m.userId, name: m.name }))
+    : null;
   if (calcs.length === 0) {
     return (
       <EmptyState title="No calculations saved to this job" action={<ButtonLink href="/bench">Open the Bench</ButtonLink>}>
@@ -46,7 +50,13 @@ export default async function CalculationsPage({ params }: JobPageProps) {
           <li key={c.id} className="flex flex-col rounded-card border border-rule bg-panel p-5 shadow-card">
             <div className="flex items-start justify-between gap-3">
               <h2 className="text-lead font-bold">{calc?.title ?? c.slug}</h2>
-              {can.editJobs(member) ? <DeleteButton url={`/api/jobs/${job.id}/calculations/${c.id}`} confirm="Remove this saved calculation?" label={`Remove ${calc?.title ?? c.slug}`} /> : null}
+              {can.editJobs(member) ? (
+                <DeleteButton
+                  url={`/api/jobs/${job.id}/calculations/${c.id}`}
+                  confirm="Remove this saved calculation?"
+                  label={`Remove ${calc?.title ?? c.slug}`}
+                />
+              ) : null}
             </div>
             <p className="text-note text-muted">
               {c.author?.name ?? "A former member"} · {formatDateTime(c.createdAt)}
@@ -55,7 +65,9 @@ export default async function CalculationsPage({ params }: JobPageProps) {
             <dl className="mt-3 grid grid-cols-2 gap-x-4 gap-y-1 text-note">
               {inputs.map((i) => (
                 <div key={i.name} className="contents">
-                  <dt className="text-muted"><InputLabel meta={i} /></dt>
+                  <dt className="text-muted">
+                    <InputLabel meta={i} />
+                  </dt>
                   <dd className="font-mono">{show(c.inputs[i.name], i.unit)}</dd>
                 </div>
               ))}
@@ -68,7 +80,10 @@ export default async function CalculationsPage({ params }: JobPageProps) {
                 </div>
               ))}
             </dl>
-            <Link href={benchHref(c.slug, calc ? reopenInputs(calc.inputs, c.inputs) : c.inputs)} className="mt-4 w-fit font-bold text-signal underline underline-offset-4">
+            <Link
+              href={benchHref(c.slug, calc ? reopenInputs(calc.inputs, c.inputs) : c.inputs)}
+              className="mt-4 w-fit font-bold text-signal underline underline-offset-4"
+            >
               Reopen in the Bench
             </Link>
             <DoItYourself calculationId={c.id} apprentices={apprentices} />

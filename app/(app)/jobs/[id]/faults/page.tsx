@@ -24,7 +24,9 @@ export default async function FaultsPage({ params }: JobPageProps) {
     <div className="flex flex-col gap-6">
       <section aria-labelledby="faults-h" className="flex flex-col gap-4">
         <div className="flex flex-wrap items-baseline justify-between gap-2">
-          <h2 id="faults-h" className="text-lead font-bold">Fault hunt</h2>
+          <h2 id="faults-h" className="text-lead font-bold">
+            Fault hunt
+          </h2>
           {faults.length ? <p className="text-muted">{open ? `${open} of ${faults.length} not fixed` : `All ${faults.length} fixed`}</p> : null}
         </div>
         {faults.length ? (

@@ -27,7 +27,9 @@ export default async function FilesPage({ params }: JobPageProps) {
       ) : null}
       {files.length === 0 ? (
         <EmptyState title="No photos or schematics yet">
-          {canEdit ? "Photograph the chassis before you start — it settles where every lead went. Attach the schematic too." : "Technicians attach photos of the chassis and the schematic here."}
+          {canEdit
+            ? "Photograph the chassis before you start — it settles where every lead went. Attach the schematic too."
+            : "Technicians attach photos of the chassis and the schematic here."}
         </EmptyState>
       ) : (
         <ul className="grid gap-4 sm:grid-cols-2 lg:grid-cols-3" data-testid="files">
@@ -42,12 +44,17 @@ export default async function FilesPage({ params }: JobPageProps) {
                 )}
               </a>
               <div className="flex flex-1 flex-col gap-1 p-3">
-                <p className="truncate font-bold" title={f.originalName}>{f.originalName}</p>
+                <p className="truncate font-bold" title={f.originalName}>
+                  {f.originalName}
+                </p>
                 <p className="text-note text-muted">
-                  <span>{FILE_KIND_LABELS[f.kind]}</span> · {size(f.size)} · {formatDate(f.createdAt)}{f.uploaderName ? ` · ${f.uploaderName}` : ""}
+                  <span>{FILE_KIND_LABELS[f.kind]}</span> · {size(f.size)} · {formatDate(f.createdAt)}
+                  {f.uploaderName ? ` · ${f.uploaderName}` : ""}
                 </p>
                 <div className="mt-auto flex items-center justify-between pt-2">
-                  <a href={url(f.id, "?download=1")} className="text-note font-bold text-signal underline underline-offset-4">Download</a>
+                  <a href={url(f.id, "?download=1")} className="text-note font-bold text-signal underline underline-offset-4">
+                    Download
+                  </a>
                   {canEdit ? <DeleteButton url={url(f.id)} confirm={`Remove ${f.originalName}?`} label={`Remove ${f.originalName}`} /> : null}
                 </div>
               </div>

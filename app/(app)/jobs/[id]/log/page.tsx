@@ -27,7 +27,9 @@ export default async function LogPage({ params }: JobPageProps) {
   return (
     <div className="grid gap-6 lg:grid-cols-[3fr_2fr]">
       <section aria-labelledby="log-h">
-        <h2 id="log-h" className="mb-3 text-lead font-bold">Bench log</h2>
+        <h2 id="log-h" className="mb-3 text-lead font-bold">
+          Bench log
+        </h2>
         {entries.length === 0 ? (
           <EmptyState title="Nothing logged yet">Write what you find as you go; the next person at the bench will thank you.</EmptyState>
         ) : (
@@ -38,13 +40,23 @@ export default async function LogPage({ params }: JobPageProps) {
                 <li key={e.id} className="rounded-card border border-rule bg-panel p-4">
                   <div className="flex flex-wrap items-center gap-x-3 gap-y-1 text-note">
                     <span className={`rounded-full px-2 py-0.5 font-bold ${TONE[e.kind]}`}>{LOG_KIND_LABELS[e.kind]}</span>
-                    <time dateTime={e.createdAt.toISOString()} className="font-mono">{formatDateTime(e.createdAt)}</time>
-                    <span className="text-muted">{e.author?.name ?? (e.kind === "estimate" ? "The customer" : e.kind === "invoice" ? "Payment service" : "A former member")}</span>
+                    <time dateTime={e.createdAt.toISOString()} className="font-mono">
+                      {formatDateTime(e.createdAt)}
+                    </time>
+                    <span className="text-muted">
+                      {e.author?.name ?? (e.kind === "estimate" ? "The customer" : e.kind === "invoice" ? "Payment service" : "A former member")}
+                    </span>
                   </div>
                   {e.kind === "power-up" && data?.supplyVoltage !== undefined ? (
                     <p className="mt-2 flex gap-6 font-mono">
-                      <span><span className="text-muted">Supply </span>{formatQuantity(data.supplyVoltage, "V")}</span>
-                      <span><span className="text-muted">Drawn </span>{formatQuantity(data.currentDrawn ?? 0, "A")}</span>
+                      <span>
+                        <span className="text-muted">Supply </span>
+                        {formatQuantity(data.supplyVoltage, "V")}
+                      </span>
+                      <span>
+                        <span className="text-muted">Drawn </span>
+                        {formatQuantity(data.currentDrawn ?? 0, "A")}
+                      </span>
                     </p>
                   ) : null}
                   <p className="mt-1 whitespace-pre-line">{e.text}</p>

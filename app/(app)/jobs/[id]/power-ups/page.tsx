@@ -18,7 +18,9 @@ export default async function PowerUpsPage({ params }: JobPageProps) {
   return (
     <div className="flex flex-col gap-6">
       <section aria-labelledby="pu-h" className="flex flex-col gap-4">
-        <h2 id="pu-h" className="text-lead font-bold">Bring-ups</h2>
+        <h2 id="pu-h" className="text-lead font-bold">
+          Bring-ups
+        </h2>
         {shown.length ? (
           shown.map(({ s, n }) => <PowerUpSession key={s.id} jobId={job.id} session={s} number={n} canAdd={canAdd} />)
         ) : (

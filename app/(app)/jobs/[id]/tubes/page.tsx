@@ -33,7 +33,9 @@ export default async function TubesPage({ params }: JobPageProps) {
       <TubeTypeOptions types={ALL_TYPES} />
       <section aria-labelledby="tubes-h">
         <div className="mb-3 flex flex-wrap items-baseline justify-between gap-2">
-          <h2 id="tubes-h" className="text-lead font-bold">Sockets</h2>
+          <h2 id="tubes-h" className="text-lead font-bold">
+            Sockets
+          </h2>
           {tubes.length ? (
             <p className="text-muted" data-testid="tubes-summary">
               {tubes.length} {tubes.length === 1 ? "tube" : "tubes"}
@@ -48,7 +50,9 @@ export default async function TubesPage({ params }: JobPageProps) {
             ))}
           </ul>
         ) : (
-          <EmptyState title="No tubes listed yet">Paste the set&rsquo;s line-up from its tube chart below, then test each tube and record the result against the tester&rsquo;s minimum.</EmptyState>
+          <EmptyState title="No tubes listed yet">
+            Paste the set&rsquo;s line-up from its tube chart below, then test each tube and record the result against the tester&rsquo;s minimum.
+          </EmptyState>
         )}
       </section>
       {tubes.length ? <HeaterStringLink tubes={tubes} seriesString={seriesString} /> : null}
