@@ -31,5 +31,5 @@ export function renderReadyMessage(template: string | null | undefined, values: 
 }
 
 export function readySubject(workshopName: string, setTitle: string): string {
-  return `Ready to collect: ${setTitle} — ${workshopName}`;
+  return `Your ${setTitle} is waiting at our counter — ${workshopName}`;
 }

@@ -6,7 +6,7 @@ import { address } from "../helpers/workshops";
 
 /** The bench record through the real server: shapes, field messages for bad input, and the rules with teeth. */
 
-/** Ready to collect: the step before the set goes home. */
+/** At the counter: the step before the set goes home. */
 const READY = JOB_STATUSES[JOB_STATUSES.indexOf("returned") - 1];
 
 let team: Team;

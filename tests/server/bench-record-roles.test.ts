@@ -11,7 +11,7 @@ import { makeTeam, type Team } from "../helpers/team";
 
 const CALLERS = ["signedOut", "apprentice", "technician", "owner", "outsider"] as const;
 type Caller = (typeof CALLERS)[number];
-/** Ready to collect: the step before the set goes home. */
+/** At the counter: the step before the set goes home. */
 const READY = JOB_STATUSES[JOB_STATUSES.indexOf("returned") - 1];
 
 let team: Team;
