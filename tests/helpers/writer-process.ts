@@ -4,7 +4,10 @@ import path from "node:path";
 /** Starts tests/helpers/db-writer.ts on a database file and tracks the highest acknowledged row number. */
 export function startWriter(dbFile: string): { child: ChildProcess; acked: () => number; waitFor: (n: number) => Promise<void> } {
   const root = process.cwd();
-  const child = spawn(process.execPath, [path.join(root, "node_modules/tsx/dist/cli.mjs"), path.join(root, "tests/helpers/db-writer.ts"), dbFile], {
+  // tsx loaded into this one node process (not the tsx CLI, which runs the script in a grandchild that
+  // SIGKILL would not reach), so killing `child` really kills the writer mid-transaction.
+  const child = spawn(process.execPath, ["--import", "tsx", path.join(root, "tests/helpers/db-writer.ts"), dbFile], {
+    cwd: root,
     stdio: ["ignore", "pipe", "inherit"],
   });
   let last = -1;
