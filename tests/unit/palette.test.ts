@@ -121,6 +121,14 @@ describe("red for danger alone, in the components", () => {
     "components/bench/charts/chart-frame.tsx",
     "components/bench/charts/discharge-chart.tsx",
     "components/bench/charts/breakdown-chart.tsx",
+    // A power-up step over its stop current (a live set drawing more than the limit chosen), and a shorted
+    // tube or a substitute whose heater would overrun a series string.
+    "components/jobs/power-ups/current-chart-slot.tsx",
+    "components/jobs/power-ups/current-chart.tsx",
+    "components/jobs/power-ups/step-add-form.tsx",
+    "components/jobs/power-ups/steps-table.tsx",
+    "components/jobs/tubes/tube-card.tsx",
+    "components/jobs/tubes/tube-verdict.tsx",
   ]);
   const files = (dir: string): string[] =>
     readdirSync(path.join(root, dir)).flatMap((f) => {
