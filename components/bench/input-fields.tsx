@@ -35,8 +35,10 @@ const describedBy = (id: string, error?: string, help?: string) =>
 
 /** One input of a calculator, rendered as its metadata asks. */
 export function InputControl({ meta, slug }: { meta: InputMeta; slug: string }) {
-  const { register, formState } = useFormContext();
+  const { register, formState, getValues } = useFormContext();
   const id = `in-${meta.name}`;
+  // Also rendered into the server's HTML, so the page shows the figures before the script arrives.
+  const initial: unknown = getValues(meta.name);
   const error = errorAt(formState.errors, meta.name);
   const label = (
     <>
@@ -56,6 +58,7 @@ export function InputControl({ meta, slug }: { meta: InputMeta; slug: string }) 
             type="checkbox"
             className="h-5 w-5 accent-[rgb(var(--gb-glow))]"
             aria-describedby={describedBy(id, error, meta.help)}
+            defaultChecked={initial === true}
             {...register(meta.name)}
           />
           <InputLabel meta={meta} />
@@ -77,6 +80,7 @@ export function InputControl({ meta, slug }: { meta: InputMeta; slug: string }) 
           aria-invalid={error ? true : undefined}
           aria-describedby={describedBy(id, error, meta.help)}
           className={`${inputClass} ${error ? "border-flag" : "border-edge"}`}
+          defaultValue={typeof initial === "string" ? initial : undefined}
           {...register(meta.name)}
         >
           {!meta.required && meta.default === undefined ? <option value="">{meta.blankLabel ?? "None"}</option> : null}
@@ -103,6 +107,7 @@ export function InputControl({ meta, slug }: { meta: InputMeta; slug: string }) 
       spellCheck={false}
       inputMode="text"
       className="gb-field"
+      defaultValue={typeof initial === "string" ? initial : undefined}
       {...register(meta.name)}
     />
   );
