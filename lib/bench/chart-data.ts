@@ -13,24 +13,25 @@ const num = (v: unknown): number | undefined => (typeof v === "number" && Number
 
 export interface Discharge {
   points: { t: number; v: number }[];
-  safe: number;
-  safeLabel: string;
-  /** Time the voltage reaches the safe level. */
-  tSafe: number;
+  /** The level the curve is compared with (a residual-voltage limit, a target, 50 V). */
+  limit: number;
+  limitLabel: string;
+  /** Time the voltage falls to that level. */
+  tLimit: number;
   /** A deadline to mark (the bleeder's time allowed), if any. */
   deadline?: number;
 }
 
-/** V(t) = V0·e^(−t/τ) from 0 to a little past the safe level (or 5τ). */
-export function dischargeCurve(v0: number, tau: number, safe: number, safeLabel: string, deadline?: number): Discharge {
-  const tSafe = safe < v0 ? tau * Math.log(v0 / safe) : 0;
-  const end = Math.max(tSafe * 1.5, deadline ? deadline * 1.25 : 0) || tau * 5;
+/** V(t) = V0·e^(−t/τ) from 0 to a little past the level compared with (or 5τ). */
+export function dischargeCurve(v0: number, tau: number, limit: number, limitLabel: string, deadline?: number): Discharge {
+  const tLimit = limit < v0 ? tau * Math.log(v0 / limit) : 0;
+  const end = Math.max(tLimit * 1.5, deadline ? deadline * 1.25 : 0) || tau * 5;
   const n = 60;
   const points = Array.from({ length: n + 1 }, (_, i) => {
     const t = (end * i) / n;
     return { t, v: v0 * Math.exp(-t / tau) };
   });
-  return { points, safe, safeLabel, tSafe, deadline };
+  return { points, limit, limitLabel, tLimit, deadline };
 }
 
 export function timeConstantDischarge(inputs: Rec, outputs: Rec): Discharge | null {
@@ -45,10 +46,10 @@ export function bleederDischarge(inputs: Rec, outputs: Rec): Discharge | null {
   const v0 = num(inputs.workingVoltage);
   const c = num(inputs.capacitance);
   const r = num(outputs.suggestedResistance) ?? num(outputs.maxResistance);
-  const safe = num(inputs.safeVoltage);
-  if (v0 === undefined || c === undefined || r === undefined || safe === undefined) return null;
+  const limit = num(inputs.safeVoltage);
+  if (v0 === undefined || c === undefined || r === undefined || limit === undefined) return null;
   // The line is the residual-voltage limit the result is measured against (IEC 60204-1 §6.2.4 by default), never a "safe" level.
-  return dischargeCurve(v0, r * c, safe, "Residual-voltage limit", num(inputs.maxTime));
+  return dischargeCurve(v0, r * c, limit, "Residual-voltage limit", num(inputs.maxTime));
 }
 
 export interface Ripple {

@@ -23,7 +23,7 @@ const texts = (r: ReturnType<typeof run>) => [...r.warnings.map((w) => w.message
 /*
  * IEC 60664-1 figures below: edition 3.0 (2020), Table F.8 (clearances to withstand steady-state voltages,
  * temporary overvoltages or recurring peak voltages), Table A.2 (altitude correction) and Table F.2 (pollution
- * degree 2 minimum). Read from two independent open-source transcriptions of that edition (KiCad pcb_calculator
+ * degree 2 minimum). Read from two independent open-source copies of that edition (KiCad pcb_calculator
  * iec60664.cpp; OpenMagnetics MKF insulation data), not from the standard's own page; the 2007 edition's
  * Table F.7 carries the same rows (from memory).
  */
@@ -59,7 +59,7 @@ describe("arc-clearance: published checks", () => {
 
 describe("arc-clearance: IEC 60664-1:2020 Table F.8 and Table A.2", () => {
   it("case A (inhomogeneous field) rows: 1 kV 0.26 mm, 2 kV 1.27 mm, 8 kV 11.0 mm, 15 kV 25 mm, 50 kV 100 mm", () => {
-    // IEC 60664-1:2020 Table F.8, case A, the rows named (transcriptions above)
+    // IEC 60664-1:2020 Table F.8, case A, the rows named (copies named above)
     const rows: [string, number][] = [
       ["1 kV", 0.26],
       ["2 kV", 1.27],
@@ -116,7 +116,7 @@ describe("arc-clearance: IEC 60664-1:2020 Table F.8 and Table A.2", () => {
   });
 
   it("altitude factors of Table A.2: 1 up to 2000 m, 1.14 to 3000 m, 1.48 to 5000 m, 3.02 to 10 000 m, 14.5 to 20 000 m", () => {
-    // IEC 60664-1:2020 Table A.2 (transcriptions above)
+    // IEC 60664-1:2020 Table A.2 (copies named above)
     const rows: [number, number][] = [
       [0, 1],
       [2000, 1],

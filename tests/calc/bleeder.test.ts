@@ -126,8 +126,8 @@ describe("bleeder: wording and the chart say what the figure is measured against
     ];
     for (const t of texts) expect(t).not.toMatch(/\bsafe\b|\bsafely\b/i);
     const d = bleederDischarge(r.inputs, r.outputs);
-    expect(d?.safeLabel).toBe("Residual-voltage limit");
-    expect(d?.safe).toBe(30);
+    expect(d?.limitLabel).toBe("Residual-voltage limit");
+    expect(d?.limit).toBe(30);
   });
 
   it("shows the stored energy ½CV² and the worst-corner check as steps", () => {

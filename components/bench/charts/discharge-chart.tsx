@@ -10,14 +10,14 @@ import { C, ChartFrame, fmt, tick } from "./chart-frame";
 export default function DischargeChart({ kind, inputs, outputs }: ChartProps) {
   const d = kind === "bleeder-discharge" ? bleederDischarge(inputs, outputs) : timeConstantDischarge(inputs, outputs);
   if (!d) return null;
-  const late = d.deadline !== undefined && d.tSafe > d.deadline;
+  const late = d.deadline !== undefined && d.tLimit > d.deadline;
   return (
     <ChartFrame
       title="Discharge curve"
       caption={
         <>
-          From {formatQuantity(d.points[0].v, "V")} the voltage falls below the {d.safeLabel.toLowerCase()} of {formatQuantity(d.safe, "V")} after{" "}
-          <strong className="text-ink">{formatQuantity(d.tSafe, "s")}</strong>
+          From {formatQuantity(d.points[0].v, "V")} the voltage falls below the {d.limitLabel.toLowerCase()} of {formatQuantity(d.limit, "V")} after{" "}
+          <strong className="text-ink">{formatQuantity(d.tLimit, "s")}</strong>
           {d.deadline !== undefined ? `; the time allowed is ${formatQuantity(d.deadline, "s")}` : ""}. Always verify with a meter.
         </>
       }
@@ -34,11 +34,11 @@ export default function DischargeChart({ kind, inputs, outputs }: ChartProps) {
           />
           {/* A reference line in the neutral signal colour: green would read as "safe below here", which no limit is. */}
           <ReferenceLine
-            y={d.safe}
+            y={d.limit}
             stroke={C.signal}
             strokeDasharray="6 4"
             strokeWidth={2}
-            label={{ value: `${d.safeLabel} (${formatQuantity(d.safe, "V")})`, fill: C.signal, position: "insideTopRight", fontSize: 13 }}
+            label={{ value: `${d.limitLabel} (${formatQuantity(d.limit, "V")})`, fill: C.signal, position: "insideTopRight", fontSize: 13 }}
           />
           {d.deadline !== undefined ? (
             <ReferenceLine
@@ -49,7 +49,7 @@ export default function DischargeChart({ kind, inputs, outputs }: ChartProps) {
             />
           ) : null}
           <Line type="monotone" dataKey="v" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} name="Voltage" />
-          <ReferenceDot x={d.tSafe} y={d.safe} r={6} fill={late ? C.hazard : C.signal} stroke={C.panel} strokeWidth={2} />
+          <ReferenceDot x={d.tLimit} y={d.limit} r={6} fill={late ? C.hazard : C.signal} stroke={C.panel} strokeWidth={2} />
         </LineChart>
       </ResponsiveContainer>
     </ChartFrame>

@@ -9,7 +9,7 @@
  * - Table A.2: altitude correction factors for clearances (the clearance tables are for up to 2000 m).
  * - Table F.2: the minimum clearance for pollution degree 2, 0.2 mm.
  *
- * Where the figures come from: read row by row from two independent open-source transcriptions
+ * Where the figures come from: read row by row from two independent open-source copies
  * of the 2020 edition (KiCad's pcb_calculator, iec60664.cpp; OpenMagnetics MKF's insulation test
  * data), which agree with each other and with the rows recalled from the 2007 edition; not read
  * from the standard's own pages. Check against a purchased copy before relying on them.
@@ -145,7 +145,7 @@ export function altitudeFactor(altitude: number): { factor: number; rowMetres: n
   return { factor: ALT_FACTOR[i], rowMetres: ALT_UP_TO[i] };
 }
 
-/** Every row, for tests and for anyone checking the transcription. */
+/** Every row, for tests and for anyone checking the copied figures. */
 export const TABLE_F8_ROWS = F8;
 export const TABLE_A2_ROWS = A2;
 

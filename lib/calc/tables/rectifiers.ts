@@ -90,7 +90,7 @@ export const RECTIFIERS: readonly RectifierEntry[] = [
     tubeDropCurrent: 275 * mA,
     peakInverseVoltage: 1550,
     source: `${RCA}, 5U4GB data (from memory)`,
-    note: "Rated for more current than the older 5U4G; a 5U4G is not a safe substitute at the GB's current.",
+    note: "Rated for more current than the older 5U4G; a 5U4G is rated below the GB's current, so it does not stand in for one.",
   },
   {
     type: "5AR4",
