@@ -96,8 +96,10 @@ export function PartRow({
     );
     return (
       <tr className="bg-sunk/50" data-testid={`part-${part.designator}`}>
-        <td className={cell}>{box("designator", "Ref.")}</td>
-        <td className={cell}>
+        <td className={cell} data-label="Ref.">
+          {box("designator", "Ref.")}
+        </td>
+        <td className={cell} data-label="Kind">
           <select aria-label="Kind" className={input} value={draft.kind} onChange={(e) => setDraft({ ...draft, kind: e.target.value })}>
             {PART_KINDS.map((k) => (
               <option key={k} value={k}>
@@ -107,14 +109,14 @@ export function PartRow({
           </select>
         </td>
         {(["original", "replacement"] as const).map((side) => (
-          <td key={side} className={cell}>
+          <td key={side} className={cell} data-label={side === "original" ? "Original" : "Replacement"}>
             <div className="flex flex-col gap-1">
               {box(`${side}Value`, `${side === "original" ? "Original" : "Replacement"} value`)}
               {box(`${side}Rating`, `${side === "original" ? "Original" : "Replacement"} rating`)}
             </div>
           </td>
         ))}
-        <td className={cell}>
+        <td className={cell} data-label="Order">
           <div className="flex flex-col gap-1">
             {box("quantity", "Quantity", { inputMode: "numeric" })}
             {box("supplier", "Supplier", { list: "part-suppliers" })}
@@ -160,9 +162,13 @@ export function PartRow({
   return (
     <tr className={caution ? "bg-caution-bg/60" : undefined} data-testid={`part-${part.designator}`}>
       <td className={`${cell} font-mono font-bold`}>{part.designator}</td>
-      <td className={cell}>{PART_KIND_LABELS[part.kind]}</td>
-      <td className={cell}>{pair(part.originalValue, part.originalRating)}</td>
-      <td className={cell}>
+      <td className={cell} data-label="Kind">
+        {PART_KIND_LABELS[part.kind]}
+      </td>
+      <td className={cell} data-label="Original">
+        {pair(part.originalValue, part.originalRating)}
+      </td>
+      <td className={cell} data-label="Replacement">
         {pair(part.replacementValue, part.replacementRating)}
         {caution ? (
           <span className="ml-2 font-bold text-caution" title="See the caution above">
@@ -184,11 +190,11 @@ export function PartRow({
           </span>
         ))}
       </td>
-      <td className={cell} data-testid={`part-order-${part.designator}`}>
+      <td className={cell} data-label="Order" data-testid={`part-order-${part.designator}`}>
         {order ? <span className="block text-note">{order}</span> : <span className="text-muted">—</span>}
         {currency && part.unitCostMinor != null ? <span className="block font-mono text-note">{formatMoney(part.unitCostMinor, currency)} each</span> : null}
       </td>
-      <td className={cell}>
+      <td className={cell} data-label="State">
         {canEdit ? (
           <select
             aria-label={`State of ${part.designator}`}

@@ -1,11 +1,10 @@
 "use client";
 
-import { useRouter } from "next/navigation";
 import { useMemo, useState } from "react";
 import type { ReadingRow } from "@/db/queries/readings";
 import { formatQuantity } from "@/lib/calc/format";
-import { sendJson } from "@/lib/client/fetch-json";
 import { VERDICT_LABELS, type ReadingVerdict } from "@/lib/jobs/reading-verdict";
+import { RemoveButton } from "./remove-button";
 
 const TONE: Record<ReadingVerdict, string> = {
   within: "bg-ok-bg text-ok border-ok/40",
@@ -27,23 +26,8 @@ type Dir = "none" | "desc" | "asc";
 /** Open resistors sort as the largest drift, so they lead a "worst first" list. */
 const key = (r: ReadingRow) => (r.verdict === "open" ? Number.POSITIVE_INFINITY : (r.deviation ?? 0));
 
-function RemoveButton({ jobId, r }: { jobId: number; r: ReadingRow }) {
-  const router = useRouter();
-  return (
-    <button
-      type="button"
-      className="min-h-9 rounded-chip px-2 text-note font-bold text-flag hover:bg-flag-bg"
-      aria-label={`Remove reading ${r.designator}`}
-      onClick={async () => {
-        if (!window.confirm(`Remove the reading for ${r.designator}?`)) return;
-        const res = await sendJson(`/api/jobs/${jobId}/readings/${r.id}`, undefined, "DELETE");
-        if (res.ok) router.refresh();
-        else window.alert(res.message);
-      }}
-    >
-      Remove
-    </button>
-  );
+function RemoveReading({ jobId, r }: { jobId: number; r: ReadingRow }) {
+  return <RemoveButton url={`/api/jobs/${jobId}/readings/${r.id}`} confirm={`Remove the reading for ${r.designator}?`} label={`Remove reading ${r.designator}`} />;
 }
 
 export function ResistorSurvey({ jobId, rows, canEdit }: { jobId: number; rows: ReadingRow[]; canEdit: boolean }) {
@@ -51,7 +35,7 @@ export function ResistorSurvey({ jobId, rows, canEdit }: { jobId: number; rows: 
   const sorted = useMemo(() => (dir === "none" ? rows : [...rows].sort((a, b) => (dir === "desc" ? key(b) - key(a) : key(a) - key(b)))), [rows, dir]);
   const next: Record<Dir, Dir> = { none: "desc", desc: "asc", asc: "none" };
   return (
-    <table className="w-full min-w-[40rem] border-collapse text-left" data-testid="resistor-survey">
+    <table className="gb-stack w-full min-w-[40rem] border-collapse text-left" data-testid="resistor-survey">
       <thead className="border-b border-rule bg-sunk/60">
         <tr>
           <th scope="col" className={th}>
@@ -67,7 +51,7 @@ export function ResistorSurvey({ jobId, rows, canEdit }: { jobId: number; rows: 
             Measured
           </th>
           <th scope="col" className={th} aria-sort={dir === "none" ? "none" : dir === "asc" ? "ascending" : "descending"}>
-            <button type="button" className="inline-flex min-h-9 items-center gap-1 uppercase hover:text-ink" onClick={() => setDir(next[dir])}>
+            <button type="button" className="inline-flex min-h-11 items-center gap-1 uppercase hover:text-ink" onClick={() => setDir(next[dir])}>
               Deviation{" "}
               <span aria-hidden="true" className="font-mono">
                 {dir === "desc" ? "▼" : dir === "asc" ? "▲" : "↕"}
@@ -88,16 +72,18 @@ export function ResistorSurvey({ jobId, rows, canEdit }: { jobId: number; rows: 
         {sorted.map((r) => (
           <tr key={r.id} data-testid={`reading-${r.designator}`}>
             <td className={`${td} font-mono font-bold`}>{r.designator}</td>
-            <td className={`${td} font-mono`}>{formatQuantity(r.nominal, "Ω")}</td>
-            <td className={`${td} font-mono`}>±{Math.round(r.tolerance * 100)} %</td>
-            <td className={`${td} font-mono`}>{r.measured === null ? "open" : formatQuantity(r.measured, "Ω")}</td>
-            <td className={`${td} font-mono`}>{pct(r.deviation)}</td>
-            <td className={td}>
+            <td data-label="Marked" className={`${td} font-mono`}>{formatQuantity(r.nominal, "Ω")}</td>
+            <td data-label="Tolerance" className={`${td} font-mono`}>±{Math.round(r.tolerance * 100)} %</td>
+            <td data-label="Measured" className={`${td} font-mono`}>{r.measured === null ? "open" : formatQuantity(r.measured, "Ω")}</td>
+            <td data-label="Deviation" className={`${td} font-mono`}>
+              {pct(r.deviation)}
+            </td>
+            <td data-label="Verdict" className={td}>
               <Verdict v={r.verdict} />
             </td>
             {canEdit ? (
               <td className={`${td} text-right`}>
-                <RemoveButton jobId={jobId} r={r} />
+                <RemoveReading jobId={jobId} r={r} />
               </td>
             ) : null}
           </tr>
@@ -109,7 +95,7 @@ export function ResistorSurvey({ jobId, rows, canEdit }: { jobId: number; rows: 
 
 export function VoltageTable({ jobId, rows, canEdit }: { jobId: number; rows: ReadingRow[]; canEdit: boolean }) {
   return (
-    <table className="w-full min-w-[36rem] border-collapse text-left" data-testid="voltage-readings">
+    <table className="gb-stack w-full min-w-[36rem] border-collapse text-left" data-testid="voltage-readings">
       <thead className="border-b border-rule bg-sunk/60">
         <tr>
           <th scope="col" className={th}>
@@ -145,17 +131,19 @@ export function VoltageTable({ jobId, rows, canEdit }: { jobId: number; rows: Re
                 </span>
               ) : null}
             </td>
-            <td className={`${td} font-mono`}>
+            <td data-label="Expected" className={`${td} font-mono`}>
               {formatQuantity(r.nominal, "V")} <span className="text-muted">±{Math.round(r.tolerance * 100)} %</span>
             </td>
-            <td className={`${td} font-mono`}>{r.measured === null ? "—" : formatQuantity(r.measured, "V")}</td>
-            <td className={`${td} font-mono`}>{pct(r.deviation)}</td>
-            <td className={td}>
+            <td data-label="Measured" className={`${td} font-mono`}>{r.measured === null ? "—" : formatQuantity(r.measured, "V")}</td>
+            <td data-label="Difference" className={`${td} font-mono`}>
+              {pct(r.deviation)}
+            </td>
+            <td data-label="Verdict" className={td}>
               <Verdict v={r.verdict} />
             </td>
             {canEdit ? (
               <td className={`${td} text-right`}>
-                <RemoveButton jobId={jobId} r={r} />
+                <RemoveReading jobId={jobId} r={r} />
               </td>
             ) : null}
           </tr>

@@ -83,7 +83,7 @@ export default async function PartsPage({ params, searchParams }: JobPageProps &
             ))}
           </nav>
           <div className="relative overflow-x-auto rounded-card border border-rule bg-panel shadow-card">
-            <table className="w-full min-w-[56rem] border-collapse text-left">
+            <table className="gb-stack w-full min-w-[48rem] border-collapse text-left">
               <thead className="border-b border-rule bg-sunk/60 text-note font-bold uppercase tracking-wide text-muted">
                 <tr>
                   <th scope="col" className="px-3 py-2">
