@@ -3,7 +3,7 @@ import { databasePath } from "./db/env";
 
 export default defineConfig({
   dialect: "sqlite",
-  schema: "./db/schema.ts",
+  schema: "./db/schema/index.ts",
   out: "./db/migrations",
   dbCredentials: { url: databasePath() },
 });

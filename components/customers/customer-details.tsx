@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 import { CustomerForm } from "./customer-form";
 
 interface Details {
@@ -19,14 +19,11 @@ interface Details {
 export function CustomerDetails({ customer, canEdit, canDelete }: { customer: Details; canEdit: boolean; canDelete: boolean }) {
   const router = useRouter();
   const [editing, setEditing] = useState(false);
-  const [error, setError] = useState<string | null>(null);
+  const { run, error } = useAction({ url: `/api/customers/${customer.id}`, method: "DELETE", onDone: () => router.push("/customers") });
   if (editing) return <CustomerForm customer={customer} onDone={() => setEditing(false)} />;
   async function remove() {
     if (!window.confirm(`Remove ${customer.name} from the customer list?`)) return;
-    const res = await sendJson(`/api/customers/${customer.id}`, undefined, "DELETE");
-    if (!res.ok) return setError(res.message);
-    router.push("/customers");
-    router.refresh();
+    await run();
   }
   const rows: [string, React.ReactNode][] = [
     [

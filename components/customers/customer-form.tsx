@@ -2,12 +2,11 @@
 
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useSubmit } from "@/components/ui/use-submit";
 import { customerSchema, type CustomerInput, type CustomerValues } from "@/lib/customers/schemas";
 
 const NAMES = ["name", "email", "phone", "address", "notes"] as const;
@@ -16,28 +15,22 @@ type Existing = { id: number } & Record<(typeof NAMES)[number], string | null>;
 /** Add a customer (POST /api/customers) or edit one (PATCH /api/customers/[id]); one zod schema with the server. */
 export function CustomerForm({ customer, onDone }: { customer?: Existing; onDone?: () => void }) {
   const router = useRouter();
-  const [formError, setFormError] = useState<string | null>(null);
   const initial = Object.fromEntries(NAMES.map((n) => [n, customer?.[n] ?? ""])) as CustomerInput;
+  const form = useForm<CustomerInput, unknown, CustomerValues>({ resolver: zodResolver(customerSchema), defaultValues: initial });
   const {
     register,
-    handleSubmit,
-    setError,
     formState: { errors, isSubmitting },
-  } = useForm<CustomerInput, unknown, CustomerValues>({ resolver: zodResolver(customerSchema), defaultValues: initial });
-  const onSubmit = handleSubmit(async (values) => {
-    setFormError(null);
-    const res = customer
-      ? await sendJson<{ customer: { id: number } }>(`/api/customers/${customer.id}`, values, "PATCH")
-      : await sendJson<{ customer: { id: number } }>("/api/customers", values);
-    if (!res.ok) {
-      for (const [name, message] of Object.entries(res.fields))
-        if ((NAMES as readonly string[]).includes(name)) setError(name as (typeof NAMES)[number], { message });
-      return setFormError(res.message);
-    }
-    if (customer) {
-      router.refresh();
-      onDone?.();
-    } else router.push(`/customers/${res.data.customer.id}`);
+  } = form;
+  // An edit refreshes the page it is on; a new customer opens its own page.
+  const { submit: onSubmit, formError } = useSubmit<CustomerInput, { customer: { id: number } }, CustomerValues>(form, {
+    url: customer ? `/api/customers/${customer.id}` : "/api/customers",
+    method: customer ? "PATCH" : "POST",
+    fields: NAMES,
+    refresh: Boolean(customer),
+    onDone: (data) => {
+      if (customer) onDone?.();
+      else router.push(`/customers/${data.customer.id}`);
+    },
   });
   const id = (n: string) => `customer-${n}`;
   return (

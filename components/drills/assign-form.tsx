@@ -1,7 +1,6 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { useForm, type FieldValues, type Resolver } from "react-hook-form";
 import { z } from "zod";
@@ -9,8 +8,8 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FieldNotes } from "@/components/ui/field-notes";
 import { SelectField } from "@/components/ui/select-field";
-import { sendJson } from "@/lib/client/fetch-json";
-import { drillAssignmentSchema } from "@/lib/drills/schemas";
+import { useSubmit } from "@/components/ui/use-submit";
+import { drillAssignmentSchema, type DrillAssignmentInput } from "@/lib/drills/schemas";
 
 /** What the inputs hold; the shared schema reads it (blank count: one drill per calculator chosen). */
 interface FormValues {
@@ -20,6 +19,8 @@ interface FormValues {
   due: string;
   note: string;
 }
+
+const NAMES = ["apprentice", "kinds", "count", "due", "note"] as const;
 
 const formSchema = z.preprocess((raw) => {
   const v = raw as FormValues;
@@ -37,33 +38,30 @@ export interface CalculatorChoice {
 
 /** For owners and technicians: a set of drills over chosen calculators for one apprentice, due on a date. */
 export function AssignForm({ apprentices, calculators }: { apprentices: { userId: number; name: string }[]; calculators: CalculatorChoice[] }) {
-  const router = useRouter();
-  const [status, setStatus] = useState<{ ok: boolean; message: string } | null>(null);
-  const {
-    register,
-    handleSubmit,
-    setError,
-    reset,
-    formState: { errors, isSubmitting },
-  } = useForm<FormValues>({
+  const [done, setDone] = useState<string | null>(null);
+  const form = useForm<FormValues, unknown, DrillAssignmentInput>({
     // The preprocess step takes the form's text; its input type is unknown to zod, so it is named here.
-    resolver: zodResolver(formSchema as unknown as z.ZodType<unknown, FieldValues>) as unknown as Resolver<FormValues>,
+    // What the resolver passes on is the schema's output: that is what is sent.
+    resolver: zodResolver(formSchema as unknown as z.ZodType<unknown, FieldValues>) as unknown as Resolver<FormValues, unknown, DrillAssignmentInput>,
     defaultValues: { apprentice: String(apprentices[0]?.userId ?? ""), kinds: [], count: "", due: inAWeek(), note: "" },
   });
-  const onSubmit = handleSubmit(async (values) => {
-    setStatus(null);
-    const body = formSchema.parse(values);
-    const res = await sendJson<{ assignment: { count: number; apprentice: { name: string } } }>("/api/drills/assignments", body);
-    if (!res.ok) {
-      for (const [name, message] of Object.entries(res.fields)) if (name in values) setError(name as keyof FormValues, { message });
-      setStatus({ ok: false, message: res.message });
-      return;
-    }
-    const a = res.data.assignment;
-    setStatus({ ok: true, message: `${a.count} ${a.count === 1 ? "drill" : "drills"} set for ${a.apprentice.name}.` });
-    reset({ ...values, kinds: [], note: "" });
-    router.refresh();
+  const {
+    register,
+    reset,
+    formState: { errors, isSubmitting },
+  } = form;
+  const { submit: onSubmit, formError } = useSubmit<FormValues, { assignment: { count: number; apprentice: { name: string } } }, DrillAssignmentInput>(form, {
+    url: "/api/drills/assignments",
+    fields: NAMES,
+    onStart: () => setDone(null),
+    onDone: (data) => {
+      const a = data.assignment;
+      setDone(`${a.count} ${a.count === 1 ? "drill" : "drills"} set for ${a.apprentice.name}.`);
+      // Keep who and when for the next set; clear what was chosen.
+      reset({ ...form.getValues(), kinds: [], note: "" });
+    },
   });
+  const status = formError ? { ok: false, message: formError } : done ? { ok: true, message: done } : null;
   const groups = [...new Set(calculators.map((c) => c.group))];
   return (
     <form onSubmit={onSubmit} noValidate aria-label="Set drills" className="flex flex-col gap-2">

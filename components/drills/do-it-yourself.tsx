@@ -1,9 +1,9 @@
 "use client";
 
-import { useRouter } from "next/navigation";
 import { useId, useState } from "react";
 import { Button } from "@/components/ui/button";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
+import { firstMessage } from "@/lib/client/submit-errors";
 import { drillAssignmentSchema } from "@/lib/drills/schemas";
 import { fieldErrors } from "@/lib/field-errors";
 import { StartDrillButton } from "./start-drill-button";
@@ -16,21 +16,25 @@ const inThreeDays = () => new Date(Date.now() + 3 * 86_400_000).toISOString().sl
  */
 export function DoItYourself({ calculationId, apprentices }: { calculationId: number; apprentices: { userId: number; name: string }[] | null }) {
   const id = useId();
-  const router = useRouter();
   const [apprentice, setApprentice] = useState(String(apprentices?.[0]?.userId ?? ""));
   const [due, setDue] = useState(inThreeDays);
-  const [status, setStatus] = useState<{ ok: boolean; message: string } | null>(null);
+  const [done, setDone] = useState<string | null>(null);
+  // One status line: the first field message of a refusal, else its message; or what was set.
+  const { run, error, setError } = useAction<{ assignment: { apprentice: { name: string }; dueDate: string } }>({
+    url: "/api/drills/assignments",
+    onFail: (f) => setError(firstMessage(f)),
+    onDone: (data) => setDone(`Set for ${data.assignment.apprentice.name}, due ${data.assignment.dueDate}.`),
+  });
+  const status = error ? { ok: false, message: error } : done ? { ok: true, message: done } : null;
   if (apprentices === null) return <StartDrillButton body={{ calculationId }} label="Do this one yourself" className="mt-3 w-fit" />;
   if (apprentices.length === 0) return null;
 
   const submit = async (e: React.FormEvent) => {
     e.preventDefault();
     const parsed = drillAssignmentSchema.safeParse({ apprentice, calculationId, due });
-    if (!parsed.success) return setStatus({ ok: false, message: Object.values(fieldErrors(parsed.error))[0] });
-    const res = await sendJson<{ assignment: { apprentice: { name: string }; dueDate: string } }>("/api/drills/assignments", parsed.data);
-    if (!res.ok) return setStatus({ ok: false, message: Object.values(res.fields)[0] ?? res.message });
-    setStatus({ ok: true, message: `Set for ${res.data.assignment.apprentice.name}, due ${res.data.assignment.dueDate}.` });
-    router.refresh();
+    setDone(null);
+    if (!parsed.success) return setError(Object.values(fieldErrors(parsed.error))[0]);
+    await run(parsed.data);
   };
   return (
     <details className="mt-3 rounded-chip border border-rule">

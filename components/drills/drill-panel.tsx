@@ -8,7 +8,7 @@ import type { DrillResult, PublicDrill } from "@/db/queries/drills";
 import { DangerBanner } from "@/components/bench/danger-banner";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useSubmit } from "@/components/ui/use-submit";
 import { drillAnswerSchema } from "@/lib/drills/schemas";
 import { z } from "zod";
 import { DrillWorking } from "./drill-working";
@@ -38,22 +38,28 @@ export function DrillPanel({
 }) {
   const router = useRouter();
   const [result, setResult] = useState<DrillResult | null>(initial);
-  const [formError, setFormError] = useState<string | null>(null);
+  const form = useForm<FormValues>({ resolver: zodResolver(formSchema), defaultValues: { answer: "" } });
   const {
     register,
-    handleSubmit,
-    setError,
     formState: { errors, isSubmitting },
-  } = useForm<FormValues>({ resolver: zodResolver(formSchema), defaultValues: { answer: "" } });
+  } = form;
 
-  const onSubmit = handleSubmit(async ({ answer }) => {
-    setFormError(null);
-    const res = await sendJson<DrillResult>(`/api/drills/${drill.id}/answer`, { answer });
-    if (res.ok) return setResult(res.data);
-    if (res.fields.answer) setError("answer", { message: res.fields.answer });
-    else setFormError(res.message);
-    // Answered meanwhile (another tab): show the drill as the server has it.
-    if (res.status === 409) router.refresh();
+  const {
+    submit: onSubmit,
+    formError,
+    setFormError,
+  } = useSubmit<FormValues, DrillResult>(form, {
+    url: `/api/drills/${drill.id}/answer`,
+    body: ({ answer }) => ({ answer }),
+    fields: ["answer"],
+    refresh: false,
+    onDone: (data) => setResult(data),
+    onFail: (f) => {
+      // A message about the answer goes beside it, not under the form as well.
+      if (f.fields.answer) setFormError(null);
+      // Answered meanwhile (another tab): show the drill as the server has it.
+      if (f.status === 409) router.refresh();
+    },
   });
 
   return (

@@ -3,7 +3,7 @@
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 
 /** Makes a fresh drill (of a kind, or from a saved calculation) on the server and opens it. */
 export function StartDrillButton({
@@ -21,18 +21,19 @@ export function StartDrillButton({
   className?: string;
 }) {
   const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
+  // Set once the new drill opens, so the button stays busy while the page changes.
+  const [leaving, setLeaving] = useState(false);
+  const { run, error, pending } = useAction<{ id: number }>({
+    url: "/api/drills",
+    refresh: false,
+    onDone: (data) => {
+      setLeaving(true);
+      router.push(`/drills/${data.id}`);
+    },
+  });
+  const busy = pending || leaving;
   const start = async () => {
-    setBusy(true);
-    setError(null);
-    const res = await sendJson<{ id: number }>("/api/drills", body);
-    if (!res.ok) {
-      setError(res.message);
-      setBusy(false);
-      return;
-    }
-    router.push(`/drills/${res.data.id}`);
+    await run(body);
   };
   return (
     <span className={`inline-flex flex-col gap-1 ${className}`}>

@@ -5,7 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { EQUIPMENT_KIND_LABELS, type EquipmentKind } from "@/lib/vocabulary";
 import { Button } from "@/components/ui/button";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 import { JobForm } from "./job-form";
 
 interface Details {
@@ -42,7 +42,7 @@ export function JobDetails({
 }) {
   const router = useRouter();
   const [editing, setEditing] = useState(false);
-  const [error, setError] = useState<string | null>(null);
+  const { run, error } = useAction({ url: `/api/jobs/${job.id}`, method: "DELETE", onDone: () => router.push("/jobs") });
   if (editing) return <JobForm job={job} onDone={() => setEditing(false)} />;
   const rows: [string, React.ReactNode][] = [
     ["Kind", EQUIPMENT_KIND_LABELS[job.equipmentKind]],
@@ -65,10 +65,7 @@ export function JobDetails({
   ];
   async function remove() {
     if (!window.confirm(`Delete “${job.title}” with its parts, readings, calculations, files and log? This cannot be undone.`)) return;
-    const res = await sendJson(`/api/jobs/${job.id}`, undefined, "DELETE");
-    if (!res.ok) return setError(res.message);
-    router.push("/jobs");
-    router.refresh();
+    await run();
   }
   return (
     <div>

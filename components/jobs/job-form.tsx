@@ -10,8 +10,7 @@ import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { sendJson } from "@/lib/client/fetch-json";
-import { useSubmit } from "@/components/ui/use-submit";
+import { useAction, useSubmit } from "@/components/ui/use-submit";
 import { jobCreateSchema, type JobCreate, type JobCreateInput } from "@/lib/jobs/job-schemas";
 import { AccessoriesField } from "./intake-fields";
 
@@ -20,14 +19,14 @@ type Name = (typeof NAMES)[number];
 type Values = Record<Name, string>;
 type EditedJob = { id: number; customerId?: number | null; accessories?: string[] | null } & Partial<Record<Name, string | number | null>>;
 
-/** Uploads the intake photos of a job just booked in; returns how many failed. */
-async function uploadIntakePhotos(jobId: number, photos: File[]): Promise<number> {
+/** Uploads the intake photos of a job just booked in, one multipart POST each by `send`; returns how many failed. */
+async function uploadIntakePhotos(jobId: number, photos: File[], send: ReturnType<typeof useAction>["run"]): Promise<number> {
   let failed = 0;
   for (const photo of photos) {
     const form = new FormData();
     form.set("file", photo);
     form.set("kind", "intake");
-    const res = await sendJson(`/api/jobs/${jobId}/files`, form);
+    const res = await send(form, { url: `/api/jobs/${jobId}/files` });
     if (!res.ok) failed++;
   }
   return failed;
@@ -46,6 +45,8 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
   const [accessories, setAccessories] = useState<string[]>(job?.accessories ?? []);
   const [photos, setPhotos] = useState<File[]>([]);
   const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
+  // The photos go after the job is booked; the page then moves to the job, so nothing refreshes here.
+  const upload = useAction({ refresh: false });
   const initial = Object.fromEntries(NAMES.map((n) => [n, job?.[n] == null ? "" : String(job[n])])) as Values;
   if (!initial.equipmentKind) initial.equipmentKind = "table-radio";
   const form = useForm<JobCreateInput, unknown, JobCreate>({ resolver: zodResolver(jobCreateSchema), defaultValues: initial as JobCreateInput });
@@ -71,7 +72,7 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
     onFail: (f) => setFieldErrors(f.fields),
     onDone: async (data) => {
       if (job) return onDone?.();
-      const failed = photos.length ? await uploadIntakePhotos(data.job.id, photos) : 0;
+      const failed = photos.length ? await uploadIntakePhotos(data.job.id, photos, upload.run) : 0;
       router.push(`/jobs/${data.job.id}${failed ? "/files" : ""}`);
     },
   });

@@ -5,47 +5,14 @@ import { useForm } from "react-hook-form";
 import { z } from "zod";
 import { Button } from "@/components/ui/button";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { READY_CHECK_IDS, readyOverrideFields, requireOverrideReason, type ReadyIssue } from "@/lib/jobs/ready-checks";
+import { readyOverrideFields, requireOverrideReason, type ReadyIssue } from "@/lib/jobs/ready-checks";
 
 /**
  * Checks before "ready" (parts not fitted, faults not fixed, no passed power-up). The server answers 409
  * with the list; this panel shows it and lets an owner or technician go on with a reason, which the server
- * writes to the Log. It warns; it never hides what is undone.
+ * writes to the Log. It warns; it never hides what is undone. The callers send through the one submit path
+ * and read the list with readyChecksOf (lib/client/submit-errors.ts).
  */
-
-export type ReadyAnswer<T> = { ok: true; data: T } | { ok: false; status: number; message: string; fields: Record<string, string>; checks: ReadyIssue[] };
-
-const isCheck = (id: string): id is ReadyIssue["id"] => (READY_CHECK_IDS as readonly string[]).includes(id);
-
-/** The checks of a 409, wherever the answer carries them: a list beside the message, or the fields named by check. */
-function checksOf(error: Record<string, unknown>): ReadyIssue[] {
-  const list = (error.checks ?? (error.details as { checks?: unknown } | undefined)?.checks) as unknown;
-  if (Array.isArray(list)) return list.filter((c): c is ReadyIssue => typeof c?.id === "string" && typeof c?.message === "string");
-  const fields = (error.fields ?? {}) as Record<string, string>;
-  return Object.entries(fields)
-    .filter(([id]) => isCheck(id))
-    .map(([id, message]) => ({ id: id as ReadyIssue["id"], message }));
-}
-
-/** POST JSON; a 409 comes back with its checks. */
-export async function sendReady<T>(url: string, body: unknown): Promise<ReadyAnswer<T>> {
-  let res: Response;
-  try {
-    res = await fetch(url, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
-  } catch {
-    return { ok: false, status: 0, message: "Could not reach Glowbench. Check the connection and try again.", fields: {}, checks: [] };
-  }
-  const json = await res.json().catch(() => null);
-  if (res.ok) return { ok: true, data: json as T };
-  const error = (json?.error ?? {}) as Record<string, unknown>;
-  return {
-    ok: false,
-    status: res.status,
-    message: typeof error.message === "string" ? error.message : `Request failed (${res.status}).`,
-    fields: (error.fields as Record<string, string>) ?? {},
-    checks: res.status === 409 ? checksOf(error) : [],
-  };
-}
 
 const overrideSchema = z.object({ override: z.literal(true), reason: readyOverrideFields.reason }).superRefine(requireOverrideReason);
 type OverrideForm = { override: true; reason: string };

@@ -1,16 +1,18 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useEffect, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { useForm } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { TextareaField } from "@/components/ui/textarea-field";
+import { useSubmit } from "@/components/ui/use-submit";
 import type { ReadyDraft } from "@/db/queries/ready-message";
 import { getJson } from "@/lib/client/fetch-json";
+import { messageFor, readyChecksOf } from "@/lib/client/submit-errors";
 import type { ReadyIssue } from "@/lib/jobs/ready-checks";
 import { readyMessageSchema, type ReadyMessageForm } from "@/lib/mail/ready-schemas";
-import { ReadyChecksPanel, sendReady } from "./ready-checks";
+import { ReadyChecksPanel } from "./ready-checks";
 
 /**
  * "Tell the customer it's ready": a self-contained panel for the job Overview. It loads the draft
@@ -20,21 +22,20 @@ import { ReadyChecksPanel, sendReady } from "./ready-checks";
 export function ReadyMessage({ jobId, status }: { jobId: number; status?: string }) {
   const [draft, setDraft] = useState<ReadyDraft | null>(null);
   const [loadError, setLoadError] = useState<string | null>(null);
-  const [result, setResult] = useState<{ ok: boolean; message: string } | null>(null);
+  const [sent, setSent] = useState<string | null>(null);
   // A refused send: the checks before "ready", and the message as it was to go.
   const [held, setHeld] = useState<{ values: ReadyMessageForm; checks: ReadyIssue[] } | null>(null);
   // The checks before "ready" still open when the draft loaded: shown ahead, asked about on sending.
   const [open, setOpen] = useState<ReadyIssue[]>([]);
-  const {
-    register,
-    handleSubmit,
-    reset,
-    setError,
-    formState: { errors, isSubmitting },
-  } = useForm<ReadyMessageForm>({
+  const form = useForm<ReadyMessageForm>({
     resolver: zodResolver(readyMessageSchema),
     defaultValues: { subject: "", text: "" },
   });
+  const {
+    register,
+    reset,
+    formState: { errors, isSubmitting },
+  } = form;
 
   useEffect(() => {
     let live = true;
@@ -51,20 +52,40 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
     };
   }, [jobId, status, reset]);
 
-  async function send(values: ReadyMessageForm, override?: { override: true; reason: string }) {
-    setResult(null);
-    const res = await sendReady<{ sent: { to: string } }>(`/api/jobs/${jobId}/ready-message`, { ...values, ...override });
-    if (!res.ok) {
-      if (res.checks.length) return setHeld({ values, checks: res.checks });
-      if (res.fields.subject) setError("subject", { message: res.fields.subject });
-      if (res.fields.text) setError("text", { message: res.fields.text });
-      setResult({ ok: false, message: res.fields.reason ?? res.message });
-      return;
+  // "Send anyway" sends the held message again with the reason beside it.
+  const override = useRef<{ override: true; reason: string } | null>(null);
+  const {
+    submit: onSubmit,
+    send,
+    formError,
+    setFormError,
+  } = useSubmit<ReadyMessageForm, { sent: { to: string } }>(form, {
+    url: `/api/jobs/${jobId}/ready-message`,
+    body: (values) => ({ ...values, ...override.current }),
+    fields: ["subject", "text"],
+    refresh: false,
+    onStart: () => setSent(null),
+    onFail: (f, values) => {
+      const checks = readyChecksOf(f);
+      if (checks.length) {
+        setFormError(null);
+        setHeld({ values, checks });
+      } else setFormError(messageFor(f, "reason"));
+    },
+    onDone: (data) => {
+      setHeld(null);
+      setSent(`Sent to ${data.sent.to} with the bench sheet attached.`);
+    },
+  });
+  const result = sent ? { ok: true, message: sent } : formError ? { ok: false, message: formError } : null;
+  async function sendAnyway(values: ReadyMessageForm, body: { override: true; reason: string }) {
+    override.current = body;
+    try {
+      await send(values);
+    } finally {
+      override.current = null;
     }
-    setHeld(null);
-    setResult({ ok: true, message: `Sent to ${res.data.sent.to} with the bench sheet attached.` });
   }
-  const onSubmit = handleSubmit((values) => send(values));
 
   if (loadError) return <p className="text-note text-flag">{loadError}</p>;
   if (!draft) return <p className="text-note text-muted">Loading the customer message…</p>;
@@ -117,7 +138,7 @@ export function ReadyMessage({ jobId, status }: { jobId: number; status?: string
             checks={held.checks}
             action="Send anyway"
             serverError={result?.ok ? null : result?.message}
-            onContinue={(body) => send(held.values, body)}
+            onContinue={(body) => sendAnyway(held.values, body)}
             onCancel={() => setHeld(null)}
           />
         </div>

@@ -1,16 +1,14 @@
 "use client";
 
 import { zodResolver } from "@hookform/resolvers/zod";
-import { useRouter } from "next/navigation";
-import { useState } from "react";
-import { useForm, type DefaultValues, type FieldValues, type Path, type Resolver } from "react-hook-form";
+import { useForm, type DefaultValues, type FieldValues, type Resolver } from "react-hook-form";
 import type { z } from "zod";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useSubmit } from "@/components/ui/use-submit";
 
 /**
  * The forms of the bench record (Tubes, Power-ups, Faults): react-hook-form with the contract's zod
- * schema through zodResolver, the parsed values sent to the route, the server's field messages put back
- * beside their fields, and the page refreshed. `prepare` turns what the form holds into what the schema
+ * schema through zodResolver, sent by the one submit path (useSubmit): the server's field messages put
+ * back beside their fields, and the page refreshed. `prepare` turns what the form holds into what the schema
  * reads (a blank tester reading into "no test"), on the client and before sending.
  */
 export function useRecordForm<F extends FieldValues, S extends z.ZodType>(
@@ -24,8 +22,6 @@ export function useRecordForm<F extends FieldValues, S extends z.ZodType>(
     onDone?: (data: unknown, values: F) => void;
   },
 ) {
-  const router = useRouter();
-  const [formError, setFormError] = useState<string | null>(null);
   const base = zodResolver(schema as never) as unknown as Resolver<F>;
   const resolver: Resolver<F> = async (values, context, opts) => {
     const result = await base((options.prepare ? options.prepare(values) : values) as F, context, opts);
@@ -33,20 +29,16 @@ export function useRecordForm<F extends FieldValues, S extends z.ZodType>(
     return Object.keys(result.errors).length ? result : { values, errors: {} };
   };
   const form = useForm<F>({ resolver, defaultValues: options.defaults as DefaultValues<F> });
-  const onSubmit = form.handleSubmit(async (values) => {
-    setFormError(null);
-    const body = options.prepare ? options.prepare(values) : values;
-    const res = await sendJson(options.url, body, options.method ?? "POST");
-    if (!res.ok) {
-      for (const [name, message] of Object.entries(res.fields)) form.setError(name as Path<F>, { message });
-      setFormError(res.message);
-      return;
-    }
-    if (options.onDone) options.onDone(res.data, values);
-    else form.reset(options.defaults);
-    router.refresh();
+  const { submit, formError, setFormError } = useSubmit(form, {
+    url: options.url,
+    method: options.method,
+    body: options.prepare,
+    onDone: (data, values) => {
+      if (options.onDone) options.onDone(data, values);
+      else form.reset(options.defaults);
+    },
   });
-  return { form, onSubmit, formError, setFormError };
+  return { form, onSubmit: submit, formError, setFormError };
 }
 
 /** The message of a field, nested names included ("test.reading"). */

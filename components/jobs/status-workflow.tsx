@@ -1,11 +1,12 @@
 "use client";
 
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { JOB_STATUSES, JOB_STATUS_LABELS, type JobStatus } from "@/lib/vocabulary";
 import { Button } from "@/components/ui/button";
+import { useAction } from "@/components/ui/use-submit";
+import { messageFor, readyChecksOf } from "@/lib/client/submit-errors";
 import type { ReadyIssue } from "@/lib/jobs/ready-checks";
-import { ReadyChecksPanel, sendReady } from "./ready-checks";
+import { ReadyChecksPanel } from "./ready-checks";
 
 /** What each step means at the bench, in our words. */
 const HINTS: Record<JobStatus, string> = {
@@ -21,26 +22,22 @@ const HINTS: Record<JobStatus, string> = {
 };
 
 export function StatusWorkflow({ jobId, status, canChange }: { jobId: number; status: JobStatus; canChange: boolean }) {
-  const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
   const [other, setOther] = useState<JobStatus>(status);
   // A refused "ready": the checks the server listed, and the status that was asked for.
   const [held, setHeld] = useState<{ to: JobStatus; checks: ReadyIssue[] } | null>(null);
   const index = JOB_STATUSES.indexOf(status);
   const next = JOB_STATUSES[index + 1];
+  const { run, error, setError, pending: busy } = useAction({ url: `/api/jobs/${jobId}/status`, onDone: () => setHeld(null) });
 
   async function move(to: JobStatus, override?: { override: true; reason: string }) {
-    setBusy(true);
-    setError(null);
-    const res = await sendReady(`/api/jobs/${jobId}/status`, { status: to, ...override });
-    setBusy(false);
-    if (!res.ok) {
-      if (res.checks.length) return setHeld({ to, checks: res.checks });
-      return setError(res.fields.reason ?? res.message);
-    }
-    setHeld(null);
-    router.refresh();
+    const res = await run({ status: to, ...override });
+    if (res.ok) return;
+    // A 409 with checks holds the move for a reason; any other refusal is said under the buttons.
+    const checks = readyChecksOf(res);
+    if (checks.length) {
+      setError(null);
+      setHeld({ to, checks });
+    } else setError(messageFor(res, "reason"));
   }
 
   return (

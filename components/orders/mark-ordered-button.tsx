@@ -1,24 +1,25 @@
 "use client";
 
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 
 /** Marks exactly the parts shown in one supplier's group ordered; every job's Log says so. */
 export function MarkOrderedButton({ supplier, partIds }: { supplier: string; partIds: number[] }) {
-  const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [message, setMessage] = useState<{ ok: boolean; text: string } | null>(null);
+  const [done, setDone] = useState<string | null>(null);
+  const {
+    run,
+    error,
+    pending: busy,
+  } = useAction<{ ordered: number; jobs: number[] }>({
+    url: "/api/orders/mark-ordered",
+    onDone: (data) => setDone(`${data.ordered} marked ordered on job${data.jobs.length === 1 ? "" : "s"} ${data.jobs.join(", ")}.`),
+  });
+  const message = error ? { ok: false, text: error } : done ? { ok: true, text: done } : null;
   async function mark() {
     if (!window.confirm(`Mark ${partIds.length} part${partIds.length === 1 ? "" : "s"} from ${supplier} as ordered? Each job's Log will say so.`)) return;
-    setBusy(true);
-    setMessage(null);
-    const res = await sendJson<{ ordered: number; jobs: number[] }>("/api/orders/mark-ordered", { supplier, partIds });
-    setBusy(false);
-    if (!res.ok) return setMessage({ ok: false, text: res.message });
-    setMessage({ ok: true, text: `${res.data.ordered} marked ordered on job${res.data.jobs.length === 1 ? "" : "s"} ${res.data.jobs.join(", ")}.` });
-    router.refresh();
+    setDone(null);
+    await run({ supplier, partIds });
   }
   return (
     <div className="flex flex-col gap-1">

@@ -2,25 +2,28 @@
 
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 
 /** "Pay by card": asks the server for the payment page of the link's invoice and goes there. The server re-checks the token. */
 export function PayButton({ token, total }: { token: string; total: string }) {
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState("");
+  // Set once the payment page is on its way, so the button stays busy while the browser leaves.
+  const [leaving, setLeaving] = useState(false);
+  const { run, error, pending } = useAction<{ url: string }>({
+    url: "/api/pay/checkout",
+    refresh: false,
+    onDone: (data) => {
+      setLeaving(true);
+      window.location.assign(data.url);
+    },
+    // A link paid or withdrawn meanwhile: reload to show what it now says.
+    onFail: (f) => {
+      if (f.status === 410) window.location.reload();
+    },
+  });
+  const busy = pending || leaving;
 
   async function pay() {
-    setBusy(true);
-    setError("");
-    const res = await sendJson<{ url: string }>("/api/pay/checkout", { token });
-    if (res.ok) {
-      window.location.assign(res.data.url);
-      return;
-    }
-    setBusy(false);
-    // A link paid or withdrawn meanwhile: reload to show what it now says.
-    if (res.status === 410) window.location.reload();
-    setError(res.message);
+    await run({ token });
   }
 
   return (

@@ -2,11 +2,13 @@
 
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { sendJson } from "@/lib/client/fetch-json";
+import { useAction } from "@/components/ui/use-submit";
 
 export function SignOutButton() {
   const router = useRouter();
   const [busy, setBusy] = useState(false);
+  // Whatever the answer, the page goes to sign-in: the session is gone or the server will ask again.
+  const { run } = useAction({ url: "/api/auth/sign-out", refresh: false });
   return (
     <button
       type="button"
@@ -14,7 +16,7 @@ export function SignOutButton() {
       className="rounded-chip px-3 py-2 font-bold text-ink hover:bg-sunk min-h-11"
       onClick={async () => {
         setBusy(true);
-        await sendJson("/api/auth/sign-out", {});
+        await run({});
         router.push("/sign-in");
         router.refresh();
       }}

@@ -43,7 +43,7 @@ function useAfterSuccess() {
 export function useSubmit<F extends FieldValues, D = unknown, T extends FieldValues = F>(
   // eslint-disable-next-line @typescript-eslint/no-explicit-any -- any form context
   form: UseFormReturn<F, any, T>,
-  opts: Omit<After<D>, "onDone"> & {
+  opts: Omit<After<D>, "onDone" | "onFail"> & {
     url: string | ((values: T) => string);
     method?: Method;
     /** What to send; by default the values the resolver passed (T). */
@@ -53,11 +53,14 @@ export function useSubmit<F extends FieldValues, D = unknown, T extends FieldVal
     /** Runs once the values have passed the check, before sending (clear a "saved" note). */
     onStart?: () => void;
     onDone?: (data: D, values: T) => void | Promise<void>;
+    /** Runs after a refusal, once the messages are shown, with the values that were sent. */
+    onFail?: (failure: Failure, values: T) => void;
   },
 ) {
   const after = useAfterSuccess();
   const [formError, setFormError] = useState<string | null>(null);
-  const submit = form.handleSubmit(async (values) => {
+  // The path itself, for a second button that sends values already checked (go on with a reason).
+  const send = async (values: T) => {
     setFormError(null);
     opts.onStart?.();
     const url = typeof opts.url === "function" ? opts.url(values) : opts.url;
@@ -65,12 +68,13 @@ export function useSubmit<F extends FieldValues, D = unknown, T extends FieldVal
     if (!res.ok) {
       for (const [name, message] of fieldErrorsOf(res.fields, opts.fields)) form.setError(name as Path<F>, { message });
       setFormError(res.message);
-      opts.onFail?.(res);
+      opts.onFail?.(res, values);
       return;
     }
     await after(opts, () => opts.onDone?.(res.data, values));
-  });
-  return { submit, formError, setFormError, pending: form.formState.isSubmitting };
+  };
+  const submit = form.handleSubmit(send);
+  return { submit, send, formError, setFormError, pending: form.formState.isSubmitting };
 }
 
 /**

@@ -2,6 +2,7 @@
  * The pure half of the client submit path: docs/PRODUCT.md's JSON error body
  * (`{ error: { message, fields } }`) read into a form message and the field messages react-hook-form takes.
  */
+import { READY_CHECK_IDS, type ReadyIssue } from "@/lib/jobs/ready-checks";
 
 export type Failure = { ok: false; status: number; message: string; fields: Record<string, string>; details: Record<string, unknown> };
 
@@ -38,4 +39,30 @@ export function fieldErrorsOf(fields: Record<string, string>, known?: readonly s
     out.push([path, message]);
   }
   return out;
+}
+
+/**
+ * The message for a control that stands for one input (a status button, a reason box): what the server
+ * said of that input when it named it, else its message for the whole request.
+ */
+export function messageFor(failure: Failure, name: string): string {
+  return failure.fields[name] ?? failure.message;
+}
+
+/** The first input message of a refusal, else its whole message: for a small form with one status line. */
+export function firstMessage(failure: Failure): string {
+  return Object.values(failure.fields)[0] ?? failure.message;
+}
+
+/**
+ * The checks before "ready" a 409 lists (lib/jobs/ready-checks.ts): the `checks` beside the message, or,
+ * from a server that puts them in `fields`, the fields named by check. Any other refusal lists none.
+ */
+export function readyChecksOf(failure: Failure): ReadyIssue[] {
+  if (failure.status !== 409) return [];
+  const list = failure.details.checks;
+  if (Array.isArray(list)) return list.filter((c): c is ReadyIssue => typeof c?.id === "string" && typeof c?.message === "string");
+  return Object.entries(failure.fields)
+    .filter(([id]) => (READY_CHECK_IDS as readonly string[]).includes(id))
+    .map(([id, message]) => ({ id: id as ReadyIssue["id"], message }));
 }

@@ -1,13 +1,13 @@
 "use client";
 
-import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import type { FaultCandidate } from "@/db/queries/faults";
 import { SelectField } from "@/components/ui/select-field";
 import { TextareaField } from "@/components/ui/textarea-field";
+import { useAction } from "@/components/ui/use-submit";
 import { formatQuantity } from "@/lib/calc/format";
-import { sendJson } from "@/lib/client/fetch-json";
+import { messageFor } from "@/lib/client/submit-errors";
 import { candidateUpdateSchema } from "@/lib/jobs/fault-schemas";
 import { FAULT_CANDIDATE_STATUSES, FAULT_CANDIDATE_STATUS_LABELS, type FaultCandidateStatus } from "@/lib/vocabulary";
 import { fieldError, useRecordForm } from "../record-form";
@@ -92,18 +92,12 @@ export function CandidateItem({
   readings: readonly ReadingChoice[];
   next: boolean;
 }) {
-  const router = useRouter();
-  const [busy, setBusy] = useState(false);
-  const [error, setError] = useState<string | null>(null);
   const [editing, setEditing] = useState(false);
   const url = `/api/jobs/${jobId}/faults/${faultId}/candidates/${candidate.id}`;
+  const { run, error, setError, pending: busy } = useAction({ url, method: "PATCH" });
   async function mark(status: FaultCandidateStatus) {
-    setBusy(true);
-    setError(null);
-    const res = await sendJson(url, { status }, "PATCH");
-    setBusy(false);
-    if (!res.ok) return setError(res.fields.status ?? res.message);
-    router.refresh();
+    const res = await run({ status });
+    if (!res.ok) setError(messageFor(res, "status"));
   }
   const c = candidate;
   return (

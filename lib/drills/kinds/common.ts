@@ -54,3 +54,7 @@ export const MAINS: readonly { frequency: number; voltage: number }[] = [
 
 /** "forgot 2π": the figure in radians per second read as hertz, or the reverse. */
 export const TWO_PI = 2 * Math.PI;
+
+/** Filter capacitors and B+ of the era (common practice). */
+export const drawCap = (rng: Rng) => rng.pick([8, 10, 16, 20, 32, 40, 47, 50, 100]) * 1e-6;
+export const drawBPlus = (rng: Rng) => rng.pick([250, 275, 300, 350, 400, 450]);
