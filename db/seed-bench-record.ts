@@ -1,6 +1,7 @@
 import { and, eq } from "drizzle-orm";
 import { POWER_UP_CHECKLIST } from "../lib/vocabulary";
 import type { Tx } from "./client";
+import { withPartValues } from "./seed-customers";
 import { faultCandidates, faults, jobs, logEntries, parts, powerUpSteps, powerUps, readings, tubes } from "./schema";
 
 /**
@@ -48,56 +49,58 @@ export function seedTelevision(tx: Tx, people: DemoPeople, now = Date.now()): bo
   const own = { jobId, workshopId: w };
 
   tx.insert(parts)
-    .values([
-      {
-        ...own,
-        designator: "C101",
-        kind: "electrolytic",
-        originalValue: "40 µF",
-        originalRating: "450 V",
-        replacementValue: "47 µF",
-        replacementRating: "500 V",
-        state: "fitted",
-        checkedBy: people.tech,
-        checkedAt: at(200),
-        unitCostMinor: 320,
-      },
-      {
-        ...own,
-        designator: "C102",
-        kind: "electrolytic",
-        originalValue: "40 µF",
-        originalRating: "450 V",
-        replacementValue: "47 µF",
-        replacementRating: "500 V",
-        state: "fitted",
-        checkedBy: people.tech,
-        checkedAt: at(200),
-        unitCostMinor: 320,
-      },
-      {
-        ...own,
-        designator: "C205",
-        kind: "paper",
-        originalValue: "0.1 µF",
-        originalRating: "600 V",
-        replacementValue: "0.1 µF",
-        replacementRating: "630 V",
-        state: "fitted",
-        unitCostMinor: 110,
-      },
-      {
-        ...own,
-        designator: "C310",
-        kind: "paper",
-        originalValue: "0.05 µF",
-        originalRating: "1600 V",
-        replacementValue: "0.047 µF",
-        replacementRating: "2000 V",
-        state: "ordered",
-        unitCostMinor: 260,
-      },
-    ])
+    .values(
+      withPartValues([
+        {
+          ...own,
+          designator: "C101",
+          kind: "electrolytic",
+          originalValue: "40 µF",
+          originalRating: "450 V",
+          replacementValue: "47 µF",
+          replacementRating: "500 V",
+          state: "fitted",
+          checkedBy: people.tech,
+          checkedAt: at(200),
+          unitCostMinor: 320,
+        },
+        {
+          ...own,
+          designator: "C102",
+          kind: "electrolytic",
+          originalValue: "40 µF",
+          originalRating: "450 V",
+          replacementValue: "47 µF",
+          replacementRating: "500 V",
+          state: "fitted",
+          checkedBy: people.tech,
+          checkedAt: at(200),
+          unitCostMinor: 320,
+        },
+        {
+          ...own,
+          designator: "C205",
+          kind: "paper",
+          originalValue: "0.1 µF",
+          originalRating: "600 V",
+          replacementValue: "0.1 µF",
+          replacementRating: "630 V",
+          state: "fitted",
+          unitCostMinor: 110,
+        },
+        {
+          ...own,
+          designator: "C310",
+          kind: "paper",
+          originalValue: "0.05 µF",
+          originalRating: "1600 V",
+          replacementValue: "0.047 µF",
+          replacementRating: "2000 V",
+          state: "ordered",
+          unitCostMinor: 260,
+        },
+      ]),
+    )
     .run();
 
   const [cathode, plate, yoke] = tx

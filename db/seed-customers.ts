@@ -18,7 +18,7 @@ const ANODE = "Anode & Daughters";
 
 type PartSeed = Omit<typeof parts.$inferInsert, "jobId" | "workshopId">;
 
-/** A part row with its value and rating read into SI, as the app stores them. */
+/** A part row with its value and rating read into SI, as the app stores them (sorting, order totals, checks). */
 function withValues(p: PartSeed): PartSeed {
   const texts = {
     kind: p.kind,
@@ -28,6 +28,11 @@ function withValues(p: PartSeed): PartSeed {
     replacementRating: p.replacementRating ?? null,
   };
   return { ...p, ...readPartValues(texts) };
+}
+
+/** Every demo part goes in through this, so the demo's parts read as the app's own would. */
+export function withPartValues<P extends PartSeed>(rows: P[]): P[] {
+  return rows.map((p) => ({ ...p, ...withValues(p) }));
 }
 
 /** Links every job that names a customer to one record per e-mail (else per name) in its workshop. */

@@ -3,7 +3,7 @@ import { hashPassword } from "../lib/auth/password";
 import { openDatabase, type Db } from "./client";
 import { calculations, jobs, logEntries, memberships, parts, powerUpSteps, powerUps, readings, users, workshops } from "./schema";
 import { seedTelevision } from "./seed-bench-record";
-import { addOrderingTo, seedCustomersAndOrders } from "./seed-customers";
+import { addOrderingTo, seedCustomersAndOrders, withPartValues } from "./seed-customers";
 
 /**
  * The demo scenario: two invented workshops, their people, customers and sets. Every name here is
@@ -146,68 +146,70 @@ export async function seedDemo(db: Db): Promise<{ created: boolean }> {
 
     const w = lamplight.id;
     tx.insert(parts)
-      .values([
-        {
-          jobId: radio,
-          workshopId: w,
-          designator: "C1",
-          kind: "paper",
-          originalValue: "0.05 µF",
-          originalRating: "400 V",
-          replacementValue: "0.047 µF",
-          replacementRating: "630 V",
-          state: "fitted",
-          unitCostMinor: 85,
-        },
-        {
-          jobId: radio,
-          workshopId: w,
-          designator: "C2",
-          kind: "paper",
-          originalValue: "0.02 µF",
-          originalRating: "400 V",
-          replacementValue: "0.022 µF",
-          replacementRating: "630 V",
-          state: "fitted",
-          unitCostMinor: 85,
-        },
-        {
-          jobId: radio,
-          workshopId: w,
-          designator: "C5a",
-          kind: "electrolytic",
-          originalValue: "50 µF",
-          originalRating: "150 V",
-          replacementValue: "47 µF",
-          replacementRating: "250 V",
-          state: "ordered",
-          unitCostMinor: 240,
-        },
-        {
-          jobId: radio,
-          workshopId: w,
-          designator: "C5b",
-          kind: "electrolytic",
-          originalValue: "30 µF",
-          originalRating: "150 V",
-          replacementValue: "33 µF",
-          replacementRating: "250 V",
-          state: "to-order",
-          unitCostMinor: 210,
-        },
-        {
-          jobId: radio,
-          workshopId: w,
-          designator: "R7",
-          kind: "resistor",
-          originalValue: "2.2 MΩ",
-          originalRating: "0.5 W",
-          replacementValue: "2.2 MΩ",
-          replacementRating: "0.5 W",
-          state: "to-order",
-          unitCostMinor: 30,
-        },
-      ])
+      .values(
+        withPartValues([
+          {
+            jobId: radio,
+            workshopId: w,
+            designator: "C1",
+            kind: "paper",
+            originalValue: "0.05 µF",
+            originalRating: "400 V",
+            replacementValue: "0.047 µF",
+            replacementRating: "630 V",
+            state: "fitted",
+            unitCostMinor: 85,
+          },
+          {
+            jobId: radio,
+            workshopId: w,
+            designator: "C2",
+            kind: "paper",
+            originalValue: "0.02 µF",
+            originalRating: "400 V",
+            replacementValue: "0.022 µF",
+            replacementRating: "630 V",
+            state: "fitted",
+            unitCostMinor: 85,
+          },
+          {
+            jobId: radio,
+            workshopId: w,
+            designator: "C5a",
+            kind: "electrolytic",
+            originalValue: "50 µF",
+            originalRating: "150 V",
+            replacementValue: "47 µF",
+            replacementRating: "250 V",
+            state: "ordered",
+            unitCostMinor: 240,
+          },
+          {
+            jobId: radio,
+            workshopId: w,
+            designator: "C5b",
+            kind: "electrolytic",
+            originalValue: "30 µF",
+            originalRating: "150 V",
+            replacementValue: "33 µF",
+            replacementRating: "250 V",
+            state: "to-order",
+            unitCostMinor: 210,
+          },
+          {
+            jobId: radio,
+            workshopId: w,
+            designator: "R7",
+            kind: "resistor",
+            originalValue: "2.2 MΩ",
+            originalRating: "0.5 W",
+            replacementValue: "2.2 MΩ",
+            replacementRating: "0.5 W",
+            state: "to-order",
+            unitCostMinor: 30,
+          },
+        ]),
+      )
       .run();
     tx.insert(readings)
       .values([

@@ -151,10 +151,10 @@ export function LinesEditor({
           Add fee
         </Button>
         {parts.length ? (
-          <label className="flex items-center gap-2">
+          <label className="flex min-w-0 max-w-full flex-wrap items-center gap-2">
             <span className="font-bold">Add part</span>
             <select
-              className="min-h-11 rounded-chip border border-edge bg-panel px-3"
+              className="min-h-11 min-w-0 max-w-full rounded-chip border border-edge bg-panel px-3"
               value=""
               onChange={(e) => {
                 addPart(Number(e.target.value));

@@ -26,13 +26,13 @@ export function FileUploadForm({ jobId }: { jobId: number }) {
   }
   return (
     <form ref={form} onSubmit={onSubmit} className="flex flex-wrap items-end gap-4" aria-describedby="upload-error upload-hint">
-      <label className="flex flex-col gap-1">
+      <label className="flex w-full min-w-0 flex-col gap-1 sm:w-auto">
         <span className="font-bold">File</span>
         <input
           name="file"
           type="file"
           accept="image/jpeg,image/png,image/webp,application/pdf"
-          className="min-h-11 rounded-chip border border-edge bg-panel px-3 py-2 file:mr-3 file:rounded-chip file:border-0 file:bg-sunk file:px-3 file:py-1 file:font-bold"
+          className="min-h-11 w-full min-w-0 rounded-chip border border-edge bg-panel px-3 py-2 file:mr-3 file:rounded-chip file:border-0 file:bg-sunk file:px-3 file:py-1 file:font-bold"
         />
       </label>
       <fieldset className="flex flex-wrap gap-x-4">

@@ -121,7 +121,7 @@ export function JobList({ firstPage }: { firstPage?: JobPage }) {
         )
       ) : (
         <div className="overflow-x-auto rounded-card border border-rule bg-panel shadow-card">
-          <table className="w-full min-w-[44rem] border-collapse text-left" aria-busy={query.isFetching} data-testid="job-table">
+          <table className="gb-stack w-full min-w-[44rem] border-collapse text-left" aria-busy={query.isFetching} data-testid="job-table">
             <thead className="border-b border-rule bg-sunk/60">
               {table.getHeaderGroups().map((hg) => (
                 <tr key={hg.id}>
@@ -150,7 +150,11 @@ export function JobList({ firstPage }: { firstPage?: JobPage }) {
               {table.getRowModel().rows.map((row) => (
                 <tr key={row.id} className="hover:bg-sunk/40">
                   {row.getVisibleCells().map((cell) => (
-                    <td key={cell.id} className="px-4 py-3 align-middle">
+                    <td
+                      key={cell.id}
+                      className="px-4 py-3 align-middle"
+                      data-label={cell.column.id === "title" ? undefined : String(cell.column.columnDef.header)}
+                    >
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
                     </td>
                   ))}

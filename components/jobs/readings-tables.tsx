@@ -27,7 +27,9 @@ type Dir = "none" | "desc" | "asc";
 const key = (r: ReadingRow) => (r.verdict === "open" ? Number.POSITIVE_INFINITY : (r.deviation ?? 0));
 
 function RemoveReading({ jobId, r }: { jobId: number; r: ReadingRow }) {
-  return <RemoveButton url={`/api/jobs/${jobId}/readings/${r.id}`} confirm={`Remove the reading for ${r.designator}?`} label={`Remove reading ${r.designator}`} />;
+  return (
+    <RemoveButton url={`/api/jobs/${jobId}/readings/${r.id}`} confirm={`Remove the reading for ${r.designator}?`} label={`Remove reading ${r.designator}`} />
+  );
 }
 
 export function ResistorSurvey({ jobId, rows, canEdit }: { jobId: number; rows: ReadingRow[]; canEdit: boolean }) {
@@ -72,9 +74,15 @@ export function ResistorSurvey({ jobId, rows, canEdit }: { jobId: number; rows: 
         {sorted.map((r) => (
           <tr key={r.id} data-testid={`reading-${r.designator}`}>
             <td className={`${td} font-mono font-bold`}>{r.designator}</td>
-            <td data-label="Marked" className={`${td} font-mono`}>{formatQuantity(r.nominal, "Ω")}</td>
-            <td data-label="Tolerance" className={`${td} font-mono`}>±{Math.round(r.tolerance * 100)} %</td>
-            <td data-label="Measured" className={`${td} font-mono`}>{r.measured === null ? "open" : formatQuantity(r.measured, "Ω")}</td>
+            <td data-label="Marked" className={`${td} font-mono`}>
+              {formatQuantity(r.nominal, "Ω")}
+            </td>
+            <td data-label="Tolerance" className={`${td} font-mono`}>
+              ±{Math.round(r.tolerance * 100)} %
+            </td>
+            <td data-label="Measured" className={`${td} font-mono`}>
+              {r.measured === null ? "open" : formatQuantity(r.measured, "Ω")}
+            </td>
             <td data-label="Deviation" className={`${td} font-mono`}>
               {pct(r.deviation)}
             </td>
@@ -134,7 +142,9 @@ export function VoltageTable({ jobId, rows, canEdit }: { jobId: number; rows: Re
             <td data-label="Expected" className={`${td} font-mono`}>
               {formatQuantity(r.nominal, "V")} <span className="text-muted">±{Math.round(r.tolerance * 100)} %</span>
             </td>
-            <td data-label="Measured" className={`${td} font-mono`}>{r.measured === null ? "—" : formatQuantity(r.measured, "V")}</td>
+            <td data-label="Measured" className={`${td} font-mono`}>
+              {r.measured === null ? "—" : formatQuantity(r.measured, "V")}
+            </td>
             <td data-label="Difference" className={`${td} font-mono`}>
               {pct(r.deviation)}
             </td>

@@ -113,6 +113,24 @@ describe("customers", () => {
 });
 
 describe("parts ordering", () => {
+  test("every demo part's value and rating texts were read into SI, as a part typed into the Parts tab is", async () => {
+    // The demo once stored the texts alone, so every demo part showed "could not be read" on the Parts tab.
+    const { parts } = await import("@/db/schema");
+    const { partFlags } = await import("@/lib/jobs/part-flags");
+    const { valueKindOf } = await import("@/lib/jobs/part-values");
+    const rows = getDb().select().from(parts).all();
+    expect(rows.length).toBeGreaterThan(10);
+    // Only a multi-section can ("20-20 mfd") stays unread, rightly: it is two values, not one.
+    const unread = rows.flatMap((p) =>
+      partFlags(p)
+        .filter((f) => f.message.includes("could not be read"))
+        .map((f) => `${p.designator}: ${f.message}`),
+    );
+    expect(unread.filter((m) => !/\d-\d/.test(m))).toEqual([]);
+    expect(rows.filter((p) => valueKindOf(p.kind) && p.originalValue && !/\d-\d/.test(p.originalValue) && p.originalValueSi === null)).toEqual([]);
+    expect(rows.filter((p) => p.replacementRatingSi !== null).length).toBeGreaterThan(10);
+  });
+
   test("a typed unit cost becomes integer pence; more decimals than the currency has are refused", () => {
     const job = newJob(tech, { title: "Pricing set" }).id;
     const part = partsQ.createPart(
