@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { DoItYourself } from "@/components/drills/do-it-yourself";
-import { DeleteButton } from "@/components/jobs/delete-button";
+import { RemoveButton } from "@/components/jobs/remove-button";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
 import { ButtonLink } from "@/components/ui/button";
 import { EmptyState } from "@/components/ui/card";
@@ -51,7 +51,7 @@ export default async function CalculationsPage({ params }: JobPageProps) {
             <div className="flex items-start justify-between gap-3">
               <h2 className="text-lead font-bold">{calc?.title ?? c.slug}</h2>
               {can.editJobs(member) ? (
-                <DeleteButton
+                <RemoveButton
                   url={`/api/jobs/${job.id}/calculations/${c.id}`}
                   confirm="Remove this saved calculation?"
                   label={`Remove ${calc?.title ?? c.slug}`}

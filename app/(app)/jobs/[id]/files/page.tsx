@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import { DeleteButton } from "@/components/jobs/delete-button";
+import { RemoveButton } from "@/components/jobs/remove-button";
 import { FileUploadForm } from "@/components/jobs/file-upload-form";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
 import { Card, EmptyState } from "@/components/ui/card";
@@ -55,7 +55,7 @@ export default async function FilesPage({ params }: JobPageProps) {
                   <a href={url(f.id, "?download=1")} className="text-note font-bold text-signal underline underline-offset-4">
                     Download
                   </a>
-                  {canEdit ? <DeleteButton url={url(f.id)} confirm={`Remove ${f.originalName}?`} label={`Remove ${f.originalName}`} /> : null}
+                  {canEdit ? <RemoveButton url={url(f.id)} confirm={`Remove ${f.originalName}?`} label={`Remove ${f.originalName}`} /> : null}
                 </div>
               </div>
             </li>
