@@ -129,3 +129,21 @@ for (const s of sweeps) {
     },
   );
 }
+
+test("on a phone a job's readings are cards that keep the verdict in sight, and stay a table to a screen reader", async () => {
+  const page = await rolePage("tech@demo.test", 390);
+  const jobs = (await (await signedIn("tech@demo.test")).get("/api/jobs?pageSize=50").then((r) => r.json())) as { jobs: { id: number; title: string }[] };
+  const radio = jobs.jobs.find((j) => j.title.startsWith("Five-tube AC/DC"))!;
+  await page.goto(`${baseUrl()}/jobs/${radio.id}/readings`, { waitUntil: "load" });
+  const survey = page.getByTestId("resistor-survey");
+  const row = survey.getByRole("row").filter({ hasText: "R4" });
+  // Every cell of the row, the verdict and the Remove button included, lies within the 390 px viewport.
+  for (const cell of await row.getByRole("cell").all()) {
+    const box = (await cell.boundingBox())!;
+    expect(box.x).toBeGreaterThanOrEqual(0);
+    expect(box.x + box.width).toBeLessThanOrEqual(390);
+  }
+  await expect.poll(() => row.getByRole("cell", { name: /Verdict Drifted high/ }).count()).toBe(1);
+  expect(await survey.getByRole("columnheader").count()).toBeGreaterThanOrEqual(6);
+  await page.context().close();
+});
