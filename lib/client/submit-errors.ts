@@ -2,7 +2,7 @@
  * The pure half of the client submit path: docs/PRODUCT.md's JSON error body
  * (`{ error: { message, fields } }`) read into a form message and the field messages react-hook-form takes.
  */
-import { READY_CHECK_IDS, type ReadyIssue } from "@/lib/jobs/ready-checks";
+import { READY_CHECK_IDS, type ReadyIssue } from "@/lib/jobs/ready-check-ids";
 
 export type Failure = { ok: false; status: number; message: string; fields: Record<string, string>; details: Record<string, unknown> };
 

@@ -2,6 +2,7 @@ import { z } from "zod";
 import { ConflictError } from "@/lib/errors";
 import type { FaultState, PartState, PowerUpOutcome } from "@/lib/vocabulary";
 import { optionalText } from "./fields";
+import type { ReadyIssue } from "./ready-check-ids";
 
 /**
  * Checks before "ready" (issue: moving a job to ready-to-collect or sending the customer's message).
@@ -9,13 +10,7 @@ import { optionalText } from "./fields";
  * with a reason, which goes to the Log.
  */
 
-export const READY_CHECK_IDS = ["parts-not-fitted", "open-faults", "no-passed-power-up"] as const;
-export type ReadyCheckId = (typeof READY_CHECK_IDS)[number];
-
-export interface ReadyIssue {
-  id: ReadyCheckId;
-  message: string;
-}
+export { READY_CHECK_IDS, type ReadyCheckId, type ReadyIssue } from "./ready-check-ids";
 
 export interface ReadyRecord {
   parts: readonly { designator: string; state: PartState }[];
