@@ -1,5 +1,5 @@
 import { tex } from "./format";
-import { pilotLampFigures, shortfallWarning, shuntsFor, stringTotals } from "./heater-string-compute";
+import * as parts from "./heater-string-compute";
 import { explainHeaterString } from "./heater-string-explain";
 import { COLD_SURGE, LIVE_CHASSIS, MATCH } from "./heater-string-notes";
 import { heaterStringSchema, type HeaterStringInput, type HeaterStringOutputs } from "./heater-string-schema";
@@ -11,6 +11,10 @@ import { defineCalculator, type Warning } from "./types";
 import { tidy } from "./units";
 
 export { heaterStringSchema, type HeaterStringInput, type HeaterStringOutputs, type Shunt } from "./heater-string-schema";
+
+// Module-level copy of the steps compute calls: under the CommonJS interop the benchmark runs in, every
+// read of an imported binding is a getter call (as in arc-clearance.ts).
+const { pilotLampFigures, shortfallWarning, shuntsFor, stringTotals } = parts;
 
 /**
  * Series heater string on the mains. In series one current flows through every heater, so the string runs
@@ -143,7 +147,9 @@ export const calculator = defineCalculator({
     const shunts = shuntsFor(t, warnings);
     if (excess < 0) warnings.push(shortfallWarning(stringVoltage, vLine));
     if (rating.warning) warnings.push(rating.warning);
-    const lamp = pilotLampFigures(input, t.tubes, { vLine, voltage: stringVoltage, current: stringCurrent, dropper: droppingResistance }, warnings);
+    const lamp = input.pilotLamp
+      ? pilotLampFigures(input.pilotLamp, t.tubes, { vLine, voltage: stringVoltage, current: stringCurrent, dropper: droppingResistance }, warnings)
+      : null;
     warnings.push({ level: "info", message: COLD_SURGE });
 
     const outputs: HeaterStringOutputs = {
