@@ -2,7 +2,8 @@ import type { Warning } from "./types";
 
 /**
  * The fixed wording of the arc-clearance calculator's notes. Kept apart from the arithmetic, and
- * made once, because compute runs on every keystroke. Every note says what a figure is compared
+ * made once, because compute runs on every keystroke (the two that carry figures, at the end, are
+ * made only when they apply). Every note says what a figure is compared
  * with and what it leaves out; none calls a gap "safe".
  */
 
@@ -84,3 +85,23 @@ export const BEYOND_FIT: Warning = {
     "10 cm in sea-level air). Long gaps break down by streamers and leaders at a far lower average stress, and uniform fields that " +
     "size hardly exist: the formula is not for gaps of metres, and its figures there are too small.",
 };
+
+/** A clean uniform gap in air does not break down below the Paschen minimum, at any spacing. */
+export function belowPaschenMinimum(paschenMinV: number): Warning {
+  return {
+    level: "info",
+    message:
+      `Below about ${paschenMinV} V (the Paschen minimum of air) a clean uniform air gap does not break down at any spacing; ` +
+      "the small gap shown is the formula's, and surfaces can still fail by tracking.",
+  };
+}
+
+/** A sea-level pressure typed for a high workshop: `isa` is the standard atmosphere's pressure at that altitude. */
+export function pressureAboveAltitude(p: number, altitude: number, isa: number): Warning {
+  return {
+    level: "caution",
+    message:
+      `The air pressure given (${(p / 1000).toPrecision(4)} kPa) is well above the standard atmosphere at ${Math.round(altitude)} m ` +
+      `(about ${(isa / 1000).toPrecision(3)} kPa). The uniform-field figures use the pressure given, so they may be too small: enter the local pressure.`,
+  };
+}

@@ -1,5 +1,5 @@
 import { tex, texQuantity } from "./format";
-import type { ArcClearanceInput } from "./arc-clearance";
+import type { ArcClearanceInput } from "./arc-clearance-schema";
 import {
   altitudeFactor,
   standardFigures,

@@ -1,11 +1,15 @@
-import { z } from "zod";
 import * as notesModule from "./arc-clearance-notes";
+import * as physics from "./arc-clearance-physics";
+import { P0, T0 } from "./arc-clearance-physics";
+import { arcClearanceSchema, ELECTRODES, type ArcClearanceInput } from "./arc-clearance-schema";
 import { explainArcClearance } from "./arc-clearance-steps";
 import { tex } from "./format";
 import { ALWAYS_DANGER as ALWAYS_DANGER_NOTE } from "./safety";
 import { standardFigures as standardFiguresOf } from "./tables/iec60664-clearance";
 import { defineCalculator, type Warning } from "./types";
-import { optionalQuantity, quantity, quantityWithDefault } from "./units";
+
+export { breakdownVolts, gapForVolts, relativeAirDensity, standardAtmospherePressure } from "./arc-clearance-physics";
+export { arcClearanceSchema, ELECTRODES, type ArcClearanceInput, type Electrode } from "./arc-clearance-schema";
 
 /**
  * Two figures, and the recommendation is the larger:
@@ -25,112 +29,14 @@ import { optionalQuantity, quantity, quantityWithDefault } from "./units";
 const notes = { ...notesModule };
 const ALWAYS_DANGER = ALWAYS_DANGER_NOTE;
 const standardFigures = standardFiguresOf;
+const { relativeAirDensity, gapForVolts, breakdownVolts, standardAtmospherePressure } = physics;
 
-const A = 24.22; // kV per cm
-const B = 6.08; // kV per √cm
-const P0 = 101_325;
-const T0 = 293.15;
 /** Below this δ·d (cm) the gap is down among the Paschen minimum, where the fit no longer applies. */
 const FIT_MIN_REDUCED_GAP_CM = 0.01;
 /** Above this δ·d (cm) the fit is past the gaps it was made for (from memory, Kuffel et al. ch. 5). */
 const FIT_MAX_REDUCED_GAP_CM = 10;
-/** Smallest gap we compute at all. */
-const MIN_GAP_M = 10e-6;
 /** Minimum sparking voltage of air (Paschen minimum), Kuffel, Zaengl & Kuffel table of gases — from memory. */
 const PASCHEN_MIN_V = 327;
-
-const P_MIN = 10e3;
-const P_MAX = 1e6;
-const T_MIN = 150;
-const T_MAX = 1000;
-const ALTITUDE_MIN = -500;
-/** Table A.2 goes on to 20 000 m, but no workshop or set is above 10 km, and the shared length limits stop there. */
-const ALTITUDE_MAX = 10_000;
-
-export const ELECTRODES = ["non-uniform", "uniform"] as const;
-export type Electrode = (typeof ELECTRODES)[number];
-/** Words a person may use for the shape, read as the two cases of IEC 60664-1. */
-const ELECTRODE_WORDS: Record<string, Electrode> = {
-  uniform: "uniform",
-  homogeneous: "uniform",
-  flat: "uniform",
-  rounded: "uniform",
-  plate: "uniform",
-  sphere: "uniform",
-  "non-uniform": "non-uniform",
-  nonuniform: "non-uniform",
-  "non uniform": "non-uniform",
-  inhomogeneous: "non-uniform",
-  point: "non-uniform",
-  edge: "non-uniform",
-  lead: "non-uniform",
-  wire: "non-uniform",
-};
-
-const electrodeInput = z.preprocess(
-  (v) =>
-    v === undefined || v === null || (typeof v === "string" && v.trim() === "")
-      ? undefined
-      : typeof v === "string"
-        ? (ELECTRODE_WORDS[v.trim().toLowerCase()] ?? v)
-        : v,
-  z.enum(ELECTRODES, { error: 'Electrode must be "non-uniform" (points, edges, leads) or "uniform" (flat or rounded)' }).default("non-uniform"),
-);
-
-export const arcClearanceSchema = z
-  .object({
-    peakVoltage: quantity("voltage", { positive: true, max: 1e6, label: "Peak voltage" }),
-    gap: optionalQuantity("length", { positive: true, max: 10, label: "Gap" }).optional(),
-    pressure: quantityWithDefault("pressure", P0, { positive: true, label: "Pressure" }).default(P0),
-    temperature: quantityWithDefault("temperature", T0, { positive: true, label: "Temperature" }).default(T0),
-    safetyFactor: quantityWithDefault("ratio", 2, { min: 1, max: 100, label: "Safety factor" }).default(2),
-    electrode: electrodeInput,
-    altitude: quantityWithDefault("length", 0, { min: ALTITUDE_MIN, max: ALTITUDE_MAX, label: "Altitude" }).default(0),
-  })
-  .superRefine((v, ctx) => {
-    if (v.gap !== undefined && v.gap < MIN_GAP_M) {
-      ctx.addIssue({
-        code: "custom",
-        path: ["gap"],
-        message: "Gap must be at least 10 µm: below a few tens of µm in air the uniform-field (Paschen) formula does not apply",
-      });
-    }
-    if (v.pressure < P_MIN || v.pressure > P_MAX) {
-      ctx.addIssue({ code: "custom", path: ["pressure"], message: "Pressure must be between 10 kPa and 1 MPa (sea level is 101.325 kPa)" });
-    }
-    if (v.temperature < T_MIN || v.temperature > T_MAX) {
-      ctx.addIssue({ code: "custom", path: ["temperature"], message: "Temperature must be between 150 K and 1000 K (20 °C is 293.15 K)" });
-    }
-  });
-
-export type ArcClearanceInput = z.output<typeof arcClearanceSchema>;
-
-export function relativeAirDensity(pressure: number, temperature: number): number {
-  return (pressure / P0) * (T0 / temperature);
-}
-
-/** Uniform-field breakdown voltage in volts for a gap in metres. */
-export function breakdownVolts(gapM: number, delta: number): number {
-  const x = delta * gapM * 100; // δ·d in cm
-  return 1000 * (A * x + B * Math.sqrt(x));
-}
-
-/** The gap in metres whose uniform-field breakdown is `volts`: the positive root of A·s² + B·s = V_kV, s = √(δd). */
-export function gapForVolts(volts: number, delta: number): number {
-  const kv = volts / 1000;
-  // 2c/(b + √(b² + 4ac)) avoids cancellation at small voltages
-  const s = (2 * kv) / (B + Math.sqrt(B * B + 4 * A * kv));
-  return (s * s) / delta / 100;
-}
-
-/**
- * Pressure of the standard atmosphere at an altitude (ISO 2533 / ICAO: troposphere to 11 km, then
- * isothermal; constants from memory). Only used to notice a sea-level pressure typed for a high workshop.
- */
-export function standardAtmospherePressure(altitude: number): number {
-  if (altitude <= 11_000) return P0 * Math.pow(1 - 2.25577e-5 * altitude, 5.25588);
-  return 22_632 * Math.exp(-(altitude - 11_000) / 6341.6);
-}
 
 export const calculator = defineCalculator({
   slug: "arc-clearance",
@@ -268,23 +174,9 @@ export const calculator = defineCalculator({
     const largest = delta * (gap === undefined || minimumGap > gap ? minimumGap : gap) * 100;
     if (smallest < FIT_MIN_REDUCED_GAP_CM) warnings.push(notes.NEAR_PASCHEN_MINIMUM);
     if (largest > FIT_MAX_REDUCED_GAP_CM) warnings.push(notes.BEYOND_FIT);
-    if (v < PASCHEN_MIN_V) {
-      warnings.push({
-        level: "info",
-        message:
-          `Below about ${PASCHEN_MIN_V} V (the Paschen minimum of air) a clean uniform air gap does not break down at any spacing; ` +
-          "the small gap shown is the formula's, and surfaces can still fail by tracking.",
-      });
-    }
-    if (altitude > 0 && p > 1.05 * standardAtmospherePressure(altitude)) {
-      const isa = standardAtmospherePressure(altitude);
-      warnings.push({
-        level: "caution",
-        message:
-          `The air pressure given (${(p / 1000).toPrecision(4)} kPa) is well above the standard atmosphere at ${Math.round(altitude)} m ` +
-          `(about ${(isa / 1000).toPrecision(3)} kPa). The uniform-field figures use the pressure given, so they may be too small: enter the local pressure.`,
-      });
-    }
+    if (v < PASCHEN_MIN_V) warnings.push(notes.belowPaschenMinimum(PASCHEN_MIN_V));
+    if (altitude > 0 && p > 1.05 * standardAtmospherePressure(altitude))
+      warnings.push(notes.pressureAboveAltitude(p, altitude, standardAtmospherePressure(altitude)));
 
     return {
       outputs: {

@@ -1,9 +1,16 @@
-import { z } from "zod";
+import { B_PLUS_RECTIFIERS, bPlusSchema, TUBES as TUBES_BY_TYPE, type BPlusInput, type Circuit } from "./b-plus-schema";
+import * as advice from "./b-plus-warnings";
 import { formatQuantity, texQuantity, tex } from "./format";
 import { highVoltageWarning } from "./safety";
-import { findRectifier, RECTIFIERS, RECTIFIER_SOURCE, RECTIFIER_TYPES, type RectifierEntry } from "./tables/rectifiers";
+import { RECTIFIER_SOURCE, RECTIFIER_TYPES, type RectifierEntry } from "./tables/rectifiers";
 import { defineCalculator, type Step, type Warning } from "./types";
-import { optionalQuantity, quantity, quantityWithDefault } from "./units";
+
+export { B_PLUS_RECTIFIERS, bPlusSchema, type BPlusInput } from "./b-plus-schema";
+
+// Module-level copies of what compute reads: under the CommonJS interop the benchmark runs in, every
+// read of an imported binding is a getter call (as in arc-clearance.ts).
+const TUBES = TUBES_BY_TYPE;
+const { BIG_RIPPLE, ESTIMATE, NO_DROP, rippleWarning, tubeWarnings } = advice;
 
 /**
  * B+ from a transformer, rectifier and reservoir capacitor: the textbook capacitor-input estimate
@@ -13,83 +20,12 @@ import { optionalQuantity, quantity, quantityWithDefault } from "./units";
  * I ∝ V^(3/2), so V ∝ I^(2/3) (any electronics-physics text, from memory).
  */
 
-export const B_PLUS_RECTIFIERS = ["full-wave", "bridge", "half-wave"] as const;
-type Circuit = (typeof B_PLUS_RECTIFIERS)[number];
-
-const TUBES = new Map<string, RectifierEntry>(RECTIFIERS.map((r) => [r.type, r]));
-/** Ripple this large beside the charged peak (peak-to-peak over peak after drops) puts the simple estimate out of its range. */
-const BIG_RIPPLE = 0.2;
-
-const tubeName = z
-  .unknown()
-  .transform((raw, ctx): string | undefined => {
-    if (raw === undefined || raw === null || (typeof raw === "string" && raw.trim() === "")) return undefined;
-    if (typeof raw !== "string") {
-      ctx.addIssue({ code: "custom", message: "Rectifier tube must be a type number such as 5Y3GT" });
-      return z.NEVER;
-    }
-    const row = findRectifier(raw);
-    if (!row) {
-      ctx.addIssue({ code: "custom", message: `Rectifier tube "${raw.trim()}" is not in the built-in table; give its drop under rectifierDrop instead` });
-      return z.NEVER;
-    }
-    return row.type;
-  })
-  .optional();
-
-export const bPlusSchema = z
-  .object({
-    secondaryVoltage: quantity("voltage", { positive: true, min: 1, max: 5000, label: "Secondary voltage" }),
-    rectifier: z.enum(B_PLUS_RECTIFIERS, { error: 'Rectifier must be "full-wave", "bridge" or "half-wave"' }),
-    rectifierTube: tubeName,
-    rectifierDrop: optionalQuantity("voltage", { nonNegative: true, max: 500, label: "Rectifier drop" }),
-    loadCurrent: quantity("current", { positive: true, min: 1e-6, max: 10, label: "Load current" }),
-    capacitance: quantity("capacitance", { positive: true, min: 1e-9, max: 10, label: "Reservoir capacitance" }),
-    lineFrequency: quantityWithDefault("frequency", 60, { positive: true, min: 1, max: 10_000, label: "Line frequency" }),
-    windingResistance: quantityWithDefault("resistance", 0, { nonNegative: true, max: 1e6, label: "Winding resistance" }),
-  })
-  .superRefine((v, ctx) => {
-    if (v.rectifierTube === undefined) return;
-    if (v.rectifierDrop !== undefined) {
-      ctx.addIssue({ code: "custom", path: ["rectifierTube"], message: "Rectifier tube: give either a tube or a rectifier drop, not both" });
-      return;
-    }
-    const circuit = TUBES.get(v.rectifierTube)!.circuit;
-    if (v.rectifier === "bridge") {
-      ctx.addIssue({
-        code: "custom",
-        path: ["rectifierTube"],
-        message: `Rectifier tube: one ${v.rectifierTube} cannot make a bridge; give the drop of each rectifier under rectifierDrop instead`,
-      });
-    } else if (circuit === "half-wave" && v.rectifier !== "half-wave") {
-      ctx.addIssue({
-        code: "custom",
-        path: ["rectifierTube"],
-        message: `Rectifier tube: the ${v.rectifierTube} is a half-wave rectifier; choose the half-wave circuit, or give a drop instead`,
-      });
-    }
-  });
-
-export type BPlusInput = z.output<typeof bPlusSchema>;
-
 const rippleFrequencyOf = (f: number, rectifier: Circuit) => (rectifier === "half-wave" ? f : 2 * f);
 /** Drop of one rectifier at the load current: the given figure, or the tube's scaled as I^(2/3). */
 function dropOf(input: BPlusInput, tube: RectifierEntry | undefined): number {
   if (tube) return tube.tubeDrop * Math.cbrt((input.loadCurrent / tube.tubeDropCurrent) ** 2);
   return input.rectifierDrop ?? 0;
 }
-
-const ESTIMATE: Warning = {
-  level: "info",
-  message:
-    "This is the textbook capacitor-input estimate: usually within 10–15 % of what a meter shows (common practice). It ignores the transformer's " +
-    "leakage reactance and the extra drop of the charging pulses, so loaded B+ often reads lower. With no load B+ rises toward the peak: " +
-    "compare the capacitors' voltage rating with the peak, not with the loaded figure.",
-};
-const NO_DROP: Warning = {
-  level: "info",
-  message: "No rectifier drop given, so none is taken. Silicon diodes drop about 1 V each; tube rectifiers 15–60 V (their data sheets give it).",
-};
 
 export const calculator = defineCalculator({
   slug: "b-plus",
@@ -211,41 +147,8 @@ export const calculator = defineCalculator({
     const warnings: Warning[] = highVoltageWarning(vs, peakVoltage);
     warnings.push(ESTIMATE);
     if (!tube && input.rectifierDrop === undefined) warnings.push(NO_DROP);
-    if (raw <= 0 || ripplePeakToPeak > BIG_RIPPLE * charged) {
-      warnings.push({
-        level: "caution",
-        message:
-          `The ripple (${formatQuantity(ripplePeakToPeak, "V")} peak to peak) is large beside the ${formatQuantity(charged > 0 ? charged : 0, "V")} the reservoir charges to, ` +
-          "outside the range where this estimate holds. A larger reservoir or a lighter load brings it back.",
-      });
-    }
-    if (tube) {
-      if (c > tube.maxInputCapacitance * (1 + 1e-9)) {
-        warnings.push({
-          level: "caution",
-          message:
-            `The ${formatQuantity(c, "F")} reservoir is more than the ${formatQuantity(tube.maxInputCapacitance, "F")} the ${tube.type} data sheet allows: the charging pulses ` +
-            "exceed its peak plate current, which shortens its life or makes it arc. Keep the first capacitor within the figure and put the rest after a choke or resistor.",
-        });
-      }
-      if (i > tube.maxCurrent * (1 + 1e-9)) {
-        warnings.push({
-          level: "caution",
-          message: `The load is more than the ${tube.type}'s rated ${formatQuantity(tube.maxCurrent, "A")} with a capacitor-input filter; the tube will run hot and wear out early. Use a larger rectifier or lighten the load.`,
-        });
-      }
-      // Peak inverse voltage (centre-tapped full-wave, or half-wave with a reservoir): the winding's negative
-      // peak plus the charged reservoir on the cathode; it approaches twice the peak with no load.
-      const piv = peakVoltage + (charged > 0 ? charged : 0);
-      if (tube.peakInverseVoltage !== undefined && piv > tube.peakInverseVoltage) {
-        warnings.push({
-          level: "caution",
-          message:
-            `Under this load each plate sees about ${formatQuantity(piv, "V")} in reverse (the peak plus the charged reservoir), more than the ${tube.type}'s rated ` +
-            `${formatQuantity(tube.peakInverseVoltage, "V")} peak inverse voltage; with no load it approaches twice the peak.`,
-        });
-      }
-    }
+    if (raw <= 0 || ripplePeakToPeak > BIG_RIPPLE * charged) warnings.push(rippleWarning(ripplePeakToPeak, charged));
+    if (tube) tubeWarnings(warnings, tube, { c, i, peakVoltage, charged });
     return {
       outputs: {
         peakVoltage,

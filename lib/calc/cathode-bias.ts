@@ -1,10 +1,13 @@
-import { z } from "zod";
-import { formatQuantity, texQuantity, tex } from "./format";
+import { bypassResistance as bypassResistanceOf, explainCathodeBias } from "./cathode-bias-explain";
+import { cathodeBiasSchema, type CathodeBiasInput } from "./cathode-bias-schema";
+import { formatQuantity, tex } from "./format";
 import { ALWAYS_DANGER } from "./safety";
 import { nearestPreferred } from "./tables/preferred-values";
 import { suggestedRating } from "./tables/wattage";
-import { defineCalculator, type Step, type Warning } from "./types";
-import { optionalQuantity, quantity, quantityWithDefault } from "./units";
+import { defineCalculator, type Warning } from "./types";
+
+export { bypassResistance } from "./cathode-bias-explain";
+export { cathodeBiasSchema, type CathodeBiasInput } from "./cathode-bias-schema";
 
 /**
  * Self (cathode) bias: the cathode resistor carries plate plus screen current, so
@@ -14,61 +17,9 @@ import { optionalQuantity, quantity, quantityWithDefault } from "./units";
  * pentode (Radiotron Designer's Handbook 4th ed., cathode bias and by-passing).
  */
 
-const OPTIONAL = { positive: true } as const;
-
-export const cathodeBiasSchema = z
-  .object({
-    biasVoltage: quantity("voltage", { min: -1e4, max: 1e4, label: "Bias voltage" }).transform((v, ctx) => {
-      if (v === 0) {
-        ctx.addIssue({ code: "custom", message: "Bias voltage must not be zero" });
-        return z.NEVER;
-      }
-      return Math.abs(v); // a data sheet's "−12.5 V grid" is taken as its magnitude
-    }),
-    plateCurrent: quantity("current", { positive: true, min: 1e-9, max: 10, label: "Plate current" }),
-    screenCurrent: quantityWithDefault("current", 0, { nonNegative: true, max: 10, label: "Screen current" }).prefault(""),
-    bypassCapacitance: optionalQuantity("capacitance", { ...OPTIONAL, min: 1e-12, max: 1, label: "Bypass capacitance" }).optional(),
-    amplificationFactor: optionalQuantity("ratio", { ...OPTIONAL, max: 1e4, label: "Amplification factor" }).optional(),
-    plateResistance: optionalQuantity("resistance", { ...OPTIONAL, min: 1, max: 1e9, label: "Plate resistance" }).optional(),
-    plateLoad: optionalQuantity("resistance", { nonNegative: true, max: 1e9, label: "Plate load" }).optional(),
-    transconductance: optionalQuantity("conductance", { ...OPTIONAL, min: 1e-7, max: 10, label: "Transconductance" }).optional(),
-  })
-  .superRefine((v, ctx) => {
-    const triode = ["amplificationFactor", "plateResistance", "plateLoad"] as const;
-    const given = triode.filter((n) => v[n] !== undefined);
-    if (given.length > 0 && given.length < 3) {
-      for (const n of triode.filter((m) => v[m] === undefined)) {
-        ctx.addIssue({
-          code: "custom",
-          path: [n],
-          message: "For the triode estimate give amplification factor, plate resistance and plate load together",
-        });
-      }
-    }
-    if (given.length > 0 && v.transconductance !== undefined) {
-      ctx.addIssue({
-        code: "custom",
-        path: ["transconductance"],
-        message: "Give either the triode figures (µ, rp, plate load) or the transconductance, not both",
-      });
-    }
-  });
-
-export type CathodeBiasInput = z.output<typeof cathodeBiasSchema>;
-
-/** Resistance the bypass capacitor sees, and which model gave it. */
-export function bypassResistance(rk: number, input: CathodeBiasInput): { r: number; model: "triode" | "pentode" | "rk"; rCathode?: number } {
-  const { amplificationFactor: mu, plateResistance: rp, plateLoad: ra, transconductance: gm } = input;
-  if (mu !== undefined && rp !== undefined && ra !== undefined) {
-    const rc = (rp + ra) / (mu + 1);
-    return { r: (rk * rc) / (rk + rc), model: "triode", rCathode: rc };
-  }
-  if (gm !== undefined) {
-    const rc = 1 / gm;
-    return { r: (rk * rc) / (rk + rc), model: "pentode", rCathode: rc };
-  }
-  return { r: rk, model: "rk" };
-}
+// Module-level copy of what compute calls: under the CommonJS interop the benchmark runs in, every
+// read of an imported binding is a getter call (as in arc-clearance.ts).
+const bypassResistance = bypassResistanceOf;
 
 export const calculator = defineCalculator({
   slug: "cathode-bias",
@@ -218,57 +169,5 @@ export const calculator = defineCalculator({
       warnings,
     };
   },
-  explain(input: CathodeBiasInput, o) {
-    const { biasVoltage: vk, plateCurrent: ip, screenCurrent: ig2, bypassCapacitance: ck } = input;
-    const { cathodeCurrent, cathodeResistance, dissipation, nearestPreferred: pref } = o;
-    const steps: Step[] = [
-      {
-        label: "Cathode current",
-        latex: tex`I_k = ${texQuantity(ip, "A", 4)} + ${texQuantity(ig2, "A", 4)} = ${texQuantity(cathodeCurrent, "A", 4)}`,
-      },
-      {
-        label: "Cathode resistance",
-        latex: tex`R_k = \frac{${texQuantity(vk, "V", 4)}}{${texQuantity(cathodeCurrent, "A", 4)}} = ${texQuantity(cathodeResistance, "Ω", 4)}`,
-      },
-      {
-        label: "Dissipation",
-        latex: tex`P = (${texQuantity(cathodeCurrent, "A", 4)})^2 \times ${texQuantity(cathodeResistance, "Ω", 4)} = ${texQuantity(dissipation, "W")}`,
-      },
-      {
-        label: "Suggested rating",
-        latex:
-          o.suggestedRating === null
-            ? tex`2P = ${texQuantity(2 * dissipation, "W")}\ \text{(beyond the standard ratings)}`
-            : tex`2P = ${texQuantity(2 * dissipation, "W")} \Rightarrow ${texQuantity(o.suggestedRating, "W")}`,
-      },
-      {
-        label: "Nearest E12 value and the bias it gives at the same current",
-        latex: tex`R_\text{pref} = ${texQuantity(pref, "Ω")},\quad V_k' \approx ${texQuantity(pref * cathodeCurrent, "V")}`,
-      },
-    ];
-    if (ck === undefined || o.bypassCornerFrequency === null) return steps;
-    const b = bypassResistance(cathodeResistance, input);
-    if (b.model === "triode") {
-      steps.push({
-        label: "Resistance looking into the cathode (triode)",
-        latex: tex`\frac{r_p + R_a}{\mu + 1} = \frac{${texQuantity(input.plateResistance as number, "Ω")} + ${texQuantity(input.plateLoad as number, "Ω")}}{${input.amplificationFactor} + 1} = ${texQuantity(b.rCathode as number, "Ω")}`,
-      });
-    } else if (b.model === "pentode") {
-      steps.push({
-        label: "Resistance looking into the cathode (pentode)",
-        latex: tex`\frac{1}{g_m} = \frac{1}{${texQuantity(input.transconductance as number, "S")}} = ${texQuantity(b.rCathode as number, "Ω")}`,
-      });
-    }
-    if (b.model !== "rk") {
-      steps.push({
-        label: "Resistance the capacitor sees",
-        latex: tex`R = ${texQuantity(cathodeResistance, "Ω")} \parallel ${texQuantity(b.rCathode as number, "Ω")} = ${texQuantity(b.r, "Ω")}`,
-      });
-    }
-    steps.push({
-      label: "Bypass corner frequency",
-      latex: tex`f = \frac{1}{2\pi \times ${texQuantity(b.r, "Ω")} \times ${texQuantity(ck, "F")}} = ${texQuantity(o.bypassCornerFrequency, "Hz")}`,
-    });
-    return steps;
-  },
+  explain: (input: CathodeBiasInput, o) => explainCathodeBias(input, o),
 });

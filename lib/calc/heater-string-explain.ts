@@ -1,5 +1,5 @@
 import { formatQuantity, texQuantity, tex } from "./format";
-import type { HeaterStringInput, HeaterStringOutputs } from "./heater-string";
+import type { HeaterStringInput, HeaterStringOutputs } from "./heater-string-schema";
 import { findTapped } from "./heater-string-notes";
 import { lampModel } from "./heater-string-lamp";
 import { findHeater } from "./tables/heaters";

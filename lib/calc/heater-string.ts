@@ -1,15 +1,20 @@
-import { z } from "zod";
-import { formatQuantity, tex } from "./format";
+import { tex } from "./format";
+import * as parts from "./heater-string-compute";
 import { explainHeaterString } from "./heater-string-explain";
-import { lampModel, lampWarnings } from "./heater-string-lamp";
-import { COLD_SURGE, findTapped, LIVE_CHASSIS, MATCH, mixedStringWarnings, noTapWarning } from "./heater-string-notes";
-import { toPrecision } from "./precision";
+import { COLD_SURGE, LIVE_CHASSIS, MATCH } from "./heater-string-notes";
+import { heaterStringSchema, type HeaterStringInput, type HeaterStringOutputs } from "./heater-string-schema";
 import { highVoltageWarning } from "./safety";
-import { findHeater, HEATER_SOURCE, TAP_SOURCE, TUBE_NAMES } from "./tables/heaters";
+import { HEATER_SOURCE, TAP_SOURCE, TUBE_NAMES } from "./tables/heaters";
 import { nearestPreferred } from "./tables/preferred-values";
 import { suggestedRating } from "./tables/wattage";
-import { defineCalculator, type OutputValue, type Warning } from "./types";
-import { quantity, quantityWithDefault, tidy } from "./units";
+import { defineCalculator, type Warning } from "./types";
+import { tidy } from "./units";
+
+export { heaterStringSchema, type HeaterStringInput, type HeaterStringOutputs, type Shunt } from "./heater-string-schema";
+
+// Module-level copy of the steps compute calls: under the CommonJS interop the benchmark runs in, every
+// read of an imported binding is a getter call (as in arc-clearance.ts).
+const { pilotLampFigures, shortfallWarning, shuntsFor, stringTotals } = parts;
 
 /**
  * Series heater string on the mains. In series one current flows through every heater, so the string runs
@@ -17,91 +22,6 @@ import { quantity, quantityWithDefault, tidy } from "./units";
  * carries the difference, R = Vh/(I − Ih), and the dropper takes up the rest of the line, R = (V_line − ΣV)/I
  * (Ohm's and Kirchhoff's laws; RCA receiving tube manual, application notes on series heater operation).
  */
-
-const MAX_HEATERS = 40;
-
-const heater = z.object({
-  voltage: quantity("voltage", { positive: true, min: 1e-3, max: 500, label: "Heater voltage" }),
-  current: quantity("current", { positive: true, min: 1e-4, max: 20, label: "Heater current" }),
-});
-
-/** A lamp across the tapped section of a rectifier heater; the rectifier's DC through the tap is optional. */
-const pilotLamp = z
-  .object(
-    {
-      voltage: quantity("voltage", { positive: true, min: 0.5, max: 250, label: "Pilot lamp voltage" }),
-      current: quantity("current", { positive: true, min: 1e-3, max: 5, label: "Pilot lamp current" }),
-      rectifierCurrent: quantityWithDefault("current", 0, { nonNegative: true, max: 2, label: "Rectifier DC current through the tap" }),
-    },
-    { error: "Pilot lamp must be given as its rated voltage and current, e.g. { voltage: 6.3, current: 0.15 }" },
-  )
-  .nullish();
-
-/** A list of type numbers, or one text like "12BE6, 12BA6 12AV6"; names are checked against the table. */
-const tubeList = z.union([z.array(z.string()), z.string()], { error: "Tubes must be a list of type numbers" }).transform((raw, ctx) => {
-  const names = (typeof raw === "string" ? raw.split(/[,;\s]+/) : raw).map((s) => s.trim());
-  const list = typeof raw === "string" ? names.filter(Boolean) : names;
-  if (list.length > MAX_HEATERS) {
-    ctx.addIssue({ code: "custom", message: `At most ${MAX_HEATERS} tubes` });
-    return z.NEVER;
-  }
-  return list.map((name, i) => {
-    const entry = findHeater(name);
-    if (!entry) {
-      ctx.addIssue({
-        code: "custom",
-        path: [i],
-        message: `tubes.${i}: unknown tube type "${name}" — it is not in the built-in heater table; enter its heater voltage and current under heaters instead`,
-      });
-      return name;
-    }
-    return entry.names[0];
-  });
-});
-
-export const heaterStringSchema = z
-  .object({
-    lineVoltage: quantity("voltage", { positive: true, max: 1000, label: "Line voltage" }),
-    heaters: z
-      .array(heater)
-      .max(MAX_HEATERS, { error: `At most ${MAX_HEATERS} heaters` })
-      .optional(),
-    tubes: tubeList.optional(),
-    pilotLamp,
-  })
-  .superRefine((v, ctx) => {
-    const hasHeaters = (v.heaters?.length ?? 0) > 0;
-    const hasTubes = (v.tubes?.length ?? 0) > 0;
-    if (hasHeaters && hasTubes) {
-      ctx.addIssue({ code: "custom", path: ["tubes"], message: "Give either heaters or tubes, not both" });
-    } else if (!hasHeaters && !hasTubes) {
-      ctx.addIssue({
-        code: "custom",
-        path: ["heaters"],
-        message: "Heaters are required: list each heater's voltage and current, or name the tubes instead",
-      });
-    }
-  });
-
-export type HeaterStringInput = z.output<typeof heaterStringSchema>;
-
-/** One shunt resistor, across the heater at `index` (0-based, as in the input list). */
-export type Shunt = { index: number; type?: string; resistance: number; dissipation: number; suggestedRating: number | null; nearestPreferred: number };
-
-export type HeaterStringOutputs = {
-  stringVoltage: number;
-  stringCurrent: number;
-  currentsMatch: boolean;
-  droppingResistance: number;
-  dissipation: number;
-  suggestedRating: number | null;
-  nearestPreferred: number;
-  shunts: Shunt[];
-  pilotLampVoltage: number | null;
-  pilotLampCurrent: number | null;
-  tapSectionCurrent: number | null;
-  stringCurrentWithLamp: number | null;
-} & Record<string, OutputValue>;
 
 export const calculator = defineCalculator({
   slug: "heater-string",
@@ -209,22 +129,9 @@ export const calculator = defineCalculator({
     "and one open heater darkens the whole set.",
   compute(input: HeaterStringInput) {
     const vLine = input.lineVoltage;
-    let sum = 0;
-    let iMin = Infinity;
-    let iMax = -Infinity;
-    let vMax = 0;
-    // Plain loops over the given heaters or the table entries, in list order (the sum's rounding depends on it).
-    const given = input.heaters && input.heaters.length > 0 ? input.heaters : null;
-    const tubes = given ? null : (input.tubes ?? []);
-    const n = given ? given.length : tubes!.length;
-    for (let k = 0; k < n; k++) {
-      const h = given ? given[k] : findHeater(tubes![k])!;
-      sum += h.voltage;
-      if (h.current < iMin) iMin = h.current;
-      if (h.current > iMax) iMax = h.current;
-      if (h.voltage > vMax) vMax = h.voltage;
-    }
-    const stringVoltage = tidy(sum);
+    const t = stringTotals(input);
+    const { iMin, iMax } = t;
+    const stringVoltage = tidy(t.sum);
     const currentsMatch = iMax <= iMin * (1 + MATCH);
     // One current in series: the highest rating, so no heater is starved; the others are shunted up to it.
     const stringCurrent = iMax;
@@ -235,57 +142,14 @@ export const calculator = defineCalculator({
     const rating = needed ? suggestedRating(dissipation) : { rating: 0, warning: null };
     const pref = droppingResistance > 0 ? nearestPreferred(droppingResistance, "E12") : 0;
 
-    const lamp = input.pilotLamp ?? null;
-    const warnings: Warning[] = highVoltageWarning(vLine, vMax, lamp?.voltage);
+    const warnings: Warning[] = highVoltageWarning(vLine, t.vMax, input.pilotLamp?.voltage);
     if (vLine > 50) warnings.push({ level: "caution", message: LIVE_CHASSIS });
-
-    const shunts: Shunt[] = [];
-    if (iMin < iMax) {
-      const nearlyAlike: string[] = [];
-      for (let k = 0; k < n; k++) {
-        const h = given ? given[k] : findHeater(tubes![k])!;
-        if (h.current >= iMax) continue;
-        // The shunt carries what the heater does not, at the heater's own voltage (Kirchhoff's current law).
-        const rest = iMax - h.current;
-        const resistance = h.voltage / rest;
-        const p = h.voltage * rest;
-        const r = suggestedRating(p);
-        if (r.warning) warnings.push(r.warning);
-        const shunt: Shunt = {
-          index: k,
-          resistance,
-          dissipation: p,
-          suggestedRating: r.rating,
-          nearestPreferred: resistance > 0 ? nearestPreferred(resistance, "E12") : 0,
-        };
-        if (tubes) shunt.type = tubes[k];
-        shunts.push(shunt);
-        if (h.current >= iMax / (1 + MATCH)) nearlyAlike.push(tubes ? tubes[k] : `Heater ${k + 1}`);
-      }
-      mixedStringWarnings(iMin, iMax, nearlyAlike, tubes, warnings);
-    }
-    if (excess < 0) {
-      const short = (-excess / stringVoltage) * 100;
-      warnings.push({
-        level: "caution",
-        message:
-          `The string needs ${formatQuantity(stringVoltage, "V")}, more than the ${formatQuantity(vLine, "V")} line, so every heater runs about ${toPrecision(short, 2)}% below its rating. ` +
-          "A few per cent is how many AC/DC sets were built; much more and emission suffers.",
-      });
-    }
+    const shunts = shuntsFor(t, warnings);
+    if (excess < 0) warnings.push(shortfallWarning(stringVoltage, vLine));
     if (rating.warning) warnings.push(rating.warning);
-
-    let lampOut: { v: number; i: number; sec: number; string: number } | null = null;
-    if (lamp) {
-      const tapped = findTapped(tubes);
-      if (tapped) {
-        const m = lampModel(tapped, lamp, vLine, stringVoltage, stringCurrent, droppingResistance);
-        lampWarnings(m, lamp, warnings);
-        lampOut = { v: m.lampVoltage, i: m.lampCurrent, sec: m.sectionCurrent, string: m.currentWith };
-      } else {
-        warnings.push(noTapWarning(tubes !== null));
-      }
-    }
+    const lamp = input.pilotLamp
+      ? pilotLampFigures(input.pilotLamp, t.tubes, { vLine, voltage: stringVoltage, current: stringCurrent, dropper: droppingResistance }, warnings)
+      : null;
     warnings.push({ level: "info", message: COLD_SURGE });
 
     const outputs: HeaterStringOutputs = {
@@ -297,10 +161,10 @@ export const calculator = defineCalculator({
       suggestedRating: rating.rating,
       nearestPreferred: pref,
       shunts,
-      pilotLampVoltage: lampOut ? lampOut.v : null,
-      pilotLampCurrent: lampOut ? lampOut.i : null,
-      tapSectionCurrent: lampOut ? lampOut.sec : null,
-      stringCurrentWithLamp: lampOut ? lampOut.string : null,
+      pilotLampVoltage: lamp ? lamp.v : null,
+      pilotLampCurrent: lamp ? lamp.i : null,
+      tapSectionCurrent: lamp ? lamp.sec : null,
+      stringCurrentWithLamp: lamp ? lamp.string : null,
     };
     return { outputs, warnings };
   },

@@ -1,8 +1,10 @@
-import { z } from "zod";
-import { formatQuantity, texQuantity, tex } from "./format";
+import { formatQuantity, tex } from "./format";
+import { explainReforming } from "./reforming-explain";
+import { reformingSchema, type ReformingInput } from "./reforming-schema";
 import { highVoltageWarning } from "./safety";
-import { defineCalculator, type OutputValue, type Step, type Warning } from "./types";
-import { optionalQuantity, quantity, quantityWithDefault } from "./units";
+import { defineCalculator, type OutputValue, type Warning } from "./types";
+
+export { reformingSchema, type ReformingInput } from "./reforming-schema";
 
 /**
  * Reforming an aluminium electrolytic capacitor that has stood unused: raise its voltage in steps
@@ -22,27 +24,6 @@ const HOLD_MINUTES = 10;
 const FINAL_HOLD_MINUTES = 60;
 /** A resistor dropping more than this fraction of rated voltage at the limit current hides part of each step. */
 const DROP_FRACTION = 0.05;
-
-export const reformingSchema = z
-  .object({
-    capacitance: quantity("capacitance", { positive: true, min: 1e-9, max: 10, label: "Capacitance" }),
-    ratedVoltage: quantity("voltage", { positive: true, min: 1, max: 1000, label: "Rated voltage" }),
-    seriesResistance: optionalQuantity("resistance", { positive: true, min: 1, max: 1e9, label: "Series resistance" }),
-    leakageFactor: quantityWithDefault("ratio", 0.01, { nonNegative: true, max: 1, label: "Leakage factor" }),
-    leakageOffset: quantityWithDefault("current", 0, { nonNegative: true, max: 1, label: "Leakage offset" }),
-    leakageFloor: quantityWithDefault("current", 3e-6, { nonNegative: true, max: 1, label: "Leakage floor" }),
-  })
-  .superRefine((v, ctx) => {
-    if (!(v.leakageFactor * v.capacitance * v.ratedVoltage + v.leakageOffset > 0) && !(v.leakageFloor > 0)) {
-      ctx.addIssue({
-        code: "custom",
-        path: ["leakageFloor"],
-        message: "Leakage floor must be above zero when the leakage factor and offset give no limit",
-      });
-    }
-  });
-
-export type ReformingInput = z.output<typeof reformingSchema>;
 
 /** The data-sheet form at a voltage v: max(k·C·v + offset, floor), in amperes. */
 function limitAt(input: ReformingInput, v: number): number {
@@ -213,41 +194,5 @@ export const calculator = defineCalculator({
       warnings,
     };
   },
-  explain(input: ReformingInput, o) {
-    const { capacitance: c, ratedVoltage: v, seriesResistance: r, leakageFactor: k, leakageOffset: off, leakageFloor: floor } = input;
-    const cv = k * c * v + off;
-    const offTex = off > 0 ? tex` + ${texQuantity(off, "A")}` : "";
-    const out: Step[] = [
-      {
-        label: "Leakage limit at rated voltage (data-sheet form)",
-        latex: tex`I_{max} = \max\left(${texQuantity(k, "")} \times ${texQuantity(c, "F")} \times ${texQuantity(v, "V")}${offTex},\; ${texQuantity(floor, "A")}\right) = \max\left(${texQuantity(cv, "A")},\; ${texQuantity(floor, "A")}\right) = ${texQuantity(o.leakageLimit, "A")}`,
-      },
-    ];
-    if (r !== undefined && o.initialCurrent !== null && o.resistorPower !== null && o.timeConstant !== null) {
-      out.push(
-        {
-          label: "Current if rated voltage meets the discharged capacitor",
-          latex: tex`I_0 = \frac{V}{R} = \frac{${texQuantity(v, "V")}}{${texQuantity(r, "Ω")}} = ${texQuantity(o.initialCurrent, "A")}`,
-        },
-        {
-          label: "Resistor dissipation with a shorted capacitor",
-          latex: tex`P_R = \frac{V^2}{R} = \frac{(${texQuantity(v, "V")})^2}{${texQuantity(r, "Ω")}} = ${texQuantity(o.resistorPower, "W")}`,
-        },
-        {
-          label: "Charging time constant (each step settles in about 5τ)",
-          latex: tex`\tau = R\,C = ${texQuantity(r, "Ω")} \times ${texQuantity(c, "F")} = ${texQuantity(o.timeConstant, "s")}, \quad 5\tau = ${texQuantity(5 * o.timeConstant, "s")}`,
-        },
-      );
-    }
-    const steps = o.steps as { voltage: number; minutes: number; leakageLimit: number }[];
-    const rows = steps
-      .map((s, n) => tex`${n + 1} & ${texQuantity(s.voltage, "V")} & ${s.minutes}\,\mathrm{min} & ${texQuantity(s.leakageLimit, "A")}`)
-      .join(" \\\\ ");
-    out.push({
-      label:
-        "Schedule: raise to each voltage, hold at least the time shown and until the leakage falls below the figure (the same form at that voltage); stop if it rises",
-      latex: tex`\begin{array}{rrrr} n & V_n & t_n & I_{max}(V_n) \\ \hline ${rows} \end{array}`,
-    });
-    return out;
-  },
+  explain: (input: ReformingInput, o) => explainReforming(input, o),
 });

@@ -1,6 +1,6 @@
 import { formatQuantity } from "./format";
 import { DEFAULT_CHOKE_RESISTANCE, type LcStageResult, type StageResult } from "./ripple-stages";
-import type { SupplyRippleInput } from "./supply-ripple";
+import type { SupplyRippleInput } from "./supply-ripple-schema";
 import { RECTIFIER_SOURCE, findRectifier } from "./tables/rectifiers";
 import type { Warning } from "./types";
 

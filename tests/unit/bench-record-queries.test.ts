@@ -1,17 +1,10 @@
-import fs from "node:fs";
-import os from "node:os";
-import path from "node:path";
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { beforeAll, describe, expect, test } from "vitest";
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "@/lib/errors";
+import type { Member } from "@/lib/auth/can";
+import { demoDatabase } from "../helpers/temp-db";
 
-// The query functions use the process's one client (getDb): point it at a fresh migrated file first.
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-bench-record-"));
-process.env.GLOWBENCH_DB = path.join(dir, "t.db");
-delete (globalThis as { __glowbenchDb?: unknown }).__glowbenchDb;
-
-const { getDb } = await import("@/db/client");
-const { seedDemo, DEMO_USERS } = await import("@/db/seed");
-const { loadMember } = await import("@/db/queries/auth");
+// First, before anything opens the database: a fresh migrated file for the process's one client (getDb).
+const demo = await demoDatabase("bench-record");
 const jobsQ = await import("@/db/queries/jobs");
 const tubesQ = await import("@/db/queries/tubes");
 const powerQ = await import("@/db/queries/power-ups");
@@ -27,19 +20,13 @@ const { readingSchema } = await import("@/lib/jobs/reading-schemas");
 const { partSchema, partUpdateSchema } = await import("@/lib/jobs/part-schemas");
 const { ReadyChecksError } = await import("@/lib/jobs/ready-checks");
 const { statusChangeWithChecksSchema } = await import("@/lib/jobs/ready-schemas");
-const { users } = await import("@/db/schema");
-const { eq } = await import("drizzle-orm");
 
-type M = NonNullable<ReturnType<typeof loadMember>>;
-const member = (email: string): M => loadMember(getDb().select({ id: users.id }).from(users).where(eq(users.email, email)).get()!.id)!;
+type M = Member;
 let tech: M, apprentice: M, other: M;
 let job: number;
 
 beforeAll(async () => {
-  await seedDemo(getDb());
-  tech = member(DEMO_USERS.technician.email);
-  apprentice = member(DEMO_USERS.apprentice.email);
-  other = member(DEMO_USERS.other.email);
+  ({ tech, apprentice, other } = await demo.seed());
   job = jobsQ.createJob(tech, {
     title: "Query test television",
     equipmentKind: "television",
@@ -51,7 +38,6 @@ beforeAll(async () => {
     notes: null,
   } as never).id;
 });
-afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
 const logTexts = () => logQ.listLog(tech, job).map((e) => e.text);
 const step = (supplyVoltage: number, currentDrawn: number) => powerUpStepSchema.parse({ supplyVoltage, currentDrawn, minutes: 2 });

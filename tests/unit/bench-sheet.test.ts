@@ -1,19 +1,12 @@
-import fs from "node:fs";
-import os from "node:os";
-import path from "node:path";
 import { renderToBuffer } from "@react-pdf/renderer";
 import { cloneElement, type ReactElement } from "react";
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { beforeAll, describe, expect, test } from "vitest";
+import type { Member } from "@/lib/auth/can";
+import { demoDatabase } from "../helpers/temp-db";
 
-// The bench sheet reads the job through the query functions: point the one client at a fresh migrated file.
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-bench-sheet-"));
-process.env.GLOWBENCH_DB = path.join(dir, "t.db");
-delete (globalThis as { __glowbenchDb?: unknown }).__glowbenchDb;
-
-const { getDb } = await import("@/db/client");
-const { seedDemo, DEMO_USERS } = await import("@/db/seed");
+// The bench sheet reads the job through the query functions: point the one client at a fresh migrated file first.
+const demo = await demoDatabase("bench-sheet");
 const { DEMO_TELEVISION_TITLE } = await import("@/db/seed-bench-record");
-const { loadMember } = await import("@/db/queries/auth");
 const jobsQ = await import("@/db/queries/jobs");
 const partsQ = await import("@/db/queries/parts");
 const calcQ = await import("@/db/queries/calculations");
@@ -21,17 +14,13 @@ const { partSchema } = await import("@/lib/jobs/part-schemas");
 const { benchSheetData } = await import("@/server/bench-sheet/data");
 const { BenchSheetDocument } = await import("@/server/bench-sheet/document");
 const { HEADING_AHEAD } = await import("@/server/bench-sheet/styles");
-const { users } = await import("@/db/schema");
-const { eq } = await import("drizzle-orm");
 
-type M = NonNullable<ReturnType<typeof loadMember>>;
-let tech: M;
+let tech: Member;
 let big: number;
 let tv: number;
 
 beforeAll(async () => {
-  await seedDemo(getDb());
-  tech = loadMember(getDb().select({ id: users.id }).from(users).where(eq(users.email, DEMO_USERS.technician.email)).get()!.id)!;
+  ({ tech } = await demo.seed());
   tv = jobsQ.searchJobs(tech, { q: DEMO_TELEVISION_TITLE, page: 1, pageSize: 5, sort: "updatedAt", dir: "desc" } as never).jobs[0].id;
   big = jobsQ.createJob(tech, { title: "Console radio with everything saved", equipmentKind: "console-radio" } as never).id;
   const saved: [string, Record<string, unknown>][] = [
@@ -60,7 +49,6 @@ beforeAll(async () => {
     );
   }
 }, 120_000);
-afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
 interface Node {
   type: string;
@@ -70,7 +58,7 @@ interface Node {
 }
 
 /** Renders through react-pdf and keeps its page layout (the Document's onRender hands it over). */
-async function renderWithLayout(member: M, jobId: number): Promise<{ pdf: Buffer; pages: Node[] }> {
+async function renderWithLayout(member: Member, jobId: number): Promise<{ pdf: Buffer; pages: Node[] }> {
   let layout: { children: Node[] } | undefined;
   const doc = BenchSheetDocument({ data: benchSheetData(member, jobId) }) as ReactElement<{ onRender?: (r: { _INTERNAL__LAYOUT__DATA_?: unknown }) => void }>;
   const withHook = cloneElement(doc, { onRender: (r) => void (layout = r._INTERNAL__LAYOUT__DATA_ as typeof layout) });

@@ -1,18 +1,11 @@
-import fs from "node:fs";
-import os from "node:os";
-import path from "node:path";
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { beforeAll, describe, expect, test } from "vitest";
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "@/lib/errors";
 import type { Member } from "@/lib/auth/can";
+import { demoDatabase } from "../helpers/temp-db";
 
-// The query functions use the process's one client (getDb): point it at a fresh migrated file first.
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-ordering-"));
-process.env.GLOWBENCH_DB = path.join(dir, "t.db");
-delete (globalThis as { __glowbenchDb?: unknown }).__glowbenchDb;
-
-const { getDb } = await import("@/db/client");
-const { seedDemo, DEMO_USERS } = await import("@/db/seed");
-const { loadMember } = await import("@/db/queries/auth");
+// First, before anything opens the database: a fresh migrated file for the process's one client (getDb).
+const demo = await demoDatabase("ordering");
+const { getDb } = demo;
 const jobsQ = await import("@/db/queries/jobs");
 const partsQ = await import("@/db/queries/parts");
 const ordersQ = await import("@/db/queries/orders");
@@ -22,9 +15,7 @@ const { jobCreateSchema } = await import("@/lib/jobs/job-schemas");
 const { partSchema, partUpdateSchema } = await import("@/lib/jobs/part-schemas");
 const { customerSchema } = await import("@/lib/customers/schemas");
 const { memberships, users, workshops } = await import("@/db/schema");
-const { eq } = await import("drizzle-orm");
 
-const member = (email: string): Member => loadMember(getDb().select({ id: users.id }).from(users).where(eq(users.email, email)).get()!.id)!;
 let owner: Member, tech: Member, apprentice: Member, other: Member;
 
 /** A workshop of its own with one technician, straight in the database. */
@@ -42,13 +33,8 @@ function freshWorkshop(name: string): Member {
 const newJob = (m: Member, input: Record<string, unknown>) => jobsQ.createJob(m, jobCreateSchema.parse({ equipmentKind: "other", ...input }));
 
 beforeAll(async () => {
-  await seedDemo(getDb());
-  owner = member(DEMO_USERS.owner.email);
-  tech = member(DEMO_USERS.technician.email);
-  apprentice = member(DEMO_USERS.apprentice.email);
-  other = member(DEMO_USERS.other.email);
+  ({ owner, tech, apprentice, other } = await demo.seed());
 });
-afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
 describe("job numbers count per workshop", () => {
   test("two new workshops both get job 1, then job 2", () => {

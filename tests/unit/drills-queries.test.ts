@@ -1,10 +1,9 @@
-import fs from "node:fs";
-import os from "node:os";
-import path from "node:path";
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { beforeAll, describe, expect, test } from "vitest";
 import { ConflictError, ForbiddenError, NotFoundError, ValidationError } from "@/lib/errors";
 import { DRILL_KINDS, formatAnswer, generateDrill } from "@/lib/drills";
 import { WRONG_UNIT } from "../helpers/drills";
+import type { Member } from "@/lib/auth/can";
+import { demoDatabase } from "../helpers/temp-db";
 
 /**
  * The drills query layer against a freshly migrated temporary database seeded with the demo scenario.
@@ -12,29 +11,19 @@ import { WRONG_UNIT } from "../helpers/drills";
  * handful of kinds over HTTP: 61 kinds × 100 × two requests would make the server run far too long).
  */
 
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-drills-"));
-process.env.GLOWBENCH_DB = path.join(dir, "t.db");
-delete (globalThis as { __glowbenchDb?: unknown }).__glowbenchDb;
-
-const { getDb } = await import("@/db/client");
-const { seedDemo, DEMO_USERS } = await import("@/db/seed");
-const { loadMember } = await import("@/db/queries/auth");
+// First, before anything opens the database: a fresh migrated file for the process's one client (getDb).
+const demo = await demoDatabase("drills");
+const { getDb } = demo;
 const q = await import("@/db/queries/drills");
-const { calculations, drills, users } = await import("@/db/schema");
+const { calculations, drills } = await import("@/db/schema");
 const { eq } = await import("drizzle-orm");
 
-type M = NonNullable<ReturnType<typeof loadMember>>;
-const member = (email: string): M => loadMember(getDb().select({ id: users.id }).from(users).where(eq(users.email, email)).get()!.id)!;
+type M = Member;
 let owner: M, tech: M, apprentice: M, other: M;
 
 beforeAll(async () => {
-  await seedDemo(getDb());
-  owner = member(DEMO_USERS.owner.email);
-  tech = member(DEMO_USERS.technician.email);
-  apprentice = member(DEMO_USERS.apprentice.email);
-  other = member(DEMO_USERS.other.email);
+  ({ owner, tech, apprentice, other } = await demo.seed());
 });
-afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
 /** The stored row of a drill, read straight from the table: the test's way to the expected answer. */
 const stored = (id: number) => getDb().select().from(drills).where(eq(drills.id, id)).get()!;

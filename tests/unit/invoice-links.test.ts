@@ -1,37 +1,26 @@
-import fs from "node:fs";
-import os from "node:os";
-import path from "node:path";
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { beforeAll, describe, expect, test } from "vitest";
 import { ConflictError, ForbiddenError, GoneError, NotFoundError } from "@/lib/errors";
+import type { Member } from "@/lib/auth/can";
+import { demoDatabase } from "../helpers/temp-db";
 
-// The query functions use the process's one client (getDb): point it at a fresh migrated file first.
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-invoice-links-"));
-process.env.GLOWBENCH_DB = path.join(dir, "t.db");
-delete (globalThis as { __glowbenchDb?: unknown }).__glowbenchDb;
-
-const { getDb } = await import("@/db/client");
-const { seedDemo, DEMO_USERS } = await import("@/db/seed");
-const { loadMember } = await import("@/db/queries/auth");
+// First, before anything opens the database: a fresh migrated file for the process's one client (getDb).
+const demo = await demoDatabase("invoice-links");
+const { getDb } = demo;
 const jobsQ = await import("@/db/queries/jobs");
 const invoicesQ = await import("@/db/queries/invoices");
 const linksQ = await import("@/db/queries/invoice-links");
 const { hashToken } = await import("@/lib/auth/tokens");
-const { invoices, logEntries, users } = await import("@/db/schema");
+const { invoices, logEntries } = await import("@/db/schema");
 const { and, eq } = await import("drizzle-orm");
 
 /** The pay link's rules in the query layer: hashed, expiring, retired by a new send, first view recorded once, 410 once paid. */
 
-type M = NonNullable<ReturnType<typeof loadMember>>;
-const member = (email: string): M => loadMember(getDb().select({ id: users.id }).from(users).where(eq(users.email, email)).get()!.id)!;
+type M = Member;
 let owner: M, tech: M, other: M;
 
 beforeAll(async () => {
-  await seedDemo(getDb());
-  owner = member(DEMO_USERS.owner.email);
-  tech = member(DEMO_USERS.technician.email);
-  other = member(DEMO_USERS.other.email);
+  ({ owner, tech, other } = await demo.seed());
 });
-afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
 function issued(customerEmail: string | null = "wren@example.com") {
   // A customer without an e-mail gets a name of their own, so no earlier customer record lends them one.

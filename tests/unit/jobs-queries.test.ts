@@ -1,17 +1,11 @@
-import fs from "node:fs";
-import os from "node:os";
-import path from "node:path";
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { beforeAll, describe, expect, test } from "vitest";
+import type { Member } from "@/lib/auth/can";
 import { ForbiddenError, NotFoundError, ValidationError } from "@/lib/errors";
+import { demoDatabase } from "../helpers/temp-db";
 
-// The query functions use the process's one client (getDb): point it at a fresh migrated file first.
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-jobs-"));
-process.env.GLOWBENCH_DB = path.join(dir, "t.db");
-delete (globalThis as { __glowbenchDb?: unknown }).__glowbenchDb;
-
-const { getDb } = await import("@/db/client");
-const { seedDemo, DEMO_USERS } = await import("@/db/seed");
-const { loadMember } = await import("@/db/queries/auth");
+// First, before anything opens the database: a fresh migrated file for the process's one client (getDb).
+const demo = await demoDatabase("jobs");
+const { DEMO_USERS } = demo;
 const jobsQ = await import("@/db/queries/jobs");
 const partsQ = await import("@/db/queries/parts");
 const readingsQ = await import("@/db/queries/readings");
@@ -19,24 +13,13 @@ const calcQ = await import("@/db/queries/calculations");
 const logQ = await import("@/db/queries/log");
 const { jobListQuerySchema } = await import("@/lib/jobs/job-schemas");
 const { readingSchema } = await import("@/lib/jobs/reading-schemas");
-const { users } = await import("@/db/schema");
-const { eq } = await import("drizzle-orm");
 
-type M = NonNullable<ReturnType<typeof loadMember>>;
-const member = (email: string): M => {
-  const u = getDb().select({ id: users.id }).from(users).where(eq(users.email, email)).get()!;
-  return loadMember(u.id)!;
-};
+type M = Member;
 let owner: M, tech: M, apprentice: M, other: M;
 
 beforeAll(async () => {
-  await seedDemo(getDb());
-  owner = member(DEMO_USERS.owner.email);
-  tech = member(DEMO_USERS.technician.email);
-  apprentice = member(DEMO_USERS.apprentice.email);
-  other = member(DEMO_USERS.other.email);
+  ({ owner, tech, apprentice, other } = await demo.seed());
 });
-afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
 const query = (q: Record<string, string> = {}) => jobListQuerySchema.parse(q);
 const newJob = (m: M, title: string, extra: Record<string, unknown> = {}) =>

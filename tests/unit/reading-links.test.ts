@@ -1,35 +1,22 @@
-import fs from "node:fs";
-import os from "node:os";
-import path from "node:path";
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { beforeAll, describe, expect, test } from "vitest";
+import type { Member } from "@/lib/auth/can";
+import { demoDatabase } from "../helpers/temp-db";
 
 // Voltage readings linked to the capacitors they were taken across, through the real queries on a
-// fresh migrated database (the migration adds readings.part_designators).
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-links-"));
-process.env.GLOWBENCH_DB = path.join(dir, "t.db");
-delete (globalThis as { __glowbenchDb?: unknown }).__glowbenchDb;
-
-const { getDb } = await import("@/db/client");
-const { seedDemo, DEMO_USERS } = await import("@/db/seed");
-const { loadMember } = await import("@/db/queries/auth");
+// fresh migrated database (the migration adds readings.part_designators), made before anything opens it.
+const demo = await demoDatabase("links");
 const jobsQ = await import("@/db/queries/jobs");
 const partsQ = await import("@/db/queries/parts");
 const readingsQ = await import("@/db/queries/readings");
 const { readingSchema } = await import("@/lib/jobs/reading-schemas");
 const { capacitorChecks } = await import("@/lib/jobs/part-cautions");
-const { users } = await import("@/db/schema");
-const { eq } = await import("drizzle-orm");
 
-type M = NonNullable<ReturnType<typeof loadMember>>;
-const member = (email: string): M => loadMember(getDb().select({ id: users.id }).from(users).where(eq(users.email, email)).get()!.id)!;
+type M = Member;
 let tech: M, apprentice: M;
 
 beforeAll(async () => {
-  await seedDemo(getDb());
-  tech = member(DEMO_USERS.technician.email);
-  apprentice = member(DEMO_USERS.apprentice.email);
+  ({ tech, apprentice } = await demo.seed());
 });
-afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
 const newJob = (title: string) =>
   jobsQ.createJob(tech, {

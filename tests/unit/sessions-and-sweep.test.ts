@@ -1,15 +1,10 @@
 import fs from "node:fs";
-import os from "node:os";
 import path from "node:path";
-import { afterAll, beforeAll, describe, expect, test } from "vitest";
+import { beforeAll, describe, expect, test } from "vitest";
+import { tempDatabase } from "../helpers/temp-db";
 
-// The query functions use the process's one client (getDb): point it at a fresh migrated file first.
-const dir = fs.mkdtempSync(path.join(os.tmpdir(), "glowbench-sessions-"));
-process.env.GLOWBENCH_DB = path.join(dir, "t.db");
-process.env.GLOWBENCH_UPLOADS = path.join(dir, "uploads");
-delete (globalThis as { __glowbenchDb?: unknown }).__glowbenchDb;
-
-const { getDb } = await import("@/db/client");
+// First, before anything opens the database: a fresh migrated file for the process's one client (getDb), with its uploads folder.
+const { getDb } = await tempDatabase("sessions", { uploads: true });
 const { users, workshops, memberships, jobs, files } = await import("@/db/schema");
 const sessionsQ = await import("@/db/queries/sessions");
 const { sweepOrphanUploads } = await import("@/server/files/sweep");
@@ -24,7 +19,6 @@ beforeAll(() => {
   db.insert(memberships).values({ workshopId, userId, role: "owner" }).run();
   jobId = db.insert(jobs).values({ workshopId, title: "Set", equipmentKind: "table-radio" }).returning().get().id;
 });
-afterAll(() => fs.rmSync(dir, { recursive: true, force: true }));
 
 const HOUR = 3_600_000;
 const opts = { ttlMs: 14 * 24 * HOUR, idleMs: 8 * HOUR };
