@@ -1,22 +1,21 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
 import { EQUIPMENT_KINDS, EQUIPMENT_KIND_LABELS } from "@/lib/vocabulary";
 import { CustomerPicker, type PickedCustomer } from "@/components/customers/customer-picker";
-import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
+import { FormActions } from "@/components/ui/form-actions";
 import { SelectField } from "@/components/ui/select-field";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { useAction, useSubmit } from "@/components/ui/use-submit";
-import { jobCreateSchema, type JobCreate, type JobCreateInput } from "@/lib/jobs/job-schemas";
+import { useSchemaForm } from "@/components/ui/use-schema-form";
+import { useAction } from "@/components/ui/use-submit";
+import { formText } from "@/lib/client/form-text";
+import { jobCreateSchema, type JobCreateInput } from "@/lib/jobs/job-schemas";
 import { AccessoriesField } from "./intake-fields";
 
 const NAMES = ["title", "equipmentKind", "maker", "model", "year", "customerName", "customerEmail", "customerPhone", "serialNumber", "notes"] as const;
 type Name = (typeof NAMES)[number];
-type Values = Record<Name, string>;
 type EditedJob = { id: number; customerId?: number | null; accessories?: string[] | null } & Partial<Record<Name, string | number | null>>;
 
 /** Uploads the intake photos of a job just booked in, one multipart POST each by `send`; returns how many failed. */
@@ -47,16 +46,11 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
   const [fieldErrors, setFieldErrors] = useState<Record<string, string>>({});
   // The photos go after the job is booked; the page then moves to the job, so nothing refreshes here.
   const upload = useAction({ refresh: false });
-  const initial = Object.fromEntries(NAMES.map((n) => [n, job?.[n] == null ? "" : String(job[n])])) as Values;
+  const initial = formText(NAMES, job);
   if (!initial.equipmentKind) initial.equipmentKind = "table-radio";
-  const form = useForm<JobCreateInput, unknown, JobCreate>({ resolver: zodResolver(jobCreateSchema), defaultValues: initial as JobCreateInput });
-  const {
-    register,
-    formState: { errors, isSubmitting },
-  } = form;
 
   // The customer and accessories live outside react-hook-form, so their messages are kept in fieldErrors.
-  const { submit: onSubmit, formError } = useSubmit<JobCreateInput, { job: { id: number } }, JobCreate>(form, {
+  const { register, errors, submit, formError, pending } = useSchemaForm(jobCreateSchema, initial as JobCreateInput, {
     url: job ? `/api/jobs/${job.id}` : "/api/jobs",
     method: job ? "PATCH" : "POST",
     body: (values) => {
@@ -70,7 +64,7 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
     refresh: Boolean(job),
     onStart: () => setFieldErrors({}),
     onFail: (f) => setFieldErrors(f.fields),
-    onDone: async (data) => {
+    onDone: async (data: { job: { id: number } }) => {
       if (job) return onDone?.();
       const failed = photos.length ? await uploadIntakePhotos(data.job.id, photos, upload.run) : 0;
       router.push(`/jobs/${data.job.id}${failed ? "/files" : ""}`);
@@ -80,7 +74,7 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
   const id = (n: string) => `job-${n}`;
   const heading = "sm:col-span-2 mt-3 border-t border-rule pt-3 text-lead font-bold";
   return (
-    <form onSubmit={onSubmit} noValidate className="grid grid-cols-1 gap-x-4 gap-y-1 sm:grid-cols-2" aria-describedby="job-form-error">
+    <form onSubmit={submit} noValidate className="grid grid-cols-1 gap-x-4 gap-y-1 sm:grid-cols-2" aria-describedby="job-form-error">
       <Field
         id={id("title")}
         label="Title"
@@ -164,19 +158,15 @@ export function JobForm({ job, onDone, bookFor = null }: { job?: EditedJob; onDo
         error={errors.notes?.message}
         {...register("notes")}
       />
-      <p id="job-form-error" role="alert" aria-live="polite" className="min-h-6 font-bold text-flag sm:col-span-2">
-        {formError ?? ""}
-      </p>
-      <div className="flex flex-wrap gap-3 sm:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>
-          {isSubmitting ? (photos.length ? "Saving and uploading…" : "Saving…") : job ? "Save details" : "Book in"}
-        </Button>
-        {onDone ? (
-          <Button type="button" variant="secondary" onClick={onDone}>
-            Cancel
-          </Button>
-        ) : null}
-      </div>
+      <FormActions
+        errorId="job-form-error"
+        formError={formError}
+        pending={pending}
+        busy={photos.length ? "Saving and uploading…" : "Saving…"}
+        onCancel={onDone}
+      >
+        {job ? "Save details" : "Book in"}
+      </FormActions>
     </form>
   );
 }
