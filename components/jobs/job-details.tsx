@@ -72,25 +72,7 @@ export function JobDetails({
         ))}
         {intakePhotos.length ? (
           <Detail label="As it came in" wide>
-            <ul className="mt-1 flex flex-wrap gap-2" data-testid="intake-photos">
-              {intakePhotos.map((f) => (
-                <li key={f.id}>
-                  <a
-                    href={`/api/jobs/${job.id}/files/${f.id}`}
-                    target="_blank"
-                    rel="noopener"
-                    className="relative block size-20 overflow-hidden rounded-chip border border-rule bg-sunk"
-                  >
-                    {f.hasThumbnail ? (
-                      // eslint-disable-next-line @next/next/no-img-element -- served by our authorised route, not next/image
-                      <img src={`/api/jobs/${job.id}/files/${f.id}?thumb=1`} alt={f.name} className="size-full object-cover" />
-                    ) : (
-                      <span className="sr-only">{f.name}</span>
-                    )}
-                  </a>
-                </li>
-              ))}
-            </ul>
+            <IntakePhotoStrip jobId={job.id} photos={intakePhotos} />
           </Detail>
         ) : null}
         <Detail label="Notes" wide className="whitespace-pre-line">
@@ -99,5 +81,30 @@ export function JobDetails({
       </dl>
       <DetailsActions canEdit={canEdit} canDelete={canDelete} onEdit={() => setEditing(true)} onDelete={remove} deleteLabel="Delete job" error={error} />
     </div>
+  );
+}
+
+/** The intake photos as thumbnails, each opening the full picture from the job's Files. */
+function IntakePhotoStrip({ jobId, photos }: { jobId: number; photos: IntakePhoto[] }) {
+  return (
+    <ul className="mt-1 flex flex-wrap gap-2" data-testid="intake-photos">
+      {photos.map((f) => (
+        <li key={f.id}>
+          <a
+            href={`/api/jobs/${jobId}/files/${f.id}`}
+            target="_blank"
+            rel="noopener"
+            className="relative block size-20 overflow-hidden rounded-chip border border-rule bg-sunk"
+          >
+            {f.hasThumbnail ? (
+              // eslint-disable-next-line @next/next/no-img-element -- served by our authorised route, not next/image
+              <img src={`/api/jobs/${jobId}/files/${f.id}?thumb=1`} alt={f.name} className="size-full object-cover" />
+            ) : (
+              <span className="sr-only">{f.name}</span>
+            )}
+          </a>
+        </li>
+      ))}
+    </ul>
   );
 }
