@@ -1,16 +1,17 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import Link from "next/link";
 import { useRouter } from "next/navigation";
-import { useForm, useWatch } from "react-hook-form";
+import { useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormError } from "@/components/ui/form-error";
-import { useAction, useSubmit } from "@/components/ui/use-submit";
+import { SubmitButton } from "@/components/ui/submit-button";
+import { useSchemaForm } from "@/components/ui/use-schema-form";
+import { useAction } from "@/components/ui/use-submit";
 import { NEW_PASSWORD_HINT } from "@/lib/auth/schemas";
 import { PasswordStrength } from "./password-strength";
-import { joinExistingSchema, joinNewSchema, type JoinExistingForm, type JoinNewForm } from "@/lib/workshop/schemas";
+import { joinExistingSchema, joinNewSchema } from "@/lib/workshop/schemas";
 
 const ACCEPT = "/api/invitations/accept";
 
@@ -21,25 +22,14 @@ function JoinError({ message }: { message: string | null }) {
 /** No account yet for the invited address: choose a name and password. */
 export function JoinNewForm({ token, email }: { token: string; email: string }) {
   const router = useRouter();
-  const form = useForm<JoinNewForm>({ resolver: zodResolver(joinNewSchema), defaultValues: { name: "", password: "" } });
-  const {
-    register,
-    control,
-    formState: { errors },
-  } = form;
-  const [password, name] = useWatch({ control, name: ["password", "name"] });
-  const {
-    submit: onSubmit,
-    formError,
-    pending: isSubmitting,
-  } = useSubmit(form, {
-    url: ACCEPT,
-    body: (values) => ({ token, mode: "sign-up", ...values }),
-    fields: ["name", "password"],
-    onDone: () => router.push("/jobs"),
-  });
+  const { form, register, errors, submit, formError, pending } = useSchemaForm(
+    joinNewSchema,
+    { name: "", password: "" },
+    { url: ACCEPT, body: (values) => ({ token, mode: "sign-up", ...values }), fields: ["name", "password"], onDone: () => router.push("/jobs") },
+  );
+  const [password, name] = useWatch({ control: form.control, name: ["password", "name"] });
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
+    <form onSubmit={submit} noValidate className="flex flex-col gap-2">
       <Field id="join-email" label="E-mail" value={email} readOnly disabled hint="The address the invitation was sent to." />
       <Field id="name" label="Your name" autoComplete="name" error={errors.name?.message} {...register("name")} />
       <Field
@@ -53,9 +43,9 @@ export function JoinNewForm({ token, email }: { token: string; email: string }) 
       />
       <PasswordStrength id="password-strength" password={password} context={[email, name]} />
       <JoinError message={formError} />
-      <Button type="submit" disabled={isSubmitting}>
-        {isSubmitting ? "Joining…" : "Create my account and join"}
-      </Button>
+      <SubmitButton pending={pending} busy="Joining…">
+        Create my account and join
+      </SubmitButton>
     </form>
   );
 }
@@ -63,23 +53,13 @@ export function JoinNewForm({ token, email }: { token: string; email: string }) 
 /** The invited address already has an account: its password joins. */
 export function JoinExistingForm({ token, email }: { token: string; email: string }) {
   const router = useRouter();
-  const form = useForm<JoinExistingForm>({ resolver: zodResolver(joinExistingSchema), defaultValues: { password: "" } });
-  const {
-    register,
-    formState: { errors },
-  } = form;
-  const {
-    submit: onSubmit,
-    formError,
-    pending: isSubmitting,
-  } = useSubmit(form, {
-    url: ACCEPT,
-    body: (values) => ({ token, mode: "sign-in", ...values }),
-    fields: ["password"],
-    onDone: () => router.push("/jobs"),
-  });
+  const { register, errors, submit, formError, pending } = useSchemaForm(
+    joinExistingSchema,
+    { password: "" },
+    { url: ACCEPT, body: (values) => ({ token, mode: "sign-in", ...values }), fields: ["password"], onDone: () => router.push("/jobs") },
+  );
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-2">
+    <form onSubmit={submit} noValidate className="flex flex-col gap-2">
       <Field id="join-email" label="E-mail" value={email} readOnly disabled />
       <Field
         id="password"
@@ -95,9 +75,9 @@ export function JoinExistingForm({ token, email }: { token: string; email: strin
         </Link>
       </p>
       <JoinError message={formError} />
-      <Button type="submit" disabled={isSubmitting}>
-        {isSubmitting ? "Joining…" : "Sign in and join"}
-      </Button>
+      <SubmitButton pending={pending} busy="Joining…">
+        Sign in and join
+      </SubmitButton>
     </form>
   );
 }

@@ -5,6 +5,7 @@ import type { OutputMeta, OutputValue, Warning } from "@/lib/calc/types";
 import type { BenchDescriptor } from "@/lib/calc/types";
 import { formatOutput, formatPlain, outputLabel, outputTone } from "@/lib/bench/display";
 import { BAND_PAINT } from "./list-inputs";
+import { RowsTable, type Column } from "./rows-table";
 import { ShuntsTable } from "./shunts-table";
 
 type View = Pick<BenchDescriptor, "headlines" | "format" | "words" | "tones">;
@@ -64,6 +65,21 @@ export function ResultsPanel({ view, outputs, run }: { view: View; outputs: read
 /** List outputs drawn as a table under their label rather than beside it. */
 const TABLES = new Set(["stages", "shunts", "steps"]);
 
+/** The supply filter's stages: what each passes, the ripple after it, its current and DC drop. */
+const STAGE_COLUMNS: readonly Column[] = [
+  { label: "Passes (fraction)", cell: (row) => formatPlain(row.attenuation, "", 3) },
+  { label: "Ripple after", cell: (row) => formatPlain(row.rippleRms, "V") },
+  { label: "Current", cell: (row) => (row.current === undefined ? "" : formatPlain(row.current, "A")) },
+  { label: "DC drop", cell: (row) => formatPlain(row.dcDrop, "V") },
+];
+
+/** The reforming schedule: each step's voltage, the least time to hold it and the leakage to wait for. */
+const STEP_COLUMNS: readonly Column[] = [
+  { label: "Voltage", cell: (row) => formatPlain(row.voltage, "V") },
+  { label: "Hold at least", cell: (row) => (typeof row.minutes === "number" ? `${row.minutes} min` : "—") },
+  { label: "Leakage to wait for", cell: (row) => formatPlain(row.leakageLimit, "A") },
+];
+
 function ListValue({ name, value }: { name: string; value: OutputValue[] }) {
   if (name === "bands") {
     return (
@@ -80,47 +96,9 @@ function ListValue({ name, value }: { name: string; value: OutputValue[] }) {
   if (name === "shunts") return <ShuntsTable value={value} />;
   if (name === "stages") {
     if (value.length === 0) return <span className="font-sans font-normal text-muted">no stages</span>;
-    return (
-      <table className="mt-1 w-full text-right text-note">
-        <thead className="font-sans text-muted">
-          <tr>
-            <th scope="col" className="pr-3 text-left font-normal">
-              Stage
-            </th>
-            <th scope="col" className="pr-3 font-normal">
-              Passes (fraction)
-            </th>
-            <th scope="col" className="pr-3 font-normal">
-              Ripple after
-            </th>
-            <th scope="col" className="pr-3 font-normal">
-              Current
-            </th>
-            <th scope="col" className="font-normal">
-              DC drop
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {value.map((s, i) => {
-            const row = s as Record<string, OutputValue>;
-            return (
-              <tr key={i}>
-                <th scope="row" className="pr-3 text-left">
-                  {i + 1}
-                </th>
-                <td className="pr-3">{formatPlain(row.attenuation, "", 3)}</td>
-                <td className="pr-3">{formatPlain(row.rippleRms, "V")}</td>
-                <td className="pr-3">{row.current === undefined ? "" : formatPlain(row.current, "A")}</td>
-                <td>{formatPlain(row.dcDrop, "V")}</td>
-              </tr>
-            );
-          })}
-        </tbody>
-      </table>
-    );
+    return <RowsTable first="Stage" columns={STAGE_COLUMNS} value={value} />;
   }
-  if (name === "steps") return <ScheduleTable value={value} />;
+  if (name === "steps") return <RowsTable first="Step" columns={STEP_COLUMNS} value={value} />;
   return <>{value.map(String).join(", ")}</>;
 }
 
@@ -142,44 +120,5 @@ function Notes({ warnings }: { warnings: Warning[] }) {
         </li>
       ))}
     </ul>
-  );
-}
-
-/** The reforming schedule: each step's voltage, the least time to hold it and the leakage to wait for. */
-function ScheduleTable({ value }: { value: OutputValue[] }) {
-  return (
-    <table className="mt-1 w-full text-right text-note">
-      <thead className="font-sans text-muted">
-        <tr>
-          <th scope="col" className="pr-3 text-left font-normal">
-            Step
-          </th>
-          <th scope="col" className="pr-3 font-normal">
-            Voltage
-          </th>
-          <th scope="col" className="pr-3 font-normal">
-            Hold at least
-          </th>
-          <th scope="col" className="font-normal">
-            Leakage to wait for
-          </th>
-        </tr>
-      </thead>
-      <tbody>
-        {value.map((s, i) => {
-          const row = s as Record<string, OutputValue>;
-          return (
-            <tr key={i}>
-              <th scope="row" className="pr-3 text-left">
-                {i + 1}
-              </th>
-              <td className="pr-3">{formatPlain(row.voltage, "V")}</td>
-              <td className="pr-3">{typeof row.minutes === "number" ? `${row.minutes} min` : "—"}</td>
-              <td>{formatPlain(row.leakageLimit, "A")}</td>
-            </tr>
-          );
-        })}
-      </tbody>
-    </table>
   );
 }

@@ -1,5 +1,28 @@
 import { formatPlain } from "@/lib/bench/display";
 import type { OutputValue } from "@/lib/calc/types";
+import { RowsTable, type Column, type Row } from "./rows-table";
+
+const COLUMNS: readonly Column[] = [
+  { label: "Shunt", cell: (row) => formatPlain(row.resistance, "Ω", 4) },
+  { label: "E12", cell: (row) => formatPlain(row.nearestPreferred, "Ω") },
+  { label: "Dissipation", cell: (row) => formatPlain(row.dissipation, "W") },
+  {
+    label: "Rating",
+    cell: (row) =>
+      row.suggestedRating === null ? <span title="Above the largest standard rating: see the caution">over 100 W</span> : formatPlain(row.suggestedRating, "W"),
+  },
+];
+
+/** The heater's number in the string, with its type under it. */
+function heater(row: Row, i: number) {
+  const n = typeof row.index === "number" ? row.index + 1 : i + 1;
+  return (
+    <>
+      {n}
+      {typeof row.type === "string" ? <span className="block font-sans font-normal text-muted">{row.type}</span> : null}
+    </>
+  );
+}
 
 /**
  * The heater string's shunt resistors as a compact table: five narrow columns that fit a 390 px phone
@@ -8,51 +31,14 @@ import type { OutputValue } from "@/lib/calc/types";
 export function ShuntsTable({ value }: { value: OutputValue[] }) {
   if (value.length === 0) return <span className="font-sans font-normal text-muted">None: every heater is rated for the string current</span>;
   return (
-    <table className="mt-1 w-full text-right text-note" data-testid="shunts-table">
-      <caption className="sr-only">One shunt resistor across each heater rated below the string current</caption>
-      <thead className="font-sans text-muted">
-        <tr>
-          <th scope="col" className="pr-2 text-left align-bottom font-normal">
-            Across heater
-          </th>
-          <th scope="col" className="pr-2 align-bottom font-normal">
-            Shunt
-          </th>
-          <th scope="col" className="pr-2 align-bottom font-normal">
-            E12
-          </th>
-          <th scope="col" className="pr-2 align-bottom font-normal">
-            Dissipation
-          </th>
-          <th scope="col" className="align-bottom font-normal">
-            Rating
-          </th>
-        </tr>
-      </thead>
-      <tbody>
-        {value.map((s, i) => {
-          const row = s as Record<string, OutputValue>;
-          const n = typeof row.index === "number" ? row.index + 1 : i + 1;
-          return (
-            <tr key={i} className="border-t border-rule/60 align-top">
-              <th scope="row" className="py-1 pr-2 text-left">
-                {n}
-                {typeof row.type === "string" ? <span className="block font-sans font-normal text-muted">{row.type}</span> : null}
-              </th>
-              <td className="py-1 pr-2">{formatPlain(row.resistance, "Ω", 4)}</td>
-              <td className="py-1 pr-2">{formatPlain(row.nearestPreferred, "Ω")}</td>
-              <td className="py-1 pr-2">{formatPlain(row.dissipation, "W")}</td>
-              <td className="py-1">
-                {row.suggestedRating === null ? (
-                  <span title="Above the largest standard rating: see the caution">over 100 W</span>
-                ) : (
-                  formatPlain(row.suggestedRating, "W")
-                )}
-              </td>
-            </tr>
-          );
-        })}
-      </tbody>
-    </table>
+    <RowsTable
+      first="Across heater"
+      columns={COLUMNS}
+      value={value}
+      rowHead={heater}
+      dense
+      caption="One shunt resistor across each heater rated below the string current"
+      testId="shunts-table"
+    />
   );
 }

@@ -1,9 +1,6 @@
 "use client";
 
-import { useRouter } from "next/navigation";
-import { useState } from "react";
-import { Button } from "@/components/ui/button";
-import { useAction } from "@/components/ui/use-submit";
+import { Detail, DetailsActions, useEditOrRemove } from "@/components/ui/record-details";
 import { CustomerForm } from "./customer-form";
 
 interface Details {
@@ -17,14 +14,12 @@ interface Details {
 
 /** A customer's contact details, edited in place by technicians and owners; an owner may remove one with no jobs. */
 export function CustomerDetails({ customer, canEdit, canDelete }: { customer: Details; canEdit: boolean; canDelete: boolean }) {
-  const router = useRouter();
-  const [editing, setEditing] = useState(false);
-  const { run, error } = useAction({ url: `/api/customers/${customer.id}`, method: "DELETE", onDone: () => router.push("/customers") });
+  const { editing, setEditing, remove, error } = useEditOrRemove({
+    url: `/api/customers/${customer.id}`,
+    list: "/customers",
+    question: `Remove ${customer.name} from the customer list?`,
+  });
   if (editing) return <CustomerForm customer={customer} onDone={() => setEditing(false)} />;
-  async function remove() {
-    if (!window.confirm(`Remove ${customer.name} from the customer list?`)) return;
-    await run();
-  }
   const rows: [string, React.ReactNode][] = [
     [
       "E-mail",
@@ -49,29 +44,12 @@ export function CustomerDetails({ customer, canEdit, canDelete }: { customer: De
     <div>
       <dl className="grid gap-x-6 gap-y-3 sm:grid-cols-2">
         {rows.map(([label, value]) => (
-          <div key={label} className={label === "Notes" || label === "Address" ? "sm:col-span-2" : undefined}>
-            <dt className="text-note font-bold text-muted">{label}</dt>
-            <dd className="whitespace-pre-line break-words">{value ?? <span className="text-muted">—</span>}</dd>
-          </div>
+          <Detail key={label} label={label} wide={label === "Notes" || label === "Address"} className="whitespace-pre-line break-words">
+            {value}
+          </Detail>
         ))}
       </dl>
-      {canEdit || canDelete ? (
-        <div className="mt-5 flex flex-wrap gap-3">
-          {canEdit ? (
-            <Button variant="secondary" onClick={() => setEditing(true)}>
-              Edit details
-            </Button>
-          ) : null}
-          {canDelete ? (
-            <Button variant="destructive" onClick={remove}>
-              Remove customer
-            </Button>
-          ) : null}
-        </div>
-      ) : null}
-      <p role="alert" className="mt-2 min-h-5 font-bold text-flag">
-        {error ?? ""}
-      </p>
+      <DetailsActions canEdit={canEdit} canDelete={canDelete} onEdit={() => setEditing(true)} onDelete={remove} deleteLabel="Remove customer" error={error} />
     </div>
   );
 }

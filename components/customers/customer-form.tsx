@@ -1,13 +1,12 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
 import { useRouter } from "next/navigation";
-import { useForm } from "react-hook-form";
-import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
+import { FormActions } from "@/components/ui/form-actions";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { useSubmit } from "@/components/ui/use-submit";
-import { customerSchema, type CustomerInput, type CustomerValues } from "@/lib/customers/schemas";
+import { useSchemaForm } from "@/components/ui/use-schema-form";
+import { formText } from "@/lib/client/form-text";
+import { customerSchema } from "@/lib/customers/schemas";
 
 const NAMES = ["name", "email", "phone", "address", "notes"] as const;
 type Existing = { id: number } & Record<(typeof NAMES)[number], string | null>;
@@ -15,19 +14,13 @@ type Existing = { id: number } & Record<(typeof NAMES)[number], string | null>;
 /** Add a customer (POST /api/customers) or edit one (PATCH /api/customers/[id]); one zod schema with the server. */
 export function CustomerForm({ customer, onDone }: { customer?: Existing; onDone?: () => void }) {
   const router = useRouter();
-  const initial = Object.fromEntries(NAMES.map((n) => [n, customer?.[n] ?? ""])) as CustomerInput;
-  const form = useForm<CustomerInput, unknown, CustomerValues>({ resolver: zodResolver(customerSchema), defaultValues: initial });
-  const {
-    register,
-    formState: { errors, isSubmitting },
-  } = form;
   // An edit refreshes the page it is on; a new customer opens its own page.
-  const { submit: onSubmit, formError } = useSubmit<CustomerInput, { customer: { id: number } }, CustomerValues>(form, {
+  const { register, errors, submit, formError, pending } = useSchemaForm(customerSchema, formText(NAMES, customer), {
     url: customer ? `/api/customers/${customer.id}` : "/api/customers",
     method: customer ? "PATCH" : "POST",
     fields: NAMES,
     refresh: Boolean(customer),
-    onDone: (data) => {
+    onDone: (data: { customer: { id: number } }) => {
       if (customer) onDone?.();
       else router.push(`/customers/${data.customer.id}`);
     },
@@ -35,7 +28,7 @@ export function CustomerForm({ customer, onDone }: { customer?: Existing; onDone
   const id = (n: string) => `customer-${n}`;
   return (
     <form
-      onSubmit={onSubmit}
+      onSubmit={submit}
       noValidate
       aria-label={customer ? "Edit the customer" : "Add a customer"}
       className="grid grid-cols-1 gap-x-4 gap-y-1 sm:grid-cols-2"
@@ -52,19 +45,9 @@ export function CustomerForm({ customer, onDone }: { customer?: Existing; onDone
         error={errors.notes?.message}
         {...register("notes")}
       />
-      <p role="alert" aria-live="polite" className="min-h-6 font-bold text-flag sm:col-span-2">
-        {formError ?? ""}
-      </p>
-      <div className="flex flex-wrap gap-3 sm:col-span-2">
-        <Button type="submit" disabled={isSubmitting}>
-          {isSubmitting ? "Saving…" : customer ? "Save customer" : "Add customer"}
-        </Button>
-        {onDone ? (
-          <Button type="button" variant="secondary" onClick={onDone}>
-            Cancel
-          </Button>
-        ) : null}
-      </div>
+      <FormActions formError={formError} pending={pending} busy="Saving…" onCancel={onDone}>
+        {customer ? "Save customer" : "Add customer"}
+      </FormActions>
     </form>
   );
 }

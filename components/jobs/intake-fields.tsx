@@ -57,3 +57,24 @@ export function AccessoriesField({ value, onChange, error }: { value: string[]; 
     </fieldset>
   );
 }
+
+/** Photos of the set as it came in, chosen when booking in; the form uploads them once the job exists. */
+export function IntakePhotosField({ onChange }: { onChange: (photos: File[]) => void }) {
+  return (
+    <label className="flex flex-col gap-1 sm:col-span-2">
+      <span className="font-bold">Intake photos</span>
+      <input
+        type="file"
+        accept="image/jpeg,image/png,image/webp"
+        capture="environment"
+        multiple
+        onChange={(e) => onChange([...(e.target.files ?? [])])}
+        aria-describedby="job-photos-hint"
+        className="min-h-11 w-full min-w-0 rounded-chip border border-edge bg-panel px-3 py-2 file:mr-3 file:rounded-chip file:border-0 file:bg-sunk file:px-3 file:py-1 file:font-bold"
+      />
+      <span id="job-photos-hint" className="text-note text-muted">
+        The set as it came in: cabinet, back, chassis. JPEG, PNG or WebP, up to 20 MB each; they go to the job&rsquo;s Files.
+      </span>
+    </label>
+  );
+}

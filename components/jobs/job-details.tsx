@@ -1,11 +1,8 @@
 "use client";
 
 import Link from "next/link";
-import { useRouter } from "next/navigation";
-import { useState } from "react";
 import { EQUIPMENT_KIND_LABELS, type EquipmentKind } from "@/lib/vocabulary";
-import { Button } from "@/components/ui/button";
-import { useAction } from "@/components/ui/use-submit";
+import { Detail, DetailsActions, useEditOrRemove } from "@/components/ui/record-details";
 import { JobForm } from "./job-form";
 
 interface Details {
@@ -40,9 +37,11 @@ export function JobDetails({
   canDelete: boolean;
   intakePhotos?: IntakePhoto[];
 }) {
-  const router = useRouter();
-  const [editing, setEditing] = useState(false);
-  const { run, error } = useAction({ url: `/api/jobs/${job.id}`, method: "DELETE", onDone: () => router.push("/jobs") });
+  const { editing, setEditing, remove, error } = useEditOrRemove({
+    url: `/api/jobs/${job.id}`,
+    list: "/jobs",
+    question: `Delete “${job.title}” with its parts, readings, calculations, files and log? This cannot be undone.`,
+  });
   if (editing) return <JobForm job={job} onDone={() => setEditing(false)} />;
   const rows: [string, React.ReactNode][] = [
     ["Kind", EQUIPMENT_KIND_LABELS[job.equipmentKind]],
@@ -63,67 +62,49 @@ export function JobDetails({
     ["Serial or chassis no.", job.serialNumber ? <span className="font-mono">{job.serialNumber}</span> : null],
     ["Came in with", job.accessories?.length ? job.accessories.join(", ") : null],
   ];
-  async function remove() {
-    if (!window.confirm(`Delete “${job.title}” with its parts, readings, calculations, files and log? This cannot be undone.`)) return;
-    await run();
-  }
   return (
     <div>
       <dl className="grid gap-x-6 gap-y-3 sm:grid-cols-2">
         {rows.map(([label, value]) => (
-          <div key={label}>
-            <dt className="text-note font-bold text-muted">{label}</dt>
-            <dd className="break-words">{value ?? <span className="text-muted">—</span>}</dd>
-          </div>
+          <Detail key={label} label={label} className="break-words">
+            {value}
+          </Detail>
         ))}
         {intakePhotos.length ? (
-          <div className="sm:col-span-2">
-            <dt className="text-note font-bold text-muted">As it came in</dt>
-            <dd>
-              <ul className="mt-1 flex flex-wrap gap-2" data-testid="intake-photos">
-                {intakePhotos.map((f) => (
-                  <li key={f.id}>
-                    <a
-                      href={`/api/jobs/${job.id}/files/${f.id}`}
-                      target="_blank"
-                      rel="noopener"
-                      className="relative block size-20 overflow-hidden rounded-chip border border-rule bg-sunk"
-                    >
-                      {f.hasThumbnail ? (
-                        // eslint-disable-next-line @next/next/no-img-element -- served by our authorised route, not next/image
-                        <img src={`/api/jobs/${job.id}/files/${f.id}?thumb=1`} alt={f.name} className="size-full object-cover" />
-                      ) : (
-                        <span className="sr-only">{f.name}</span>
-                      )}
-                    </a>
-                  </li>
-                ))}
-              </ul>
-            </dd>
-          </div>
+          <Detail label="As it came in" wide>
+            <IntakePhotoStrip jobId={job.id} photos={intakePhotos} />
+          </Detail>
         ) : null}
-        <div className="sm:col-span-2">
-          <dt className="text-note font-bold text-muted">Notes</dt>
-          <dd className="whitespace-pre-line">{job.notes ?? <span className="text-muted">No notes yet.</span>}</dd>
-        </div>
+        <Detail label="Notes" wide className="whitespace-pre-line">
+          {job.notes ?? <span className="text-muted">No notes yet.</span>}
+        </Detail>
       </dl>
-      {canEdit || canDelete ? (
-        <div className="mt-5 flex flex-wrap gap-3">
-          {canEdit ? (
-            <Button variant="secondary" onClick={() => setEditing(true)}>
-              Edit details
-            </Button>
-          ) : null}
-          {canDelete ? (
-            <Button variant="destructive" onClick={remove}>
-              Delete job
-            </Button>
-          ) : null}
-        </div>
-      ) : null}
-      <p role="alert" className="mt-2 min-h-5 font-bold text-flag">
-        {error ?? ""}
-      </p>
+      <DetailsActions canEdit={canEdit} canDelete={canDelete} onEdit={() => setEditing(true)} onDelete={remove} deleteLabel="Delete job" error={error} />
     </div>
+  );
+}
+
+/** The intake photos as thumbnails, each opening the full picture from the job's Files. */
+function IntakePhotoStrip({ jobId, photos }: { jobId: number; photos: IntakePhoto[] }) {
+  return (
+    <ul className="mt-1 flex flex-wrap gap-2" data-testid="intake-photos">
+      {photos.map((f) => (
+        <li key={f.id}>
+          <a
+            href={`/api/jobs/${jobId}/files/${f.id}`}
+            target="_blank"
+            rel="noopener"
+            className="relative block size-20 overflow-hidden rounded-chip border border-rule bg-sunk"
+          >
+            {f.hasThumbnail ? (
+              // eslint-disable-next-line @next/next/no-img-element -- served by our authorised route, not next/image
+              <img src={`/api/jobs/${jobId}/files/${f.id}?thumb=1`} alt={f.name} className="size-full object-cover" />
+            ) : (
+              <span className="sr-only">{f.name}</span>
+            )}
+          </a>
+        </li>
+      ))}
+    </ul>
   );
 }

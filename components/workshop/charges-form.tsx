@@ -1,47 +1,22 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
-import { useState } from "react";
-import { useForm } from "react-hook-form";
-import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { SelectField } from "@/components/ui/select-field";
-import { useSubmit } from "@/components/ui/use-submit";
-import { CHARGE_CURRENCIES, chargesSchema, type ChargesForm as ChargesFormValues, type ChargesInput } from "@/lib/workshop/charges-schema";
+import { CHARGE_CURRENCIES, chargesSchema, type ChargesForm as ChargesFormValues } from "@/lib/workshop/charges-schema";
+import { SaveRow, useSettingsForm } from "./settings-save";
 
 const NAMES = ["currency", "hourlyRate", "taxRate"] as const;
 
 export function ChargesForm({ initial, currencyLocked }: { initial: ChargesFormValues; currencyLocked: boolean }) {
-  const [saved, setSaved] = useState<string | null>(null);
-  const form = useForm<ChargesFormValues, unknown, ChargesInput>({ resolver: zodResolver(chargesSchema), defaultValues: initial });
-  const {
-    register,
-    reset,
-    getValues,
-    watch,
-    formState: { errors, isDirty },
-  } = form;
-  const currency = watch("currency");
-
-  // The server parses the same schema, so it gets the typed text rather than the minor units.
-  const {
-    submit: onSubmit,
-    formError,
-    pending: isSubmitting,
-  } = useSubmit(form, {
+  const { form, register, errors, submit, formError, pending, success } = useSettingsForm(chargesSchema, initial, {
     url: "/api/workshop/charges",
-    method: "PATCH",
-    body: () => getValues(),
     fields: NAMES,
-    onStart: () => setSaved(null),
-    onDone: () => {
-      reset(getValues());
-      setSaved("Charges saved.");
-    },
+    saved: "Charges saved.",
   });
+  const currency = form.watch("currency");
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-1" aria-label="Workshop charges">
+    <form onSubmit={submit} noValidate className="flex flex-col gap-1" aria-label="Workshop charges">
       {currencyLocked ? (
         // Not registered: the value stays in the form's defaults and the server refuses a change anyway (409).
         <div className="mb-5 flex flex-col gap-1">
@@ -86,14 +61,7 @@ export function ChargesForm({ initial, currencyLocked }: { initial: ChargesFormV
           {...register("taxRate")}
         />
       </div>
-      <div className="flex items-center gap-4">
-        <Button type="submit" disabled={isSubmitting || !isDirty}>
-          {isSubmitting ? "Saving…" : "Save charges"}
-        </Button>
-        <p role="status" aria-live="polite" className={`text-note font-bold ${formError ? "text-flag" : "text-ok"}`}>
-          {formError ?? saved ?? ""}
-        </p>
-      </div>
+      <SaveRow label="Save charges" pending={pending} dirty={form.formState.isDirty} formError={formError} success={success} />
     </form>
   );
 }

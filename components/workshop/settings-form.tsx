@@ -1,46 +1,22 @@
 "use client";
 
-import { zodResolver } from "@hookform/resolvers/zod";
-import { useState } from "react";
-import { useForm } from "react-hook-form";
-import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { TextareaField } from "@/components/ui/textarea-field";
-import { useSubmit } from "@/components/ui/use-submit";
 import { DEFAULT_READY_TEMPLATE, READY_PLACEHOLDERS } from "@/lib/mail/ready-message";
-import { workshopSettingsSchema, type WorkshopSettingsForm, type WorkshopSettingsInput } from "@/lib/workshop/schemas";
+import { workshopSettingsSchema, type WorkshopSettingsForm } from "@/lib/workshop/schemas";
+import { SaveRow, useSettingsForm } from "./settings-save";
 
 const NAMES = ["name", "contactEmail", "contactPhone", "address", "readyMessageTemplate"] as const;
 
 export function SettingsForm({ initial }: { initial: WorkshopSettingsForm }) {
-  const [saved, setSaved] = useState<string | null>(null);
-  const form = useForm<WorkshopSettingsForm, unknown, WorkshopSettingsInput>({ resolver: zodResolver(workshopSettingsSchema), defaultValues: initial });
-  const {
-    register,
-    reset,
-    getValues,
-    formState: { errors, isDirty },
-  } = form;
-
-  // The server parses the same schema, so it gets the typed text, not the parsed values (blank → null).
-  const {
-    submit: onSubmit,
-    formError,
-    pending: isSubmitting,
-  } = useSubmit(form, {
+  const { form, register, errors, submit, formError, pending, success } = useSettingsForm(workshopSettingsSchema, initial, {
     url: "/api/workshop",
-    method: "PATCH",
-    body: () => getValues(),
     fields: NAMES,
-    onStart: () => setSaved(null),
-    onDone: () => {
-      reset(getValues());
-      setSaved("Settings saved.");
-    },
+    saved: "Settings saved.",
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-1" aria-label="Workshop settings">
+    <form onSubmit={submit} noValidate className="flex flex-col gap-1" aria-label="Workshop settings">
       <Field id="ws-name" label="Workshop name" error={errors.name?.message} {...register("name")} />
       <Field
         id="ws-email"
@@ -68,14 +44,7 @@ export function SettingsForm({ initial }: { initial: WorkshopSettingsForm }) {
         error={errors.readyMessageTemplate?.message}
         {...register("readyMessageTemplate")}
       />
-      <div className="flex items-center gap-4">
-        <Button type="submit" disabled={isSubmitting || !isDirty}>
-          {isSubmitting ? "Saving…" : "Save settings"}
-        </Button>
-        <p role="status" aria-live="polite" className={`text-note font-bold ${formError ? "text-flag" : "text-ok"}`}>
-          {formError ?? saved ?? ""}
-        </p>
-      </div>
+      <SaveRow label="Save settings" pending={pending} dirty={form.formState.isDirty} formError={formError} success={success} />
     </form>
   );
 }

@@ -1,20 +1,11 @@
 "use client";
 
-import Link from "next/link";
+import { RouteError, type ErrorPageProps } from "@/components/ui/route-error";
 
-export default function DrillsError({ reset }: { error: Error & { digest?: string }; reset: () => void }) {
+export default function DrillsError({ reset }: ErrorPageProps) {
   return (
-    <div className="mx-auto flex min-h-[50vh] max-w-xl flex-col justify-center gap-4">
-      <h1 className="text-title font-bold">This drill tripped</h1>
-      <p className="text-muted">Your answers so far are kept. Try again, or go back to the drills and start another.</p>
-      <div className="flex gap-4">
-        <button type="button" onClick={reset} className="min-h-11 rounded-chip bg-glow px-4 py-2 font-bold text-glow-ink">
-          Try again
-        </button>
-        <Link href="/drills" className="inline-flex min-h-11 items-center font-bold text-signal underline underline-offset-4">
-          Back to the drills
-        </Link>
-      </div>
-    </div>
+    <RouteError title="This drill tripped" reset={reset} layout="centred" back={{ href: "/drills", label: "Back to the drills" }}>
+      Your answers so far are kept. Try again, or go back to the drills and start another.
+    </RouteError>
   );
 }

@@ -1,13 +1,11 @@
 "use client";
 
-export default function JobsError({ reset }: { error: Error & { digest?: string }; reset: () => void }) {
+import { RouteError, type ErrorPageProps } from "@/components/ui/route-error";
+
+export default function JobsError({ reset }: ErrorPageProps) {
   return (
-    <div className="flex flex-col gap-4 py-10">
-      <h1 className="text-title font-bold">This job record did not load</h1>
-      <p className="max-w-prose text-muted">Nothing you saved is lost. Try again; if it keeps happening, tell your workshop owner.</p>
-      <button type="button" onClick={reset} className="w-fit rounded-chip bg-glow px-4 py-2 font-bold text-glow-ink">
-        Try again
-      </button>
-    </div>
+    <RouteError title="This job record did not load" reset={reset} layout="section">
+      Nothing you saved is lost. Try again; if it keeps happening, tell your workshop owner.
+    </RouteError>
   );
 }

@@ -1,9 +1,10 @@
 "use client";
 
-import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { Line, ReferenceDot, ReferenceLine } from "recharts";
 import { breakdownData } from "@/lib/bench/chart-data";
 import type { ChartProps } from "../chart-slot";
-import { C, ChartFrame, tick } from "./chart-frame";
+import { C, ChartFrame } from "./chart-frame";
+import { LinePlot } from "./line-plot";
 
 const mm = (v: number) => `${Number(v.toPrecision(3))} mm`;
 const kv = (v: number) => `${Number(v.toPrecision(3))} kV`;
@@ -47,42 +48,37 @@ export default function BreakdownChart({ inputs, outputs }: ChartProps) {
         </>
       }
     >
-      <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={d.points} margin={{ top: 10, right: 16, bottom: 4, left: 8 }}>
-          <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
-          <XAxis dataKey="gap" type="number" domain={[0, "dataMax"]} tickFormatter={mm} tick={tick} stroke={C.muted} />
-          <YAxis tickFormatter={kv} tick={tick} stroke={C.muted} width={64} />
-          <Tooltip
-            formatter={(v) => kv(Number(v))}
-            labelFormatter={(g) => mm(Number(g))}
-            contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
-          />
+      <LinePlot
+        data={d.points}
+        x={{ dataKey: "gap", tickFormatter: mm }}
+        y={{ tickFormatter: kv }}
+        tip={{ formatter: (v) => kv(Number(v)), labelFormatter: (g) => mm(Number(g)) }}
+      >
+        <ReferenceLine
+          x={d.minimum}
+          stroke={C.hazard}
+          strokeDasharray="4 4"
+          label={{ value: "Uniform-field minimum gap", fill: C.hazard, position: "insideTopLeft", fontSize: 13 }}
+        />
+        {d.standard !== undefined ? (
           <ReferenceLine
-            x={d.minimum}
-            stroke={C.hazard}
-            strokeDasharray="4 4"
-            label={{ value: "Uniform-field minimum gap", fill: C.hazard, position: "insideTopLeft", fontSize: 13 }}
+            x={d.standard}
+            stroke={C.signal}
+            strokeDasharray="8 3"
+            label={{ value: "IEC 60664-1 clearance", fill: C.signal, position: "insideTopRight", fontSize: 13 }}
           />
-          {d.standard !== undefined ? (
-            <ReferenceLine
-              x={d.standard}
-              stroke={C.signal}
-              strokeDasharray="8 3"
-              label={{ value: "IEC 60664-1 clearance", fill: C.signal, position: "insideTopRight", fontSize: 13 }}
-            />
-          ) : null}
-          {d.recommended !== undefined && d.recommended !== d.standard ? (
-            <ReferenceLine
-              x={d.recommended}
-              stroke={C.ink}
-              strokeDasharray="6 4"
-              label={{ value: "Recommended clearance", fill: C.ink, position: "insideBottomRight", fontSize: 13 }}
-            />
-          ) : null}
-          <Line type="monotone" dataKey="kv" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} name="Uniform-field breakdown" />
-          <ReferenceDot x={d.working.gap} y={d.working.kv} r={7} fill={arcs ? C.hazard : C.signal} stroke={C.panel} strokeWidth={2} />
-        </LineChart>
-      </ResponsiveContainer>
+        ) : null}
+        {d.recommended !== undefined && d.recommended !== d.standard ? (
+          <ReferenceLine
+            x={d.recommended}
+            stroke={C.ink}
+            strokeDasharray="6 4"
+            label={{ value: "Recommended clearance", fill: C.ink, position: "insideBottomRight", fontSize: 13 }}
+          />
+        ) : null}
+        <Line type="monotone" dataKey="kv" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} name="Uniform-field breakdown" />
+        <ReferenceDot x={d.working.gap} y={d.working.kv} r={7} fill={arcs ? C.hazard : C.signal} stroke={C.panel} strokeWidth={2} />
+      </LinePlot>
     </ChartFrame>
   );
 }

@@ -1,10 +1,11 @@
 "use client";
 
-import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { Line, ReferenceDot, ReferenceLine } from "recharts";
 import { formatQuantity } from "@/lib/calc/format";
 import { couplingResponse } from "@/lib/bench/chart-data-signal";
 import type { ChartProps } from "../chart-slot";
-import { C, ChartFrame, fmt, tick } from "./chart-frame";
+import { C, ChartFrame, fmt } from "./chart-frame";
+import { LinePlot } from "./line-plot";
 import { endLabel, halo } from "./end-label";
 
 const db = (v: number) => `${Number(v.toFixed(1))} dB`;
@@ -29,46 +30,41 @@ export default function CouplingChart({ outputs, inputs }: ChartProps) {
         </>
       }
     >
-      <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={d.points} margin={{ top: 10, right: 16, bottom: 4, left: 8 }}>
-          <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
-          <XAxis dataKey="f" type="number" scale="log" domain={[lo, hi]} ticks={ticks} tickFormatter={hz} tick={tick} stroke={C.muted} />
-          <YAxis type="number" domain={[-21, 3]} ticks={[-20, -15, -10, -6, -3, 0]} tickFormatter={db} tick={tick} stroke={C.muted} width={64} />
-          <Tooltip
-            formatter={(v) => [db(Number(v)), "Reaching the grid"]}
-            labelFormatter={(f) => hz(Number(f))}
-            contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
-          />
-          <ReferenceLine
-            x={d.corner}
-            stroke={C.signal}
-            strokeDasharray="6 4"
-            label={{ value: "Corner (−3 dB)", fill: C.signal, position: "insideBottomLeft", fontSize: 13, ...halo }}
-          />
-          <ReferenceLine
-            y={-3}
-            stroke={C.muted}
-            strokeDasharray="2 4"
-            label={{ value: "−3 dB (71 %)", fill: C.muted, position: "insideBottomRight", fontSize: 13, ...halo }}
-          />
-          <Line
-            type="monotone"
-            dataKey="db"
-            name="Signal reaching the next grid"
-            stroke={C.glow}
-            strokeWidth={3}
-            dot={false}
-            isAnimationActive={false}
-            label={endLabel(
-              "Signal reaching the next grid",
-              C.glow,
-              d.points.map((p) => p.db),
-              3,
-            )}
-          />
-          <ReferenceDot x={d.corner} y={-10 * Math.log10(2)} r={6} fill={C.signal} stroke={C.panel} strokeWidth={2} />
-        </LineChart>
-      </ResponsiveContainer>
+      <LinePlot
+        data={d.points}
+        x={{ dataKey: "f", scale: "log", domain: [lo, hi], ticks, tickFormatter: hz }}
+        y={{ type: "number", domain: [-21, 3], ticks: [-20, -15, -10, -6, -3, 0], tickFormatter: db }}
+        tip={{ formatter: (v) => [db(Number(v)), "Reaching the grid"], labelFormatter: (f) => hz(Number(f)) }}
+      >
+        <ReferenceLine
+          x={d.corner}
+          stroke={C.signal}
+          strokeDasharray="6 4"
+          label={{ value: "Corner (−3 dB)", fill: C.signal, position: "insideBottomLeft", fontSize: 13, ...halo }}
+        />
+        <ReferenceLine
+          y={-3}
+          stroke={C.muted}
+          strokeDasharray="2 4"
+          label={{ value: "−3 dB (71 %)", fill: C.muted, position: "insideBottomRight", fontSize: 13, ...halo }}
+        />
+        <Line
+          type="monotone"
+          dataKey="db"
+          name="Signal reaching the next grid"
+          stroke={C.glow}
+          strokeWidth={3}
+          dot={false}
+          isAnimationActive={false}
+          label={endLabel(
+            "Signal reaching the next grid",
+            C.glow,
+            d.points.map((p) => p.db),
+            3,
+          )}
+        />
+        <ReferenceDot x={d.corner} y={-10 * Math.log10(2)} r={6} fill={C.signal} stroke={C.panel} strokeWidth={2} />
+      </LinePlot>
     </ChartFrame>
   );
 }

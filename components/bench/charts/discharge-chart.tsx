@@ -1,10 +1,11 @@
 "use client";
 
-import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { Line, ReferenceDot, ReferenceLine } from "recharts";
 import { formatQuantity } from "@/lib/calc/format";
 import { bleederDischarge, timeConstantDischarge } from "@/lib/bench/chart-data";
 import type { ChartProps } from "../chart-slot";
-import { C, ChartFrame, fmt, tick } from "./chart-frame";
+import { C, ChartFrame, fmt } from "./chart-frame";
+import { LinePlot } from "./line-plot";
 
 /** Capacitor voltage falling through the resistor, with the limit or target level (and the bleeder's deadline) marked. */
 export default function DischargeChart({ kind, inputs, outputs }: ChartProps) {
@@ -22,36 +23,31 @@ export default function DischargeChart({ kind, inputs, outputs }: ChartProps) {
         </>
       }
     >
-      <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={d.points} margin={{ top: 10, right: 16, bottom: 4, left: 8 }}>
-          <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
-          <XAxis dataKey="t" type="number" domain={[0, "dataMax"]} tickFormatter={fmt("s")} tick={tick} stroke={C.muted} />
-          <YAxis tickFormatter={fmt("V")} tick={tick} stroke={C.muted} width={64} />
-          <Tooltip
-            formatter={(v) => formatQuantity(Number(v), "V")}
-            labelFormatter={(t) => formatQuantity(Number(t), "s")}
-            contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
-          />
-          {/* A reference line in the neutral signal colour: green would read as "safe below here", which no limit is. */}
+      <LinePlot
+        data={d.points}
+        x={{ dataKey: "t", tickFormatter: fmt("s") }}
+        y={{ tickFormatter: fmt("V") }}
+        tip={{ formatter: (v) => formatQuantity(Number(v), "V"), labelFormatter: (t) => formatQuantity(Number(t), "s") }}
+      >
+        {/* A reference line in the neutral signal colour: green would read as "safe below here", which no limit is. */}
+        <ReferenceLine
+          y={d.limit}
+          stroke={C.signal}
+          strokeDasharray="6 4"
+          strokeWidth={2}
+          label={{ value: `${d.limitLabel} (${formatQuantity(d.limit, "V")})`, fill: C.signal, position: "insideTopRight", fontSize: 13 }}
+        />
+        {d.deadline !== undefined ? (
           <ReferenceLine
-            y={d.limit}
-            stroke={C.signal}
-            strokeDasharray="6 4"
-            strokeWidth={2}
-            label={{ value: `${d.limitLabel} (${formatQuantity(d.limit, "V")})`, fill: C.signal, position: "insideTopRight", fontSize: 13 }}
+            x={d.deadline}
+            stroke={C.hazard}
+            strokeDasharray="4 4"
+            label={{ value: "Time allowed", fill: C.hazard, position: "insideTopLeft", fontSize: 13 }}
           />
-          {d.deadline !== undefined ? (
-            <ReferenceLine
-              x={d.deadline}
-              stroke={C.hazard}
-              strokeDasharray="4 4"
-              label={{ value: "Time allowed", fill: C.hazard, position: "insideTopLeft", fontSize: 13 }}
-            />
-          ) : null}
-          <Line type="monotone" dataKey="v" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} name="Voltage" />
-          <ReferenceDot x={d.tLimit} y={d.limit} r={6} fill={late ? C.hazard : C.signal} stroke={C.panel} strokeWidth={2} />
-        </LineChart>
-      </ResponsiveContainer>
+        ) : null}
+        <Line type="monotone" dataKey="v" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} name="Voltage" />
+        <ReferenceDot x={d.tLimit} y={d.limit} r={6} fill={late ? C.hazard : C.signal} stroke={C.panel} strokeWidth={2} />
+      </LinePlot>
     </ChartFrame>
   );
 }

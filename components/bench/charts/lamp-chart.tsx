@@ -1,10 +1,11 @@
 "use client";
 
-import { CartesianGrid, Line, LineChart, ReferenceDot, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { Line, ReferenceDot, ReferenceLine } from "recharts";
 import { formatQuantity } from "@/lib/calc/format";
 import { lampCurves } from "@/lib/bench/chart-data-power-up";
 import type { ChartProps } from "../chart-slot";
-import { C, ChartFrame, fmt, tick } from "./chart-frame";
+import { C, ChartFrame, fmt } from "./chart-frame";
+import { LinePlot } from "./line-plot";
 import { endLabel, halo } from "./end-label";
 
 const watts = (v: number) => `${Math.round(v)} W`;
@@ -39,48 +40,43 @@ export default function LampChart({ inputs, outputs }: ChartProps) {
         </>
       }
     >
-      <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={d.points} margin={{ top: 10, right: 16, bottom: 4, left: 8 }}>
-          <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
-          <XAxis dataKey="setPower" type="number" domain={[0, "dataMax"]} tickFormatter={watts} tick={tick} stroke={C.muted} />
-          <YAxis type="number" domain={[0, yMax]} tickFormatter={fmt("A")} tick={tick} stroke={C.muted} width={64} allowDataOverflow />
-          <Tooltip
-            formatter={(v, name) => [formatQuantity(Number(v), "A"), name]}
-            labelFormatter={(p) => `Set of ${watts(Number(p))}`}
-            contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
-          />
-          <ReferenceLine
-            y={d.maxCurrent}
-            stroke={C.ink}
-            strokeDasharray="2 4"
-            label={{ value: `Dead short, ${yours.label}`, fill: C.ink, position: "insideBottomLeft", fontSize: 13, ...halo }}
-          />
-          {d.lines.map((l) => {
-            const alone = l.lampPower === null;
-            const color = alone ? C.signal : l.yours ? C.glow : C.muted;
-            return (
-              <Line
-                key={l.key}
-                dataKey={l.key}
-                name={l.label}
-                type="monotone"
-                stroke={color}
-                strokeWidth={l.yours ? 3 : 1.5}
-                strokeDasharray={alone ? "6 4" : undefined}
-                dot={false}
-                isAnimationActive={false}
-                label={endLabel(
-                  l.label,
-                  color,
-                  d.points.map((p) => p[l.key]),
-                  yMax,
-                )}
-              />
-            );
-          })}
-          {d.set ? <ReferenceDot x={d.set.power} y={d.set.current} r={7} fill={C.glow} stroke={C.panel} strokeWidth={2} /> : null}
-        </LineChart>
-      </ResponsiveContainer>
+      <LinePlot
+        data={d.points}
+        x={{ dataKey: "setPower", tickFormatter: watts }}
+        y={{ type: "number", domain: [0, yMax], tickFormatter: fmt("A"), allowDataOverflow: true }}
+        tip={{ formatter: (v, name) => [formatQuantity(Number(v), "A"), name], labelFormatter: (p) => `Set of ${watts(Number(p))}` }}
+      >
+        <ReferenceLine
+          y={d.maxCurrent}
+          stroke={C.ink}
+          strokeDasharray="2 4"
+          label={{ value: `Dead short, ${yours.label}`, fill: C.ink, position: "insideBottomLeft", fontSize: 13, ...halo }}
+        />
+        {d.lines.map((l) => {
+          const alone = l.lampPower === null;
+          const color = alone ? C.signal : l.yours ? C.glow : C.muted;
+          return (
+            <Line
+              key={l.key}
+              dataKey={l.key}
+              name={l.label}
+              type="monotone"
+              stroke={color}
+              strokeWidth={l.yours ? 3 : 1.5}
+              strokeDasharray={alone ? "6 4" : undefined}
+              dot={false}
+              isAnimationActive={false}
+              label={endLabel(
+                l.label,
+                color,
+                d.points.map((p) => p[l.key]),
+                yMax,
+              )}
+            />
+          );
+        })}
+        {d.set ? <ReferenceDot x={d.set.power} y={d.set.current} r={7} fill={C.glow} stroke={C.panel} strokeWidth={2} /> : null}
+      </LinePlot>
     </ChartFrame>
   );
 }

@@ -1,10 +1,11 @@
 "use client";
 
-import { CartesianGrid, Line, LineChart, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from "recharts";
+import { Line, ReferenceLine } from "recharts";
 import { formatQuantity } from "@/lib/calc/format";
 import { reformingSchedule } from "@/lib/bench/chart-data-power-up";
 import type { ChartProps } from "../chart-slot";
-import { C, ChartFrame, fmt, tick } from "./chart-frame";
+import { C, ChartFrame, fmt } from "./chart-frame";
+import { LinePlot } from "./line-plot";
 import { halo, lineLabel } from "./end-label";
 
 /** 45 min, 1 h, 1 h 30: a bench clock's way of saying it. */
@@ -39,34 +40,29 @@ export default function ReformingChart({ inputs, outputs }: ChartProps) {
         </>
       }
     >
-      <ResponsiveContainer width="100%" height="100%">
-        <LineChart data={d.points} margin={{ top: 10, right: 16, bottom: 4, left: 8 }}>
-          <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
-          <XAxis dataKey="t" type="number" domain={[0, "dataMax"]} ticks={timeTicks(d.totalMinutes)} tickFormatter={minutes} tick={tick} stroke={C.muted} />
-          <YAxis type="number" domain={[0, Number((d.rated * 1.15).toPrecision(2))]} tickFormatter={fmt("V")} tick={tick} stroke={C.muted} width={64} />
-          <Tooltip
-            formatter={(v) => [formatQuantity(Number(v), "V"), "Voltage applied"]}
-            labelFormatter={(t) => `From ${minutes(Number(t))}`}
-            contentStyle={{ background: C.panel, border: `1px solid ${C.rule}`, color: C.ink }}
-          />
-          <ReferenceLine
-            y={d.rated}
-            stroke={C.ink}
-            strokeDasharray="6 4"
-            label={{ value: `Rated voltage (${formatQuantity(d.rated, "V")})`, fill: C.ink, position: "insideTopLeft", fontSize: 13, ...halo }}
-          />
-          <Line
-            type="stepAfter"
-            dataKey="v"
-            name="Voltage applied"
-            stroke={C.glow}
-            strokeWidth={3}
-            dot={false}
-            isAnimationActive={false}
-            label={lineLabel("Voltage applied", C.glow, 3, "start")}
-          />
-        </LineChart>
-      </ResponsiveContainer>
+      <LinePlot
+        data={d.points}
+        x={{ dataKey: "t", ticks: timeTicks(d.totalMinutes), tickFormatter: minutes }}
+        y={{ type: "number", domain: [0, Number((d.rated * 1.15).toPrecision(2))], tickFormatter: fmt("V") }}
+        tip={{ formatter: (v) => [formatQuantity(Number(v), "V"), "Voltage applied"], labelFormatter: (t) => `From ${minutes(Number(t))}` }}
+      >
+        <ReferenceLine
+          y={d.rated}
+          stroke={C.ink}
+          strokeDasharray="6 4"
+          label={{ value: `Rated voltage (${formatQuantity(d.rated, "V")})`, fill: C.ink, position: "insideTopLeft", fontSize: 13, ...halo }}
+        />
+        <Line
+          type="stepAfter"
+          dataKey="v"
+          name="Voltage applied"
+          stroke={C.glow}
+          strokeWidth={3}
+          dot={false}
+          isAnimationActive={false}
+          label={lineLabel("Voltage applied", C.glow, 3, "start")}
+        />
+      </LinePlot>
     </ChartFrame>
   );
 }

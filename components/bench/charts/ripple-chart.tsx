@@ -1,10 +1,11 @@
 "use client";
 
-import { CartesianGrid, Line, LineChart, ResponsiveContainer, XAxis, YAxis } from "recharts";
+import { Line } from "recharts";
 import { formatQuantity } from "@/lib/calc/format";
 import { rippleData } from "@/lib/bench/chart-data";
 import type { ChartProps } from "../chart-slot";
-import { C, ChartFrame, fmt, tick } from "./chart-frame";
+import { C, ChartFrame, fmt } from "./chart-frame";
+import { LinePlot } from "./line-plot";
 
 /** The reservoir's sawtooth ripple, then the rms ripple left after each filter stage (on a log scale). */
 export default function RippleChart({ inputs, outputs }: ChartProps) {
@@ -25,14 +26,9 @@ export default function RippleChart({ inputs, outputs }: ChartProps) {
           </>
         }
       >
-        <ResponsiveContainer width="100%" height="100%">
-          <LineChart data={d.wave} margin={{ top: 10, right: 16, bottom: 4, left: 8 }}>
-            <CartesianGrid stroke={C.rule} strokeDasharray="3 4" />
-            <XAxis dataKey="t" type="number" domain={[0, "dataMax"]} tickFormatter={fmt("s")} tick={tick} stroke={C.muted} />
-            <YAxis tickFormatter={fmt("V")} tick={tick} stroke={C.muted} width={64} />
-            <Line type="linear" dataKey="v" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} />
-          </LineChart>
-        </ResponsiveContainer>
+        <LinePlot data={d.wave} x={{ dataKey: "t", tickFormatter: fmt("s") }} y={{ tickFormatter: fmt("V") }}>
+          <Line type="linear" dataKey="v" stroke={C.glow} strokeWidth={3} dot={false} isAnimationActive={false} />
+        </LinePlot>
       </ChartFrame>
       <figure className="rounded-card border border-rule bg-panel p-4 shadow-card" data-testid="ripple-stages">
         <h3 className="mb-3 font-bold">Ripple after each stage (rms, log scale)</h3>

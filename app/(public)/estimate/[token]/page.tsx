@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { AnswerButtons } from "@/components/estimates/answer-buttons";
 import { BillLines } from "@/components/customer/bill-lines";
 import { RepairDisclaimer } from "@/components/estimates/repair-disclaimer";
+import { Notice } from "@/components/customer/notice";
 import { Card } from "@/components/ui/card";
 import { EQUIPMENT_KIND_LABELS } from "@/lib/vocabulary";
 import { findEstimateByToken } from "@/db/queries/estimates";
@@ -56,14 +57,5 @@ export default async function EstimateAnswerPage({ params }: { params: Promise<{
         {workshop.contactPhone ? ` or ${workshop.contactPhone}` : ""}.
       </p>
     </div>
-  );
-}
-
-function Notice({ title, children }: { title: string; children: React.ReactNode }) {
-  return (
-    <Card>
-      <h1 className="text-title font-bold">{title}</h1>
-      <p className="mt-2 text-muted">{children}</p>
-    </Card>
   );
 }

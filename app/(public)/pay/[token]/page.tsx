@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { BillLines } from "@/components/customer/bill-lines";
 import { KeepTheBackOn } from "@/components/customer/keep-the-back-on";
 import { PayButton } from "@/components/pay/pay-button";
+import { Notice } from "@/components/customer/notice";
 import { Card } from "@/components/ui/card";
 import { openPayLink } from "@/db/queries/invoice-links";
 import { formatMoney } from "@/lib/money";
@@ -74,16 +75,5 @@ export default async function PayPage({ params }: { params: Promise<{ token: str
       <KeepTheBackOn when="home" />
       <p className="text-note text-muted">Questions about the work or the bill? Contact {reach(workshop)}.</p>
     </div>
-  );
-}
-
-function Notice({ title, children, testId }: { title: string; children: React.ReactNode; testId?: string }) {
-  return (
-    <Card>
-      <h1 className="text-title font-bold" data-testid={testId}>
-        {title}
-      </h1>
-      <p className="mt-2 text-muted">{children}</p>
-    </Card>
   );
 }

@@ -1,6 +1,6 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
-import { Card } from "@/components/ui/card";
+import { Notice } from "@/components/customer/notice";
 import { invoiceForReturn } from "@/db/queries/invoice-links";
 import { can } from "@/lib/auth/can";
 import { parseId } from "@/lib/ids";
@@ -45,16 +45,5 @@ export default async function PaymentDonePage({ searchParams }: { searchParams: 
       The card service is confirming it with {paid.workshopName} now. You do not need to pay again; the link in the e-mail will show the invoice as paid once it
       lands.
     </Notice>
-  );
-}
-
-function Notice({ title, children, testId }: { title: string; children: React.ReactNode; testId?: string }) {
-  return (
-    <Card>
-      <h1 className="text-title font-bold" data-testid={testId}>
-        {title}
-      </h1>
-      <p className="mt-2 text-muted">{children}</p>
-    </Card>
   );
 }
