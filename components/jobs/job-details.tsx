@@ -40,6 +40,7 @@ export function JobDetails({
   const { editing, setEditing, remove, error } = useEditOrRemove({
     url: `/api/jobs/${job.id}`,
     list: "/jobs",
+    invalidate: [["jobs"]],
     question: `Delete “${job.title}” with its parts, readings, calculations, files and log? This cannot be undone.`,
   });
   if (editing) return <JobForm job={job} onDone={() => setEditing(false)} />;

@@ -1,5 +1,6 @@
 "use client";
 
+import type { QueryKey } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, type ReactNode } from "react";
 import { Button } from "./button";
@@ -9,10 +10,11 @@ import { useAction } from "./use-submit";
  * A record's details page (a customer, a job): edited in place, or deleted after the browser's confirm and
  * left for its list. `remove` asks `question` first.
  */
-export function useEditOrRemove({ url, list, question }: { url: string; list: string; question: string }) {
+export function useEditOrRemove({ url, list, question, invalidate }: { url: string; list: string; question: string; invalidate?: QueryKey[] }) {
   const router = useRouter();
   const [editing, setEditing] = useState(false);
-  const { run, error } = useAction({ url, method: "DELETE", onDone: () => router.push(list) });
+  // A list fetched in the browser (the job list) is marked stale first, so the removed record is not shown on the way back.
+  const { run, error } = useAction({ url, method: "DELETE", invalidate, onDone: () => router.push(list) });
   async function remove() {
     if (!window.confirm(question)) return;
     await run();
