@@ -81,75 +81,113 @@ export function PartRow({
     await run(undefined, { method: "DELETE" });
   }
 
-  if (editing) {
-    const before = toDraft(part, currency);
-    const changed = Object.fromEntries(TEXTS.filter((k) => draft[k] !== before[k]).map((k) => [k, draft[k]]));
-    const box = (f: (typeof TEXTS)[number], label: string, extra: React.ComponentProps<"input"> = {}) => (
-      <input
-        aria-label={label}
-        className={input}
-        value={draft[f]}
-        onChange={(e) => setDraft({ ...draft, [f]: e.target.value })}
-        aria-invalid={errors[f] ? true : undefined}
-        {...extra}
-      />
-    );
-    return (
-      <tr className="bg-sunk/50" data-testid={`part-${part.designator}`}>
-        <td className={cell} data-label="Ref.">
-          {box("designator", "Ref.")}
-        </td>
-        <td className={cell} data-label="Kind">
-          <select aria-label="Kind" className={input} value={draft.kind} onChange={(e) => setDraft({ ...draft, kind: e.target.value })}>
-            {PART_KINDS.map((k) => (
-              <option key={k} value={k}>
-                {PART_KIND_LABELS[k]}
-              </option>
-            ))}
-          </select>
-        </td>
-        {(["original", "replacement"] as const).map((side) => (
-          <td key={side} className={cell} data-label={side === "original" ? "Original" : "Replacement"}>
-            <div className="flex flex-col gap-1">
-              {box(`${side}Value`, `${side === "original" ? "Original" : "Replacement"} value`)}
-              {box(`${side}Rating`, `${side === "original" ? "Original" : "Replacement"} rating`)}
-            </div>
-          </td>
-        ))}
-        <td className={cell} data-label="Order">
+  const common = { part, currency, message, save, setEditing };
+  if (editing) return <PartEditRow {...common} draft={draft} setDraft={setDraft} errors={errors} onCancel={() => setErrors({})} />;
+  return <PartViewRow {...common} canEdit={canEdit} caution={caution} readingNote={readingNote} flags={flags} remove={remove} />;
+}
+
+interface RowActions {
+  part: Part;
+  currency: string | null;
+  message: string | null;
+  save: (changes: Record<string, unknown>) => Promise<void>;
+  setEditing: (editing: boolean) => void;
+}
+
+/** The row as edit fields: Save sends only what changed; Cancel puts the stored values back. */
+function PartEditRow({
+  part,
+  currency,
+  message,
+  save,
+  setEditing,
+  draft,
+  setDraft,
+  errors,
+  onCancel,
+}: RowActions & { draft: Draft; setDraft: (d: Draft) => void; errors: Record<string, string>; onCancel: () => void }) {
+  const before = toDraft(part, currency);
+  const changed = Object.fromEntries(TEXTS.filter((k) => draft[k] !== before[k]).map((k) => [k, draft[k]]));
+  const box = (f: (typeof TEXTS)[number], label: string, extra: React.ComponentProps<"input"> = {}) => (
+    <input
+      aria-label={label}
+      className={input}
+      value={draft[f]}
+      onChange={(e) => setDraft({ ...draft, [f]: e.target.value })}
+      aria-invalid={errors[f] ? true : undefined}
+      {...extra}
+    />
+  );
+  return (
+    <tr className="bg-sunk/50" data-testid={`part-${part.designator}`}>
+      <td className={cell} data-label="Ref.">
+        {box("designator", "Ref.")}
+      </td>
+      <td className={cell} data-label="Kind">
+        <select aria-label="Kind" className={input} value={draft.kind} onChange={(e) => setDraft({ ...draft, kind: e.target.value })}>
+          {PART_KINDS.map((k) => (
+            <option key={k} value={k}>
+              {PART_KIND_LABELS[k]}
+            </option>
+          ))}
+        </select>
+      </td>
+      {(["original", "replacement"] as const).map((side) => (
+        <td key={side} className={cell} data-label={side === "original" ? "Original" : "Replacement"}>
           <div className="flex flex-col gap-1">
-            {box("quantity", "Quantity", { inputMode: "numeric" })}
-            {box("supplier", "Supplier", { list: "part-suppliers" })}
-            {box("supplierPartNumber", "Supplier's part number")}
-            {currency ? box("unitCost", `Unit cost (${currency})`, { inputMode: "decimal", placeholder: "Unit cost" }) : null}
+            {box(`${side}Value`, `${side === "original" ? "Original" : "Replacement"} value`)}
+            {box(`${side}Rating`, `${side === "original" ? "Original" : "Replacement"} rating`)}
           </div>
         </td>
-        <td className={cell} colSpan={2}>
-          <div className="flex flex-wrap gap-2">
-            <button type="button" className="min-h-11 rounded-chip bg-glow px-3 font-bold text-glow-ink" onClick={() => save(changed)}>
-              Save
-            </button>
-            <button
-              type="button"
-              className="min-h-11 rounded-chip border border-rule px-3 font-bold"
-              onClick={() => {
-                setDraft(before);
-                setEditing(false);
-                setErrors({});
-              }}
-            >
-              Cancel
-            </button>
-          </div>
-          {message ? (
-            <p role="alert" className="mt-1 text-note font-bold text-flag">
-              {Object.values(errors)[0] ?? message}
-            </p>
-          ) : null}
-        </td>
-      </tr>
-    );
-  }
+      ))}
+      <td className={cell} data-label="Order">
+        <div className="flex flex-col gap-1">
+          {box("quantity", "Quantity", { inputMode: "numeric" })}
+          {box("supplier", "Supplier", { list: "part-suppliers" })}
+          {box("supplierPartNumber", "Supplier's part number")}
+          {currency ? box("unitCost", `Unit cost (${currency})`, { inputMode: "decimal", placeholder: "Unit cost" }) : null}
+        </div>
+      </td>
+      <td className={cell} colSpan={2}>
+        <div className="flex flex-wrap gap-2">
+          <button type="button" className="min-h-11 rounded-chip bg-glow px-3 font-bold text-glow-ink" onClick={() => save(changed)}>
+            Save
+          </button>
+          <button
+            type="button"
+            className="min-h-11 rounded-chip border border-rule px-3 font-bold"
+            onClick={() => {
+              setDraft(before);
+              setEditing(false);
+              onCancel();
+            }}
+          >
+            Cancel
+          </button>
+        </div>
+        {message ? (
+          <p role="alert" className="mt-1 text-note font-bold text-flag">
+            {Object.values(errors)[0] ?? message}
+          </p>
+        ) : null}
+      </td>
+    </tr>
+  );
+}
+
+/** The row as read: values, what they tell, the order, the state (a select for editors), Edit and Remove. */
+function PartViewRow({
+  part,
+  currency,
+  message,
+  save,
+  setEditing,
+  canEdit,
+  caution,
+  readingNote,
+  flags,
+  remove,
+}: RowActions & { canEdit: boolean; caution: boolean; readingNote?: string; flags: PartFlag[]; remove: () => Promise<void> }) {
   const pair = (v: string | null | undefined, r: string | null | undefined) =>
     v || r ? (
       <>
@@ -233,7 +271,7 @@ export function PartRow({
             </button>
           </>
         ) : null}
-        {message && !editing ? (
+        {message ? (
           <p role="alert" className="text-note font-bold text-flag">
             {message}
           </p>
