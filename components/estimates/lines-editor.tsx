@@ -99,8 +99,9 @@ export function LinesEditor({
           const err = formState.errors.lines?.[i];
           const part = kind === "part" ? partById.get(Number(watched[i]?.partId)) : undefined;
           return (
-            <li key={f.id} className="grid gap-x-3 rounded-card border border-rule bg-paper p-3 sm:grid-cols-[7rem_1fr_7rem_9rem_8rem_auto]">
-              <div className="pt-8 font-bold">{LINE_KIND_LABELS[kind]}</div>
+            // One row of six on a wide screen; two columns on a tablet (six would not fit 768 px); one on a phone.
+            <li key={f.id} className="grid gap-x-3 rounded-card border border-rule bg-paper p-3 sm:grid-cols-2 lg:grid-cols-[7rem_1fr_7rem_9rem_8rem_auto]">
+              <div className="font-bold sm:pt-8">{LINE_KIND_LABELS[kind]}</div>
               <Field
                 id={`line-${i}-description`}
                 label="Description"
@@ -130,11 +131,11 @@ export function LinesEditor({
                   {...register(`lines.${i}.unitPrice`)}
                 />
               )}
-              <div className="flex flex-col gap-1 text-right">
+              <div className="flex flex-col gap-1 lg:text-right">
                 <span className="font-bold">Amount</span>
                 <span className="min-h-11 py-2 font-mono">{money(totals.lines[i] ?? 0)}</span>
               </div>
-              <div className="pt-7">
+              <div className="sm:pt-7">
                 <Button type="button" variant="quiet" onClick={() => remove(i)} aria-label={`Remove line ${i + 1}`}>
                   Remove
                 </Button>

@@ -2,6 +2,7 @@ import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
 import { launchBrowser } from "../helpers/browser";
 import { baseUrl, signedIn } from "../helpers/http";
+import { createJob, workshopIdByName } from "../helpers/money-fixtures";
 
 /**
  * Every page at a phone's width (390 px) as each role, and at an upright tablet's (768 px): no page may
@@ -146,4 +147,26 @@ test("on a phone a job's readings are cards that keep the verdict in sight, and 
   await expect.poll(() => row.getByRole("cell", { name: /Verdict Drifted high/ }).count()).toBe(1);
   expect(await survey.getByRole("columnheader").count()).toBeGreaterThanOrEqual(6);
   await page.context().close();
+});
+
+test("an estimate with lines fits a phone, a tablet and a small laptop", { timeout: 120_000 }, async () => {
+  // The demo has no estimate with lines, so the sweep above cannot meet one: make one (it overflowed 768 px once).
+  const { jobId, partIds } = createJob(workshopIdByName("Lamplight Radio Workshop"), { parts: [{ designator: "C7", unitCostMinor: 85 }] });
+  const tech = await signedIn("tech@demo.test");
+  const res = await tech.request("PUT", `/api/jobs/${jobId}/estimate`, {
+    lines: [
+      { kind: "labour", description: "Recap and slow start on the variac", quantity: "2.5" },
+      { kind: "part", description: "C7 paper capacitor 0.047 µF 630 V", quantity: "2", partId: partIds[0] },
+      { kind: "fee", description: "Bench diagnosis", quantity: "1", unitPrice: "25" },
+    ],
+  });
+  expect(res.status).toBe(200);
+  for (const width of [390, 640, 768, 1024]) {
+    const page = await rolePage("tech@demo.test", width);
+    await page.goto(`${baseUrl()}/jobs/${jobId}/estimate`, { waitUntil: "load" });
+    await expect.poll(() => page.getByRole("button", { name: "Remove line 3" }).count()).toBe(1);
+    const m = await page.evaluate(measure);
+    expect({ width, fits: m.scrollWidth <= width, overflowing: m.overflowing, small: m.small }).toEqual({ width, fits: true, overflowing: [], small: [] });
+    await page.context().close();
+  }
 });
