@@ -3,7 +3,7 @@ import localFont from "next/font/local";
 /**
  * Atkinson Hyperlegible for reading under a bench lamp; JetBrains Mono for figures. Both OFL, in fonts/.
  * Four faces, all preloaded: every byte fetched before the first paint counts against a phone's load
- * (README, "Bench pages"), so the few italic letters (quantity symbols, notes) are slanted by the
+ * (README, "Pages on a phone and a desk"), so the few italic letters (quantity symbols, notes) are slanted by the
  * browser rather than costing an 18 kB face of their own.
  */
 export const bodyFont = localFont({

@@ -19,7 +19,7 @@ const ANODE = "Anode & Daughters";
 type PartSeed = Omit<typeof parts.$inferInsert, "jobId" | "workshopId">;
 
 /** A part row with its value and rating read into SI, as the app stores them (sorting, order totals, checks). */
-function withValues(p: PartSeed): PartSeed {
+function withValues<P extends PartSeed>(p: P): P {
   const texts = {
     kind: p.kind,
     originalValue: p.originalValue ?? null,
@@ -32,7 +32,7 @@ function withValues(p: PartSeed): PartSeed {
 
 /** Every demo part goes in through this, so the demo's parts read as the app's own would. */
 export function withPartValues<P extends PartSeed>(rows: P[]): P[] {
-  return rows.map((p) => ({ ...p, ...withValues(p) }));
+  return rows.map(withValues);
 }
 
 /** Links every job that names a customer to one record per e-mail (else per name) in its workshop. */

@@ -1,44 +1,32 @@
 import fs from "node:fs";
 import path from "node:path";
 import { expect, test } from "vitest";
+import { ROOT, importsOf, moduleFile } from "../helpers/imports";
 
 /**
  * What every page's first load may not carry. The shell (on every signed-in page) and the Bench's
  * client components load zod only when a calculator is first used (lib/bench/load-calculator.ts), so a
- * Bench page stays within its first-load budget (README, "Bench pages"). A static import that reaches
+ * Bench page stays within its first-load budget (README, "Pages on a phone and a desk"). A static import that reaches
  * zod from one of them puts some 30 kB gzipped onto every page: this walks the static imports (not
  * `import()`, not `import type`) and fails on such a path, naming it.
  */
 
-const ROOT = path.resolve(import.meta.dirname, "../..");
 const HEAVY = ["zod", "katex", "recharts", "mathjs", "@react-pdf/renderer"];
 
-function resolve(from: string, spec: string): string | null {
-  let base: string;
-  if (spec.startsWith("@/")) base = path.join(ROOT, spec.slice(2));
-  else if (spec.startsWith(".")) base = path.join(path.dirname(from), spec);
-  else return `pkg:${spec}`;
-  for (const ext of ["", ".ts", ".tsx", "/index.ts", "/index.tsx"]) {
-    const f = base + ext;
-    if (fs.existsSync(f) && fs.statSync(f).isFile()) return f;
-  }
-  return null;
-}
-
-/** Every module reached by static value imports from `entry`, each with the path that reached it. */
+/** Every module reached by static value imports from `entry`, each with the path that reached it (packages as "pkg:name"). */
 function reach(entry: string): Map<string, string[]> {
   const seen = new Map<string, string[]>();
   const walk = (file: string, trail: string[]) => {
     if (seen.has(file)) return;
     seen.set(file, trail);
     if (file.startsWith("pkg:")) return;
-    const text = fs.readFileSync(file, "utf8");
-    for (const m of text.matchAll(/^\s*(?:import|export)\s+(?!type\b)(?:[^'";]*?\s+from\s+)?["']([^"']+)["']/gm)) {
-      const next = resolve(file, m[1]);
-      if (next) walk(next, [...trail, next.startsWith("pkg:") ? next : path.relative(ROOT, next)]);
+    for (const { spec, target, typeOnly, dynamic } of importsOf(file)) {
+      if (typeOnly || dynamic) continue;
+      const next = spec.startsWith("@/") || spec.startsWith(".") ? moduleFile(target) : `pkg:${spec}`;
+      if (next) walk(next, [...trail, next]);
     }
   };
-  walk(path.join(ROOT, entry), [entry]);
+  walk(entry, [entry]);
   return seen;
 }
 

@@ -1,13 +1,13 @@
 import fs from "node:fs";
 import path from "node:path";
 import { describe, expect, test } from "vitest";
+import { ROOT, importsOf } from "../helpers/imports";
 
 /**
  * The floors of DEVELOPERS.md ("Layers"), read from the import lines themselves:
  * app → components → server → db → lib, each importing only its own floor or those below.
  */
 
-const ROOT = path.resolve(import.meta.dirname, "../..");
 const FLOORS = ["lib", "db", "server", "components", "app"] as const;
 type Floor = (typeof FLOORS)[number];
 /** Entry points Next.js loads beside app/ sit on its floor. */
@@ -29,34 +29,6 @@ function floorOf(file: string): Floor | null {
   if (ENTRY_FILES[file]) return ENTRY_FILES[file];
   const top = file.split(path.sep)[0] as Floor;
   return FLOORS.includes(top) ? top : null;
-}
-
-interface Import {
-  spec: string;
-  /** Repository path for our own modules, the package name otherwise. */
-  target: string;
-  typeOnly: boolean;
-}
-
-/** Static, re-export, side-effect and dynamic imports, over several lines where they run so. */
-function importsOf(file: string): Import[] {
-  const text = fs.readFileSync(path.join(ROOT, file), "utf8");
-  const found: Import[] = [];
-  const patterns = [
-    /^\s*(import|export)\s+(type\s+)?[^'";]*?\s+from\s+["']([^"']+)["']/gm,
-    /^\s*import\s+()()["']([^"']+)["']/gm,
-    /\bimport\(\s*()()["']([^"']+)["']\s*\)/g,
-  ];
-  for (const re of patterns) {
-    for (const m of text.matchAll(re)) {
-      const spec = m[3];
-      let target = spec;
-      if (spec.startsWith("@/")) target = path.normalize(spec.slice(2));
-      else if (spec.startsWith(".")) target = path.normalize(path.join(path.dirname(file), spec));
-      found.push({ spec, target, typeOnly: !!m[2] });
-    }
-  }
-  return found;
 }
 
 const ALL = FILES.map((file) => ({ file, floor: floorOf(file)!, imports: importsOf(file) }));

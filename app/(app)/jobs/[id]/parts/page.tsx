@@ -16,6 +16,9 @@ export const metadata: Metadata = { title: "Parts" };
 
 const SORT_LABELS: Record<PartSort, string> = { ref: "Ref.", value: "Value", rating: "Rating", state: "State", supplier: "Supplier" };
 
+/** The Parts table's columns, in PartRow's order (each cell repeats its heading as a card label on a phone). */
+const PART_COLUMNS = ["Ref.", "Kind", "Original", "Replacement", "Order", "State"] as const;
+
 export default async function PartsPage({ params, searchParams }: JobPageProps & { searchParams: Promise<{ sort?: string }> }) {
   const { member, job } = await loadJobPage((await params).id, "parts");
   const asked = (await searchParams).sort;
@@ -86,24 +89,11 @@ export default async function PartsPage({ params, searchParams }: JobPageProps &
             <table className="gb-stack w-full min-w-[48rem] border-collapse text-left">
               <thead className="border-b border-rule bg-sunk/60 text-note font-bold uppercase tracking-wide text-muted">
                 <tr>
-                  <th scope="col" className="px-3 py-2">
-                    Ref.
-                  </th>
-                  <th scope="col" className="px-3 py-2">
-                    Kind
-                  </th>
-                  <th scope="col" className="px-3 py-2">
-                    Original
-                  </th>
-                  <th scope="col" className="px-3 py-2">
-                    Replacement
-                  </th>
-                  <th scope="col" className="px-3 py-2">
-                    Order
-                  </th>
-                  <th scope="col" className="px-3 py-2">
-                    State
-                  </th>
+                  {PART_COLUMNS.map((heading) => (
+                    <th key={heading} scope="col" className="px-3 py-2">
+                      {heading}
+                    </th>
+                  ))}
                   <th scope="col" className="px-3 py-2">
                     <span className="sr-only">Actions</span>
                   </th>
