@@ -18,6 +18,17 @@ const config = [
       "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_", destructuredArrayIgnorePattern: "^_" }],
     },
   },
+  // Links prefetch on intent, not on sight (components/ui/link.tsx); the framework's own Link is wrapped there alone.
+  {
+    files: ["app/**", "components/**"],
+    ignores: ["components/ui/link.tsx"],
+    rules: {
+      "no-restricted-imports": [
+        "error",
+        { paths: [{ name: "next/link", message: "Use Link from @/components/ui/link: it prefetches when the user shows intent." }] },
+      ],
+    },
+  },
   // Tests read untyped JSON answers from the real server on purpose.
   { files: ["tests/**"], rules: { "@typescript-eslint/no-explicit-any": "off" } },
   prettier,

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { Wordmark } from "@/components/shell/logo";
 
 // Rendered per request so each page carries the nonce of its Content-Security-Policy (proxy.ts);

@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { useRouter } from "next/navigation";
 import { useWatch } from "react-hook-form";
 import { Button } from "@/components/ui/button";

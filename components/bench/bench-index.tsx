@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { useId, useState } from "react";
 import type { CalculatorGroup } from "@/lib/calc/types";
 import { GROUPS } from "@/lib/bench/groups";

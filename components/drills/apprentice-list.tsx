@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import type { ApprenticeProgress } from "@/db/queries/drill-progress";
 import { levelFor } from "@/lib/drills";
 import { formatDate } from "@/lib/jobs/dates";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import type { DrillAssignmentView } from "@/db/queries/drill-assignments";
 import { formatDate } from "@/lib/jobs/dates";
 

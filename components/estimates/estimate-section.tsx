@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { Card, EmptyState } from "@/components/ui/card";
 import { getEstimateForJob } from "@/db/queries/estimates";
 import { listInvoicesForJob } from "@/db/queries/invoices";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { Card } from "@/components/ui/card";
 import { editorLines } from "@/lib/estimates/editor-lines";
 import { LinesEditor, type EditorPart } from "@/components/estimates/lines-editor";

@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { EQUIPMENT_KIND_LABELS, type EquipmentKind } from "@/lib/vocabulary";
 import { Detail, DetailsActions, useEditOrRemove } from "@/components/ui/record-details";
 import { JobForm } from "./job-form";

@@ -2,7 +2,7 @@
 
 import { keepPreviousData, useQuery } from "@tanstack/react-query";
 import { createColumnHelper, flexRender, getCoreRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { useEffect, useState } from "react";
 import { EQUIPMENT_KIND_LABELS, type EquipmentKind, type JobStatus } from "@/lib/vocabulary";
 import { EmptyState } from "@/components/ui/card";

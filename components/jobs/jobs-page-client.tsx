@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { useState } from "react";
 import type { PickedCustomer } from "@/components/customers/customer-picker";
 import { Button } from "@/components/ui/button";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { formatMoney } from "@/lib/money";
 import type { OrderGroup } from "@/lib/jobs/order-list";
 import { MarkOrderedButton } from "./mark-ordered-button";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { getMember } from "@/server/auth/member";
 import { RoleBadge } from "@/components/ui/card";
 import { NavLinks } from "./nav-links";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import type { ComponentProps } from "react";
 
 /** destructive: for what cannot be undone (delete, remove, void); plum, never the hazard red, which means danger alone. */

@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import type { ReactNode } from "react";
 
 /** What Next hands a section's error.tsx. */

@@ -2,7 +2,7 @@ import fs from "node:fs";
 import path from "node:path";
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
-import { launchBrowser } from "../helpers/browser";
+import { contextFor as sharedContextFor, launchBrowser } from "../helpers/browser";
 import { baseUrl, type Client } from "../helpers/http";
 import { makeTeam, type Team } from "../helpers/team";
 
@@ -23,12 +23,8 @@ afterAll(async () => {
   await browser?.close();
 });
 
-async function contextFor(client: Client, width = 1280): Promise<BrowserContext> {
-  const context = await browser.newContext({ viewport: { width, height: 900 } });
-  const [name, value] = client.cookies.split("; ")[0].split(/=(.*)/s);
-  // The session cookie is __Host- (Secure) in production; Chromium sends Secure cookies to http://localhost.
-  await context.addCookies([{ name, value, url: baseUrl().replace(/^http:/, "https:") }]);
-  return context;
+function contextFor(client: Client, width = 1280): Promise<BrowserContext> {
+  return sharedContextFor(browser, client, width);
 }
 async function shot(page: Page, name: string) {
   if (!shots) return;

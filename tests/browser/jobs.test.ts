@@ -2,7 +2,7 @@ import fs from "node:fs";
 import path from "node:path";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
-import { launchBrowser } from "../helpers/browser";
+import { contextFor, launchBrowser } from "../helpers/browser";
 import { baseUrl } from "../helpers/http";
 import { makeTeam, samplePng, type Team } from "../helpers/team";
 
@@ -20,10 +20,7 @@ afterAll(async () => {
 });
 
 async function signedInPage(): Promise<Page> {
-  const context = await browser.newContext({ acceptDownloads: true, viewport: { width: 1280, height: 900 } });
-  const [name, value] = team.technician.cookies.split("; ")[0].split(/=(.*)/s);
-  // The session cookie is __Host- (Secure) in production; Chromium sends Secure cookies to http://localhost.
-  await context.addCookies([{ name, value, url: baseUrl().replace(/^http:/, "https:") }]);
+  const context = await contextFor(browser, team.technician);
   return context.newPage();
 }
 async function shot(page: Page, name: string) {

@@ -1,6 +1,6 @@
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
-import { launchBrowser } from "../helpers/browser";
+import { contextFor, launchBrowser } from "../helpers/browser";
 import { baseUrl, signedIn } from "../helpers/http";
 import { createJob, workshopIdByName } from "../helpers/money-fixtures";
 
@@ -81,13 +81,7 @@ async function sweep(page: Page, start: string[], perPattern: number): Promise<{
 }
 
 async function rolePage(email: string | null, width: number): Promise<Page> {
-  const context = await browser.newContext({ viewport: { width, height: 844 } });
-  if (email) {
-    const client = await signedIn(email);
-    const [name, value] = client.cookies.split("; ")[0].split(/=(.*)/s);
-    // The session cookie is __Host- (Secure) in production; Chromium sends Secure cookies to http://localhost.
-    await context.addCookies([{ name, value, url: baseUrl().replace(/^http:/, "https:") }]);
-  }
+  const context = await contextFor(browser, email ? await signedIn(email) : null, width, 844);
   return context.newPage();
 }
 

@@ -1,6 +1,6 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
-import { launchBrowser } from "../helpers/browser";
+import { contextFor, launchBrowser } from "../helpers/browser";
 import { baseUrl } from "../helpers/http";
 import { waitForMail } from "../helpers/mail";
 import { makeTeam, type Team } from "../helpers/team";
@@ -30,10 +30,7 @@ test("the collection message panel appears only at the counter and sends the ben
   const { session } = await (await team.technician.post(`/api/jobs/${job.id}/power-ups`, { limiter: "variac", stopCurrent: "1 A" })).json();
   expect((await team.technician.patch(`/api/jobs/${job.id}/power-ups/${session.id}`, { outcome: "passed" })).status).toBe(200);
 
-  const context = await browser.newContext({ viewport: { width: 1280, height: 900 } });
-  const [name, value] = team.technician.cookies.split("; ")[0].split(/=(.*)/s);
-  // The session cookie is __Host- (Secure) in production; Chromium sends Secure cookies to http://localhost.
-  await context.addCookies([{ name, value, url: baseUrl().replace(/^http:/, "https:") }]);
+  const context = await contextFor(browser, team.technician);
   const page = await context.newPage();
 
   await page.goto(`${baseUrl()}/jobs/${job.id}`);

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { ResetRequestForm } from "@/components/auth/reset-forms";
 
 export const metadata: Metadata = { title: "Forgot your password?" };

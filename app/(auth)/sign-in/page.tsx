@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { safeNextPath } from "@/lib/safe-next";
 

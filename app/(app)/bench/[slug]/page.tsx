@@ -1,7 +1,7 @@
 import katex from "katex";
 import "katex/dist/katex.min.css";
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { notFound } from "next/navigation";
 import { CalculatorView } from "@/components/bench/calculator-view";
 import { initialMode, initialValues, toRaw } from "@/lib/bench/form-values";

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { notFound, redirect } from "next/navigation";
 import { cache } from "react";
 import { CustomerDetails } from "@/components/customers/customer-details";

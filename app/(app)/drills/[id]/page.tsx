@@ -1,7 +1,7 @@
 import katex from "katex";
 import "katex/dist/katex.min.css";
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { notFound, redirect } from "next/navigation";
 import { DrillPanel } from "@/components/drills/drill-panel";
 import { getDrill } from "@/db/queries/drills";

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { notFound, redirect } from "next/navigation";
 import { LinesTable } from "@/components/estimates/lines-table";
 import { InvoiceActions } from "@/components/invoices/invoice-actions";

@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import type { ReactNode } from "react";
 import { HighVoltageNote } from "@/components/jobs/high-voltage-note";
 import { JobTabs } from "@/components/jobs/job-tabs";

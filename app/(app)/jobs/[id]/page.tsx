@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { OpenFaultsPanel } from "@/components/jobs/faults/open-faults-panel";
 import { JobDetails } from "@/components/jobs/job-details";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { JoinExistingForm, JoinNewForm, JoinSignedIn } from "@/components/auth/join-forms";
 import { ROLE_LABELS } from "@/components/workshop/role-labels";
 import { INVITATION_GONE, findInvitation } from "@/db/queries/invitations";

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { NewPasswordFormView } from "@/components/auth/reset-forms";
 import { RESET_GONE, findPasswordReset } from "@/db/queries/password-resets";
 import { resetPasswordSchema } from "@/lib/auth/reset-schemas";

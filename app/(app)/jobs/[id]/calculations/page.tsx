@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { DoItYourself } from "@/components/drills/do-it-yourself";
 import { RemoveButton } from "@/components/jobs/remove-button";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";

@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
 import { PartAddForm } from "@/components/jobs/part-add-form";
 import { PartRow } from "@/components/jobs/part-row";
