@@ -3,7 +3,7 @@
 import { Link } from "@/components/ui/link";
 import { EQUIPMENT_KIND_LABELS, type EquipmentKind } from "@/lib/vocabulary";
 import { Detail, DetailsActions, useEditOrRemove } from "@/components/ui/record-details";
-import { JobForm } from "./job-form";
+import { LazyJobForm as JobForm } from "./lazy-forms";
 
 interface Details {
   id: number;

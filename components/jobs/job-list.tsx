@@ -8,7 +8,7 @@ import { EQUIPMENT_KIND_LABELS, type EquipmentKind, type JobStatus } from "@/lib
 import { EmptyState } from "@/components/ui/card";
 import { getJson } from "@/lib/client/fetch-json";
 import { formatDate } from "@/lib/jobs/dates";
-import { JOB_LIST_PAGE_SIZE } from "@/lib/jobs/job-schemas";
+import { JOB_LIST_PAGE_SIZE } from "@/lib/jobs/job-list-size";
 import { JobFilters, type Filters } from "./job-filters";
 import { StatusBadge } from "./status-badge";
 

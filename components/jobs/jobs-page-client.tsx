@@ -5,7 +5,7 @@ import { useState } from "react";
 import type { PickedCustomer } from "@/components/customers/customer-picker";
 import { Button } from "@/components/ui/button";
 import { Card } from "@/components/ui/card";
-import { JobForm } from "./job-form";
+import { LazyJobForm as JobForm } from "./lazy-forms";
 import { JobList, type JobPage } from "./job-list";
 
 const quietLink = "inline-flex min-h-11 items-center rounded-chip border border-rule bg-panel px-4 font-bold hover:bg-sunk";

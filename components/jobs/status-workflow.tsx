@@ -6,7 +6,7 @@ import { Button } from "@/components/ui/button";
 import { useAction } from "@/components/ui/use-submit";
 import { messageFor, readyChecksOf } from "@/lib/client/submit-errors";
 import type { ReadyIssue } from "@/lib/jobs/ready-checks";
-import { ReadyChecksPanel } from "./ready-checks";
+import { LazyReadyChecksPanel as ReadyChecksPanel } from "./lazy-forms";
 
 /** What each step means at the bench, in our words. */
 const HINTS: Record<JobStatus, string> = {

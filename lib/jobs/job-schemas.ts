@@ -78,8 +78,7 @@ export const statusChangeSchema = z.object({
   status: z.enum(JOB_STATUSES, { error: "Choose one of the workflow steps." }),
 });
 
-/** Rows per page of the /jobs screen (the API defaults to 50 for other callers). */
-export const JOB_LIST_PAGE_SIZE = 25;
+export { JOB_LIST_PAGE_SIZE } from "./job-list-size";
 
 export const JOB_SORTS = ["updatedAt", "createdAt", "title", "status", "equipmentKind", "customerName", "year"] as const;
 export type JobSort = (typeof JOB_SORTS)[number];

@@ -3,7 +3,7 @@ import { Link } from "@/components/ui/link";
 import { OpenFaultsPanel } from "@/components/jobs/faults/open-faults-panel";
 import { JobDetails } from "@/components/jobs/job-details";
 import { loadJobPage, type JobPageProps } from "@/components/jobs/load-job";
-import { ReadyMessage } from "@/components/jobs/ready-message";
+import { LazyReadyMessage as ReadyMessage } from "@/components/jobs/lazy-forms";
 import { StatusWorkflow } from "@/components/jobs/status-workflow";
 import { Card } from "@/components/ui/card";
 import { listFaults } from "@/db/queries/faults";
