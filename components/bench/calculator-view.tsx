@@ -2,9 +2,10 @@
 
 import { toNestErrors } from "@hookform/resolvers";
 import dynamic from "next/dynamic";
-import Link from "next/link";
 import { useCallback, useDeferredValue, useEffect, useMemo, useRef, useState, type ReactNode } from "react";
 import { FormProvider, useForm, useWatch, type Resolver } from "react-hook-form";
+import { Link } from "@/components/ui/link";
+import { useNearView } from "@/components/ui/use-near-view";
 import { runCalculator, type RunResult } from "@/lib/calc/run";
 import { encodeInputs } from "@/lib/calc/share";
 import type { BenchDescriptor, Calculator, InputMeta, OutputMeta } from "@/lib/calc/types";
@@ -70,6 +71,8 @@ export function CalculatorView(p: CalculatorViewProps) {
   const raw = useMemo(() => toRaw(shape, values, mode), [shape, values, mode]);
   const run = useMemo(() => (calc ? runCalculator(calc, raw) : p.initialRun), [calc, raw, p.initialRun]);
   const later = useDeferredValue(run);
+  // "Save to a job" lists the workshop's jobs: its code and that request wait until it is near the screen.
+  const [saveRef, saveNear] = useNearView<HTMLElement>();
   // The danger banner follows each typed voltage on its own, valid form or not. The full unit parser
   // (mathjs) shares the calculator module's chunk; until it arrives the quick reader serves.
   const [parse, setParse] = useState<Parse>(() => quickParse);
@@ -103,10 +106,14 @@ export function CalculatorView(p: CalculatorViewProps) {
     if (calc) void trigger();
   }, [calc, run, trigger]);
 
-  // The address carries the inputs, so the page can be sent to a colleague or reopened later.
+  // The address carries the inputs, so the page can be sent to a colleague or reopened later. A bare
+  // address already means the opening values, so it is left alone until they change: rewriting it on
+  // arrival made the router render the page a second time.
+  const opening = useRef(encodeInputs(raw));
   useEffect(() => {
     const t = setTimeout(() => {
       const q = encodeInputs(raw);
+      if (q === opening.current && !window.location.search) return;
       const url = q ? `${window.location.pathname}?${q}` : window.location.pathname;
       if (url !== window.location.pathname + window.location.search) window.history.replaceState(null, "", url);
     }, 300);
@@ -218,12 +225,16 @@ export function CalculatorView(p: CalculatorViewProps) {
           why={p.why}
         />
       </div>
-      <section aria-labelledby="save-title" className="gb-no-print mt-8 rounded-card border border-rule bg-panel p-6 shadow-card">
+      <section ref={saveRef} aria-labelledby="save-title" className="gb-no-print mt-8 rounded-card border border-rule bg-panel p-6 shadow-card">
         <h2 id="save-title" className="mb-3 text-lead font-bold">
           Save to a job
         </h2>
         {p.signedIn ? (
-          <SaveToJob slug={slug} inputs={raw} disabled={!run.ok} canCreateJob={p.canCreateJob} />
+          saveNear ? (
+            <SaveToJob slug={slug} inputs={raw} disabled={!run.ok} canCreateJob={p.canCreateJob} />
+          ) : (
+            <p className="text-muted">Loading…</p>
+          )
         ) : (
           <p className="text-muted" data-testid="sign-in-invitation">
             Keep this calculation with the set’s record, with a note for whoever picks the job up next.{" "}

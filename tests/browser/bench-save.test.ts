@@ -1,4 +1,4 @@
-import type { Browser, BrowserContext } from "playwright-core";
+import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
 import { launchBrowser } from "../helpers/browser";
 import { DEMO_PASSWORD, baseUrl } from "../helpers/http";
@@ -19,6 +19,12 @@ async function signedIn(email: string): Promise<BrowserContext> {
   return context;
 }
 
+/** The "Save to a job" form, which loads its code and the job list as it nears the screen: scroll to it, as a reader would. */
+async function saveForm(page: Page) {
+  await page.getByRole("heading", { name: "Save to a job" }).scrollIntoViewIfNeeded();
+  return page.getByRole("form", { name: "Save to a job" });
+}
+
 test("a technician books in a new job from the Bench and saves the calculation to it with a note", async () => {
   const context = await signedIn("tech@demo.test");
   const page = await context.newPage();
@@ -26,7 +32,7 @@ test("a technician books in a new job from the Bench and saves the calculation t
   await ready(page);
   await page.fill("#in-capacitance", "32 uF");
   await page.fill("#in-workingVoltage", "380");
-  const save = page.getByRole("form", { name: "Save to a job" });
+  const save = await saveForm(page);
   await save.getByLabel("Job").selectOption("new");
   const title = `Bench save ${Date.now()}`;
   await save.getByLabel("New job title").fill(title);
@@ -61,7 +67,7 @@ test("an apprentice saves to an existing job but cannot book in a new one; a bad
   const page = await context.newPage();
   await page.goto(`${baseUrl()}/bench/resistor-drift`);
   await ready(page);
-  const save = page.getByRole("form", { name: "Save to a job" });
+  const save = await saveForm(page);
   const job = save.getByLabel("Job");
   await job.waitFor();
   expect(await job.locator('option[value="new"]').count()).toBe(0);
