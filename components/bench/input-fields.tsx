@@ -1,11 +1,14 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useFormContext } from "react-hook-form";
 import { Field } from "@/components/ui/field";
 import { InputLabel } from "@/components/ui/quantity-symbol";
 import type { InputMeta } from "@/lib/calc/types";
 import { errorAt } from "@/lib/bench/errors";
-import { ListInput } from "./list-inputs";
+
+/** The row-by-row list editors (filter stages, heaters, bands, pilot lamps) serve a few calculators; the rest never fetch them. */
+const ListInput = dynamic(() => import("./list-inputs").then((m) => m.ListInput));
 
 /** Shown beside a field: the unit a bare number is read in. */
 export function unitSuffix(unit: string) {

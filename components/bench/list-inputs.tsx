@@ -6,6 +6,7 @@ import { buttonClass } from "@/components/ui/button";
 import type { InputMeta } from "@/lib/calc/types";
 import { errorAt } from "@/lib/bench/errors";
 import { DEFAULT_CHOKE_RESISTANCE } from "@/lib/calc/choke-default";
+import { BAND_PAINT } from "./band-paint";
 import { PilotLampInput } from "./pilot-lamp-input";
 
 /** The list inputs: filter stages, heaters, tube types and colour bands, each editable row by row. */
@@ -243,25 +244,6 @@ function NamesInput({ meta }: { meta: InputMeta }) {
     </ListFrame>
   );
 }
-
-/** Screen colours for the bands (approximate paint, for recognition only). */
-export const BAND_PAINT: Record<string, string> = {
-  black: "#1c1917",
-  brown: "#7c3f12",
-  red: "#c81e1e",
-  orange: "#ea7a0c",
-  yellow: "#facc15",
-  green: "#15803d",
-  blue: "#1d4ed8",
-  violet: "#7e22ce",
-  grey: "#8a8580",
-  gray: "#8a8580",
-  white: "#f8f7f4",
-  gold: "#c9a227",
-  silver: "#b8bcc2",
-  pink: "#f4a6c1",
-  none: "transparent",
-};
 
 function BandsInput({ meta }: { meta: InputMeta }) {
   const { formState } = useFormContext();

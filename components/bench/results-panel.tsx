@@ -4,7 +4,7 @@ import type { RunResult } from "@/lib/calc/run";
 import type { OutputMeta, OutputValue, Warning } from "@/lib/calc/types";
 import type { BenchDescriptor } from "@/lib/calc/types";
 import { formatOutput, formatPlain, outputLabel, outputTone } from "@/lib/bench/display";
-import { BAND_PAINT } from "./list-inputs";
+import { BAND_PAINT } from "./band-paint";
 import { RowsTable, type Column } from "./rows-table";
 import { ShuntsTable } from "./shunts-table";
 
