@@ -1,7 +1,7 @@
 import type { Browser } from "playwright-core";
 import { afterAll, beforeAll, expect, test } from "vitest";
-import { launchBrowser } from "../helpers/browser";
-import { DEMO_PASSWORD, baseUrl } from "../helpers/http";
+import { contextFor, launchBrowser } from "../helpers/browser";
+import { DEMO_PASSWORD, baseUrl, signedIn } from "../helpers/http";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -43,4 +43,31 @@ test("sign-in shows field messages under the fields for empty input, and a plain
   await page.getByRole("button", { name: "Sign in" }).click();
   await expect.poll(() => page.locator("#sign-in-error").textContent()).toBe("E-mail or password is wrong.");
   await page.close();
+});
+
+test("on a phone a member's links fold into a Menu that opens, leads on and closes on the next page; a desk shows them as they are", async () => {
+  const tech = await signedIn("tech@demo.test");
+  const phone = await (await contextFor(browser, tech, 390, 844)).newPage();
+  await phone.goto(`${baseUrl()}/jobs`, { waitUntil: "networkidle" });
+  const menu = phone.getByRole("button", { name: "Menu" });
+  const nav = phone.getByRole("navigation", { name: "Main" });
+  expect(await menu.getAttribute("aria-expanded")).toBe("false");
+  expect(await nav.isVisible()).toBe(false);
+  // One row for the header, not three: the page starts near the top of a phone's screen.
+  expect((await phone.locator("header").boundingBox())!.height).toBeLessThan(80);
+  await menu.click();
+  expect(await menu.getAttribute("aria-expanded")).toBe("true");
+  expect(await nav.isVisible()).toBe(true);
+  expect(await phone.getByTestId("member-name").isVisible()).toBe(true);
+  await nav.getByRole("link", { name: "Bench" }).click();
+  await phone.waitForURL(/\/bench$/);
+  await expect.poll(() => menu.getAttribute("aria-expanded")).toBe("false");
+  expect(await nav.isVisible()).toBe(false);
+  await phone.context().close();
+
+  const desk = await (await contextFor(browser, tech, 1280, 900)).newPage();
+  await desk.goto(`${baseUrl()}/jobs`);
+  expect(await desk.getByRole("button", { name: "Menu" }).isVisible()).toBe(false);
+  expect(await desk.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Workshop" }).isVisible()).toBe(true);
+  await desk.context().close();
 });
