@@ -179,12 +179,15 @@ describe("answering through the API", () => {
       // words and givens, written either way (not as part of a longer number). The "answer in …" line is the same
       // for every problem of a kind and its examples are not this answer, though one may read alike: "2 kΩ" sits
       // inside the example "2,2 kΩ", and a 0.25 W answer matches the example "0.25 W". A bare figure of one or two
-      // digits (1, 12) turns up among any problem's givens and gives nothing away.
+      // digits (1, 12) turns up among any problem's givens and gives nothing away; and where the answer has no unit,
+      // the same figure followed by one is another quantity (a gain of 11.8 is not given away by 11.8 kΩ of plate resistance).
       if (typeof solution.expected === "number") {
         const own = text.replaceAll(problem.asked.help, "");
-        const figures = [solution.expectedText, JSON.stringify(solution.expected)].filter((f) => !/^-?[\d.]+$/.test(f) || f.replace(/\D/g, "").length > 2);
+        const bare = (f: string) => /^-?[\d.]+$/.test(f);
+        const figures = [solution.expectedText, JSON.stringify(solution.expected)].filter((f) => !bare(f) || f.replace(/\D/g, "").length > 2);
         for (const figure of figures) {
-          expect(own).not.toMatch(new RegExp(`(?<![\\d.,])${figure.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}(?![\\d])`));
+          const after = problem.asked.unit === "" ? "(?![\\d]|\\s?[A-Za-zµΩ%])" : "(?![\\d])";
+          expect(own).not.toMatch(new RegExp(`(?<![\\d.,])${figure.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}${after}`));
         }
       }
       // Nor does a second look before answering give it away.
