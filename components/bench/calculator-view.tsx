@@ -109,16 +109,16 @@ export function CalculatorView(p: CalculatorViewProps) {
   // The address carries the inputs, so the page can be sent to a colleague or reopened later. A bare
   // address already means the opening values, so it is left alone until they change: rewriting it on
   // arrival made the router render the page a second time.
-  const opening = useRef(encodeInputs(raw));
+  const [opening] = useState(() => encodeInputs(raw));
   useEffect(() => {
     const t = setTimeout(() => {
       const q = encodeInputs(raw);
-      if (q === opening.current && !window.location.search) return;
+      if (q === opening && !window.location.search) return;
       const url = q ? `${window.location.pathname}?${q}` : window.location.pathname;
       if (url !== window.location.pathname + window.location.search) window.history.replaceState(null, "", url);
     }, 300);
     return () => clearTimeout(t);
-  }, [raw]);
+  }, [raw, opening]);
 
   const hidden = hiddenFields(bench.modes, mode);
   const shown = inputs.filter((i) => !hidden.has(i.name));

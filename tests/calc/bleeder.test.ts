@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { bleederDischarge } from "@/lib/bench/chart-data";
 import { calculator } from "@/lib/calc/bleeder";
+import type { BleederOutputs } from "@/lib/calc/bleeder-explain";
 import { texQuantity } from "@/lib/calc/format";
 import { runCalculator } from "@/lib/calc/run";
 import { limitingVoltage, MAX_LIMITING_VOLTAGE } from "@/lib/calc/tables/limiting-voltage";
@@ -10,17 +11,7 @@ import { STANDARD_WATTAGES } from "@/lib/calc/tables/wattage";
 import { calculator as timeConstant } from "@/lib/calc/time-constant";
 import { calcRunner, logUniform } from "../helpers/calc";
 
-type Out = {
-  maxResistance: number;
-  suggestedResistance: number;
-  bleederCurrent: number;
-  dissipation: number;
-  suggestedRating: number | null;
-  resistorsInSeries: number;
-  voltagePerResistor: number;
-  resistorValue: number;
-  resistorRating: number | null;
-};
+type Out = BleederOutputs;
 
 const { run, out, fields } = calcRunner<Out>(calculator);
 

@@ -1,18 +1,12 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { calculator } from "@/lib/calc/cathode-bias";
+import type { CathodeBiasOutputs } from "@/lib/calc/cathode-bias-explain";
 import { E12 } from "@/lib/calc/tables/preferred-values";
 import { STANDARD_WATTAGES } from "@/lib/calc/tables/wattage";
 import { calcRunner, logUniform } from "../helpers/calc";
 
-type Out = {
-  cathodeCurrent: number;
-  cathodeResistance: number;
-  dissipation: number;
-  suggestedRating: number | null;
-  nearestPreferred: number;
-  bypassCornerFrequency: number | null;
-};
+type Out = CathodeBiasOutputs;
 
 const { run, out, fields } = calcRunner<Out>(calculator);
 const parallel = (a: number, b: number) => (a * b) / (a + b);

@@ -1,25 +1,12 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { calculator, type Shunt } from "@/lib/calc/heater-string";
+import { calculator, type HeaterStringOutputs } from "@/lib/calc/heater-string";
 import { runCalculator } from "@/lib/calc/run";
 import { findHeater, HEATERS, TUBE_NAMES } from "@/lib/calc/tables/heaters";
 import { nearestPreferred } from "@/lib/calc/tables/preferred-values";
 import { calcRunner, logUniform } from "../helpers/calc";
 
-type Out = {
-  stringVoltage: number;
-  stringCurrent: number;
-  currentsMatch: boolean;
-  droppingResistance: number;
-  dissipation: number;
-  suggestedRating: number | null;
-  nearestPreferred: number;
-  shunts: Shunt[];
-  pilotLampVoltage: number | null;
-  pilotLampCurrent: number | null;
-  tapSectionCurrent: number | null;
-  stringCurrentWithLamp: number | null;
-};
+type Out = HeaterStringOutputs;
 
 const { run, out, fields } = calcRunner<Out>(calculator);
 const has = (r: { warnings: { level: string; message: string }[] }, level: string, re: RegExp) =>
